@@ -1,0 +1,92 @@
+package app.latentledger.cli;
+
+import app.latentledger.core.InvalidInputException;
+
+import java.io.PrintStream;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * The command line: {@code latent-ledger [--data-dir DIR] COMMAND [options]}. Exit codes:
+ * 0 done, 2 input refused (message on standard error), 1 unexpected failure.
+ */
+public final class Cli {
+    public static final int OK = 0;
+    public static final int FAILED = 1;
+    public static final int REFUSED = 2;
+
+    private final Map<String, Command> commands = new LinkedHashMap<>();
+
+    public Cli(List<Command> available) {
+        for (Command c : available) {
+            commands.put(c.name(), c);
+        }
+    }
+
+    /** All commands this build offers. */
+    public static Cli standard() {
+        return new Cli(List.of(new StateCommand()));
+    }
+
+    public int run(List<String> words, PrintStream out, PrintStream err) {
+        List<String> rest = new ArrayList<>(words);
+        Path dataDir = null;
+        try {
+            while (!rest.isEmpty() && rest.get(0).startsWith("--")) {
+                String opt = rest.remove(0);
+                if (opt.equals("--data-dir") || opt.startsWith("--data-dir=")) {
+                    String v = opt.contains("=") ? opt.substring(opt.indexOf('=') + 1) : next(rest, opt);
+                    dataDir = Path.of(v);
+                } else if (opt.equals("--help")) {
+                    out.print(overview());
+                    return OK;
+                } else {
+                    throw new UsageException("unknown option " + opt + " before the command name\n" + overview());
+                }
+            }
+            if (rest.isEmpty()) {
+                throw new UsageException("no command given\n" + overview());
+            }
+            String name = rest.remove(0);
+            Command command = commands.get(name);
+            if (command == null) {
+                throw new UsageException("unknown command '" + name + "'\n" + overview());
+            }
+            if (rest.contains("--help")) {
+                out.print(command.usage());
+                return OK;
+            }
+            Args args = Args.parse(rest, Set.of("json", "help"));
+            return command.run(args, new CliContext(out, err, dataDir));
+        } catch (UsageException e) {
+            err.println("latent-ledger: " + e.getMessage());
+            return REFUSED;
+        } catch (InvalidInputException e) {
+            err.println("latent-ledger: " + e.getMessage());
+            return REFUSED;
+        } catch (Exception e) {
+            err.println("latent-ledger: unexpected failure: " + e);
+            return FAILED;
+        }
+    }
+
+    private static String next(List<String> rest, String opt) {
+        if (rest.isEmpty()) {
+            throw new UsageException(opt + " needs a value");
+        }
+        return rest.remove(0);
+    }
+
+    public String overview() {
+        StringBuilder b = new StringBuilder("usage: latent-ledger [--data-dir DIR] COMMAND [options]\n"
+                + "       latent-ledger            (no command: opens the tablet app)\ncommands:\n");
+        for (Command c : commands.values()) {
+            b.append(String.format("  %-8s %s%n", c.name(), c.summary()));
+        }
+        return b.append("Each command takes --help.\n").toString();
+    }
+}

@@ -1,0 +1,58 @@
+package app.latentledger.cli;
+
+import app.latentledger.core.InvalidInputException;
+import app.latentledger.core.psychro.SitePressure;
+import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.UnitSystem;
+
+/**
+ * The options every calculation shares: {@code --units ip|si} and the site pressure from
+ * {@code --elevation} (ft | m) or {@code --pressure} (psia | kPa). Values typed in the tech's units
+ * are converted to SI here, once.
+ */
+final class UnitOptions {
+    private UnitOptions() {
+    }
+
+    static UnitSystem units(Args args) {
+        String u = args.value("units");
+        if (u == null) {
+            return UnitSystem.IP;
+        }
+        try {
+            return UnitSystem.parse(u);
+        } catch (IllegalArgumentException e) {
+            throw new UsageException("--units " + e.getMessage());
+        }
+    }
+
+    static SitePressure site(Args args, UnitSystem units) {
+        Double elevation = args.number("elevation");
+        Double pressure = args.number("pressure");
+        if (elevation != null && pressure != null) {
+            throw new UsageException("give --elevation or --pressure, not both");
+        }
+        try {
+            if (pressure != null) {
+                return SitePressure.measured(Quantity.PRESSURE.fromDisplay(units, pressure));
+            }
+            if (elevation != null) {
+                return SitePressure.fromElevation(Quantity.ELEVATION.fromDisplay(units, elevation));
+            }
+            return SitePressure.SEA_LEVEL;
+        } catch (InvalidInputException e) {
+            throw refused(e, units, elevation != null ? "--elevation" : "--pressure");
+        }
+    }
+
+    /** A typed value converted to SI, or null when the option is absent. */
+    static Double si(Args args, String option, Quantity q, UnitSystem units) {
+        Double v = args.number(option);
+        return v == null ? null : q.fromDisplay(units, v);
+    }
+
+    /** The core's refusal, said in the tech's units and naming the option typed. */
+    static UsageException refused(InvalidInputException e, UnitSystem units, String option) {
+        return new UsageException((option == null ? "" : option + ": ") + e.message(units));
+    }
+}

@@ -1,0 +1,139 @@
+package app.latentledger.core.psychro;
+
+import app.latentledger.core.InvalidInputException;
+import app.latentledger.core.units.Quantity;
+
+/**
+ * The full psychrometric state of a sample of moist air, SI inside.
+ *
+ * @param pressurePa            total (barometric) pressure, Pa
+ * @param dryBulbC              dry bulb, °C
+ * @param wetBulbC              thermodynamic wet bulb, °C (see {@link WetBulb} for the convention near freezing)
+ * @param dewPointC             dew point, or frost point below the triple point, °C
+ * @param relativeHumidityPct   relative humidity, % (over ice below the triple point)
+ * @param humidityRatio         kg water per kg dry air (= lb/lb)
+ * @param degreeOfSaturation    W / Ws, dimensionless
+ * @param vaporPressurePa       partial pressure of water vapor, Pa
+ * @param enthalpyJPerKg        per kg of dry air, on the datum of {@code edition}
+ * @param specificVolumeM3PerKg per kg of dry air
+ * @param densityKgPerM3        moist air (dry air plus vapor) per m³
+ * @param edition               which handbook edition's coefficients produced the numbers
+ */
+public record MoistAirState(
+        double pressurePa,
+        double dryBulbC,
+        double wetBulbC,
+        double dewPointC,
+        double relativeHumidityPct,
+        double humidityRatio,
+        double degreeOfSaturation,
+        double vaporPressurePa,
+        double enthalpyJPerKg,
+        double specificVolumeM3PerKg,
+        double densityKgPerM3,
+        HandbookEdition edition) {
+
+    /**
+     * State from dry bulb and wet bulb: W by eq. 33 or 35, limited to saturation (the IP ice-bulb
+     * coefficients would otherwise give up to 100.007 % RH at −20 °F).
+     *
+     * @throws InvalidInputException when a value is out of range, the wet bulb is above the dry
+     *                               bulb, or the wet bulb is too low for any real air
+     */
+    public static MoistAirState fromWetBulb(double pressurePa, double dryBulbC, double wetBulbC,
+                                            HandbookEdition edition) {
+        checkCommon(pressurePa, dryBulbC);
+        InputLimits.checkTemperature("wet bulb", wetBulbC);
+        if (wetBulbC > dryBulbC) {
+            throw new InvalidInputException("wet bulb", Quantity.TEMPERATURE, wetBulbC,
+                    InputLimits.MIN_TEMP_C, dryBulbC, "a wet bulb cannot be above the dry bulb");
+        }
+        double w = edition.humidityRatioFromWetBulb(dryBulbC, wetBulbC, pressurePa);
+        if (!(w >= 0)) {
+            double lowest = lowestWetBulbC(pressurePa, dryBulbC, edition);
+            throw new InvalidInputException("wet bulb", Quantity.TEMPERATURE, wetBulbC, lowest, dryBulbC,
+                    "even bone-dry air has a higher wet bulb at this dry bulb and pressure");
+        }
+        double ws = Psychrometrics.saturationHumidityRatio(dryBulbC, pressurePa);
+        return complete(pressurePa, dryBulbC, wetBulbC, Math.min(w, ws), edition);
+    }
+
+    /**
+     * State from dry bulb and relative humidity (eq. 24 for pw, eq. 20 for W, {@link WetBulb}).
+     */
+    public static MoistAirState fromRelativeHumidity(double pressurePa, double dryBulbC, double relativeHumidityPct,
+                                                     HandbookEdition edition) {
+        checkCommon(pressurePa, dryBulbC);
+        InputLimits.checkRelativeHumidity("relative humidity", relativeHumidityPct);
+        double pw = relativeHumidityPct / 100.0 * SaturationPressure.pascals(dryBulbC);
+        double w = Psychrometrics.humidityRatio(pw, pressurePa);
+        return fromKnownHumidityRatio(pressurePa, dryBulbC, w, pw, relativeHumidityPct, edition);
+    }
+
+    /** State from dry bulb and dew point (frost point below 0.01 °C), via eqs. 5/6 and 20. */
+    public static MoistAirState fromDewPoint(double pressurePa, double dryBulbC, double dewPointC,
+                                             HandbookEdition edition) {
+        checkCommon(pressurePa, dryBulbC);
+        InputLimits.checkTemperature("dew point", dewPointC);
+        if (dewPointC > dryBulbC) {
+            throw new InvalidInputException("dew point", Quantity.TEMPERATURE, dewPointC,
+                    InputLimits.MIN_TEMP_C, dryBulbC, "a dew point cannot be above the dry bulb");
+        }
+        double pw = SaturationPressure.pascals(dewPointC);
+        double w = Psychrometrics.humidityRatio(pw, pressurePa);
+        MoistAirState s = fromKnownHumidityRatio(pressurePa, dryBulbC, w, pw,
+                Psychrometrics.relativeHumidityPct(pw, dryBulbC), edition);
+        // keep the entered dew point exactly rather than its round trip through W
+        return new MoistAirState(s.pressurePa, s.dryBulbC, s.wetBulbC, dewPointC, s.relativeHumidityPct,
+                s.humidityRatio, s.degreeOfSaturation, s.vaporPressurePa, s.enthalpyJPerKg,
+                s.specificVolumeM3PerKg, s.densityKgPerM3, edition);
+    }
+
+    /** State from dry bulb and humidity ratio (kg/kg = lb/lb), at most saturation. */
+    public static MoistAirState fromHumidityRatio(double pressurePa, double dryBulbC, double humidityRatio,
+                                                  HandbookEdition edition) {
+        checkCommon(pressurePa, dryBulbC);
+        double ws = Psychrometrics.saturationHumidityRatio(dryBulbC, pressurePa);
+        InputLimits.check("humidity ratio", Quantity.HUMIDITY_RATIO, humidityRatio, 0.0, ws,
+                "air cannot hold more water than saturation at its dry bulb");
+        double pw = Psychrometrics.vaporPressurePa(humidityRatio, pressurePa);
+        return fromKnownHumidityRatio(pressurePa, dryBulbC, humidityRatio, pw,
+                Psychrometrics.relativeHumidityPct(pw, dryBulbC), edition);
+    }
+
+    private static MoistAirState fromKnownHumidityRatio(double p, double db, double w, double pw, double rhPct,
+                                                        HandbookEdition edition) {
+        double wb = WetBulb.fromHumidityRatio(db, w, p, edition);
+        double dp = w > 0 ? SaturationPressure.dewPointC(pw) : Double.NEGATIVE_INFINITY;
+        return finish(p, db, wb, Math.min(dp, db), rhPct, w, pw, edition);
+    }
+
+    private static MoistAirState complete(double p, double db, double wb, double w, HandbookEdition edition) {
+        double pw = Psychrometrics.vaporPressurePa(w, p);
+        double dp = w > 0 ? SaturationPressure.dewPointC(pw) : Double.NEGATIVE_INFINITY;
+        return finish(p, db, wb, Math.min(dp, db), Psychrometrics.relativeHumidityPct(pw, db), w, pw, edition);
+    }
+
+    private static MoistAirState finish(double p, double db, double wb, double dp, double rhPct, double w, double pw,
+                                        HandbookEdition edition) {
+        double ws = Psychrometrics.saturationHumidityRatio(db, p);
+        double v = edition.specificVolumeM3PerKg(db, w, p);
+        return new MoistAirState(p, db, wb, dp, rhPct, w, w / ws, pw, edition.enthalpyJPerKg(db, w), v,
+                Psychrometrics.densityKgPerM3(w, v), edition);
+    }
+
+    private static void checkCommon(double pressurePa, double dryBulbC) {
+        InputLimits.checkPressure("pressure", pressurePa);
+        InputLimits.checkTemperature("dry bulb", dryBulbC);
+    }
+
+    /** The wet bulb of perfectly dry air (W = 0) at this dry bulb: the lowest a reading can be. */
+    static double lowestWetBulbC(double pressurePa, double dryBulbC, HandbookEdition edition) {
+        return WetBulb.fromHumidityRatio(dryBulbC, 0.0, pressurePa, edition);
+    }
+
+    /** Saturation humidity ratio at this state's dry bulb and pressure, kg/kg. */
+    public double saturationHumidityRatio() {
+        return Psychrometrics.saturationHumidityRatio(dryBulbC, pressurePa);
+    }
+}
