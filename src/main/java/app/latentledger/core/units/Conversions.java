@@ -19,6 +19,10 @@ public final class Conversions {
     public static final double GRAINS_PER_LB = 7000.0;
     /** Cubic foot in cubic metres, exact. */
     public static final double M3_PER_FT3 = M_PER_FT * M_PER_FT * M_PER_FT;
+    /** US liquid pint, exact (231 in³ / 8). */
+    public static final double M3_PER_US_PINT = 4.73176473e-4;
+    /** US fluid ounce, exact (1/16 pint). */
+    public static final double M3_PER_US_FL_OZ = M3_PER_US_PINT / 16;
     /** One ton of refrigeration is 12 000 Btu/h (definition). */
     public static final double BTU_PER_H_PER_TON = 12_000.0;
 

@@ -25,7 +25,35 @@ public enum Quantity {
     /** Specific volume per mass of dry air; stored in m³/kg. */
     SPECIFIC_VOLUME("m³/kg", 1, 0, "ft³/lb", Conversions.KG_PER_LB / Conversions.M3_PER_FT3, 0),
     /** Density of moist air; stored in kg/m³. */
-    DENSITY("kg/m³", 1, 0, "lb/ft³", Conversions.M3_PER_FT3 / Conversions.KG_PER_LB, 0);
+    DENSITY("kg/m³", 1, 0, "lb/ft³", Conversions.M3_PER_FT3 / Conversions.KG_PER_LB, 0),
+    /** Volumetric airflow; stored in m³/s, shown as L/s or cfm. */
+    AIRFLOW("L/s", 1000, 0, "cfm", 60 / Conversions.M3_PER_FT3, 0),
+    /** Heat flow (capacity); stored in W, shown as W or Btu/h. */
+    POWER("W", 1, 0, "Btu/h", 3600 / Conversions.J_PER_BTU, 0),
+    /** Heat flow in large units; stored in W, shown as kW or tons of refrigeration. */
+    POWER_LARGE("kW", 1e-3, 0, "tons", 3600 / Conversions.J_PER_BTU / Conversions.BTU_PER_H_PER_TON, 0),
+    /** Water removed per unit time; stored in kg/s, shown as kg/h or lb/h. */
+    WATER_RATE("kg/h", 3600, 0, "lb/h", 3600 / Conversions.KG_PER_LB, 0),
+    /** Water removed per day as liquid volume; stored in kg/s, shown as L/day or US pints/day (water at 1 kg/L, 1.043 lb/pint). */
+    WATER_RATE_DAILY("L/day", 86_400, 0, "pints/day", 86_400 / (Conversions.M3_PER_US_PINT * 1000), 0),
+    /** Liquid water volume (condensate caught); stored in m³, shown as mL or US fl oz. */
+    WATER_VOLUME("mL", 1e6, 0, "fl oz", 1 / Conversions.M3_PER_US_FL_OZ, 0),
+    /** Water mass; stored in kg, shown as kg or lb. */
+    WATER_MASS("kg", 1, 0, "lb", 1 / Conversions.KG_PER_LB, 0),
+    /** Airflow per unit of capacity; stored in m³/s per W, shown as L/s per kW or cfm per ton. */
+    AIRFLOW_PER_CAPACITY("L/s per kW", 1e6, 0, "cfm/ton",
+            60 / Conversions.M3_PER_FT3 * Conversions.BTU_PER_H_PER_TON * Conversions.J_PER_BTU / 3600, 0),
+    /** Heat flow per unit of airflow; stored in W per m³/s, shown as W per L/s or Btu/h per cfm. */
+    POWER_PER_AIRFLOW("W per L/s", 1e-3, 0, "Btu/h per cfm",
+            3600 / Conversions.J_PER_BTU * Conversions.M3_PER_FT3 / 60, 0),
+    /** Elapsed time; stored in s, shown in minutes in both systems. */
+    DURATION_MINUTES("min", 1 / 60.0, 0, "min", 1 / 60.0, 0),
+    /** Elapsed time; stored and shown in seconds. */
+    DURATION_SECONDS("s", 1, 0, "s", 1, 0),
+    /** A pure number (SHR, bypass factor, fractions, counts per hour): no unit. */
+    DIMENSIONLESS("", 1, 0, "", 1, 0),
+    /** A fraction stored 0–1, shown in percent. */
+    FRACTION_PERCENT("%", 100, 0, "%", 100, 0);
 
     private final String siSymbol;
     private final double siFactor;
