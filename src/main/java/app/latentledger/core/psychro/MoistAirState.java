@@ -48,6 +48,11 @@ public record MoistAirState(
             throw new InvalidInputException("wet bulb", Quantity.TEMPERATURE, wetBulbC,
                     InputLimits.MIN_TEMP_C, dryBulbC, "a wet bulb cannot be above the dry bulb");
         }
+        double boiling = Psychrometrics.boilingPointC(pressurePa);
+        if (wetBulbC >= boiling) {
+            throw new InvalidInputException("wet bulb", Quantity.TEMPERATURE, wetBulbC,
+                    InputLimits.MIN_TEMP_C, boiling, "water boils below it at this pressure");
+        }
         double w = edition.humidityRatioFromWetBulb(dryBulbC, wetBulbC, pressurePa);
         if (!(w >= 0)) {
             double lowest = lowestWetBulbC(pressurePa, dryBulbC, edition);
@@ -65,7 +70,13 @@ public record MoistAirState(
                                                      HandbookEdition edition) {
         checkCommon(pressurePa, dryBulbC);
         InputLimits.checkRelativeHumidity("relative humidity", relativeHumidityPct);
-        double pw = relativeHumidityPct / 100.0 * SaturationPressure.pascals(dryBulbC);
+        double pws = SaturationPressure.pascals(dryBulbC);
+        double pw = relativeHumidityPct / 100.0 * pws;
+        if (pw >= 0.99 * pressurePa) {
+            // only above the boiling point for the pressure: the vapor alone would exceed the barometer
+            throw new InvalidInputException("relative humidity", Quantity.RELATIVE_HUMIDITY, relativeHumidityPct,
+                    0.0, 99.0 * pressurePa / pws, "at this dry bulb and pressure the vapor would exceed the barometric pressure");
+        }
         double w = Psychrometrics.humidityRatio(pw, pressurePa);
         return fromKnownHumidityRatio(pressurePa, dryBulbC, w, pw, relativeHumidityPct, edition);
     }
@@ -118,7 +129,8 @@ public record MoistAirState(
                                         HandbookEdition edition) {
         double ws = Psychrometrics.saturationHumidityRatio(db, p);
         double v = edition.specificVolumeM3PerKg(db, w, p);
-        return new MoistAirState(p, db, wb, dp, rhPct, w, w / ws, pw, edition.enthalpyJPerKg(db, w), v,
+        // W never exceeds Ws here, so an RH a rounding error above 100 % is 100 %
+        return new MoistAirState(p, db, wb, dp, Math.min(rhPct, 100.0), w, w / ws, pw, edition.enthalpyJPerKg(db, w), v,
                 Psychrometrics.densityKgPerM3(w, v), edition);
     }
 

@@ -25,9 +25,19 @@ public final class Psychrometrics {
         return pressurePa * humidityRatio / (HandbookEdition.MASS_RATIO + humidityRatio);
     }
 
-    /** Saturation humidity ratio, eq. 23 (W = 0.621945 pws / (p − pws)), kg/kg. */
+    /**
+     * Saturation humidity ratio, eq. 23 (W = 0.621945 pws / (p − pws)), kg/kg. At or above the
+     * boiling point for the pressure (pws ≥ p, e.g. 200 °F at 15 000 ft) air has no saturation
+     * limit and this returns +∞.
+     */
     public static double saturationHumidityRatio(double dryBulbC, double pressurePa) {
-        return humidityRatio(SaturationPressure.pascals(dryBulbC), pressurePa);
+        double pws = SaturationPressure.pascals(dryBulbC);
+        return pws >= pressurePa ? Double.POSITIVE_INFINITY : humidityRatio(pws, pressurePa);
+    }
+
+    /** Temperature at which water boils at this pressure (pws = p, eq. 6 inverted), °C. */
+    public static double boilingPointC(double pressurePa) {
+        return SaturationPressure.dewPointC(pressurePa);
     }
 
     /**

@@ -34,14 +34,17 @@ public final class WetBulb {
     public static double fromHumidityRatio(double dryBulbC, double humidityRatio, double pressurePa,
                                            HandbookEdition edition) {
         double[] slope = new double[1];
-        if (dryBulbC >= 0) {
+        // near boiling for the pressure (hot air at altitude) Ws* has a pole; start just below it,
+        // where Ws* is above 100 kg/kg and so above any real humidity ratio
+        double upper = Math.min(dryBulbC, Psychrometrics.boilingPointC(pressurePa) - 0.1);
+        if (upper >= 0) {
             double atZero = edition.humidityRatioAndSlope(dryBulbC, 0.0, pressurePa, false, slope);
             if (atZero <= humidityRatio) {
-                return solve(dryBulbC, humidityRatio, pressurePa, edition, false, dryBulbC, 0.0, slope);
+                return solve(dryBulbC, humidityRatio, pressurePa, edition, false, upper, 0.0, slope);
             }
             return solve(dryBulbC, humidityRatio, pressurePa, edition, true, 0.0, SaturationPressure.MIN_C, slope);
         }
-        return solve(dryBulbC, humidityRatio, pressurePa, edition, true, dryBulbC, SaturationPressure.MIN_C, slope);
+        return solve(dryBulbC, humidityRatio, pressurePa, edition, true, upper, SaturationPressure.MIN_C, slope);
     }
 
     private static double solve(double dryBulbC, double target, double pressurePa, HandbookEdition edition,
@@ -53,7 +56,7 @@ public final class WetBulb {
             if (f <= 0) {
                 if (x == upper) {
                     // saturated at the upper end (rounded IP ice coefficients can put the root a hair above it)
-                    return upper;
+                    return Math.min(upper, dryBulbC);
                 }
                 lo = x;
             }
