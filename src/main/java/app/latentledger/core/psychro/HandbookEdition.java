@@ -91,16 +91,15 @@ public enum HandbookEdition {
     }
 
     /**
-     * The psychrometer equation and its slope in one pass, for Newton's method: returns
-     * W(t*) and stores dW/dt* (per K) in {@code slope[0]}.
+     * The psychrometer equation and its slope in one pass, for Newton's method: returns W(t*)
+     * and stores dW/dt* (per K) in {@code slope[0]}. The caller supplies pws(t*) and
+     * d(ln pws)/dT at t*, so a value it already has costs no further exp or log.
      */
     double humidityRatioAndSlope(double dryBulbC, double wetBulbC, double pressurePa, boolean iceBulb,
-                                 double[] slope) {
-        double tK = wetBulbC + SaturationPressure.ZERO_CELSIUS_K;
-        double pws = Math.exp(SaturationPressure.lnPwsOfKelvin(tK));
+                                 double pws, double dLnPwsDT, double[] slope) {
         double denom = pressurePa - pws;
         double wsStar = MASS_RATIO * pws / denom;
-        double dWsDT = MASS_RATIO * pressurePa * pws * SaturationPressure.dLnPwsDT(tK) / (denom * denom);
+        double dWsDT = MASS_RATIO * pressurePa * pws * dLnPwsDT / (denom * denom);
         double[] k = iceBulb ? ice : liquid;
         double t = scale(dryBulbC);
         double s = scale(wetBulbC);

@@ -48,10 +48,12 @@ public record MoistAirState(
             throw new InvalidInputException("wet bulb", Quantity.TEMPERATURE, wetBulbC,
                     InputLimits.MIN_TEMP_C, dryBulbC, "a wet bulb cannot be above the dry bulb");
         }
-        double boiling = Psychrometrics.boilingPointC(pressurePa);
-        if (wetBulbC >= boiling) {
-            throw new InvalidInputException("wet bulb", Quantity.TEMPERATURE, wetBulbC,
-                    InputLimits.MIN_TEMP_C, boiling, "water boils below it at this pressure");
+        if (wetBulbC > 80.0) {
+            double boiling = Psychrometrics.boilingPointC(pressurePa);
+            if (wetBulbC >= boiling) {
+                throw new InvalidInputException("wet bulb", Quantity.TEMPERATURE, wetBulbC,
+                        InputLimits.MIN_TEMP_C, boiling, "water boils below it at this pressure");
+            }
         }
         double w = edition.humidityRatioFromWetBulb(dryBulbC, wetBulbC, pressurePa);
         if (!(w >= 0)) {
@@ -59,8 +61,11 @@ public record MoistAirState(
             throw new InvalidInputException("wet bulb", Quantity.TEMPERATURE, wetBulbC, lowest, dryBulbC,
                     "even bone-dry air has a higher wet bulb at this dry bulb and pressure");
         }
-        double ws = Psychrometrics.saturationHumidityRatio(dryBulbC, pressurePa);
-        return complete(pressurePa, dryBulbC, wetBulbC, Math.min(w, ws), edition);
+        double pws = SaturationPressure.pascals(dryBulbC);
+        double ws = saturationOf(pws, pressurePa);
+        w = Math.min(w, ws);
+        double pw = Psychrometrics.vaporPressurePa(w, pressurePa);
+        return finish(pressurePa, dryBulbC, wetBulbC, dewPointOf(w, pw, dryBulbC), 100.0 * pw / pws, w, pw, ws, edition);
     }
 
     /**
@@ -78,7 +83,7 @@ public record MoistAirState(
                     0.0, 99.0 * pressurePa / pws, "at this dry bulb and pressure the vapor would exceed the barometric pressure");
         }
         double w = Psychrometrics.humidityRatio(pw, pressurePa);
-        return fromKnownHumidityRatio(pressurePa, dryBulbC, w, pw, relativeHumidityPct, edition);
+        return fromKnownHumidityRatio(pressurePa, dryBulbC, w, pw, pws, edition);
     }
 
     /** State from dry bulb and dew point (frost point below 0.01 °C), via eqs. 5/6 and 20. */
@@ -93,7 +98,7 @@ public record MoistAirState(
         double pw = SaturationPressure.pascals(dewPointC);
         double w = Psychrometrics.humidityRatio(pw, pressurePa);
         MoistAirState s = fromKnownHumidityRatio(pressurePa, dryBulbC, w, pw,
-                Psychrometrics.relativeHumidityPct(pw, dryBulbC), edition);
+                SaturationPressure.pascals(dryBulbC), edition);
         // keep the entered dew point exactly rather than its round trip through W
         return new MoistAirState(s.pressurePa, s.dryBulbC, s.wetBulbC, dewPointC, s.relativeHumidityPct,
                 s.humidityRatio, s.degreeOfSaturation, s.vaporPressurePa, s.enthalpyJPerKg,
@@ -104,30 +109,31 @@ public record MoistAirState(
     public static MoistAirState fromHumidityRatio(double pressurePa, double dryBulbC, double humidityRatio,
                                                   HandbookEdition edition) {
         checkCommon(pressurePa, dryBulbC);
-        double ws = Psychrometrics.saturationHumidityRatio(dryBulbC, pressurePa);
-        InputLimits.check("humidity ratio", Quantity.HUMIDITY_RATIO, humidityRatio, 0.0, ws,
+        double pws = SaturationPressure.pascals(dryBulbC);
+        InputLimits.check("humidity ratio", Quantity.HUMIDITY_RATIO, humidityRatio, 0.0, saturationOf(pws, pressurePa),
                 "air cannot hold more water than saturation at its dry bulb");
         double pw = Psychrometrics.vaporPressurePa(humidityRatio, pressurePa);
-        return fromKnownHumidityRatio(pressurePa, dryBulbC, humidityRatio, pw,
-                Psychrometrics.relativeHumidityPct(pw, dryBulbC), edition);
+        return fromKnownHumidityRatio(pressurePa, dryBulbC, humidityRatio, pw, pws, edition);
     }
 
-    private static MoistAirState fromKnownHumidityRatio(double p, double db, double w, double pw, double rhPct,
+    private static MoistAirState fromKnownHumidityRatio(double p, double db, double w, double pw, double pws,
                                                         HandbookEdition edition) {
-        double wb = WetBulb.fromHumidityRatio(db, w, p, edition);
-        double dp = w > 0 ? SaturationPressure.dewPointC(pw) : Double.NEGATIVE_INFINITY;
-        return finish(p, db, wb, Math.min(dp, db), rhPct, w, pw, edition);
+        double dp = dewPointOf(w, pw, db);
+        double wb = WetBulb.fromHumidityRatio(db, w, p, edition, pws, dp);
+        return finish(p, db, wb, dp, 100.0 * pw / pws, w, pw, saturationOf(pws, p), edition);
     }
 
-    private static MoistAirState complete(double p, double db, double wb, double w, HandbookEdition edition) {
-        double pw = Psychrometrics.vaporPressurePa(w, p);
-        double dp = w > 0 ? SaturationPressure.dewPointC(pw) : Double.NEGATIVE_INFINITY;
-        return finish(p, db, wb, Math.min(dp, db), Psychrometrics.relativeHumidityPct(pw, db), w, pw, edition);
+    private static double dewPointOf(double w, double pw, double db) {
+        return w > 0 ? Math.min(SaturationPressure.dewPointC(pw), db) : Double.NEGATIVE_INFINITY;
+    }
+
+    /** Eq. 23 from a known pws; +∞ at or above the boiling point for the pressure. */
+    private static double saturationOf(double pws, double p) {
+        return pws >= p ? Double.POSITIVE_INFINITY : Psychrometrics.humidityRatio(pws, p);
     }
 
     private static MoistAirState finish(double p, double db, double wb, double dp, double rhPct, double w, double pw,
-                                        HandbookEdition edition) {
-        double ws = Psychrometrics.saturationHumidityRatio(db, p);
+                                        double ws, HandbookEdition edition) {
         double v = edition.specificVolumeM3PerKg(db, w, p);
         // W never exceeds Ws here, so an RH a rounding error above 100 % is 100 %
         return new MoistAirState(p, db, wb, dp, Math.min(rhPct, 100.0), w, w / ws, pw, edition.enthalpyJPerKg(db, w), v,

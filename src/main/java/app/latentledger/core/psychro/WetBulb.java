@@ -7,19 +7,26 @@ package app.latentledger.core.psychro;
  *
  * <p><b>The convention near freezing.</b> With the wet bulb close to 0 °C both equations can be
  * satisfied: one root at or above 0 °C with a liquid wick (eq. 33) and one just below 0 °C with an
- * iced wick (eq. 35). That band is narrow (around 38–42 % RH at 40 °F dry bulb) and the two roots
- * lie within about 0.5 °F. This class takes the liquid-wick root whenever it exists, because a wick
+ * iced wick (eq. 35). That band is narrow (about 38–42 % RH at 40 °F dry bulb) and the two roots
+ * lie within about 0.6 °F. This class takes the liquid-wick root whenever it exists, because a wick
  * in air above freezing stays wet (supercooled or not) for the minutes a field reading takes; the
  * ice-bulb equation is used only when no liquid-wick root exists (dry bulb below freezing, or air so
  * dry that eq. 33 would need a wet bulb under 0 °C).
  *
- * <p><b>Method.</b> On each branch W(t*) rises and is convex, so Newton's method started from the
- * branch's upper end (the dry bulb, or 0 °C) approaches the root from above without overshoot.
- * It stops when a step is under 1e−9 K, so the result is good to well inside 1e−6 K.
+ * <p><b>Method.</b> The first guess comes from the psychrometer equation with the saturation curve
+ * replaced by its tangent at the dew point, t* ≈ (s·t_d + k·t)/(s + k) with s = dWs/dT at t_d and
+ * k = c_p/h_fg; the curve is convex, so the guess sits a few tenths of a kelvin above the root.
+ * Newton's method on the branch's equation, guarded by a bracket, then converges quadratically. It
+ * stops after a Newton step under 1e−5 K: the error left after such a step is about
+ * |W''/(2W')|·δ² ≤ 0.1 K⁻¹ · (1e−5 K)² = 1e−11 K, far inside the 1e−6 K the app needs. Valid over
+ * the saturation fits' range (−100 to 200 °C) below the boiling point for the pressure.
  */
 public final class WetBulb {
-    private static final double STEP_TOLERANCE_K = 1e-9;
-    private static final int MAX_ITERATIONS = 60;
+    private static final double NEWTON_STEP_DONE_K = 1e-5;
+    private static final double BISECTION_DONE_K = 1e-10;
+    private static final int MAX_ITERATIONS = 100;
+    /** Below this dry bulb no field pressure (≥ 50 kPa, boiling at 81 °C) brings Ws* near its pole. */
+    private static final double NO_POLE_BELOW_C = 80.0;
 
     private WetBulb() {
     }
@@ -33,42 +40,113 @@ public final class WetBulb {
      */
     public static double fromHumidityRatio(double dryBulbC, double humidityRatio, double pressurePa,
                                            HandbookEdition edition) {
-        double[] slope = new double[1];
-        // near boiling for the pressure (hot air at altitude) Ws* has a pole; start just below it,
-        // where Ws* is above 100 kg/kg and so above any real humidity ratio
-        double upper = Math.min(dryBulbC, Psychrometrics.boilingPointC(pressurePa) - 0.1);
-        if (upper >= 0) {
-            double atZero = edition.humidityRatioAndSlope(dryBulbC, 0.0, pressurePa, false, slope);
-            if (atZero <= humidityRatio) {
-                return solve(dryBulbC, humidityRatio, pressurePa, edition, false, upper, 0.0, slope);
-            }
-            return solve(dryBulbC, humidityRatio, pressurePa, edition, true, 0.0, SaturationPressure.MIN_C, slope);
-        }
-        return solve(dryBulbC, humidityRatio, pressurePa, edition, true, upper, SaturationPressure.MIN_C, slope);
+        double pw = Psychrometrics.vaporPressurePa(humidityRatio, pressurePa);
+        double dewPointC = humidityRatio > 0 ? SaturationPressure.dewPointC(pw) : Double.NEGATIVE_INFINITY;
+        return fromHumidityRatio(dryBulbC, humidityRatio, pressurePa, edition, Double.NaN, dewPointC);
     }
 
+    /**
+     * As above, reusing what the caller already has: pws at the dry bulb (NaN when unknown) and the
+     * dew or frost point (−∞ for bone-dry air).
+     */
+    static double fromHumidityRatio(double dryBulbC, double humidityRatio, double pressurePa,
+                                    HandbookEdition edition, double pwsAtDryBulb, double dewPointC) {
+        double upper = dryBulbC;
+        double pwsUpper = pwsAtDryBulb;
+        if (dryBulbC > NO_POLE_BELOW_C) {
+            // near boiling for the pressure (hot air at altitude) Ws* has a pole; start just below
+            // it, where Ws* exceeds 100 kg/kg and so any real humidity ratio
+            double belowBoiling = Psychrometrics.boilingPointC(pressurePa) - 0.1;
+            if (belowBoiling < upper) {
+                upper = belowBoiling;
+                pwsUpper = Double.NaN;
+            }
+        }
+        double[] slope = new double[1];
+        if (upper >= 0) {
+            double guess = tangentGuess(dryBulbC, humidityRatio, pressurePa, dewPointC, false);
+            double liquid = solve(dryBulbC, humidityRatio, pressurePa, edition, false, upper, pwsUpper, 0.0, guess, slope);
+            if (!Double.isNaN(liquid)) {
+                return liquid;
+            }
+            upper = 0.0;
+            pwsUpper = Double.NaN;
+        }
+        double guess = tangentGuess(dryBulbC, humidityRatio, pressurePa, dewPointC, true);
+        return solve(dryBulbC, humidityRatio, pressurePa, edition, true, upper, pwsUpper,
+                SaturationPressure.MIN_C, guess, slope);
+    }
+
+    /** The tangent-line first guess described in the class comment; NaN for bone-dry air. */
+    private static double tangentGuess(double dryBulbC, double w, double p, double dewPointC, boolean ice) {
+        if (!(w > 0) || !Double.isFinite(dewPointC)) {
+            return Double.NaN;
+        }
+        double tK = dewPointC + SaturationPressure.ZERO_CELSIUS_K;
+        double pw = Psychrometrics.vaporPressurePa(w, p);
+        double denom = p - pw;
+        double s = HandbookEdition.MASS_RATIO * p * pw * SaturationPressure.dLnPwsDT(tK) / (denom * denom);
+        double k = 1.006 / (ice ? 2830.0 : 2501.0 - 2.326 * Math.max(dewPointC, 0.0));
+        return (s * dewPointC + k * dryBulbC) / (s + k);
+    }
+
+    /**
+     * Newton on one branch inside [lower, upper]. Returns NaN on the liquid branch when the root
+     * lies below {@code lower} (0 °C), so the caller moves to the ice branch.
+     */
     private static double solve(double dryBulbC, double target, double pressurePa, HandbookEdition edition,
-                                boolean iceBulb, double upper, double lower, double[] slope) {
-        double x = upper;
+                                boolean iceBulb, double upper, double pwsUpper, double lower, double guess,
+                                double[] slope) {
+        // saturated, or a hair above on the rounded IP ice coefficients: the wet bulb is the upper end
+        double fUpper = evaluate(dryBulbC, upper, pressurePa, edition, iceBulb, pwsUpper, slope) - target;
+        if (fUpper <= 0) {
+            return Math.min(upper, dryBulbC);
+        }
         double lo = lower;
+        double hi = upper;
+        boolean lowerKnown = iceBulb;
+        double x;
+        double f;
+        if (guess > lower && guess < upper) {
+            x = guess;
+            f = evaluate(dryBulbC, x, pressurePa, edition, iceBulb, Double.NaN, slope) - target;
+        } else {
+            x = upper;
+            f = fUpper;
+        }
         for (int i = 0; i < MAX_ITERATIONS; i++) {
-            double f = edition.humidityRatioAndSlope(dryBulbC, x, pressurePa, iceBulb, slope) - target;
             if (f <= 0) {
-                if (x == upper) {
-                    // saturated at the upper end (rounded IP ice coefficients can put the root a hair above it)
-                    return Math.min(upper, dryBulbC);
-                }
                 lo = x;
+                lowerKnown = true;
+            } else {
+                hi = x;
             }
             double next = x - f / slope[0];
-            if (!(next > lo && next <= upper)) {
-                next = 0.5 * (x + lo);
+            boolean newton = next > lo && next < hi;
+            if (!newton) {
+                if (!lowerKnown) {
+                    // the step left the liquid branch: the root is below 0 °C unless W(0 °C) is still low enough
+                    lowerKnown = true;
+                    if (edition.humidityRatioFromWetBulb(dryBulbC, lower, pressurePa) - target > 0) {
+                        return Double.NaN;
+                    }
+                }
+                next = 0.5 * (lo + hi);
             }
-            if (Math.abs(next - x) < STEP_TOLERANCE_K) {
+            if (newton ? Math.abs(next - x) < NEWTON_STEP_DONE_K : hi - lo < BISECTION_DONE_K) {
                 return next;
             }
             x = next;
+            f = evaluate(dryBulbC, x, pressurePa, edition, iceBulb, Double.NaN, slope) - target;
         }
         return x;
+    }
+
+    private static double evaluate(double dryBulbC, double wetBulbC, double pressurePa, HandbookEdition edition,
+                                   boolean iceBulb, double knownPws, double[] slope) {
+        double tK = wetBulbC + SaturationPressure.ZERO_CELSIUS_K;
+        double pws = Double.isNaN(knownPws) ? Math.exp(SaturationPressure.lnPwsOfKelvin(tK)) : knownPws;
+        return edition.humidityRatioAndSlope(dryBulbC, wetBulbC, pressurePa, iceBulb, pws,
+                SaturationPressure.dLnPwsDT(tK), slope);
     }
 }
