@@ -14,15 +14,18 @@ import app.latentledger.core.psychro.HandbookEdition;
  *   <li>total (eq. 43) q = ṁ_da [(h₁ − h₂) − (W₁ − W₂) h_w2], h by eq. 32, with the condensate
  *       leaving at the supply dry bulb, h_w2 = 4.186 t₂ kJ/kg (the liquid-water enthalpy the
  *       handbook uses beside eq. 33);</li>
- *   <li><b>sensible</b> q_s = ṁ_da (h(t₁, W₂) − h(t₂, W₂)) = ṁ_da (1.006 + 1.86 W₂)(t₁ − t₂):
- *       cooling the dried air from the entering to the leaving dry bulb, with moist-air specific
- *       heat at the leaving humidity ratio (eq. 32 differenced at constant W; the same c_p form as
- *       HoF ch. 18 §"standard air", eq. 8);</li>
- *   <li><b>latent</b> q_l = q − q_s = ṁ_da (W₁ − W₂)(2501 + 1.86 t₁ − 4.186 t₂) kJ/kg: the vapour
- *       condensed, from vapour at the entering dry bulb to liquid at the leaving one. Defined as the
- *       remainder so that sensible + latent is exactly the total; it equals ṁ_w h_fg with h_fg
- *       evaluated between those temperatures (≈ 2460 kJ/kg, 1060 Btu/lb, at coil temperatures).</li>
+ *   <li><b>sensible</b> q_s = ṁ_da (h(t₁, W₁) − h(t₂, W₁)) = ṁ_da (1.006 + 1.86 W₁)(t₁ − t₂):
+ *       cooling the entering air, at its own humidity ratio, from the entering to the leaving dry
+ *       bulb — eq. 32 differenced at constant W, i.e. moist-air specific heat, the same c_p form as
+ *       HoF ch. 18 §"standard air" (eq. 8);</li>
+ *   <li><b>latent</b> q_l = q − q_s = ṁ_da (W₁ − W₂)(2501 + 1.86 t₂ − 4.186 t₂) kJ/kg
+ *       = ṁ_w h_fg(t₂): the water condensed at the leaving temperature, with h_fg from the
+ *       constants of eq. 32 and the liquid enthalpy above (≈ 2477 kJ/kg, 1065 Btu/lb, at 10 °C).</li>
  * </ul>
+ * With this split the two usual definitions of latent capacity — "total minus sensible" and
+ * "water removed times latent heat" — are the same number, so sensible + latent is exactly the
+ * total and latent ÷ water removed is the latent heat at the coil. (Taking c_p at the leaving W
+ * instead moves about 0.2 % of the total from latent to sensible at typical conditions.)
  * SHR = q_s / q (the chart's sensible-heat-ratio protractor, HoF ch. 1). Valid for a coil that
  * cools (t₂ &lt; t₁); the arithmetic is also well defined for warming or wetting air, and then
  * reports negative capacities rather than hiding them.
@@ -67,7 +70,7 @@ public record CoilProcess(double massFlowKgPerS, double sensibleW, double latent
         double h2 = si.enthalpyJPerKg(t2C, w2);
         double dw = w1 - w2;
         double total = m * ((h1 - h2) - dw * CP_LIQUID_WATER * t2C);
-        double sensible = m * (si.enthalpyJPerKg(t1C, w2) - h2);
+        double sensible = m * (h1 - si.enthalpyJPerKg(t2C, w1));
         double latent = total - sensible;
         double shr = total == 0 ? Double.NaN : sensible / total;
         double perCapacity = total > 0 ? airflowM3PerS / total : Double.NaN;
