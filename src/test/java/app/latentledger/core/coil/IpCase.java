@@ -46,6 +46,12 @@ final class IpCase {
         return this;
     }
 
+    IpCase supplyDp(double dbF, double dpF) {
+        leaving = new AirReading("supply", c(dbF), Tolerances.DRY_BULB_K, HumidityKind.DEW_POINT, c(dpF),
+                Tolerances.DEW_POINT_K);
+        return this;
+    }
+
     IpCase cfm(double cfm) {
         airflow = Quantity.AIRFLOW.fromDisplay(UnitSystem.IP, cfm);
         return this;
