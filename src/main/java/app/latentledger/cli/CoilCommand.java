@@ -1,0 +1,179 @@
+package app.latentledger.cli;
+
+import app.latentledger.core.InvalidInputException;
+import app.latentledger.core.coil.CoilCheck;
+import app.latentledger.core.coil.CoilProcess;
+import app.latentledger.core.coil.CoilReadings;
+import app.latentledger.core.coil.CoilResult;
+import app.latentledger.core.coil.Estimate;
+import app.latentledger.core.coil.Measurand;
+import app.latentledger.core.coil.ShortcutFigures;
+import app.latentledger.core.findings.Cautions;
+import app.latentledger.core.findings.Finding;
+import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.findings.Thresholds;
+import app.latentledger.core.psychro.SitePressure;
+import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.UnitSystem;
+
+import java.util.HashMap;
+import java.util.Map;
+
+/** {@code coil}: is the coil dehumidifying, how much, and how sure are we. */
+public final class CoilCommand implements Command {
+    @Override
+    public String name() {
+        return "coil";
+    }
+
+    @Override
+    public String summary() {
+        return "coil check: sensible/latent split, moisture removal, ADP, coil vs dew point with uncertainty";
+    }
+
+    @Override
+    public String usage() {
+        return "usage: latent-ledger coil --return-db T (--return-wb T | --return-rh PCT | --return-dew-point T)\n"
+                + "         --supply-db T (--supply-wb T | --supply-rh PCT | --supply-dew-point T) --airflow CFM|L/S\n"
+                + "         [--airflow-at return|supply] [--coil-temp T [--coil-temp-kind coil-surface|evaporator-saturation]]\n"
+                + "         [--nominal-tons TONS | --nominal-kw KW] [--condensate ML | --condensate-floz FLOZ]\n"
+                + "         [--condensate-minutes MIN] [--rh-target PCT] [--units ip|si] [--elevation FT|M | --pressure PSIA|KPA]\n"
+                + "         [--tol-db D] [--tol-rh PCT] [--tol-wb D] [--tol-dew-point D] [--tol-coil D]\n"
+                + "         [--tol-airflow-pct PCT] [--tol-condensate-pct PCT] [--json]\n"
+                + "  return = air entering the coil (return plenum, or mixed air after any outdoor-air intake)\n"
+                + "  tolerances are ± half-widths in °F (ip) or K (si); defaults ±0.5 °F db and wb, ±2 %RH,\n"
+                + "  ±1 °F dew point and coil, ±10 % airflow, ±2 % condensate volume\n"
+                + "  --airflow-at: where the airflow was measured (default return); --condensate is in mL in both unit systems\n"
+                + "  --rh-target: indoor RH target for findings (default 60 %)\n"
+                + "  verdict: dehumidifying | not-dehumidifying | cant-tell (margin within its k = 2 uncertainty)\n";
+    }
+
+    @Override
+    public int run(Args args, CliContext context) {
+        UnitSystem units = UnitOptions.units(args);
+        SitePressure site = UnitOptions.site(args, units);
+        CoilReadings readings = CoilOptions.read(args, units, site);
+        ThresholdSettings thresholds = thresholds(args);
+        boolean json = args.flag("json");
+        args.rejectUnknown();
+        CoilResult result = CoilCheck.run(readings, thresholds, units);
+        context.out().print(json ? Json.print(CoilJson.of(result, units)) + "\n" : table(result, site, units));
+        return Cli.OK;
+    }
+
+    private static ThresholdSettings thresholds(Args args) {
+        Double target = args.number("rh-target");
+        if (target == null) {
+            return ThresholdSettings.DEFAULTS;
+        }
+        if (!(target > 0 && target < 100)) {
+            throw UnitOptions.refused(new InvalidInputException("indoor RH target", Quantity.RELATIVE_HUMIDITY,
+                    target, 1, 99, null), UnitSystem.IP, "--rh-target");
+        }
+        Map<String, Double> overrides = new HashMap<>();
+        overrides.put(Thresholds.INDOOR_RH_TARGET.key(), target);
+        return new ThresholdSettings(overrides);
+    }
+
+    static String table(CoilResult r, SitePressure site, UnitSystem units) {
+        StringBuilder b = new StringBuilder();
+        CoilProcess q = r.process();
+        b.append("Coil check (mass-flow method, ASHRAE Handbook—Fundamentals ch. 1; uncertainties k = 2)\n");
+        String where = site.measured() ? "measured" : "standard atmosphere at "
+                + Format.fixed(Quantity.ELEVATION.toDisplay(units, site.elevationM()), 0) + " " + Quantity.ELEVATION.symbol(units);
+        b.append(Format.row("pressure", Format.fixed(Quantity.PRESSURE.toDisplay(units, site.pressurePa()), 3),
+                Quantity.PRESSURE.symbol(units) + "  (" + where + ")"));
+        b.append("Air\n");
+        b.append(Format.row("", "entering", "  leaving"));
+        b.append(pair("dry bulb", Quantity.TEMPERATURE, r.entering().dryBulbC(), r.leaving().dryBulbC(), 1, units));
+        b.append(pair("wet bulb", Quantity.TEMPERATURE, r.entering().wetBulbC(), r.leaving().wetBulbC(), 1, units));
+        b.append(pair("dew point", Quantity.TEMPERATURE, r.entering().dewPointC(), r.leaving().dewPointC(), 1, units));
+        b.append(Format.row("relative humidity", Format.fixed(r.entering().relativeHumidityPct(), 1),
+                String.format("%9s %%", Format.fixed(r.leaving().relativeHumidityPct(), 1))));
+        b.append(pair("humidity ratio", Quantity.HUMIDITY_RATIO_FINE, r.entering().humidityRatio(),
+                r.leaving().humidityRatio(), units == UnitSystem.IP ? 1 : 2, units));
+        b.append(Format.row("airflow", Format.fixed(Quantity.AIRFLOW.toDisplay(units, r.readings().airflowM3PerS()), 0),
+                Quantity.AIRFLOW.symbol(units) + " measured at " + r.readings().airflowAt().key() + " air"));
+        b.append(Format.row("dry-air mass flow", Format.fixed(Quantity.WATER_RATE.toDisplay(units, q.massFlowKgPerS()),
+                units == UnitSystem.IP ? 0 : 1), Quantity.WATER_RATE.symbol(units)));
+        b.append("Capacity\n");
+        b.append(est("sensible", Measurand.SENSIBLE, r, units, 0));
+        b.append(est("latent", Measurand.LATENT, r, units, 0));
+        b.append(est("total", Measurand.TOTAL, r, units, 0));
+        b.append(Format.row("", Format.fixed(Quantity.POWER_LARGE.toDisplay(units, q.totalW()), 2),
+                Quantity.POWER_LARGE.symbol(units)));
+        b.append(est("sensible heat ratio", Measurand.SHR, r, units, 3));
+        b.append(est("moisture removal", Measurand.MOISTURE_REMOVAL, r, units, 2));
+        b.append(Format.row("", Format.fixed(Quantity.WATER_RATE_DAILY.toDisplay(units, q.moistureRemovalKgPerS()), 1),
+                Quantity.WATER_RATE_DAILY.symbol(units)));
+        b.append(est("humidity-ratio drop", Measurand.HUMIDITY_RATIO_DROP, r, units, units == UnitSystem.IP ? 1 : 2));
+        b.append(est("latent per airflow", Measurand.LATENT_PER_AIRFLOW, r, units, 2));
+        b.append(est("airflow per ton", Measurand.AIRFLOW_PER_CAPACITY, r, units, 0));
+        if (r.readings().hasNominalCapacity()) {
+            b.append(Format.row("  of nominal", Format.fixed(
+                    Quantity.AIRFLOW_PER_CAPACITY.toDisplay(units, r.airflowPerNominalCapacity()), 0),
+                    Quantity.AIRFLOW_PER_CAPACITY.symbol(units)));
+        }
+        ShortcutFigures s = ShortcutFigures.of(units, r.readings().pressurePa(), r.readings().airflowM3PerS(), q);
+        double[] c = s.scaledConstants();
+        b.append("Standard-air shortcuts (cross-check only; constants × p/p0 = ")
+                .append(Format.fixed(s.pressureRatio(), 4)).append(")\n");
+        b.append(Format.row("sensible " + Format.fixed(c[0], 3), Format.fixed(Quantity.POWER.toDisplay(units, s.sensibleW()), 0),
+                Quantity.POWER.symbol(units)));
+        b.append(Format.row("latent " + Format.fixed(c[1], units == UnitSystem.IP ? 3 : 0),
+                Format.fixed(Quantity.POWER.toDisplay(units, s.latentW()), 0), Quantity.POWER.symbol(units)));
+        b.append(Format.row("total " + Format.fixed(c[2], 3), Format.fixed(Quantity.POWER.toDisplay(units, s.totalW()), 0),
+                Quantity.POWER.symbol(units)));
+        b.append("Coil\n");
+        if (r.adp().found()) {
+            b.append(est("apparatus dew point", Measurand.APPARATUS_DEW_POINT, r, units, 1));
+            b.append(est("bypass factor", Measurand.BYPASS_FACTOR, r, units, 3));
+        } else {
+            b.append("  apparatus dew point: ").append(r.adp().explanation()).append('\n');
+        }
+        b.append(est("entering dew point", Measurand.ENTERING_DEW_POINT, r, units, 1));
+        String source = CoilResult.SOURCE_MEASURED.equals(r.coilTemperatureSource())
+                ? "measured " + r.readings().coilKind().label()
+                : CoilResult.SOURCE_ADP.equals(r.coilTemperatureSource()) ? "apparatus dew point stands in" : "none";
+        if (Double.isFinite(r.coilTemperatureC())) {
+            b.append(est("coil temperature", Measurand.COIL_TEMPERATURE, r, units, 1).replaceAll("\n$", "")
+                    .concat("  (" + source + ")\n"));
+            b.append(est("dew-point margin", Measurand.DEW_POINT_MARGIN, r, units, 1));
+        } else {
+            b.append("  coil temperature: none (not measured, no apparatus dew point)\n");
+        }
+        if (r.condensate() != null) {
+            b.append("Condensate\n");
+            b.append(est("caught", Measurand.CONDENSATE_RATE, r, units, 2));
+            b.append(est("air side", Measurand.MOISTURE_REMOVAL, r, units, 2));
+            b.append(est("difference", Measurand.CONDENSATE_MINUS_AIRSIDE, r, units, 2));
+        }
+        b.append("Verdict: ").append(r.verdict().key()).append('\n');
+        b.append("Findings\n");
+        if (r.findings().isEmpty()) {
+            b.append("  none\n");
+        }
+        for (Finding f : r.findings()) {
+            b.append("  [").append(f.severity().key()).append("] ").append(f.code()).append(": ").append(f.message()).append('\n');
+            b.append("      ").append(f.technical()).append('\n');
+            for (String next : f.nextChecks()) {
+                b.append("      - ").append(next).append('\n');
+            }
+        }
+        b.append(Cautions.SAFETY_LINE).append('\n');
+        return b.toString();
+    }
+
+    private static String pair(String label, Quantity qty, double a, double b, int decimals, UnitSystem units) {
+        return Format.row(label, Format.fixed(qty.toDisplay(units, a), decimals),
+                String.format("%9s %s", Format.fixed(qty.toDisplay(units, b), decimals), qty.symbol(units)));
+    }
+
+    private static String est(String label, Measurand m, CoilResult r, UnitSystem units, int decimals) {
+        Estimate e = r.estimate(m);
+        String u = Double.isFinite(e.expandedSi())
+                ? "± " + Format.fixed(m.uncertaintyQuantity().toDisplay(units, e.expandedSi()), decimals) : "";
+        return Format.row(label, Format.fixed(m.quantity().toDisplay(units, e.valueSi()), decimals),
+                (u + " " + m.quantity().symbol(units)).trim());
+    }
+}

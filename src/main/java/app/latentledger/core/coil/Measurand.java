@@ -1,0 +1,53 @@
+package app.latentledger.core.coil;
+
+import app.latentledger.core.units.Quantity;
+
+/** The results of a coil check that carry an uncertainty, in the order the model returns them. */
+public enum Measurand {
+    ENTERING_DEW_POINT("enteringDewPoint", "entering dew point", Quantity.TEMPERATURE),
+    LEAVING_DEW_POINT("leavingDewPoint", "leaving dew point", Quantity.TEMPERATURE),
+    ENTERING_RELATIVE_HUMIDITY("enteringRelativeHumidity", "entering relative humidity", Quantity.RELATIVE_HUMIDITY),
+    HUMIDITY_RATIO_DROP("humidityRatioDrop", "humidity-ratio drop across the coil", Quantity.HUMIDITY_RATIO_FINE),
+    TEMPERATURE_DROP("temperatureDrop", "dry-bulb drop across the coil", Quantity.TEMPERATURE_DIFFERENCE),
+    SENSIBLE("sensible", "sensible capacity", Quantity.POWER),
+    LATENT("latent", "latent capacity", Quantity.POWER),
+    TOTAL("total", "total capacity", Quantity.POWER),
+    SHR("shr", "sensible heat ratio", Quantity.DIMENSIONLESS),
+    MOISTURE_REMOVAL("moistureRemoval", "moisture removal", Quantity.WATER_RATE),
+    LATENT_PER_AIRFLOW("latentPerAirflow", "latent capacity per airflow", Quantity.POWER_PER_AIRFLOW),
+    APPARATUS_DEW_POINT("apparatusDewPoint", "apparatus dew point", Quantity.TEMPERATURE),
+    BYPASS_FACTOR("bypassFactor", "bypass factor", Quantity.DIMENSIONLESS),
+    COIL_TEMPERATURE("coilTemperature", "coil temperature", Quantity.TEMPERATURE),
+    DEW_POINT_MARGIN("dewPointMargin", "entering dew point minus coil temperature", Quantity.TEMPERATURE_DIFFERENCE),
+    AIRFLOW_PER_CAPACITY("airflowPerTon", "airflow per unit of measured total capacity", Quantity.AIRFLOW_PER_CAPACITY),
+    CONDENSATE_RATE("condensateRate", "condensate caught per hour", Quantity.WATER_RATE),
+    CONDENSATE_MINUS_AIRSIDE("condensateMinusAirside", "condensate minus air-side moisture removal", Quantity.WATER_RATE);
+
+    private final String key;
+    private final String label;
+    private final Quantity quantity;
+
+    Measurand(String key, String label, Quantity quantity) {
+        this.key = key;
+        this.label = label;
+        this.quantity = quantity;
+    }
+
+    public String key() {
+        return key;
+    }
+
+    public String label() {
+        return label;
+    }
+
+    /** How the value is shown. */
+    public Quantity quantity() {
+        return quantity;
+    }
+
+    /** How its uncertainty is shown: a temperature's uncertainty is a temperature difference. */
+    public Quantity uncertaintyQuantity() {
+        return quantity == Quantity.TEMPERATURE ? Quantity.TEMPERATURE_DIFFERENCE : quantity;
+    }
+}

@@ -1,0 +1,254 @@
+package app.latentledger.core.coil;
+
+import app.latentledger.core.findings.Finding;
+import app.latentledger.core.findings.Threshold;
+import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.findings.Thresholds;
+import app.latentledger.core.units.UnitSystem;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Nested;
+import org.junit.jupiter.api.Test;
+
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
+
+import static app.latentledger.core.coil.CoilFindings.*;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** Every finding fires on one realistic set of readings and stays quiet on another. */
+class CoilFindingsTest {
+    /** Case A (domain-practice.md §4.2) on a 3-ton nameplate with a 45 °F coil: a healthy coil. */
+    private static IpCase healthy() {
+        return IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).nominalTons(3).coilF(45);
+    }
+
+    private static List<String> codes(CoilResult r) {
+        return r.findings().stream().map(Finding::code).collect(Collectors.toList());
+    }
+
+    @Test
+    @DisplayName("A healthy coil raises no finding")
+    void healthyIsQuiet() {
+        assertEquals(List.of(), codes(healthy().run()));
+    }
+
+    @Test
+    @DisplayName("Every finding carries a plain message, a technical line, evidence and next checks")
+    void shape() {
+        CoilResult r = IpCase.returnRh(78, 62).supplyRh(64, 88).cfm(1500).nominalTons(3).coilF(66).condensate(50, 15).run();
+        assertTrue(r.findings().size() >= 3, codes(r).toString());
+        for (Finding f : r.findings()) {
+            assertFalse(f.message().isBlank());
+            assertFalse(f.technical().isBlank());
+            assertFalse(f.evidence().isEmpty(), f.code());
+            assertFalse(f.nextChecks().isEmpty(), f.code());
+        }
+    }
+
+    @Nested
+    class CoilAboveDewPoint {
+        @Test
+        void fires() {
+            // dp 55.1 °F, coil surface 59 °F ± 1 °F: margin −3.9 ± 1.8 °F
+            assertTrue(codes(IpCase.returnRh(75, 50).supplyRh(62, 78).cfm(1450).nominalTons(3).coilF(59).run())
+                    .contains(COIL_ABOVE_DEW_POINT));
+        }
+
+        @Test
+        void quiet() {
+            assertFalse(codes(healthy().run()).contains(COIL_ABOVE_DEW_POINT));
+        }
+    }
+
+    @Nested
+    class CoilMarginInconclusive {
+        @Test
+        void fires() {
+            // dp 60.2 °F vs coil 59 °F ± 1 °F: margin 1.2 °F inside its U ≈ 1.7 °F
+            assertTrue(codes(IpCase.returnRh(76, 58).supplyRh(59, 90).cfm(1200).nominalTons(3).coilF(59).run())
+                    .contains(COIL_MARGIN_INCONCLUSIVE));
+        }
+
+        @Test
+        void firesWithoutAnyCoilTemperature() {
+            // supply dew point 55.3 °F vs return 55.1 °F: no ADP, drop within uncertainty
+            assertTrue(codes(IpCase.returnRh(75, 50).supplyDp(58, 55.3).cfm(1200).run()).contains(COIL_MARGIN_INCONCLUSIVE));
+        }
+
+        @Test
+        void quiet() {
+            assertFalse(codes(healthy().run()).contains(COIL_MARGIN_INCONCLUSIVE));
+        }
+    }
+
+    @Nested
+    class MoistureDropInconclusive {
+        @Test
+        void fires() {
+            // coil 45 °F, 10 °F under the dew point, yet supply dew point 54.5 °F: drop ≈ 1.3 gr ± 3.6 gr
+            assertTrue(codes(IpCase.returnRh(75, 50).supplyDp(58, 54.5).cfm(1200).nominalTons(3).coilF(45).run())
+                    .contains(MOISTURE_DROP_INCONCLUSIVE));
+        }
+
+        @Test
+        void quiet() {
+            assertFalse(codes(healthy().run()).contains(MOISTURE_DROP_INCONCLUSIVE));
+        }
+    }
+
+    @Nested
+    class CoilAddingMoisture {
+        @Test
+        void fires() {
+            assertTrue(codes(IpCase.returnRh(75, 50).supplyRh(63, 86).cfm(1200).run()).contains(COIL_ADDING_MOISTURE));
+        }
+
+        @Test
+        void quiet() {
+            assertFalse(codes(healthy().run()).contains(COIL_ADDING_MOISTURE));
+        }
+    }
+
+    @Nested
+    class ReadingsInconsistent {
+        @Test
+        void supplyWarmerThanReturn() {
+            assertTrue(codes(IpCase.returnRh(75, 50).supplyRh(77, 45).cfm(1200).run()).contains(READINGS_INCONSISTENT));
+        }
+
+        @Test
+        void coilAboveDewPointWhileAirLosesMoisture() {
+            // case A readings (drop 6.8 ± 3.8 gr) with a coil probe at 60 °F, above the 55.1 °F dew point
+            CoilResult r = IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).coilF(60).run();
+            assertTrue(codes(r).contains(READINGS_INCONSISTENT));
+            assertEquals(CoilVerdict.CANT_TELL, r.verdict());
+        }
+
+        @Test
+        void supplyWetterWhileCoilBelowDewPoint() {
+            CoilResult r = IpCase.returnRh(75, 50).supplyRh(63, 86).cfm(1200).coilF(45).run();
+            assertTrue(codes(r).contains(READINGS_INCONSISTENT));
+            assertFalse(codes(r).contains(COIL_ADDING_MOISTURE));
+        }
+
+        @Test
+        void quiet() {
+            assertFalse(codes(healthy().run()).contains(READINGS_INCONSISTENT));
+        }
+    }
+
+    @Nested
+    class AirflowPerTon {
+        @Test
+        void highFires() {
+            assertTrue(codes(IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).nominalTons(2.5).coilF(45).run())
+                    .contains(HIGH_AIRFLOW_PER_TON));
+        }
+
+        @Test
+        void highFiresOnMeasuredCapacityWithoutNameplate() {
+            // case A: 1200 cfm over a measured 2.6 tons = 460 cfm/ton
+            assertTrue(codes(IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).coilF(45).run())
+                    .contains(HIGH_AIRFLOW_PER_TON));
+        }
+
+        @Test
+        void lowFires() {
+            assertTrue(codes(IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).nominalTons(4.5).coilF(45).run())
+                    .contains(LOW_AIRFLOW_PER_TON));
+        }
+
+        @Test
+        void quiet() {
+            List<String> c = codes(healthy().run());
+            assertFalse(c.contains(HIGH_AIRFLOW_PER_TON));
+            assertFalse(c.contains(LOW_AIRFLOW_PER_TON));
+        }
+    }
+
+    @Nested
+    class LowLatentShare {
+        @Test
+        void fires() {
+            // house above the 60 % RH target (72 °F / 61 %) and a coil giving mostly sensible cooling
+            CoilResult r = IpCase.returnRh(72, 61).supplyRh(58, 96).cfm(1400).nominalTons(3.5).run();
+            assertTrue(r.process().sensibleHeatRatio() > 0.80, "SHR " + r.process().sensibleHeatRatio());
+            assertTrue(codes(r).contains(LOW_LATENT_SHARE));
+        }
+
+        @Test
+        void quietWhenTheHouseIsDry() {
+            // case A has SHR 0.825 but the return is at 50 % RH, dp 55 °F: nothing to fix
+            CoilResult r = healthy().run();
+            assertTrue(r.process().sensibleHeatRatio() > 0.80);
+            assertFalse(codes(r).contains(LOW_LATENT_SHARE));
+        }
+    }
+
+    @Nested
+    class IndoorHumidityHigh {
+        @Test
+        void firesOnRh() {
+            assertTrue(codes(IpCase.returnRh(75, 62).supplyRh(55, 92).cfm(1200).nominalTons(3).coilF(45).run())
+                    .contains(INDOOR_HUMIDITY_HIGH));
+        }
+
+        @Test
+        void firesOnDewPointAlone() {
+            // 82 °F / 52 %: RH under 60 % but dew point ≈ 62.7 °F, above ASHRAE 62.1-2022's 60 °F
+            CoilResult r = IpCase.returnRh(82, 52).supplyRh(60, 90).cfm(1200).nominalTons(3).coilF(45).run();
+            assertTrue(codes(r).contains(INDOOR_HUMIDITY_HIGH));
+        }
+
+        @Test
+        void firesOnALowerTarget() {
+            ThresholdSettings lower = new ThresholdSettings(Map.of(Thresholds.INDOOR_RH_TARGET.key(), 45.0));
+            CoilResult r = CoilCheck.run(healthy().readings(), lower, UnitSystem.IP);
+            assertTrue(codes(r).contains(INDOOR_HUMIDITY_HIGH));
+        }
+
+        @Test
+        void quiet() {
+            assertFalse(codes(healthy().run()).contains(INDOOR_HUMIDITY_HIGH));
+        }
+    }
+
+    @Nested
+    class CondensateMismatch {
+        @Test
+        void firesWhenLittleReachesTheDrain() {
+            // air side 5.12 lb/h ≈ 581 g per 15 min; only 150 mL caught
+            assertTrue(codes(healthy().condensate(150, 15).run()).contains(CONDENSATE_MISMATCH));
+        }
+
+        @Test
+        void quietWhenTheyAgree() {
+            CoilResult r = healthy().condensate(560, 15).run();
+            assertFalse(codes(r).contains(CONDENSATE_MISMATCH));
+            // 560 mL in 15 min = 2.24 kg/h = 4.94 lb/h (1 mL of water ≈ 1 g, common practice, no source)
+            assertEquals(4.94, r.condensate().condensate().valueSi() * 3600 / 0.45359237, 0.01);
+        }
+
+        @Test
+        void quietWithoutACatch() {
+            assertFalse(codes(healthy().run()).contains(CONDENSATE_MISMATCH));
+        }
+    }
+
+    @Test
+    @DisplayName("Coil thresholds sit in the one catalogue, each with a source")
+    void thresholdsCatalogued() {
+        for (Threshold t : List.of(Thresholds.COIL_HIGH_AIRFLOW_PER_TON, Thresholds.COIL_LOW_AIRFLOW_PER_TON,
+                Thresholds.COIL_HIGH_SHR, Thresholds.INDOOR_DEW_POINT_MAX, Thresholds.INDOOR_RH_TARGET,
+                Thresholds.CONDENSATE_MISMATCH_FRACTION)) {
+            assertTrue(Thresholds.all().contains(t), t.key());
+            assertFalse(t.source().isBlank(), t.key());
+        }
+        assertEquals(450, app.latentledger.core.units.Quantity.AIRFLOW_PER_CAPACITY.toDisplay(UnitSystem.IP,
+                Thresholds.COIL_HIGH_AIRFLOW_PER_TON.defaultSi()), 1e-9);
+        assertEquals(60, Thresholds.INDOOR_DEW_POINT_MAX.defaultSi() * 1.8 + 32, 1e-9);
+    }
+}

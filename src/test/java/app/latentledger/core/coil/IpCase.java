@@ -1,0 +1,98 @@
+package app.latentledger.core.coil;
+
+import app.latentledger.core.psychro.SitePressure;
+import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.UnitSystem;
+
+/** Builds coil readings from inch-pound field numbers, with the default tolerances. Test support. */
+final class IpCase {
+    private double pressurePa = 101_325.0;
+    private AirReading entering;
+    private AirReading leaving;
+    private double airflow;
+    private AirflowLocation at = AirflowLocation.ENTERING;
+    private double coilC = Double.NaN;
+    private CoilTemperatureKind coilKind;
+    private double nominalW = Double.NaN;
+    private Condensate condensate;
+
+    static double c(double f) {
+        return (f - 32) / 1.8;
+    }
+
+    static IpCase returnRh(double dbF, double rh) {
+        IpCase k = new IpCase();
+        k.entering = new AirReading("return", c(dbF), Tolerances.DRY_BULB_K, HumidityKind.RELATIVE_HUMIDITY, rh,
+                Tolerances.RELATIVE_HUMIDITY_PCT);
+        return k;
+    }
+
+    static IpCase returnWb(double dbF, double wbF) {
+        IpCase k = new IpCase();
+        k.entering = new AirReading("return", c(dbF), Tolerances.DRY_BULB_K, HumidityKind.WET_BULB, c(wbF),
+                Tolerances.WET_BULB_K);
+        return k;
+    }
+
+    IpCase supplyRh(double dbF, double rh) {
+        leaving = new AirReading("supply", c(dbF), Tolerances.DRY_BULB_K, HumidityKind.RELATIVE_HUMIDITY, rh,
+                Tolerances.RELATIVE_HUMIDITY_PCT);
+        return this;
+    }
+
+    IpCase supplyWb(double dbF, double wbF) {
+        leaving = new AirReading("supply", c(dbF), Tolerances.DRY_BULB_K, HumidityKind.WET_BULB, c(wbF),
+                Tolerances.WET_BULB_K);
+        return this;
+    }
+
+    IpCase supplyDp(double dbF, double dpF) {
+        leaving = new AirReading("supply", c(dbF), Tolerances.DRY_BULB_K, HumidityKind.DEW_POINT, c(dpF),
+                Tolerances.DEW_POINT_K);
+        return this;
+    }
+
+    IpCase cfm(double cfm) {
+        airflow = Quantity.AIRFLOW.fromDisplay(UnitSystem.IP, cfm);
+        return this;
+    }
+
+    IpCase airflowAtSupply() {
+        at = AirflowLocation.LEAVING;
+        return this;
+    }
+
+    IpCase elevationFt(double ft) {
+        pressurePa = SitePressure.fromElevation(ft * 0.3048).pressurePa();
+        return this;
+    }
+
+    IpCase coilF(double f, CoilTemperatureKind kind) {
+        coilC = c(f);
+        coilKind = kind;
+        return this;
+    }
+
+    IpCase coilF(double f) {
+        return coilF(f, CoilTemperatureKind.COIL_SURFACE);
+    }
+
+    IpCase nominalTons(double tons) {
+        nominalW = Quantity.POWER_LARGE.fromDisplay(UnitSystem.IP, tons);
+        return this;
+    }
+
+    IpCase condensate(double mL, double minutes) {
+        condensate = new Condensate(mL * 1e-6, Tolerances.CONDENSATE_FRACTION, minutes * 60, Tolerances.CONDENSATE_TIMING_S);
+        return this;
+    }
+
+    CoilReadings readings() {
+        return new CoilReadings(pressurePa, entering, leaving, airflow, Tolerances.AIRFLOW_FRACTION, at, coilC,
+                Tolerances.COIL_K, coilKind, nominalW, condensate);
+    }
+
+    CoilResult run() {
+        return CoilCheck.run(readings(), app.latentledger.core.findings.ThresholdSettings.DEFAULTS, UnitSystem.IP);
+    }
+}
