@@ -63,6 +63,16 @@ public final class InvalidInputException extends IllegalArgumentException {
         return maxSi;
     }
 
+    /** The plain reason beyond the range, or null. */
+    public String reason() {
+        return reason;
+    }
+
+    /** The same refusal for a field named in a wider context, e.g. "return" + "wet bulb". */
+    public InvalidInputException within(String context) {
+        return new InvalidInputException(context + " " + field, quantity, valueSi, minSi, maxSi, reason);
+    }
+
     private static String format(String field, Quantity q, double value, double min, double max,
                                  String reason, UnitSystem units) {
         String unit = q.symbol(units);

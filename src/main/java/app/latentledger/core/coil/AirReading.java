@@ -47,8 +47,7 @@ public record AirReading(String where, double dryBulbC, double dryBulbTolK, Humi
                     throw new IllegalStateException(humidityKind.name());
             }
         } catch (InvalidInputException e) {
-            throw new InvalidInputException(where + " " + e.field(), e.quantity(), e.valueSi(), e.minSi(),
-                    e.maxSi(), null);
+            throw e.within(where);
         }
     }
 
