@@ -1,5 +1,6 @@
 package app.latentledger.store;
 
+import app.latentledger.core.records.Timestamps;
 import app.latentledger.core.records.Measurement;
 
 import java.sql.PreparedStatement;
@@ -51,7 +52,7 @@ final class Sql {
 
     /** ISO-8601 with offset, e.g. 2024-07-16T09:40:00-04:00: readable in the file and exact. */
     static String time(OffsetDateTime t) {
-        return t.toString();
+        return Timestamps.text(t);
     }
 
     static OffsetDateTime time(ResultSet r, String column) throws SQLException {
