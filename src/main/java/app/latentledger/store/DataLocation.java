@@ -67,7 +67,14 @@ public final class DataLocation {
         return found;
     }
 
+    /** Held so the level set below is not lost when the logger is collected. */
+    private static final java.util.logging.Logger ATTACH_PLATFORM_LOG =
+            java.util.logging.Logger.getLogger("com.gluonhq.attach.util.Platform");
+
     private static Optional<File> attachPrivateStorage() {
+        // Attach announces at INFO that it picked the desktop platform; on the command line that
+        // line would land on standard error of every command
+        ATTACH_PLATFORM_LOG.setLevel(java.util.logging.Level.WARNING);
         try {
             return StorageService.create().flatMap(StorageService::getPrivateStorage);
         } catch (RuntimeException | LinkageError e) {
