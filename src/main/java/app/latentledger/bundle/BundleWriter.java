@@ -1,0 +1,123 @@
+package app.latentledger.bundle;
+
+import app.latentledger.core.records.Timestamps;
+import app.latentledger.core.records.HvacSystem;
+import app.latentledger.core.records.ImportedLog;
+import app.latentledger.core.records.LogChannel;
+import app.latentledger.core.records.ResultsSnapshot;
+import app.latentledger.core.records.Visit;
+import app.latentledger.store.AppVersion;
+import com.google.gson.JsonArray;
+import com.google.gson.JsonObject;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.time.temporal.ChronoUnit;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.zip.ZipEntry;
+import java.util.zip.ZipOutputStream;
+
+/** Writes a bundle zip. The file appears under its name only once it is complete. */
+public final class BundleWriter {
+    private BundleWriter() {
+    }
+
+    /** Writes {@code content} to {@code target}, replacing it. */
+    public static void write(BundleContent content, String subjectId, Path target) throws IOException {
+        Map<String, byte[]> entries = new LinkedHashMap<>();
+        entries.put(BundleFormat.SITE, json(RecordsJson.site(content.site())));
+        JsonArray systems = new JsonArray();
+        for (HvacSystem s : content.systems()) {
+            systems.add(RecordsJson.system(s));
+        }
+        entries.put(BundleFormat.SYSTEMS, json(systems));
+        JsonArray visits = new JsonArray();
+        for (Visit v : content.visits()) {
+            visits.add(RecordsJson.visit(v));
+        }
+        entries.put(BundleFormat.VISITS, json(visits));
+        entries.put(ReadingsCsv.ENTRY, ReadingsCsv.write(content.readings()).getBytes(StandardCharsets.UTF_8));
+        JsonArray logs = new JsonArray();
+        for (ImportedLog l : content.logs()) {
+            logs.add(logJson(l));
+            entries.put(LogCsv.entry(l.id()), LogCsv.write(l.samples()).getBytes(StandardCharsets.UTF_8));
+        }
+        entries.put(BundleFormat.LOGS, json(logs));
+        JsonArray snapshots = new JsonArray();
+        for (ResultsSnapshot s : content.snapshots()) {
+            snapshots.add(RecordsJson.snapshot(s));
+        }
+        entries.put(BundleFormat.SNAPSHOTS, json(snapshots));
+
+        JsonObject manifest = new JsonObject();
+        manifest.addProperty("format", BundleFormat.NAME);
+        manifest.addProperty("formatVersion", BundleFormat.VERSION);
+        manifest.addProperty("createdAt", Timestamps.text(OffsetDateTime.now(ZoneOffset.UTC).truncatedTo(ChronoUnit.SECONDS)));
+        manifest.addProperty("appVersion", AppVersion.current());
+        manifest.addProperty("scope", content.scope().key());
+        manifest.addProperty("subjectId", subjectId);
+        JsonArray list = new JsonArray();
+        for (Map.Entry<String, byte[]> e : entries.entrySet()) {
+            JsonObject entry = new JsonObject();
+            entry.addProperty("name", e.getKey());
+            entry.addProperty("bytes", e.getValue().length);
+            entry.addProperty("sha256", BundleFormat.sha256(e.getValue()));
+            list.add(entry);
+        }
+        manifest.add("entries", list);
+
+        Path absolute = target.toAbsolutePath();
+        Path folder = absolute.getParent();
+        Files.createDirectories(folder);
+        Path partial = Files.createTempFile(folder, absolute.getFileName().toString(), ".partial");
+        try {
+            try (OutputStream file = Files.newOutputStream(partial); ZipOutputStream zip = new ZipOutputStream(file)) {
+                put(zip, BundleFormat.MANIFEST, json(manifest));
+                for (Map.Entry<String, byte[]> e : entries.entrySet()) {
+                    put(zip, e.getKey(), e.getValue());
+                }
+            }
+            Files.move(partial, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        } finally {
+            Files.deleteIfExists(partial);
+        }
+    }
+
+    private static JsonObject logJson(ImportedLog l) {
+        JsonObject o = new JsonObject();
+        o.addProperty("id", l.id());
+        o.addProperty("visitId", l.visitId());
+        o.addProperty("sourceFileName", l.sourceFileName());
+        o.addProperty("columnMapping", l.columnMapping());
+        o.addProperty("importedAt", Timestamps.text(l.importedAt()));
+        o.addProperty("timeBase", l.samples().timeBase().key());
+        o.addProperty("sampleCount", l.samples().size());
+        JsonArray channels = new JsonArray();
+        for (LogChannel c : l.samples().channels()) {
+            JsonObject ch = new JsonObject();
+            ch.addProperty("name", c.name());
+            ch.addProperty("unit", c.unit());
+            channels.add(ch);
+        }
+        o.add("channels", channels);
+        o.addProperty("samples", LogCsv.entry(l.id()));
+        return o;
+    }
+
+    private static byte[] json(Object tree) {
+        return (BundleFormat.GSON.toJson(tree) + "\n").getBytes(StandardCharsets.UTF_8);
+    }
+
+    private static void put(ZipOutputStream zip, String name, byte[] bytes) throws IOException {
+        zip.putNextEntry(new ZipEntry(name));
+        zip.write(bytes);
+        zip.closeEntry();
+    }
+}

@@ -1,0 +1,246 @@
+package app.latentledger.cli;
+
+import app.latentledger.core.records.Timestamps;
+import app.latentledger.bundle.BundleException;
+import app.latentledger.bundle.Bundles;
+import app.latentledger.core.findings.Cautions;
+import app.latentledger.core.records.HvacSystem;
+import app.latentledger.core.records.ImportedLog;
+import app.latentledger.core.records.ReadingSet;
+import app.latentledger.core.records.Site;
+import app.latentledger.core.records.SnapshotSubject;
+import app.latentledger.core.records.Visit;
+import app.latentledger.core.units.UnitSystem;
+import app.latentledger.store.DataLocation;
+import app.latentledger.store.Ledger;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * {@code visits}: the field records on this tablet — list, show, export to a bundle, import a
+ * bundle. The ledger is opened at {@link DataLocation} and gets the demo scenario when new.
+ */
+public final class VisitsCommand implements Command {
+    @Override
+    public String name() {
+        return "visits";
+    }
+
+    @Override
+    public String summary() {
+        return "stored visits: list, show, export and import bundles";
+    }
+
+    @Override
+    public String usage() {
+        return "usage: latent-ledger [--data-dir DIR] visits list [--json]\n"
+                + "       latent-ledger [--data-dir DIR] visits show ID [--units ip|si] [--json]\n"
+                + "       latent-ledger [--data-dir DIR] visits export ID FILE [--json]\n"
+                + "       latent-ledger [--data-dir DIR] visits export-site SITE_ID FILE [--json]\n"
+                + "       latent-ledger [--data-dir DIR] visits import FILE [--json]\n"
+                + "  ID: a visit id or its first characters (at least 4) as 'visits list' shows them\n"
+                + "  export writes one visit with its site, system, readings, logs and snapshots;\n"
+                + "  export-site writes a site with all its systems and visits (SITE_ID as in 'visits list --json')\n"
+                + "  import checks the whole bundle first and changes nothing when it refuses it\n"
+                + "  data folder: --data-dir, else $" + DataLocation.ENV + ", else the app's private storage\n";
+    }
+
+    @Override
+    public int run(Args args, CliContext context) throws IOException {
+        List<String> words = args.positionals();
+        if (words.isEmpty()) {
+            throw new UsageException("visits needs a subcommand: list, show, export, export-site or import\n" + usage());
+        }
+        String sub = words.get(0);
+        boolean json = args.flag("json");
+        UnitSystem units = sub.equals("show") ? UnitOptions.units(args) : UnitSystem.IP;
+        args.rejectUnknown();
+        switch (sub) {
+            case "list":
+                expect(words, 1, "visits list");
+                break;
+            case "show":
+                expect(words, 2, "visits show ID");
+                break;
+            case "export":
+                expect(words, 3, "visits export ID FILE");
+                break;
+            case "export-site":
+                expect(words, 3, "visits export-site SITE_ID FILE");
+                break;
+            case "import":
+                expect(words, 2, "visits import FILE");
+                break;
+            default:
+                throw new UsageException("unknown visits subcommand '" + sub + "'\n" + usage());
+        }
+        DataLocation location = DataLocation.resolve(context.dataDir());
+        try (Ledger ledger = Ledger.open(location.folder())) {
+            Object result;
+            String text;
+            switch (sub) {
+                case "list": {
+                    List<Map<String, Object>> rows = list(ledger);
+                    result = rows;
+                    text = listTable(rows, location);
+                    break;
+                }
+                case "show": {
+                    Visit v = Visits.find(ledger, words.get(1));
+                    result = showJson(ledger, v, units);
+                    text = showTable(ledger, v, units);
+                    break;
+                }
+                case "export": {
+                    Visit v = Visits.find(ledger, words.get(1));
+                    Path file = Path.of(words.get(2));
+                    Bundles.exportVisit(ledger, v.id(), file);
+                    result = exported(file, "visit", v.id());
+                    text = "Exported visit " + v.id() + " to " + file + " (" + Files.size(file) + " bytes)\n";
+                    break;
+                }
+                case "export-site": {
+                    String siteId = words.get(1);
+                    Site site = ledger.sites().find(siteId).orElseThrow(() ->
+                            new UsageException("no site with id '" + siteId + "' (see: visits list --json, field siteId)"));
+                    Path file = Path.of(words.get(2));
+                    Bundles.exportSite(ledger, site.id(), file);
+                    result = exported(file, "site", site.id());
+                    text = "Exported site " + site.name() + " (" + site.id() + ") to " + file + " ("
+                            + Files.size(file) + " bytes)\n";
+                    break;
+                }
+                default: {
+                    Path file = Path.of(words.get(1));
+                    Bundles.ImportSummary s;
+                    try {
+                        s = Bundles.importBundle(ledger, file);
+                    } catch (BundleException e) {
+                        throw new UsageException(e.getMessage());
+                    }
+                    Map<String, Object> m = new LinkedHashMap<>();
+                    m.put("file", file.toString());
+                    m.put("added", s.added());
+                    m.put("alreadyPresent", s.alreadyPresent());
+                    m.put("visits", s.visitIds());
+                    result = m;
+                    text = "Imported " + file + ": " + s.added() + " records added, " + s.alreadyPresent()
+                            + " already present; visits " + String.join(", ", s.visitIds()) + "\n";
+                }
+            }
+            context.out().print(json ? Json.print(result) + "\n" : text);
+        }
+        return Cli.OK;
+    }
+
+    private static void expect(List<String> words, int count, String form) {
+        if (words.size() != count) {
+            throw new UsageException("usage: latent-ledger visits " + form.substring("visits ".length())
+                    + " (got " + (words.size() - 1) + " argument" + (words.size() == 2 ? "" : "s") + ")");
+        }
+    }
+
+    private static List<Map<String, Object>> list(Ledger ledger) {
+        List<Map<String, Object>> rows = new ArrayList<>();
+        for (Visit v : ledger.visits().all()) {
+            Site site = ledger.sites().find(v.siteId()).orElseThrow();
+            HvacSystem system = ledger.systems().find(v.systemId()).orElseThrow();
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("id", v.id());
+            m.put("site", site.name());
+            m.put("siteId", site.id());
+            m.put("system", system.label());
+            m.put("systemId", system.id());
+            m.put("date", Timestamps.text(v.startedAt()));
+            m.put("purpose", v.purpose().key());
+            m.put("technician", v.technician());
+            m.put("readingSets", ledger.readings().forVisit(v.id()).size());
+            m.put("logs", ledger.logs().idsForVisit(v.id()).size());
+            rows.add(m);
+        }
+        return rows;
+    }
+
+    private static String listTable(List<Map<String, Object>> rows, DataLocation location) {
+        StringBuilder b = new StringBuilder();
+        b.append(String.format("%-8s  %-22s  %-13s  %-28s  %-24s  %s%n", "id", "date", "purpose", "site", "system", "readings"));
+        for (Map<String, Object> r : rows) {
+            b.append(String.format("%-8s  %-22s  %-13s  %-28s  %-24s  %s%n", Visits.shortId((String) r.get("id")),
+                    Visits.when(java.time.OffsetDateTime.parse((String) r.get("date"))), r.get("purpose"),
+                    clip((String) r.get("site"), 28), clip((String) r.get("system"), 24), r.get("readingSets")));
+        }
+        b.append(rows.size()).append(rows.size() == 1 ? " visit" : " visits").append(" in ").append(location).append('\n');
+        return b.toString();
+    }
+
+    private static String clip(String s, int width) {
+        return s.length() <= width ? s : s.substring(0, width - 1) + "…";
+    }
+
+    private static Map<String, Object> showJson(Ledger ledger, Visit v, UnitSystem units) {
+        Site site = ledger.sites().find(v.siteId()).orElseThrow();
+        HvacSystem system = ledger.systems().find(v.systemId()).orElseThrow();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("units", units.key());
+        m.put("id", v.id());
+        m.put("date", Timestamps.text(v.startedAt()));
+        m.put("purpose", v.purpose().key());
+        m.put("technician", v.technician());
+        m.put("notes", v.notes());
+        m.put("site", RecordsView.site(site, units));
+        m.put("system", RecordsView.system(system, units));
+        List<Object> readings = new ArrayList<>();
+        for (ReadingSet r : ledger.readings().forVisit(v.id())) {
+            Map<String, Object> rm = RecordsView.readingSet(r, units);
+            rm.put("snapshots", ledger.snapshots().forSubject(SnapshotSubject.READING_SET, r.id()).size());
+            readings.add(rm);
+        }
+        m.put("readingSets", readings);
+        List<Object> logs = new ArrayList<>();
+        for (ImportedLog l : ledger.logs().forVisit(v.id())) {
+            Map<String, Object> lm = new LinkedHashMap<>();
+            lm.put("id", l.id());
+            lm.put("sourceFileName", l.sourceFileName());
+            lm.put("importedAt", Timestamps.text(l.importedAt()));
+            lm.put("samples", l.samples().size());
+            lm.put("channels", l.samples().channelNames());
+            logs.add(lm);
+        }
+        m.put("logs", logs);
+        m.put("safety", Cautions.SAFETY_LINE);
+        return m;
+    }
+
+    private static String showTable(Ledger ledger, Visit v, UnitSystem units) {
+        Site site = ledger.sites().find(v.siteId()).orElseThrow();
+        HvacSystem system = ledger.systems().find(v.systemId()).orElseThrow();
+        StringBuilder b = new StringBuilder(RecordsView.visitHeader(v, site, system, units));
+        List<ReadingSet> readings = ledger.readings().forVisit(v.id());
+        if (readings.isEmpty()) {
+            b.append("  no reading sets\n");
+        }
+        for (ReadingSet r : readings) {
+            b.append(RecordsView.readingSetTable(r, system, units));
+        }
+        for (ImportedLog l : ledger.logs().forVisit(v.id())) {
+            b.append(String.format("  log %s  %s: %d samples, %s%n", Visits.shortId(l.id()), l.sourceFileName(),
+                    l.samples().size(), String.join(", ", l.samples().channelNames())));
+        }
+        return b.append(Cautions.SAFETY_LINE).append('\n').toString();
+    }
+
+    private static Map<String, Object> exported(Path file, String scope, String id) throws IOException {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("file", file.toString());
+        m.put("scope", scope);
+        m.put("id", id);
+        m.put("bytes", Files.size(file));
+        return m;
+    }
+}

@@ -1,0 +1,14 @@
+package app.latentledger.core.records;
+
+/**
+ * A measured coil temperature, °C, with its tolerance in K.
+ *
+ * @param kind  surface probe or evaporator saturation
+ * @param value the reading
+ */
+public record CoilTemperature(CoilTemperatureKind kind, Measurement value) {
+    public CoilTemperature {
+        Check.present("coil temperature kind", kind);
+        Check.present("coil temperature", value);
+    }
+}

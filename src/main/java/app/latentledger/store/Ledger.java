@@ -1,0 +1,86 @@
+package app.latentledger.store;
+
+import java.nio.file.Path;
+
+/**
+ * The field records of one tablet: the database and its repositories. Open it with
+ * {@link #open(Path)} on the folder {@link DataLocation} chose.
+ */
+public final class Ledger implements AutoCloseable {
+    /** The database file inside the data folder. */
+    public static final String FILE_NAME = "ledger.db";
+
+    private final Database db;
+    private final SiteRepository sites;
+    private final SystemRepository systems;
+    private final VisitRepository visits;
+    private final ReadingSetRepository readings;
+    private final LogRepository logs;
+    private final SnapshotRepository snapshots;
+
+    public Ledger(Database db) {
+        this.db = db;
+        this.sites = new SiteRepository(db);
+        this.systems = new SystemRepository(db);
+        this.visits = new VisitRepository(db);
+        this.readings = new ReadingSetRepository(db);
+        this.logs = new LogRepository(db);
+        this.snapshots = new SnapshotRepository(db);
+    }
+
+    /**
+     * Opens the ledger in {@code dataDir} (creating the folder and file on first use) and, when it
+     * holds no site yet, seeds the invented demo scenario so a new tablet has something to show.
+     */
+    public static Ledger open(Path dataDir) {
+        Ledger ledger = new Ledger(Database.open(dataDir.resolve(FILE_NAME)));
+        try {
+            DemoScenario.seedIfEmpty(ledger);
+        } catch (RuntimeException e) {
+            ledger.close();
+            throw e;
+        }
+        return ledger;
+    }
+
+    public Database database() {
+        return db;
+    }
+
+    public SiteRepository sites() {
+        return sites;
+    }
+
+    public SystemRepository systems() {
+        return systems;
+    }
+
+    public VisitRepository visits() {
+        return visits;
+    }
+
+    public ReadingSetRepository readings() {
+        return readings;
+    }
+
+    public LogRepository logs() {
+        return logs;
+    }
+
+    public SnapshotRepository snapshots() {
+        return snapshots;
+    }
+
+    /** Runs {@code work} as one transaction: every save inside it commits together or not at all. */
+    public void inTransaction(Runnable work) {
+        db.write(c -> {
+            work.run();
+            return null;
+        });
+    }
+
+    @Override
+    public void close() {
+        db.close();
+    }
+}

@@ -1,0 +1,10 @@
+package app.latentledger.store;
+
+import java.sql.Connection;
+import java.sql.SQLException;
+
+/** Work done on the connection inside one transaction. */
+@FunctionalInterface
+public interface SqlWork<T> {
+    T run(Connection connection) throws SQLException;
+}
