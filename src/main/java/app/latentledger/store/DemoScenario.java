@@ -28,9 +28,10 @@ import java.util.UUID;
  *
  * <ul>
  * <li>Heron Spit Road, complaint visit, 3-ton single-stage system. Before: 1410 cfm (470 cfm/ton),
- *     return 76 °F / 66 °F wb (dew point 60.8 °F, 79.7 gr/lb), supply 65 °F / 62.2 °F wb
- *     (79.2 gr/lb, about the same moisture), evaporator saturation 62 °F, above the return dew
- *     point: the coil cools but does not dry. After the blower tap was lowered: 1080 cfm
+ *     return 76 °F / 66 °F wb (dew point 60.8 °F, 79.6 gr/lb), supply 66.5 °F / 62.8 °F wb
+ *     (79.5 gr/lb, the same moisture), evaporator saturation 64 °F, 3.2 °F above the return dew
+ *     point — more than the ±2.3 °F the instruments allow, so the coil check says
+ *     not-dehumidifying: the coil cools but does not dry. After the blower tap was lowered: 1080 cfm
  *     (360 cfm/ton), return 75 °F / 65 °F wb (dew point 59.6 °F, 76.4 gr/lb), supply 57 °F /
  *     55 °F wb (61.2 gr/lb, 15 gr/lb drier), evaporator saturation 46 °F, 1000 mL of condensate
  *     caught in 15 min (the air side says about 1160 mL; a catch reads low, the drain lags).</li>
@@ -89,8 +90,8 @@ public final class DemoScenario {
                     "New install; latent capacity check at design airflow."));
             ledger.readings().save(new ReadingSet(READINGS_BEFORE, VISIT_COMPLAINT,
                     OffsetDateTime.parse("2024-07-16T10:05:00-04:00"), "before", KIT,
-                    f(76), wetBulb(66), f(65), wetBulb(62.2), f(86), wetBulb(77),
-                    saturation(62), cfm(1410, 0.07, "flow grid in filter slot"), null, null,
+                    f(76), wetBulb(66), f(66.5), wetBulb(62.8), f(86), wetBulb(77),
+                    saturation(64), cfm(1410, 0.07, "flow grid in filter slot"), null, null,
                     "Ran 20 min before readings. Supply plenum probe 3 ft past the coil."));
             ledger.readings().save(new ReadingSet(READINGS_AFTER, VISIT_COMPLAINT,
                     OffsetDateTime.parse("2024-07-16T11:20:00-04:00"), "after", KIT,
