@@ -14,7 +14,8 @@ import java.util.Objects;
  * volume at its own stream's state: f = V̇_oa / (V̇_oa + V̇_ra). The check converts it to a dry-air
  * mass fraction with each stream's specific volume before mixing ({@link MixedAir}). A fraction
  * worked out from temperatures ((t_mix − t_ra)/(t_oa − t_ra)) is nearly a mass fraction, not a
- * volume one; the difference is the ratio of the specific volumes (about 1 % for 20 °F apart).
+ * volume one; they differ by about the ratio of the specific volumes (20 % by volume of 92 °F /
+ * 77 °F wb outdoor air into 75 °F / 50 % return is 19.3 % by mass).
  *
  * @param air           the outdoor dry bulb and humidity reading, with their tolerances
  * @param fraction      outdoor air's share of the coil airflow by volume, 0…1
