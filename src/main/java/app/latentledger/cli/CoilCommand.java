@@ -1,6 +1,7 @@
 package app.latentledger.cli;
 
 import app.latentledger.core.InvalidInputException;
+import app.latentledger.core.coil.AirflowLocation;
 import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilProcess;
 import app.latentledger.core.coil.CoilReadings;
@@ -12,6 +13,7 @@ import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.core.findings.Thresholds;
+import app.latentledger.core.psychro.MoistAirState;
 import app.latentledger.core.psychro.SitePressure;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
@@ -40,10 +42,17 @@ public final class CoilCommand implements Command {
                 + "         [--condensate-minutes MIN] [--rh-target PCT] [--units ip|si] [--elevation FT|M | --pressure PSIA|KPA]\n"
                 + "         [--tol-db D] [--tol-rh PCT] [--tol-wb D] [--tol-dew-point D] [--tol-coil D]\n"
                 + "         [--tol-airflow-pct PCT] [--tol-condensate-pct PCT] [--json]\n"
-                + "  return = air entering the coil (return plenum, or mixed air after any outdoor-air intake)\n"
+                + "         [--outdoor-db T (--outdoor-wb T | --outdoor-rh PCT | --outdoor-dew-point T)\n"
+                + "          --outdoor-fraction PCT [--tol-outdoor-fraction PCT]]\n"
+                + "  return = air entering the coil (return plenum, or mixed air read after any outdoor-air intake);\n"
+                + "  with --outdoor-* and --outdoor-fraction (outdoor air's share of the airflow by volume, %),\n"
+                + "  return is the return air and the entering air is computed as the adiabatic mix\n"
+                + "  (outdoor readings use the same --tol-db/--tol-wb/--tol-rh/--tol-dew-point; fraction ±5 %-points)\n"
                 + "  tolerances are ± half-widths in °F (ip) or K (si); defaults ±0.5 °F db and wb, ±2 %RH,\n"
                 + "  ±1 °F dew point and coil, ±10 % airflow, ±2 % condensate volume\n"
-                + "  --airflow-at: where the airflow was measured (default return); --condensate is in mL in both unit systems\n"
+                + "  --airflow-at: where the airflow was measured (default return; with outdoor air it is the coil's\n"
+                + "  whole airflow, read downstream of the outdoor-air intake: return|mixed = entering air, or supply);\n"
+                + "  --condensate is in mL in both unit systems\n"
                 + "  --rh-target: indoor RH target for findings (default 60 %)\n"
                 + "  verdict: dehumidifying | not-dehumidifying | cant-tell (margin within its k = 2 uncertainty)\n";
     }
@@ -83,17 +92,22 @@ public final class CoilCommand implements Command {
                 + Format.fixed(Quantity.ELEVATION.toDisplay(units, site.elevationM()), 0) + " " + Quantity.ELEVATION.symbol(units);
         b.append(Format.row("pressure", Format.fixed(Quantity.PRESSURE.toDisplay(units, site.pressurePa()), 3),
                 Quantity.PRESSURE.symbol(units) + "  (" + where + ")"));
-        b.append("Air\n");
-        b.append(Format.row("", "entering", "  leaving"));
-        b.append(pair("dry bulb", Quantity.TEMPERATURE, r.entering().dryBulbC(), r.leaving().dryBulbC(), 1, units));
-        b.append(pair("wet bulb", Quantity.TEMPERATURE, r.entering().wetBulbC(), r.leaving().wetBulbC(), 1, units));
-        b.append(pair("dew point", Quantity.TEMPERATURE, r.entering().dewPointC(), r.leaving().dewPointC(), 1, units));
-        b.append(Format.row("relative humidity", Format.fixed(r.entering().relativeHumidityPct(), 1),
-                String.format("%9s %%", Format.fixed(r.leaving().relativeHumidityPct(), 1))));
-        b.append(pair("humidity ratio", Quantity.HUMIDITY_RATIO_FINE, r.entering().humidityRatio(),
-                r.leaving().humidityRatio(), units == UnitSystem.IP ? 1 : 2, units));
+        if (r.mixed()) {
+            air(b, r, units);
+        } else {
+            b.append("Air\n");
+            b.append(Format.row("", "entering", "  leaving"));
+            b.append(pair("dry bulb", Quantity.TEMPERATURE, r.entering().dryBulbC(), r.leaving().dryBulbC(), 1, units));
+            b.append(pair("wet bulb", Quantity.TEMPERATURE, r.entering().wetBulbC(), r.leaving().wetBulbC(), 1, units));
+            b.append(pair("dew point", Quantity.TEMPERATURE, r.entering().dewPointC(), r.leaving().dewPointC(), 1, units));
+            b.append(Format.row("relative humidity", Format.fixed(r.entering().relativeHumidityPct(), 1),
+                    String.format("%9s %%", Format.fixed(r.leaving().relativeHumidityPct(), 1))));
+            b.append(pair("humidity ratio", Quantity.HUMIDITY_RATIO_FINE, r.entering().humidityRatio(),
+                    r.leaving().humidityRatio(), units == UnitSystem.IP ? 1 : 2, units));
+        }
         b.append(Format.row("airflow", Format.fixed(Quantity.AIRFLOW.toDisplay(units, r.readings().airflowM3PerS()), 0),
-                Quantity.AIRFLOW.symbol(units) + " measured at " + r.readings().airflowAt().key() + " air"));
+                Quantity.AIRFLOW.symbol(units) + " measured at " + r.readings().airflowAt().key()
+                        + (r.mixed() && r.readings().airflowAt() == AirflowLocation.ENTERING ? " (mixed)" : "") + " air"));
         b.append(Format.row("dry-air mass flow", Format.fixed(Quantity.WATER_RATE.toDisplay(units, q.massFlowKgPerS()),
                 units == UnitSystem.IP ? 0 : 1), Quantity.WATER_RATE.symbol(units)));
         b.append("Capacity\n");
@@ -131,7 +145,11 @@ public final class CoilCommand implements Command {
         } else {
             b.append("  apparatus dew point: ").append(r.adp().explanation()).append('\n');
         }
-        b.append(est("entering dew point", Measurand.ENTERING_DEW_POINT, r, units, 1));
+        if (r.mixed()) {
+            b.append(est("return dew point", Measurand.RETURN_DEW_POINT, r, units, 1));
+            b.append(est("outdoor dew point", Measurand.OUTDOOR_DEW_POINT, r, units, 1));
+        }
+        b.append(est(r.mixed() ? "entering (mixed) dp" : "entering dew point", Measurand.ENTERING_DEW_POINT, r, units, 1));
         String source = CoilResult.SOURCE_MEASURED.equals(r.coilTemperatureSource())
                 ? "measured " + r.readings().coilKind().label()
                 : CoilResult.SOURCE_ADP.equals(r.coilTemperatureSource()) ? "apparatus dew point stands in" : "none";
@@ -162,6 +180,32 @@ public final class CoilCommand implements Command {
         }
         b.append(Cautions.SAFETY_LINE).append('\n');
         return b.toString();
+    }
+
+    /** Return, outdoor, the mix entering the coil, and supply, side by side. */
+    private static void air(StringBuilder b, CoilResult r, UnitSystem units) {
+        MoistAirState[] s = {r.returnAir(), r.outdoorAir(), r.entering(), r.leaving()};
+        b.append("Air (entering = adiabatic mix of return and outdoor air, ASHRAE Handbook—Fundamentals ch. 1)\n");
+        b.append(Format.row("", "return", String.format("%9s %9s %9s", "outdoor", "mixed", "supply")));
+        quad(b, "dry bulb", Quantity.TEMPERATURE, s, MoistAirState::dryBulbC, 1, units);
+        quad(b, "wet bulb", Quantity.TEMPERATURE, s, MoistAirState::wetBulbC, 1, units);
+        quad(b, "dew point", Quantity.TEMPERATURE, s, MoistAirState::dewPointC, 1, units);
+        quad(b, "relative humidity", Quantity.RELATIVE_HUMIDITY, s, MoistAirState::relativeHumidityPct, 1, units);
+        quad(b, "humidity ratio", Quantity.HUMIDITY_RATIO_FINE, s, MoistAirState::humidityRatio,
+                units == UnitSystem.IP ? 1 : 2, units);
+        b.append(Format.row("outdoor air", Format.fixed(Quantity.FRACTION_PERCENT.toDisplay(units,
+                r.readings().outdoor().fraction()), 1), "% of airflow by volume ("
+                + Format.fixed(Quantity.FRACTION_PERCENT.toDisplay(units, r.mix().secondMassFraction()), 1)
+                + " % of dry-air mass)"));
+    }
+
+    private static void quad(StringBuilder b, String label, Quantity q, MoistAirState[] s,
+                             java.util.function.ToDoubleFunction<MoistAirState> f, int decimals, UnitSystem units) {
+        String[] v = new String[s.length];
+        for (int i = 0; i < s.length; i++) {
+            v[i] = Format.fixed(q.toDisplay(units, f.applyAsDouble(s[i])), decimals);
+        }
+        b.append(Format.row(label, v[0], String.format("%9s %9s %9s %s", v[1], v[2], v[3], q.symbol(units))));
     }
 
     private static String pair(String label, Quantity qty, double a, double b, int decimals, UnitSystem units) {

@@ -32,6 +32,13 @@ final class CoilJson {
         m.put("pressure", Quantity.PRESSURE.toDisplay(units, in.pressurePa()));
         m.put("entering", StateJson.of(r.entering(), units));
         m.put("leaving", StateJson.of(r.leaving(), units));
+        m.put("enteringSource", r.enteringSource());
+        m.put("return", StateJson.of(r.returnAir(), units));
+        m.put("outdoor", r.mixed() ? StateJson.of(r.outdoorAir(), units) : null);
+        m.put("outdoorAirFraction", r.mixed()
+                ? Quantity.FRACTION_PERCENT.toDisplay(units, in.outdoor().fraction()) : null);
+        m.put("outdoorAirMassFraction", r.mixed()
+                ? Quantity.FRACTION_PERCENT.toDisplay(units, r.mix().secondMassFraction()) : null);
         m.put("airflow", Quantity.AIRFLOW.toDisplay(units, in.airflowM3PerS()));
         m.put("airflowMeasuredAt", in.airflowAt().key());
         m.put("massFlowDryAir", Quantity.WATER_RATE.toDisplay(units, q.massFlowKgPerS()));

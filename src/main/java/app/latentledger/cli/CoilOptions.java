@@ -7,6 +7,7 @@ import app.latentledger.core.coil.CoilReadings;
 import app.latentledger.core.coil.CoilTemperatureKind;
 import app.latentledger.core.coil.Condensate;
 import app.latentledger.core.coil.HumidityKind;
+import app.latentledger.core.coil.OutdoorAir;
 import app.latentledger.core.coil.Tolerances;
 import app.latentledger.core.psychro.HandbookEdition;
 import app.latentledger.core.psychro.SitePressure;
@@ -22,7 +23,10 @@ import java.util.Map;
 /**
  * Reads the {@code coil} command's options into {@link CoilReadings}, in SI, naming the option
  * typed in every refusal. Airflow, temperatures and tolerances are in the tech's units;
- * {@code --condensate} is always mL and {@code --condensate-floz} US fluid ounces.
+ * {@code --condensate} is always mL and {@code --condensate-floz} US fluid ounces. Outdoor air
+ * ({@code --outdoor-db} with one humidity reading, and {@code --outdoor-fraction} in % of the
+ * airflow by volume) comes as a pair or not at all; its readings share the {@code --tol-*} of the
+ * other probes.
  */
 final class CoilOptions {
     private static final Map<String, HumidityKind> HUMIDITY = new LinkedHashMap<>();
@@ -51,6 +55,7 @@ final class CoilOptions {
                 tolerance(args, "tol-dew-point", Quantity.TEMPERATURE_DIFFERENCE, units, Tolerances.DEW_POINT_K));
         AirReading entering = air(args, units, p, "return", tolDb, tolHumidity);
         AirReading leaving = air(args, units, p, "supply", tolDb, tolHumidity);
+        OutdoorAir outdoor = outdoor(args, units, p, tolDb, tolHumidity);
 
         Double airflow = UnitOptions.si(args, "airflow", Quantity.AIRFLOW, units);
         if (airflow == null) {
@@ -78,7 +83,7 @@ final class CoilOptions {
         Condensate condensate = condensate(args, units);
         try {
             return new CoilReadings(p, entering, leaving, airflow, airflowTol, at,
-                    coil == null ? Double.NaN : coil, coilTol, coilKind, nominal, condensate);
+                    coil == null ? Double.NaN : coil, coilTol, coilKind, nominal, condensate, outdoor);
         } catch (InvalidInputException e) {
             String option = optionFor(e.field());
             if ("--nominal-tons".equals(option) && args.has("nominal-kw")) {
@@ -122,6 +127,40 @@ final class CoilOptions {
         }
     }
 
+    /** The outdoor reading and fraction, or null when neither is given; one without the other is refused. */
+    private static OutdoorAir outdoor(Args args, UnitSystem units, double p, double tolDb,
+                                      Map<HumidityKind, Double> tolHumidity) {
+        boolean reading = args.has("outdoor-db");
+        for (String h : HUMIDITY.keySet()) {
+            reading |= args.has("outdoor-" + h);
+        }
+        Double pct = args.number("outdoor-fraction");
+        boolean tolGiven = args.has("tol-outdoor-fraction");
+        if (!reading && pct == null) {
+            if (tolGiven) {
+                throw new UsageException("--tol-outdoor-fraction needs --outdoor-fraction and an outdoor reading");
+            }
+            return null;
+        }
+        if (pct == null) {
+            throw new UsageException("the outdoor reading needs --outdoor-fraction PCT"
+                    + " (outdoor air's share of the coil airflow by volume, %)");
+        }
+        if (!reading) {
+            throw new UsageException("--outdoor-fraction needs an outdoor reading: --outdoor-db with one of"
+                    + " --outdoor-wb, --outdoor-rh, --outdoor-dew-point");
+        }
+        AirReading air = air(args, units, p, "outdoor", tolDb, tolHumidity);
+        double tolPct = tolerance(args, "tol-outdoor-fraction", Quantity.RELATIVE_HUMIDITY, units,
+                Tolerances.OUTDOOR_FRACTION * 100);
+        try {
+            return new OutdoorAir(air, pct / 100.0, tolPct / 100.0);
+        } catch (InvalidInputException e) {
+            throw UnitOptions.refused(e, units,
+                    e.field().endsWith("tolerance") ? "--tol-outdoor-fraction" : "--outdoor-fraction");
+        }
+    }
+
     private static double tolerance(Args args, String option, Quantity q, UnitSystem units, double defaultSi) {
         Double v = args.number(option);
         if (v == null) {
@@ -134,13 +173,14 @@ final class CoilOptions {
     }
 
     private static AirflowLocation airflowAt(String text) {
-        if (text == null || text.equalsIgnoreCase("return") || text.equalsIgnoreCase("entering")) {
+        if (text == null || text.equalsIgnoreCase("return") || text.equalsIgnoreCase("entering")
+                || text.equalsIgnoreCase("mixed")) {
             return AirflowLocation.ENTERING;
         }
         if (text.equalsIgnoreCase("supply") || text.equalsIgnoreCase("leaving")) {
             return AirflowLocation.LEAVING;
         }
-        throw new UsageException("--airflow-at '" + text + "' not understood; accepted: return, supply");
+        throw new UsageException("--airflow-at '" + text + "' not understood; accepted: return (or mixed), supply");
     }
 
     private static double nominalW(Args args) {

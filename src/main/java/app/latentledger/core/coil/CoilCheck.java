@@ -1,17 +1,20 @@
 package app.latentledger.core.coil;
 
 import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.psychro.AdiabaticMixing;
 import app.latentledger.core.psychro.HandbookEdition;
 import app.latentledger.core.psychro.MoistAirState;
 import app.latentledger.core.units.UnitSystem;
 
 import java.util.EnumMap;
+import java.util.List;
 import java.util.Map;
 
 /**
  * Runs a coil check: states, mass-flow capacities, apparatus dew point, coil temperature against
  * the entering dew point with first-order (GUM) uncertainty, verdict, condensate cross-check and
- * findings. Pure: no I/O.
+ * findings. With outdoor air the entering state is the adiabatic mix of the return and outdoor
+ * readings ({@link MixedAir}). Pure: no I/O.
  */
 public final class CoilCheck {
     private CoilCheck() {
@@ -27,7 +30,16 @@ public final class CoilCheck {
     public static CoilResult run(CoilReadings readings, ThresholdSettings thresholds, UnitSystem units) {
         HandbookEdition display = HandbookEdition.of(units);
         double p = readings.pressurePa();
-        MoistAirState e = readings.entering().state(p, HandbookEdition.SI);
+        MoistAirState ret = readings.entering().state(p, HandbookEdition.SI);
+        MoistAirState outdoor = null;
+        AdiabaticMixing.Mix mix = null;
+        MoistAirState e = ret;
+        if (readings.hasOutdoorAir()) {
+            outdoor = readings.outdoor().air().state(p, HandbookEdition.SI);
+            mix = MixedAir.of(p, ret.dryBulbC(), ret.humidityRatio(), outdoor.dryBulbC(), outdoor.humidityRatio(),
+                    readings.outdoor().fraction());
+            e = MixedAir.state(p, mix, HandbookEdition.SI);
+        }
         MoistAirState l = readings.leaving().state(p, HandbookEdition.SI);
         CoilProcess process = CoilProcess.of(p, e.dryBulbC(), e.humidityRatio(), l.dryBulbC(), l.humidityRatio(),
                 readings.airflowM3PerS(), readings.airflowAt());
@@ -57,11 +69,15 @@ public final class CoilCheck {
         CondensateCheck condensate = readings.condensate() == null ? null
                 : new CondensateCheck(estimates.get(Measurand.CONDENSATE_RATE),
                         estimates.get(Measurand.MOISTURE_REMOVAL), estimates.get(Measurand.CONDENSATE_MINUS_AIRSIDE));
-        MoistAirState shownEntering = display == HandbookEdition.SI ? e : readings.entering().state(p, display);
+        MoistAirState shownReturn = display == HandbookEdition.SI ? ret : readings.entering().state(p, display);
+        MoistAirState shownOutdoor = outdoor == null || display == HandbookEdition.SI ? outdoor
+                : readings.outdoor().air().state(p, display);
+        MoistAirState shownEntering = mix == null ? shownReturn
+                : display == HandbookEdition.SI ? e : MixedAir.state(p, mix, display);
         MoistAirState shownLeaving = display == HandbookEdition.SI ? l : readings.leaving().state(p, display);
         CoilResult partial = new CoilResult(readings, shownEntering, shownLeaving, process, adp, coil, source,
-                estimates, margin, drop, verdict, condensate, java.util.List.of());
+                estimates, margin, drop, verdict, condensate, List.of(), shownReturn, shownOutdoor, mix);
         return new CoilResult(readings, shownEntering, shownLeaving, process, adp, coil, source, estimates, margin,
-                drop, verdict, condensate, CoilFindings.of(partial, thresholds, units));
+                drop, verdict, condensate, CoilFindings.of(partial, thresholds, units), shownReturn, shownOutdoor, mix);
     }
 }

@@ -15,6 +15,11 @@ import java.util.List;
  * The findings of a coil check, each with a stable code. Thresholds come from
  * {@link Thresholds} (coil section); the uncertainty rule is {@link CoilVerdict}'s. The list a
  * screen or report shows must end with {@link app.latentledger.core.findings.Cautions#SAFETY_LINE}.
+ *
+ * <p>With outdoor air mixed in, findings about the <i>coil</i> (dew-point margin, moisture drop,
+ * consistency, SHR) use the mixed air that actually enters it; findings about the <i>house</i>
+ * ({@code indoor-humidity-high}, and the "indoor air above target" gate of {@code low-latent-share})
+ * use the return air, the indoor air.
  */
 public final class CoilFindings {
     public static final String COIL_ABOVE_DEW_POINT = "coil-above-dew-point";
@@ -39,12 +44,14 @@ public final class CoilFindings {
         Estimate dp = r.estimate(Measurand.ENTERING_DEW_POINT);
         boolean measured = CoilResult.SOURCE_MEASURED.equals(r.coilTemperatureSource());
         String coilWord = measured ? r.readings().coilKind().label() : "apparatus dew point";
+        String enteringWord = r.mixed() ? "the mixed air entering the coil" : "return";
+        String enteringDp = r.mixed() ? "entering (mixed-air) dew point " : "entering dew point ";
 
         if (r.marginCall() == CoilVerdict.Call.ABOVE && r.dropCall() != CoilVerdict.Call.REMOVING) {
             out.add(new Finding(COIL_ABOVE_DEW_POINT, Severity.FIX,
                     "The cooling coil is not cold enough to pull water out of the air.",
                     "Coil " + Shown.of(Quantity.TEMPERATURE, units, r.coilTemperatureC(), 1) + " (" + coilWord
-                            + ") is above the entering dew point " + Shown.of(Measurand.ENTERING_DEW_POINT, units, dp, 1)
+                            + ") is above the " + enteringDp + Shown.of(Measurand.ENTERING_DEW_POINT, units, dp, 1)
                             + " by " + Shown.of(Measurand.DEW_POINT_MARGIN, units, neg(margin), 1) + " (k = 2).",
                     List.of(evidence(Measurand.DEW_POINT_MARGIN, margin), evidence(Measurand.ENTERING_DEW_POINT, dp),
                             evidence(Measurand.COIL_TEMPERATURE, r.estimate(Measurand.COIL_TEMPERATURE))),
@@ -57,7 +64,7 @@ public final class CoilFindings {
             String technical = r.marginCall() == CoilVerdict.Call.UNKNOWN
                     ? "No coil temperature to compare: none measured and " + r.adp().explanation()
                       + "; humidity-ratio drop " + Shown.of(Measurand.HUMIDITY_RATIO_DROP, units, drop, 1) + "."
-                    : "Entering dew point minus " + coilWord + " = "
+                    : (r.mixed() ? "Entering (mixed-air) dew point minus " : "Entering dew point minus ") + coilWord + " = "
                       + Shown.of(Measurand.DEW_POINT_MARGIN, units, margin, 1)
                       + " (k = 2): the margin lies within the instruments' uncertainty.";
             out.add(new Finding(COIL_MARGIN_INCONCLUSIVE, Severity.CHECK,
@@ -73,7 +80,7 @@ public final class CoilFindings {
             out.add(new Finding(MOISTURE_DROP_INCONCLUSIVE, Severity.CHECK,
                     "The coil is cold enough, but the readings cannot show water leaving the air.",
                     "Coil is " + Shown.of(Measurand.DEW_POINT_MARGIN, units, margin, 1)
-                            + " below the entering dew point, but the humidity-ratio drop "
+                            + " below the " + enteringDp.trim() + ", but the humidity-ratio drop "
                             + Shown.of(Measurand.HUMIDITY_RATIO_DROP, units, drop, 1) + " is within its uncertainty.",
                     List.of(evidence(Measurand.HUMIDITY_RATIO_DROP, drop), evidence(Measurand.DEW_POINT_MARGIN, margin)),
                     List.of("Check that the coil has run long enough to wet and drain (about 15–20 minutes)",
@@ -84,7 +91,7 @@ public final class CoilFindings {
             out.add(new Finding(COIL_ADDING_MOISTURE, Severity.CHECK,
                     "Air leaving the coil carries more water than the air going in.",
                     "Humidity-ratio drop " + Shown.of(Measurand.HUMIDITY_RATIO_DROP, units, drop, 1)
-                            + " (k = 2): supply is wetter than return.",
+                            + " (k = 2): supply is wetter than " + enteringWord + ".",
                     List.of(evidence(Measurand.HUMIDITY_RATIO_DROP, drop)),
                     List.of("Was the compressor off while the fan ran? Coil water re-evaporates",
                             "Look for a humidifier, or a wet pan or duct upstream of the supply probe",
@@ -92,10 +99,10 @@ public final class CoilFindings {
         }
         List<String> inconsistent = new ArrayList<>();
         if (r.marginCall() == CoilVerdict.Call.BELOW && r.dropCall() == CoilVerdict.Call.ADDING) {
-            inconsistent.add("supply humidity ratio above return while the coil is below the dew point");
+            inconsistent.add("supply humidity ratio above " + enteringWord + " while the coil is below the dew point");
         }
         if (r.process().temperatureDropK() < 0) {
-            inconsistent.add("supply warmer than return in cooling");
+            inconsistent.add("supply warmer than " + enteringWord + " in cooling");
         }
         if (measured && r.marginCall() == CoilVerdict.Call.ABOVE && r.dropCall() == CoilVerdict.Call.REMOVING) {
             inconsistent.add("measured coil temperature above the dew point while the air loses moisture");
@@ -131,20 +138,29 @@ public final class CoilFindings {
                             "Enable the equipment's dehumidification mode if it has one; consider supplemental dehumidification")));
         }
         if (indoorHigh) {
-            Estimate rh = r.estimate(Measurand.ENTERING_RELATIVE_HUMIDITY);
+            Estimate indoorDp = r.estimate(Measurand.RETURN_DEW_POINT);
+            Estimate rh = r.estimate(Measurand.RETURN_RELATIVE_HUMIDITY);
+            Estimate outdoorDp = r.estimate(Measurand.OUTDOOR_DEW_POINT);
             double dpLimit = t.valueSi(Thresholds.INDOOR_DEW_POINT_MAX);
             double rhLimit = t.valueSi(Thresholds.INDOOR_RH_TARGET);
+            List<Evidence> evidence = new ArrayList<>(List.of(evidence(Measurand.RETURN_DEW_POINT, indoorDp),
+                    evidence(Measurand.RETURN_RELATIVE_HUMIDITY, rh),
+                    Evidence.of(Thresholds.INDOOR_DEW_POINT_MAX.key(), Thresholds.INDOOR_DEW_POINT_MAX.label(),
+                            Quantity.TEMPERATURE, dpLimit),
+                    Evidence.of(Thresholds.INDOOR_RH_TARGET.key(), Thresholds.INDOOR_RH_TARGET.label(),
+                            Quantity.RELATIVE_HUMIDITY, rhLimit)));
+            String outdoorPart = "";
+            if (outdoorDp.exists()) {
+                evidence.add(evidence(Measurand.OUTDOOR_DEW_POINT, outdoorDp));
+                outdoorPart = "; outdoor dew point " + Shown.of(Measurand.OUTDOOR_DEW_POINT, units, outdoorDp, 1);
+            }
             out.add(new Finding(INDOOR_HUMIDITY_HIGH, Severity.CHECK,
                     "The air in the house is more humid than recommended.",
-                    "Return dew point " + Shown.of(Measurand.ENTERING_DEW_POINT, units, dp, 1) + " (limit "
+                    "Return dew point " + Shown.of(Measurand.RETURN_DEW_POINT, units, indoorDp, 1) + " (limit "
                             + Shown.of(Quantity.TEMPERATURE, units, dpLimit, 0) + ", ASHRAE 62.1-2022 §5.12), RH "
-                            + Shown.of(Measurand.ENTERING_RELATIVE_HUMIDITY, units, rh, 0) + " (target "
-                            + Shown.of(Quantity.RELATIVE_HUMIDITY, units, rhLimit, 0) + ").",
-                    List.of(evidence(Measurand.ENTERING_DEW_POINT, dp), evidence(Measurand.ENTERING_RELATIVE_HUMIDITY, rh),
-                            Evidence.of(Thresholds.INDOOR_DEW_POINT_MAX.key(), Thresholds.INDOOR_DEW_POINT_MAX.label(),
-                                    Quantity.TEMPERATURE, dpLimit),
-                            Evidence.of(Thresholds.INDOOR_RH_TARGET.key(), Thresholds.INDOOR_RH_TARGET.label(),
-                                    Quantity.RELATIVE_HUMIDITY, rhLimit)),
+                            + Shown.of(Measurand.RETURN_RELATIVE_HUMIDITY, units, rh, 0) + " (target "
+                            + Shown.of(Quantity.RELATIVE_HUMIDITY, units, rhLimit, 0) + ")" + outdoorPart + ".",
+                    evidence,
                     List.of("Compare indoor and outdoor dew points: higher indoors points to an indoor moisture source",
                             "Check return ducts in attic or crawlspace for leaks (dew point rise from grille to plenum)",
                             "Log indoor humidity for 24–72 hours")));
@@ -190,8 +206,9 @@ public final class CoilFindings {
     }
 
     static boolean indoorHumidityHigh(CoilResult r, ThresholdSettings t) {
-        double dp = r.estimate(Measurand.ENTERING_DEW_POINT).valueSi();
-        double rh = r.estimate(Measurand.ENTERING_RELATIVE_HUMIDITY).valueSi();
+        // the house's air is the return air, not the mix the coil sees
+        double dp = r.estimate(Measurand.RETURN_DEW_POINT).valueSi();
+        double rh = r.estimate(Measurand.RETURN_RELATIVE_HUMIDITY).valueSi();
         return dp > t.valueSi(Thresholds.INDOOR_DEW_POINT_MAX) || rh > t.valueSi(Thresholds.INDOOR_RH_TARGET);
     }
 

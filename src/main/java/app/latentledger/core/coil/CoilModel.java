@@ -14,7 +14,9 @@ import java.util.List;
  * The site pressure is held exact (it is common to both states; its effect is discussed in
  * docs/methods/coil.md). Probes are treated as independent (return and supply read by different
  * instruments); a single probe moved between the two would make the errors correlated and the
- * humidity-ratio drop markedly more certain (domain-practice.md §5.3).
+ * humidity-ratio drop markedly more certain (domain-practice.md §5.3). With outdoor air the
+ * entering state is the {@link MixedAir mix} of the return and outdoor readings, so the outdoor
+ * dry bulb, humidity and the outdoor-air fraction enter the budget too (independent of the rest).
  */
 public final class CoilModel implements Propagation.Model {
     static final int ENTERING_DB = 0;
@@ -25,6 +27,9 @@ public final class CoilModel implements Propagation.Model {
     static final int COIL = 5;
     static final int CONDENSATE_VOLUME = 6;
     static final int CONDENSATE_TIME = 7;
+    static final int OUTDOOR_DB = 8;
+    static final int OUTDOOR_HUMIDITY = 9;
+    static final int OUTDOOR_FRACTION = 10;
 
     private final CoilReadings readings;
     private final List<UncertainInput> inputs;
@@ -52,6 +57,15 @@ public final class CoilModel implements Propagation.Model {
                 c != null ? c.volumeM3() : Double.NaN, c != null ? c.volumeTolFraction() * c.volumeM3() : 0));
         in.add(new UncertainInput("condensateTime", "condensate time", Quantity.DURATION_SECONDS,
                 c != null ? c.seconds() : Double.NaN, c != null ? c.secondsTolS() : 0));
+        OutdoorAir o = readings.outdoor();
+        AirReading oa = o != null ? o.air() : null;
+        in.add(new UncertainInput("outdoorDryBulb", "outdoor dry bulb", Quantity.TEMPERATURE_DIFFERENCE,
+                oa != null ? oa.dryBulbC() : Double.NaN, oa != null ? oa.dryBulbTolK() : 0));
+        in.add(new UncertainInput("outdoorHumidity", oa != null ? "outdoor " + oa.humidityKind().label() : "outdoor humidity",
+                oa != null ? oa.humidityKind().toleranceQuantity() : Quantity.RELATIVE_HUMIDITY,
+                oa != null ? oa.humiditySi() : Double.NaN, oa != null ? oa.humidityTolSi() : 0));
+        in.add(new UncertainInput("outdoorAirFraction", "outdoor-air fraction (by volume)", Quantity.FRACTION_PERCENT,
+                o != null ? o.fraction() : Double.NaN, o != null ? o.fractionTol() : 0));
         this.inputs = Collections.unmodifiableList(in);
     }
 
@@ -64,10 +78,29 @@ public final class CoilModel implements Propagation.Model {
     public double[] evaluate(double[] x, boolean clamp) {
         double p = readings.pressurePa();
         double[] y = new double[Measurand.values().length];
-        double t1 = x[ENTERING_DB];
+        double tr = x[ENTERING_DB];
         double t2 = x[LEAVING_DB];
-        double w1 = AirReading.humidityRatio(readings.entering().humidityKind(), p, t1, x[ENTERING_HUMIDITY], clamp);
+        double wr = AirReading.humidityRatio(readings.entering().humidityKind(), p, tr, x[ENTERING_HUMIDITY], clamp);
         double w2 = AirReading.humidityRatio(readings.leaving().humidityKind(), p, t2, x[LEAVING_HUMIDITY], clamp);
+        double t1 = tr;
+        double w1 = wr;
+        double wo = Double.NaN;
+        if (readings.hasOutdoorAir()) {
+            double to = x[OUTDOOR_DB];
+            wo = AirReading.humidityRatio(readings.outdoor().air().humidityKind(), p, to, x[OUTDOOR_HUMIDITY], clamp);
+            double f = x[OUTDOOR_FRACTION];
+            if (f < 0 || f > 1) {
+                // a share beyond 0…100 % cannot be the true value: held at the limit (Monte Carlo) or absent
+                f = clamp ? Math.max(0, Math.min(1, f)) : Double.NaN;
+            }
+            if (Double.isFinite(wr) && Double.isFinite(wo) && Double.isFinite(f)) {
+                var mix = MixedAir.of(p, tr, wr, to, wo, f);
+                t1 = mix.dryBulbC();
+                w1 = mix.humidityRatio();
+            } else {
+                w1 = Double.NaN;
+            }
+        }
         if (!(Double.isFinite(w1) && Double.isFinite(w2))) {
             java.util.Arrays.fill(y, Double.NaN);
             return y;
@@ -80,6 +113,10 @@ public final class CoilModel implements Propagation.Model {
         set(y, Measurand.LEAVING_DEW_POINT, dewPoint(w2, p));
         set(y, Measurand.ENTERING_RELATIVE_HUMIDITY,
                 Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(w1, p), t1));
+        set(y, Measurand.RETURN_DEW_POINT, dewPoint(wr, p));
+        set(y, Measurand.RETURN_RELATIVE_HUMIDITY,
+                Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(wr, p), tr));
+        set(y, Measurand.OUTDOOR_DEW_POINT, dewPoint(wo, p));
         set(y, Measurand.HUMIDITY_RATIO_DROP, q.humidityRatioDrop());
         set(y, Measurand.TEMPERATURE_DROP, q.temperatureDropK());
         set(y, Measurand.SENSIBLE, q.sensibleW());

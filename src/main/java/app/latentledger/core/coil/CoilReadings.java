@@ -9,7 +9,8 @@ import java.util.Objects;
  * Everything a tech reads for one coil check, SI, each reading with its tolerance.
  *
  * @param pressurePa         site barometric pressure, Pa (measured or standard atmosphere)
- * @param entering           air entering the coil (return, or mixed air)
+ * @param entering           the return air; with no {@code outdoor}, whatever air enters the coil
+ *                           (return, or mixed air read directly)
  * @param leaving            air leaving the coil (supply)
  * @param airflowM3PerS      volumetric airflow, m³/s
  * @param airflowTolFraction ± tolerance of the airflow as a fraction of reading
@@ -19,11 +20,13 @@ import java.util.Objects;
  * @param coilKind           what the coil temperature is; null when none was taken
  * @param nominalCapacityW   nameplate total capacity, W, or NaN
  * @param condensate         timed condensate catch, or null
+ * @param outdoor            outdoor air mixed into the return upstream of the coil, or null when
+ *                           the entering reading already is the coil-entering air
  */
 public record CoilReadings(double pressurePa, AirReading entering, AirReading leaving,
                            double airflowM3PerS, double airflowTolFraction, AirflowLocation airflowAt,
                            double coilTemperatureC, double coilTolK, CoilTemperatureKind coilKind,
-                           double nominalCapacityW, Condensate condensate) {
+                           double nominalCapacityW, Condensate condensate, OutdoorAir outdoor) {
     /** 20 cfm: below any air handler. */
     public static final double MIN_AIRFLOW_M3_PER_S = 0.0094;
     /** 100 000 cfm: above any single coil a field tablet meets. */
@@ -49,6 +52,26 @@ public record CoilReadings(double pressurePa, AirReading entering, AirReading le
         if (!Double.isNaN(nominalCapacityW)) {
             InputLimits.check("nominal capacity", Quantity.POWER_LARGE, nominalCapacityW, MIN_NOMINAL_W, MAX_NOMINAL_W, null);
         }
+    }
+
+    /** Readings without outdoor air: the entering reading is the air entering the coil. */
+    public CoilReadings(double pressurePa, AirReading entering, AirReading leaving,
+                        double airflowM3PerS, double airflowTolFraction, AirflowLocation airflowAt,
+                        double coilTemperatureC, double coilTolK, CoilTemperatureKind coilKind,
+                        double nominalCapacityW, Condensate condensate) {
+        this(pressurePa, entering, leaving, airflowM3PerS, airflowTolFraction, airflowAt, coilTemperatureC, coilTolK,
+                coilKind, nominalCapacityW, condensate, null);
+    }
+
+    /** These readings with outdoor air mixed into the return upstream of the coil. */
+    public CoilReadings withOutdoor(OutdoorAir air) {
+        return new CoilReadings(pressurePa, entering, leaving, airflowM3PerS, airflowTolFraction, airflowAt,
+                coilTemperatureC, coilTolK, coilKind, nominalCapacityW, condensate, air);
+    }
+
+    /** True when the entering state is computed as a mix of return and outdoor air. */
+    public boolean hasOutdoorAir() {
+        return outdoor != null;
     }
 
     /** True when a coil temperature was measured. */

@@ -7,6 +7,11 @@ public enum Measurand {
     ENTERING_DEW_POINT("enteringDewPoint", "entering dew point", Quantity.TEMPERATURE),
     LEAVING_DEW_POINT("leavingDewPoint", "leaving dew point", Quantity.TEMPERATURE),
     ENTERING_RELATIVE_HUMIDITY("enteringRelativeHumidity", "entering relative humidity", Quantity.RELATIVE_HUMIDITY),
+    /** The indoor air: the return reading (the entering air itself when no outdoor air is mixed in). */
+    RETURN_DEW_POINT("returnDewPoint", "return (indoor) dew point", Quantity.TEMPERATURE),
+    RETURN_RELATIVE_HUMIDITY("returnRelativeHumidity", "return (indoor) relative humidity", Quantity.RELATIVE_HUMIDITY),
+    /** Outdoor dew point; does not exist without an outdoor reading. */
+    OUTDOOR_DEW_POINT("outdoorDewPoint", "outdoor dew point", Quantity.TEMPERATURE),
     HUMIDITY_RATIO_DROP("humidityRatioDrop", "humidity-ratio drop across the coil", Quantity.HUMIDITY_RATIO_FINE),
     TEMPERATURE_DROP("temperatureDrop", "dry-bulb drop across the coil", Quantity.TEMPERATURE_DIFFERENCE),
     SENSIBLE("sensible", "sensible capacity", Quantity.POWER),

@@ -23,6 +23,12 @@ public final class Tolerances {
     /** ±5 s on a stopwatch-timed catch (common practice, no source). */
     public static final double CONDENSATE_TIMING_S = 5.0;
 
+    /**
+     * ±5 %-points on the outdoor-air share of the airflow (a flow-hood ratio or a damper setting
+     * read by eye; common practice, no source).
+     */
+    public static final double OUTDOOR_FRACTION = 0.05;
+
     private Tolerances() {
     }
 

@@ -15,6 +15,7 @@ final class IpCase {
     private CoilTemperatureKind coilKind;
     private double nominalW = Double.NaN;
     private Condensate condensate;
+    private OutdoorAir outdoor;
 
     static double c(double f) {
         return (f - 32) / 1.8;
@@ -87,9 +88,23 @@ final class IpCase {
         return this;
     }
 
+    /** Outdoor air at {@code dbF} / {@code rh} %, {@code pct} % of the airflow by volume, default tolerances. */
+    IpCase outdoorRh(double dbF, double rh, double pct) {
+        outdoor = new OutdoorAir(new AirReading("outdoor", c(dbF), Tolerances.DRY_BULB_K, HumidityKind.RELATIVE_HUMIDITY,
+                rh, Tolerances.RELATIVE_HUMIDITY_PCT), pct / 100, Tolerances.OUTDOOR_FRACTION);
+        return this;
+    }
+
+    /** Outdoor air at {@code dbF} / {@code wbF} wet bulb, {@code pct} % of the airflow by volume, default tolerances. */
+    IpCase outdoorWb(double dbF, double wbF, double pct) {
+        outdoor = new OutdoorAir(new AirReading("outdoor", c(dbF), Tolerances.DRY_BULB_K, HumidityKind.WET_BULB,
+                c(wbF), Tolerances.WET_BULB_K), pct / 100, Tolerances.OUTDOOR_FRACTION);
+        return this;
+    }
+
     CoilReadings readings() {
         return new CoilReadings(pressurePa, entering, leaving, airflow, Tolerances.AIRFLOW_FRACTION, at, coilC,
-                Tolerances.COIL_K, coilKind, nominalW, condensate);
+                Tolerances.COIL_K, coilKind, nominalW, condensate, outdoor);
     }
 
     CoilResult run() {
