@@ -125,7 +125,7 @@ public final class CycleDetector {
                 extreme = Math.min(extreme, ts[i]);
                 if (ts[i] > extreme + edge || split < splitOff) {
                     // the last sample still at the low is the moment of the stop: the rise shows one sample later
-                    int stop = Math.max(lastWithin(ts, phaseStart, i, extreme, tol, false), runStart + 1);
+                    int stop = Math.max(edge(log, ts, phaseStart, i, extreme, tol, false), runStart + 1);
                     if (startSeen) {
                         raw.add(new int[] {runStart, stop});
                         segmentOf.add(segment);
@@ -137,7 +137,7 @@ public final class CycleDetector {
             } else {
                 extreme = Math.max(extreme, ts[i]);
                 if (ts[i] < extreme - edge && split > splitOn) {
-                    int start = lastWithin(ts, phaseStart, i, extreme, tol, true);
+                    int start = edge(log, ts, phaseStart, i, extreme, tol, true);
                     runStart = start;
                     startSeen = true;
                     state = on;
@@ -149,15 +149,48 @@ public final class CycleDetector {
         return mergeShort(log, raw, segmentOf);
     }
 
-    /** Last index j in [from, to] whose supply is within tol of the phase's extreme (high or low). */
-    private static int lastWithin(double[] ts, int from, int to, double extreme, double tol, boolean high) {
+    /**
+     * The sample at which the supply began to leave its low (stop) or high (start) between
+     * {@code from} and {@code to}: the straight line through the first two departures beyond tol
+     * and 2·tol is run back to zero departure, and the edge is the sample nearest that moment, never
+     * after the last sample still within tol. A sudden change gives the last sample within tol; a
+     * slow drift (blower off) is dated back to where it began.
+     */
+    private static int edge(LogSeries log, double[] ts, int from, int to, double extreme, double tol, boolean high) {
+        int lastNear = from;
         for (int j = to; j >= from; j--) {
-            double v = ts[j];
-            if (!Double.isNaN(v) && (high ? v >= extreme - tol : v <= extreme + tol)) {
-                return j;
+            if (!Double.isNaN(ts[j]) && departure(ts[j], extreme, high) <= tol) {
+                lastNear = j;
+                break;
             }
         }
-        return from;
+        int q = lastNear + 1;
+        while (q <= to && Double.isNaN(ts[q])) {
+            q++;
+        }
+        if (q > to) {
+            return lastNear;
+        }
+        double rq = departure(ts[q], extreme, high);
+        double t0 = log.timeS(q);
+        for (int p = q + 1; p <= to; p++) {
+            double rp = Double.isNaN(ts[p]) ? Double.NaN : departure(ts[p], extreme, high);
+            if (rp > 2 * tol) {
+                if (rp > rq) {
+                    t0 = log.timeS(q) - rq * (log.timeS(p) - log.timeS(q)) / (rp - rq);
+                }
+                break;
+            }
+        }
+        int idx = lastNear;
+        while (idx > from && log.timeS(idx) - t0 > 0.5 * (log.timeS(idx) - log.timeS(idx - 1))) {
+            idx--;
+        }
+        return idx;
+    }
+
+    private static double departure(double v, double extreme, boolean high) {
+        return high ? extreme - v : v - extreme;
     }
 
     private static double max(double[] v, int from, int to) {

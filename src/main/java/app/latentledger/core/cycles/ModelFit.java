@@ -18,7 +18,7 @@ import java.util.List;
 final class ModelFit {
     /** A rest must follow a run at least this long for the coil to be taken as draining at the stop. */
     private final double longRunS;
-    private static final double MIN_REST_S = 600.0;
+    private static final double MIN_REST_S = 900.0;
     private static final double SETTLE_S = 30.0;
     private static final double END_FRACTION = 0.15;
 
