@@ -118,6 +118,9 @@ public final class SyntheticLog {
         public void write(Writer out, Layout layout) throws IOException {
             String d = layout.delimiter;
             out.write(String.join(d, layout.headers));
+            for (String[] x : layout.extra) {
+                out.write(d + x[0]);
+            }
             out.write('\n');
             StringBuilder b = new StringBuilder(128);
             for (int i = 0; i < t.length; i++) {
@@ -127,6 +130,9 @@ public final class SyntheticLog {
                 b.append(d).append(layout.temp(supplyDb[i])).append(d).append(layout.num(supplyRh[i], 1));
                 if (layout.status) {
                     b.append(d).append(compressor[i]).append(d).append(fan[i]);
+                }
+                for (String[] x : layout.extra) {
+                    b.append(d).append(x[1]);
                 }
                 b.append('\n');
                 out.write(b.toString());
@@ -145,6 +151,8 @@ public final class SyntheticLog {
         public boolean status = true;
         public Time time = Time.ISO_OFFSET;
         public DateTimeFormatter localFormat = DateTimeFormatter.ISO_LOCAL_DATE_TIME;
+        /** Extra trailing columns (header, constant value), e.g. a logger's battery voltage. */
+        public String[][] extra = {};
 
         String time(Scenario s, double elapsed) {
             long sec = (long) Math.floor(elapsed);
@@ -154,7 +162,7 @@ public final class SyntheticLog {
                 case ISO_LOCAL:
                     return s.start.plusSeconds(sec).format(localFormat);
                 default:
-                    return OffsetDateTime.of(s.start.plusSeconds(sec), s.offset).toString();
+                    return OffsetDateTime.of(s.start.plusSeconds(sec), s.offset).format(DateTimeFormatter.ofPattern("uuuu-MM-dd'T'HH:mm:ssXXX"));
             }
         }
 

@@ -85,6 +85,30 @@ final class AirSeries {
         return h;
     }
 
+    /**
+     * Zeroes the probe pair: takes {@code offsetRhPct} off every supply RH and recomputes the supply
+     * humidity ratio and enthalpy (eqs. 24, 20, 32). The offset is removed in RH because capacitive
+     * probes err in RH: a constant W offset found over a dry coil at room temperature would
+     * over-correct the cold on-cycle supply about twofold. (latent-degradation.md §5.1 suggests W;
+     * this is the reasoned departure.)
+     */
+    void correctSupplyRh(double offsetRhPct, double pressurePa) {
+        if (supplyW == null) {
+            return;
+        }
+        for (int i = 0; i < size; i++) {
+            double t = supplyDbC[i];
+            if (Double.isNaN(supplyW[i]) || Double.isNaN(t)) {
+                continue;
+            }
+            double pws = SaturationPressure.pascals(t);
+            double rh = Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(supplyW[i], pressurePa), t);
+            double corrected = Math.max(0.0, Math.min(100.0, rh - offsetRhPct));
+            supplyW[i] = Psychrometrics.humidityRatio(corrected / 100.0 * pws, pressurePa);
+            supplyH[i] = EDITION.enthalpyJPerKg(t, supplyW[i]);
+        }
+    }
+
     /** W_return − W_supply at sample i (positive while the coil removes moisture), NaN if unknown. */
     double dryingW(int i) {
         return humidity ? returnW[i] - supplyW[i] : Double.NaN;

@@ -102,13 +102,17 @@ final class CycleFindings {
             return;
         }
         boolean kg = !Double.isNaN(r.airflowM3PerS());
+        double[] blower = r.cycles().stream().mapToDouble(c -> c.cycle().blowerOnSeconds())
+                .filter(v -> v > 0).sorted().toArray();
+        double medianBlower = blower.length == 0 ? Double.NaN : blower[blower.length / 2];
         out.add(new Finding("off-cycle-reevaporation", Severity.FIX,
                 String.format(Locale.ROOT, "After the compressor stops, the blower keeps running and blows water"
                         + " from the wet coil back into the house: about %.0f %% of what it removed.", 100 * share),
                 String.format(Locale.ROOT, "blower-on rests returned %.0f %% of the moisture removed%s;"
-                                + " blower ran in %d of %d rests; limit %.0f %% (common practice, no source)",
+                                + " blower ran on after the compressor in %d of %d rests (median %.1f min);"
+                                + " limit %.0f %% (common practice, no source)",
                         100 * share, kg ? String.format(Locale.ROOT, " (%.2f of %.2f kg)", r.returnedKg(), r.removedKg()) : "",
-                        r.blowerOnRests(), r.cycles().size(), 100 * min),
+                        r.blowerOnRests(), r.cycles().size(), medianBlower / 60.0, 100 * min),
                 List.of(Evidence.of("reevaporationShare", "share of removed moisture put back",
                                 Quantity.FRACTION_PERCENT, share),
                         Evidence.of("moistureReturned", "water put back in blower-on rests", Quantity.WATER_MASS,
@@ -149,11 +153,12 @@ final class CycleFindings {
         }
         out.add(new Finding("sensor-offset", Severity.CHECK,
                 String.format(Locale.ROOT, "The two humidity probes disagree by %.1f %% RH when they should read the"
-                        + " same, so the moisture numbers carry that error.", Math.abs(offset)),
+                        + " same; the moisture numbers were corrected for it but are less certain.", Math.abs(offset)),
                 String.format(Locale.ROOT, "median supply − return RH %+.1f %% RH over %d samples with the blower on,"
                                 + " compressor off ≥ %.0f min and dry bulbs within 1 K; tolerance %.1f %% RH"
-                                + " (common practice, no source)", offset, r.sensorCheckSamples(),
-                        settings.valueSi(Thresholds.SENSOR_CHECK_AFTER) / 60.0, tol),
+                                + " (common practice, no source); supply RH corrected by %+.1f %% RH",
+                        offset, r.sensorCheckSamples(), settings.valueSi(Thresholds.SENSOR_CHECK_AFTER) / 60.0, tol,
+                        -r.supplyCorrectionRhPct()),
                 List.of(new Evidence("sensorOffsetRh", "supply minus return RH over a dry coil",
                         Quantity.RELATIVE_HUMIDITY, offset, Double.NaN)),
                 List.of("Put both probes side by side for 15 minutes and note the difference",

@@ -51,6 +51,13 @@ public final class RunCycleAnalysis {
         CycleDetector detector = new CycleDetector(settings);
         List<Cycle> cycles = detector.detect(log, air);
         double gapS = detector.gapS(log);
+        // a probe pair that disagrees over a dry coil would bias every moisture figure: zero it first
+        double[] sensor = sensorOffset(log, air, cycles, pressurePa);
+        boolean corrected = Math.abs(sensor[0]) > settings.valueSi(Thresholds.SENSOR_OFFSET_RH);
+        if (corrected) {
+            air.correctSupplyRh(sensor[0], pressurePa);
+            cycles = detector.detect(log, air);
+        }
         MoistureAccounting accounting = new MoistureAccounting(settings);
         List<CycleMoisture> first = accounting.account(log, air, cycles, gapS, Double.NaN);
         double longRunS = settings.valueSi(Thresholds.LONG_CYCLE_ON_TIME);
@@ -75,7 +82,7 @@ public final class RunCycleAnalysis {
         for (int k = 0; k < cycles.size(); k++) {
             Cycle c = cycles.get(k);
             CycleMoisture m = moisture.get(k);
-            if (c.offBlower() == BlowerState.ON) {
+            if (c.blowerOnSeconds() > 0) {
                 blowerOnRests++;
             }
             double evapS = evaporationBefore(cycles, k);
@@ -107,7 +114,6 @@ public final class RunCycleAnalysis {
             onTotal += on[k];
         }
         double flow = masses ? airflowM3PerS : Double.NaN;
-        double[] sensor = sensorOffset(log, air, cycles, pressurePa);
         boolean anyHumidity = air.humidity && !cycles.isEmpty();
         RunCycleReport draft = new RunCycleReport(log.size(), duration, log.has(Channel.COMPRESSOR), results,
                 duration > 0 ? cycles.size() / (duration / 3600.0) : Double.NaN,
@@ -118,7 +124,7 @@ public final class RunCycleAnalysis {
                 onForMeasured > 0 ? netPerFlow / (steady[1] * onForMeasured) : Double.NaN,
                 onForPredicted > 0 ? predictedWeighted / onForPredicted : Double.NaN,
                 model, (int) fit[2], anyHumidity && removed > 0 ? returned / removed : Double.NaN, blowerOnRests,
-                sensor[0], (int) sensor[1], List.of());
+                sensor[0], (int) sensor[1], corrected ? sensor[0] : 0.0, List.of());
         return withFindings(draft, new CycleFindings(settings).find(draft));
     }
 
@@ -127,7 +133,7 @@ public final class RunCycleAnalysis {
                 r.medianOnS(), r.runtimeFraction(), r.airflowM3PerS(), r.removedKg(), r.returnedKg(),
                 r.netRemovalKgPerS(), r.steadyDryingW(), r.steadyRemovalKgPerS(), r.latentFractionMeasured(),
                 r.latentFractionPredicted(), r.model(), r.fitRests(), r.reevaporationShare(), r.blowerOnRests(),
-                r.sensorOffsetRhPct(), r.sensorCheckSamples(), f);
+                r.sensorOffsetRhPct(), r.sensorCheckSamples(), r.supplyCorrectionRhPct(), f);
     }
 
     /**
@@ -166,10 +172,11 @@ public final class RunCycleAnalysis {
      */
     private double[] sensorOffset(LogSeries log, AirSeries air, List<Cycle> cycles, double p) {
         if (!air.humidity) {
-            return new double[] {Double.NaN, 0};
+            return new double[] {Double.NaN, 0, Double.NaN};
         }
         double after = settings.valueSi(Thresholds.SENSOR_CHECK_AFTER);
         List<Double> d = new ArrayList<>();
+        List<Double> dw = new ArrayList<>();
         for (Cycle c : cycles) {
             if (c.offBlower() != BlowerState.ON) {
                 continue;
@@ -188,12 +195,14 @@ public final class RunCycleAnalysis {
                 double rhR = Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(air.returnW[i], p), tr);
                 double rhS = Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(air.supplyW[i], p), ts);
                 d.add(rhS - rhR);
+                dw.add(air.supplyW[i] - air.returnW[i]);
             }
         }
         if (d.size() < SENSOR_CHECK_MIN_SAMPLES) {
-            return new double[] {Double.NaN, d.size()};
+            return new double[] {Double.NaN, d.size(), Double.NaN};
         }
         double[] a = d.stream().mapToDouble(Double::doubleValue).toArray();
-        return new double[] {Stats.median(a, a.length), a.length};
+        double[] b = dw.stream().mapToDouble(Double::doubleValue).toArray();
+        return new double[] {Stats.median(a, a.length), a.length, Stats.median(b, b.length)};
     }
 }

@@ -25,9 +25,11 @@ import java.util.List;
  * @param model                   the model parameters used
  * @param fitRests                blower-on rests t_wet and γ were fitted to (0 when defaults)
  * @param reevaporationShare      returned ÷ removed
- * @param blowerOnRests           rests with the blower on
+ * @param blowerOnRests           rests in which the blower ran at all (continuous or a fan-off delay)
  * @param sensorOffsetRhPct       median supply − return RH over a dry coil with the blower on, % RH
  * @param sensorCheckSamples      samples behind that median (0: not checkable)
+ * @param supplyCorrectionRhPct   RH taken off every supply reading because the probes disagreed
+ *                                beyond tolerance, % RH (0 when not corrected)
  * @param findings                findings, most urgent first
  */
 public record RunCycleReport(int samples, double durationS, boolean compressorFromStatus, List<CycleResult> cycles,
@@ -36,7 +38,7 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
                              double steadyRemovalKgPerS, double latentFractionMeasured,
                              double latentFractionPredicted, LatentDegradationModel model, int fitRests,
                              double reevaporationShare, int blowerOnRests, double sensorOffsetRhPct,
-                             int sensorCheckSamples, List<Finding> findings) {
+                             int sensorCheckSamples, double supplyCorrectionRhPct, List<Finding> findings) {
     public RunCycleReport {
         cycles = List.copyOf(cycles);
         findings = List.copyOf(findings);

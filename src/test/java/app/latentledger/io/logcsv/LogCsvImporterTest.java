@@ -39,7 +39,7 @@ class LogCsvImporterTest {
         assertEquals(55.5, s.value(Channel.RETURN_RH, 1), 1e-12);
         assertEquals(1, s.status(Channel.COMPRESSOR, 1));
         assertEquals(10.0, s.timeS(1), 1e-12);
-        assertEquals("2026-07-14T13:00-04:00", s.origin().label(0));
+        assertEquals("2026-07-14T13:00:00-04:00", s.origin().label(0));
         assertEquals("2026-07-14T13:00:10-04:00", s.origin().label(10));
         assertEquals(',', r.report().delimiter());
         assertTrue(r.report().timesHaveOffset());
