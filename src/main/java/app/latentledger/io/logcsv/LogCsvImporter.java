@@ -55,6 +55,7 @@ public final class LogCsvImporter {
     private static final int MAX_SHOWN_CHARS = 40;
     private static final double RH_SATURATION_SLACK_PCT = 3.0;
     private static final double GAP_FACTOR = 3.0;
+    private static final Channel[] CHANNELS = Channel.values();
 
     private final UnitSystem units;
     private final Map<String, String> maps;
@@ -194,6 +195,9 @@ public final class LogCsvImporter {
         final String[] names;
         final Map<String, String> columns = new LinkedHashMap<>();
         final List<String> ignored = new ArrayList<>();
+        /** Channels present, with their columns, in reading order (built once, read per row). */
+        Channel[] present = new Channel[0];
+        int[] presentColumn = new int[0];
 
         Header(int width) {
             this.width = width;
@@ -245,6 +249,17 @@ public final class LogCsvImporter {
             } else {
                 h.analogColumn[Channel.ofField(field).ordinal()] = c;
             }
+        }
+        List<Channel> present = new ArrayList<>();
+        for (Channel ch : CHANNELS) {
+            if (h.analogColumn[ch.ordinal()] >= 0) {
+                present.add(ch);
+            }
+        }
+        h.present = present.toArray(new Channel[0]);
+        h.presentColumn = new int[h.present.length];
+        for (int k = 0; k < h.present.length; k++) {
+            h.presentColumn[k] = h.analogColumn[h.present[k].ordinal()];
         }
         if (!unmatched.isEmpty()) {
             throw new LogRefusedException("--map names header(s) not in the file: " + unmatched
@@ -357,11 +372,9 @@ public final class LogCsvImporter {
                 }
             }
             time[n] = t;
-            for (Channel ch : Channel.values()) {
-                int c = header.analogColumn[ch.ordinal()];
-                if (c < 0) {
-                    continue;
-                }
+            for (int k = 0; k < header.present.length; k++) {
+                Channel ch = header.present[k];
+                int c = header.presentColumn[k];
                 String v = clean(rec.get(c));
                 String problem = ch.isStatus() ? status(ch, v) : analog(ch, v, decimalComma);
                 if (problem != null) {
