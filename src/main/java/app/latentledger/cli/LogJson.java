@@ -63,7 +63,11 @@ final class LogJson {
         m.put("moistureRemoved", mass(r.removedKg(), units));
         m.put("moistureReturned", mass(r.returnedKg(), units));
         m.put("moistureRemovedPerHour", finite(Quantity.WATER_RATE.toDisplay(units, r.netRemovalKgPerS())));
-        m.put("steadyLatentRate", finite(Quantity.WATER_RATE.toDisplay(units, r.steadyRemovalKgPerS())));
+        // the issue asks for "unknown" when no run is long enough to give a steady rate
+        Double steady = finite(Quantity.WATER_RATE.toDisplay(units, r.steadyRemovalKgPerS()));
+        m.put("steadyLatentRate", steady != null ? (Object) steady
+                : Double.isNaN(r.steadyDryingW()) ? "unknown" : null);
+        m.put("waterRateUnit", Quantity.WATER_RATE.symbol(units));
         m.put("steadyHumidityRatioDrop", finite(Quantity.HUMIDITY_RATIO_FINE.toDisplay(units, r.steadyDryingW())));
         m.put("latentFractionMeasured", finite(r.latentFractionMeasured()));
         m.put("latentFractionPredicted", finite(r.latentFractionPredicted()));
@@ -78,6 +82,7 @@ final class LogJson {
         m.put("modelParameters", model);
         m.put("reevaporationShare", finite(r.reevaporationShare()));
         m.put("sensorOffsetRh", finite(r.sensorOffsetRhPct()));
+        m.put("supplyRhCorrection", r.supplyCorrectionRhPct() == 0 ? null : -r.supplyCorrectionRhPct());
         Map<String, Object> rejected = new LinkedHashMap<>();
         rejected.put("count", rep.rejectedCount());
         rejected.put("lines", rep.rejected());

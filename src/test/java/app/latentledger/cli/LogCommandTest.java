@@ -81,6 +81,22 @@ class LogCommandTest {
             assertTrue(o.getAsJsonObject("modelParameters").has(k), k);
         }
         assertEquals(Cautions.SAFETY_LINE, o.get("safety").getAsString());
+        assertTrue(o.get("steadyLatentRate").getAsDouble() > 0);
+    }
+
+    @Test
+    @DisplayName("no run long enough for a steady rate: steadyLatentRate is \"unknown\"")
+    void unknownSteadyRate() throws Exception {
+        SyntheticLog.Scenario s = new SyntheticLog.Scenario();
+        s.onOff = new double[] {300, 600};
+        s.fillToS = 3 * 3600;
+        Path f = dir.resolve("short.csv");
+        try (Writer w = Files.newBufferedWriter(f)) {
+            SyntheticLog.generate(s).write(w, new SyntheticLog.Layout());
+        }
+        JsonObject o = JsonParser.parseString(run("log", f.toString(), "--json").out()).getAsJsonObject();
+        assertEquals("unknown", o.get("steadyLatentRate").getAsString());
+        assertTrue(o.get("latentFractionMeasured").isJsonNull());
     }
 
     @Test

@@ -33,6 +33,9 @@ public final class CycleDetector {
     private static final double BLOWER_JUDGE_FROM_S = 90.0;
     private static final double BLOWER_JUDGE_TO_S = 600.0;
 
+    /** Stop index of a run broken by a gap: its start bounds the rest before it, it makes no cycle. */
+    private static final int BROKEN = -1;
+
     private final ThresholdSettings settings;
 
     public CycleDetector(ThresholdSettings settings) {
@@ -60,6 +63,9 @@ public final class CycleDetector {
         boolean startSeen = false;
         for (int i = 0; i < n; i++) {
             if (i > 0 && log.timeS(i) - log.timeS(i - 1) > gap) {
+                if (state == 1 && startSeen) {
+                    runs.add(new int[] {start, BROKEN}); // its stop is lost in the gap
+                }
                 state = LogSeries.UNKNOWN;
             }
             byte s = log.status(Channel.COMPRESSOR, i);
@@ -109,6 +115,10 @@ public final class CycleDetector {
                 continue;
             }
             if (prev >= 0 && log.timeS(i) - log.timeS(prev) > gap) {
+                if (state == on && startSeen) {
+                    raw.add(new int[] {runStart, BROKEN}); // its stop is lost in the gap
+                    segmentOf.add(segment);
+                }
                 state = unknown;
                 segment++;
             }
@@ -221,7 +231,7 @@ public final class CycleDetector {
         for (int k = 0; k < raw.size(); k++) {
             int[] r = raw.get(k);
             int seg = segmentOf.get(k);
-            if (!merged.isEmpty() && seg == lastSegment) {
+            if (!merged.isEmpty() && seg == lastSegment && merged.get(merged.size() - 1)[1] != BROKEN) {
                 int[] last = merged.get(merged.size() - 1);
                 if (log.timeS(r[0]) - log.timeS(last[1]) < minRun) {
                     last[1] = r[1];
@@ -231,7 +241,7 @@ public final class CycleDetector {
             merged.add(new int[] {r[0], r[1]});
             lastSegment = seg;
         }
-        merged.removeIf(r -> log.timeS(r[1]) - log.timeS(r[0]) < minRun);
+        merged.removeIf(r -> r[1] != BROKEN && log.timeS(r[1]) - log.timeS(r[0]) < minRun);
         return merged;
     }
 
@@ -242,6 +252,9 @@ public final class CycleDetector {
         for (int k = 0; k < runs.size(); k++) {
             int a = runs.get(k)[0];
             int b = runs.get(k)[1];
+            if (b == BROKEN) {
+                continue;
+            }
             int limit = k + 1 < runs.size() ? runs.get(k + 1)[0] : n;
             int e = b;
             boolean complete = k + 1 < runs.size();

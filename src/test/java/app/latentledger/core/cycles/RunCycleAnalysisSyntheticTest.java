@@ -216,4 +216,58 @@ class RunCycleAnalysisSyntheticTest {
         assertEquals(0, ok.sensorOffsetRhPct(), 0.1);
         assertFalse(ok.has("sensor-offset"));
     }
+
+    @ParameterizedTest(name = "a 15 min gap inside the third run, status columns: {0}")
+    @ValueSource(booleans = {true, false})
+    @DisplayName("a gap breaks the record: the run across it is dropped, nothing is integrated over it")
+    void gap(boolean status) {
+        Rows rows = SyntheticLog.generate(repeated(base(Blower.AUTO, 1200, 900), 5));
+        double gapFrom = rows.runs.get(2)[0] + 300;
+        double gapTo = gapFrom + 900;
+        LogSeries full = rows.series(status);
+        int n = 0;
+        for (int i = 0; i < full.size(); i++) {
+            if (full.timeS(i) < gapFrom || full.timeS(i) >= gapTo) {
+                n++;
+            }
+        }
+        double[] t = new double[n];
+        java.util.Map<Channel, double[]> a = new java.util.EnumMap<>(Channel.class);
+        java.util.Map<Channel, byte[]> st = new java.util.EnumMap<>(Channel.class);
+        for (Channel c : full.channels()) {
+            if (c.isStatus()) {
+                st.put(c, new byte[n]);
+            } else {
+                a.put(c, new double[n]);
+            }
+        }
+        int k = 0;
+        for (int i = 0; i < full.size(); i++) {
+            if (full.timeS(i) >= gapFrom && full.timeS(i) < gapTo) {
+                continue;
+            }
+            t[k] = full.timeS(i);
+            for (Channel c : full.channels()) {
+                if (c.isStatus()) {
+                    st.get(c)[k] = full.status(c, i);
+                } else {
+                    a.get(c)[k] = full.value(c, i);
+                }
+            }
+            k++;
+        }
+        RunCycleReport r = ANALYSIS.analyse(new LogSeries(t, a, st, null), 101_325, AIRFLOW);
+        assertEquals(4, r.cycles().size());
+        double removed = AIRFLOW * dryAirPerM3(rows) * rows.scenario.steadyDryingW * gross(1200, 45);
+        for (CycleResult c : r.cycles()) {
+            assertEquals(1200, c.cycle().onSeconds(), 10);
+            assertEquals(removed, c.removedKg(), 0.01 * removed);
+        }
+        // the rest before the broken run ends where that run started
+        assertEquals(rows.runs.get(2)[0] - rows.runs.get(1)[1], r.cycles().get(1).cycle().offSeconds(), 10);
+        // the run after the gap is whole and so is its rest
+        assertTrue(r.cycles().get(2).cycle().offComplete());
+        assertEquals(rows.runs.get(0)[0], r.cycles().get(0).cycle().startS(), 10);
+        assertEquals(rows.runs.get(3)[0], r.cycles().get(2).cycle().startS(), 10);
+    }
 }
