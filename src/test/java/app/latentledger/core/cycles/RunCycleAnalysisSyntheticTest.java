@@ -178,16 +178,21 @@ class RunCycleAnalysisSyntheticTest {
         assertEquals(4, r.fitRests());
     }
 
-    @Test
-    @DisplayName("noisy sensors (0.05 K, 0.3 % RH): counts exact, times within one sample")
-    void noisy() {
-        Scenario s = repeated(base(Blower.CONTINUOUS, 900, 700, 1500, 500, 420, 900), 6);
+    @ParameterizedTest(name = "noisy sensors (0.05 K, 0.3 % RH, 20 s probe lag), blower {0}, no status columns")
+    @ValueSource(strings = {"CONTINUOUS", "AUTO"})
+    @DisplayName("noisy sensors: counts exact, times within one sample, blower state inferred")
+    void noisy(String blower) {
+        Scenario s = repeated(base(Blower.valueOf(blower), 900, 700, 1500, 500, 420, 900), 6);
         s.noiseK = 0.05;
         s.noiseRhPct = 0.3;
         s.supplyLagS = 20;
         Rows rows = SyntheticLog.generate(s);
         RunCycleReport r = ANALYSIS.analyse(rows.series(false), 101_325, AIRFLOW);
         assertTimings(rows, r);
+        BlowerState expected = s.blower == Blower.AUTO ? BlowerState.OFF : BlowerState.ON;
+        for (CycleResult c : r.cycles()) {
+            assertEquals(expected, c.cycle().offBlower(), "rest after " + c.cycle().startS());
+        }
     }
 
     @Test
