@@ -102,7 +102,9 @@ public final class LogCsvImporter {
                 throw new LogRefusedException("the file is empty: a log needs a header row and sample rows");
             }
             Header header = header(it.next());
-            Rows rows = new Rows(header);
+            // rows are about as long as the header: size the columns once instead of doubling them
+            int capacity = (int) Math.max(1024, Math.min(50_000_000L, totalChars / Math.max(20, headerLine.length())));
+            Rows rows = new Rows(header, capacity);
             int rowsRead = 0;
             IsoTimes.Parsed parsed = new IsoTimes.Parsed();
             Boolean offsetMode = null;
@@ -307,7 +309,7 @@ public final class LogCsvImporter {
     /** Growing columns of good rows. */
     private final class Rows {
         final Header header;
-        double[] time = new double[1024];
+        double[] time;
         final double[][] analog = new double[Channel.values().length][];
         final byte[][] status = new byte[Channel.values().length][];
         int n;
@@ -315,14 +317,15 @@ public final class LogCsvImporter {
         final List<String> rejected = new ArrayList<>();
         int firstOffsetSeconds;
 
-        Rows(Header header) {
+        Rows(Header header, int capacity) {
             this.header = header;
-            for (Channel c : Channel.values()) {
+            this.time = new double[capacity];
+            for (Channel c : CHANNELS) {
                 if (header.analogColumn[c.ordinal()] >= 0) {
                     if (c.isStatus()) {
-                        status[c.ordinal()] = new byte[1024];
+                        status[c.ordinal()] = new byte[capacity];
                     } else {
-                        analog[c.ordinal()] = new double[1024];
+                        analog[c.ordinal()] = new double[capacity];
                     }
                 }
             }
@@ -480,32 +483,9 @@ public final class LogCsvImporter {
             for (int k = 0; k < kept; k++) {
                 t[k] = time[keep[k]] - t0;
             }
-            double[] d = new double[kept - 1];
-            for (int k = 1; k < kept; k++) {
-                d[k - 1] = t[k] - t[k - 1];
-            }
-            double[] sorted = d.clone();
-            Arrays.sort(sorted);
-            double median = sorted.length % 2 == 1 ? sorted[sorted.length / 2]
-                    : 0.5 * (sorted[sorted.length / 2 - 1] + sorted[sorted.length / 2]);
-            if (median > MAX_INTERVAL_S) {
-                throw new LogRefusedException(String.format(Locale.ROOT, "samples are %.0f s apart (median): cycle"
-                        + " timing needs an interval of 1 s to 5 min", median));
-            }
-            int gaps = 0;
-            int irregular = 0;
-            double longest = 0;
-            for (double x : d) {
-                if (x > GAP_FACTOR * median) {
-                    gaps++;
-                    longest = Math.max(longest, x);
-                } else if (Math.abs(x - median) > 0.1 * median) {
-                    irregular++;
-                }
-            }
             Map<Channel, double[]> a = new EnumMap<>(Channel.class);
             Map<Channel, byte[]> s = new EnumMap<>(Channel.class);
-            for (Channel ch : Channel.values()) {
+            for (Channel ch : CHANNELS) {
                 if (analog[ch.ordinal()] != null) {
                     a.put(ch, pick(analog[ch.ordinal()], keep, kept));
                 }
@@ -513,9 +493,25 @@ public final class LogCsvImporter {
                     s.put(ch, pick(status[ch.ordinal()], keep, kept));
                 }
             }
-            TimeOrigin origin = header.timeIsIso ? new TimeOrigin(t0, firstOffsetSeconds, hasOffset)
-                    : null;
+            TimeOrigin origin = header.timeIsIso ? new TimeOrigin(t0, firstOffsetSeconds, hasOffset) : null;
             LogSeries series = new LogSeries(t, a, s, origin);
+            double median = series.nominalIntervalS();
+            if (median > MAX_INTERVAL_S) {
+                throw new LogRefusedException(String.format(Locale.ROOT, "samples are %.0f s apart (median): cycle"
+                        + " timing needs an interval of 1 s to 5 min", median));
+            }
+            int gaps = 0;
+            int irregular = 0;
+            double longest = 0;
+            for (int k = 1; k < kept; k++) {
+                double x = t[k] - t[k - 1];
+                if (x > GAP_FACTOR * median) {
+                    gaps++;
+                    longest = Math.max(longest, x);
+                } else if (Math.abs(x - median) > 0.1 * median) {
+                    irregular++;
+                }
+            }
             ImportReport report = new ImportReport(delimiter, decimalComma, header.timeIsIso ? "time" : "seconds",
                     hasOffset, header.columns, header.ignored, rowsRead, kept, rejectedCount, rejected, outOfOrder,
                     duplicates, median, gaps, longest, irregular);
@@ -565,35 +561,81 @@ public final class LogCsvImporter {
                 || v.equalsIgnoreCase("null");
     }
 
-    /** A plain decimal number, or NaN. No hex, no NaN/Infinity words, no thousands separators. */
+    private static final double[] POWERS_OF_TEN = new double[23];
+
+    static {
+        POWERS_OF_TEN[0] = 1;
+        for (int i = 1; i < POWERS_OF_TEN.length; i++) {
+            POWERS_OF_TEN[i] = POWERS_OF_TEN[i - 1] * 10;
+        }
+    }
+
+    /**
+     * A plain decimal number, or NaN. No hex, no NaN/Infinity words, no thousands separators.
+     * Logger readings have a few digits: up to 15 significant digits without an exponent the value
+     * is mantissa ÷ 10^k, both exact in a double, so the one division is correctly rounded and equals
+     * Double.parseDouble (Clinger's fast path); anything else goes to Double.parseDouble.
+     */
     static double number(String v, boolean decimalComma) {
         int n = v.length();
         if (n == 0 || n > 40) {
             return Double.NaN;
         }
-        boolean digit = false;
-        boolean dot = false;
-        boolean exp = false;
-        for (int i = 0; i < n; i++) {
+        int i = 0;
+        boolean negative = false;
+        char first = v.charAt(0);
+        if (first == '+' || first == '-') {
+            negative = first == '-';
+            i = 1;
+        }
+        long mantissa = 0;
+        int digits = 0;
+        int fraction = -1;
+        boolean exponent = false;
+        boolean anyDigit = false;
+        for (; i < n; i++) {
             char c = v.charAt(i);
             if (c >= '0' && c <= '9') {
-                digit = true;
-            } else if ((c == '.' || c == ',' && decimalComma) && !dot && !exp) {
-                dot = true;
-            } else if ((c == 'e' || c == 'E') && digit && !exp) {
-                exp = true;
-            } else if ((c == '+' || c == '-') && (i == 0 || v.charAt(i - 1) == 'e' || v.charAt(i - 1) == 'E')) {
-                continue;
+                anyDigit = true;
+                if (fraction >= 0) {
+                    fraction++;
+                }
+                if (mantissa != 0 || c != '0') {
+                    digits++;
+                }
+                mantissa = digits <= 18 ? mantissa * 10 + (c - '0') : mantissa;
+            } else if ((c == '.' || c == ',' && decimalComma) && fraction < 0) {
+                fraction = 0;
+            } else if ((c == 'e' || c == 'E') && i > 0) {
+                exponent = true;
+                break;
             } else {
                 return Double.NaN;
             }
         }
-        if (!digit) {
+        if (!anyDigit) {
             return Double.NaN;
+        }
+        if (!exponent && digits <= 15 && Math.max(0, fraction) < POWERS_OF_TEN.length) {
+            double x = mantissa / POWERS_OF_TEN[Math.max(0, fraction)];
+            return negative ? -x : x;
+        }
+        // rare forms (exponent, many digits): check the shape, then let the JDK parse it
+        if (exponent) {
+            String e = v.substring(i + 1);
+            int j = e.startsWith("+") || e.startsWith("-") ? 1 : 0;
+            if (j == e.length()) {
+                return Double.NaN;
+            }
+            for (; j < e.length(); j++) {
+                if (e.charAt(j) < '0' || e.charAt(j) > '9') {
+                    return Double.NaN;
+                }
+            }
         }
         try {
             return Double.parseDouble(decimalComma ? v.replace(',', '.') : v);
-        } catch (NumberFormatException e) {
+        } catch (NumberFormatException ex) {
             return Double.NaN;
         }
     }
