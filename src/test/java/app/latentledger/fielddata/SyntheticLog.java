@@ -205,8 +205,7 @@ public final class SyntheticLog {
         int run = -1;                   // index of the current or last run
         double tsPrev = s.returnDbC;    // supply dry bulb at the previous sample
         double wsPrev = wr0;
-        double edgeTs = tsPrev;         // supply values when the current phase began
-        double edgeWs = wsPrev;
+        double edgeTs = tsPrev;         // supply dry bulb when the current phase began
         int phase = 0;                  // 0 rest before any run, 1 running, 2 resting
         double evapPosition = 0;        // position on the linear-decay curve, s
         boolean drifting = false;       // blower-off drift of the supply probe under way
@@ -226,7 +225,6 @@ public final class SyntheticLog {
             int newPhase = on ? 1 : j >= 0 ? 2 : 0;
             if (newPhase != phase || j != run) {
                 edgeTs = tsPrev;
-                edgeWs = wsPrev;
                 if (newPhase == 2) {
                     // where on the linear-decay curve the remaining water puts the coil: t_wet − E(s0) = water
                     double e = Math.max(0, s.twetS - coilWater);
