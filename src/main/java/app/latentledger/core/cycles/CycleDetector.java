@@ -92,7 +92,7 @@ public final class CycleDetector {
     private List<int[]> runsFromTemperatures(LogSeries log, AirSeries air) {
         double splitOn = settings.valueSi(Thresholds.SPLIT_ON);
         double splitOff = settings.valueSi(Thresholds.SPLIT_OFF);
-        double edge = settings.valueSi(Thresholds.SUPPLY_EDGE);
+        double edgeK = settings.valueSi(Thresholds.SUPPLY_EDGE);
         double tol = settings.valueSi(Thresholds.EDGE_TOLERANCE);
         double gap = gapS(log);
         double[] tr = air.returnDbC;
@@ -133,7 +133,7 @@ public final class CycleDetector {
             }
             if (state == on) {
                 extreme = Math.min(extreme, ts[i]);
-                if (ts[i] > extreme + edge || split < splitOff) {
+                if (ts[i] > extreme + edgeK || split < splitOff) {
                     // the last sample still at the low is the moment of the stop: the rise shows one sample later
                     int stop = Math.max(edge(log, ts, phaseStart, i, extreme, tol, false), runStart + 1);
                     if (startSeen) {
@@ -146,7 +146,7 @@ public final class CycleDetector {
                 }
             } else {
                 extreme = Math.max(extreme, ts[i]);
-                if (ts[i] < extreme - edge && split > splitOn) {
+                if (ts[i] < extreme - edgeK && split > splitOn) {
                     int start = edge(log, ts, phaseStart, i, extreme, tol, true);
                     runStart = start;
                     startSeen = true;
