@@ -1,0 +1,116 @@
+package app.latentledger.core.cycles;
+
+import app.latentledger.core.psychro.HandbookEdition;
+import app.latentledger.core.psychro.Psychrometrics;
+import app.latentledger.core.psychro.SaturationPressure;
+
+/**
+ * Return and supply air per sample as the analysis needs it: dry bulb, humidity ratio, enthalpy
+ * and the return air's specific volume, all SI and on the SI handbook edition (so enthalpies are
+ * comparable with each other). NaN where a reading is missing or impossible.
+ *
+ * <p>Humidity ratio from RH by ASHRAE Handbook—Fundamentals 2017 ch. 1 eqs. 24 and 20 (pw = φ·pws,
+ * W = 0.621945·pw/(p − pw)), or from a wet bulb by eq. 33/35 when no RH was logged; enthalpy by
+ * eq. 32; specific volume by eq. 28. Valid for −50 to 95 °C, the core's input limits.
+ */
+final class AirSeries {
+    private static final HandbookEdition EDITION = HandbookEdition.SI;
+
+    final int size;
+    final double[] returnDbC;
+    final double[] supplyDbC;
+    final double[] returnW;
+    final double[] supplyW;
+    final double[] returnH;
+    final double[] supplyH;
+    /** 1 / v of the return air, kg dry air per m³: turns airflow into dry-air mass flow. */
+    final double[] returnDryAirDensity;
+    final boolean humidity;
+
+    AirSeries(LogSeries log, double pressurePa) {
+        size = log.size();
+        returnDbC = column(log, Channel.RETURN_DB);
+        supplyDbC = column(log, Channel.SUPPLY_DB);
+        returnW = humidityRatios(log, Channel.RETURN_DB, Channel.RETURN_RH, Channel.RETURN_WB, pressurePa);
+        supplyW = humidityRatios(log, Channel.SUPPLY_DB, Channel.SUPPLY_RH, Channel.SUPPLY_WB, pressurePa);
+        humidity = returnW != null && supplyW != null;
+        returnH = enthalpies(returnDbC, returnW);
+        supplyH = enthalpies(supplyDbC, supplyW);
+        returnDryAirDensity = new double[size];
+        for (int i = 0; i < size; i++) {
+            double w = returnW == null ? Double.NaN : returnW[i];
+            returnDryAirDensity[i] = Double.isNaN(w) || Double.isNaN(returnDbC[i]) ? Double.NaN
+                    : 1.0 / EDITION.specificVolumeM3PerKg(returnDbC[i], w, pressurePa);
+        }
+    }
+
+    private static double[] column(LogSeries log, Channel c) {
+        double[] v = new double[log.size()];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = log.value(c, i);
+        }
+        return v;
+    }
+
+    private static double[] humidityRatios(LogSeries log, Channel db, Channel rh, Channel wb, double p) {
+        boolean hasRh = log.has(rh);
+        boolean hasWb = log.has(wb);
+        if (!log.has(db) || !hasRh && !hasWb) {
+            return null;
+        }
+        double[] w = new double[log.size()];
+        for (int i = 0; i < w.length; i++) {
+            double t = log.value(db, i);
+            double r = hasRh ? log.value(rh, i) : Double.NaN;
+            double x = Double.NaN;
+            if (!Double.isNaN(t) && !Double.isNaN(r)) {
+                double pw = r / 100.0 * SaturationPressure.pascals(t);
+                x = Psychrometrics.humidityRatio(pw, p);
+            } else if (!Double.isNaN(t) && hasWb) {
+                double b = log.value(wb, i);
+                if (!Double.isNaN(b) && b <= t) {
+                    x = Math.min(EDITION.humidityRatioFromWetBulb(t, b, p), Psychrometrics.saturationHumidityRatio(t, p));
+                }
+            }
+            w[i] = x >= 0 ? x : Double.NaN;
+        }
+        return w;
+    }
+
+    private static double[] enthalpies(double[] db, double[] w) {
+        double[] h = new double[db.length];
+        for (int i = 0; i < h.length; i++) {
+            h[i] = w == null || Double.isNaN(w[i]) || Double.isNaN(db[i]) ? Double.NaN : EDITION.enthalpyJPerKg(db[i], w[i]);
+        }
+        return h;
+    }
+
+    /**
+     * Zeroes the probe pair: takes {@code offsetRhPct} off every supply RH and recomputes the supply
+     * humidity ratio and enthalpy (eqs. 24, 20, 32). The offset is removed in RH because capacitive
+     * probes err in RH: a constant W offset found over a dry coil at room temperature would
+     * over-correct the cold on-cycle supply about twofold. (latent-degradation.md §5.1 suggests W;
+     * this is the reasoned departure.)
+     */
+    void correctSupplyRh(double offsetRhPct, double pressurePa) {
+        if (supplyW == null) {
+            return;
+        }
+        for (int i = 0; i < size; i++) {
+            double t = supplyDbC[i];
+            if (Double.isNaN(supplyW[i]) || Double.isNaN(t)) {
+                continue;
+            }
+            double pws = SaturationPressure.pascals(t);
+            double rh = Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(supplyW[i], pressurePa), t);
+            double corrected = Math.max(0.0, Math.min(100.0, rh - offsetRhPct));
+            supplyW[i] = Psychrometrics.humidityRatio(corrected / 100.0 * pws, pressurePa);
+            supplyH[i] = EDITION.enthalpyJPerKg(t, supplyW[i]);
+        }
+    }
+
+    /** W_return − W_supply at sample i (positive while the coil removes moisture), NaN if unknown. */
+    double dryingW(int i) {
+        return humidity ? returnW[i] - supplyW[i] : Double.NaN;
+    }
+}

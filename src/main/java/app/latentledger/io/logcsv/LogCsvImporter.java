@@ -1,0 +1,642 @@
+package app.latentledger.io.logcsv;
+
+import app.latentledger.core.cycles.Channel;
+import app.latentledger.core.cycles.LogSeries;
+import app.latentledger.core.cycles.TimeOrigin;
+import app.latentledger.core.psychro.InputLimits;
+import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.UnitSystem;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStreamReader;
+import java.io.Reader;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.EnumMap;
+import java.util.Iterator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * Reads a data-logger CSV into a {@link LogSeries}, converting to SI once, here at the edge.
+ *
+ * <p>Layout: a header row, then one row per sample. Columns are found by the generic field names
+ * ({@code time} or {@code seconds}, {@code return_db}, {@code return_rh}, {@code return_wb},
+ * {@code supply_db}, {@code supply_rh}, {@code supply_wb}, {@code coil_temp}, {@code outdoor_db},
+ * {@code outdoor_rh}, {@code compressor}, {@code fan}; any case) or by {@code HEADER=field} maps for
+ * other loggers. The separator (',' ';' or tab) is taken from the header line; with ';' numbers
+ * may use a decimal comma. Temperatures are in the given unit system (°F or °C), RH in %, status as
+ * 0/1 (or on/off, true/false). Quotes around a field are removed; a quoted field cannot contain the
+ * separator (loggers do not write such fields, and refusing quote parsing means a stray quote can
+ * never swallow the rest of a file).
+ *
+ * <p>Bad rows are kept out and listed as {@code line:column: message}; empty cells and NA/NaN are
+ * missing readings, not errors. RH up to 103 % is taken as 100 % (probes read slightly over
+ * saturation near a wet coil; common practice, no source). Rows out of time order are sorted,
+ * repeated times keep the first row. The importer throws nothing but {@link LogRefusedException}
+ * for bad content (and {@link IOException} when the file cannot be read at all).
+ */
+public final class LogCsvImporter {
+    /** Rejected rows listed by line; the rest are only counted. */
+    public static final int MAX_MESSAGES = 25;
+    /** Longest usual sample interval accepted, s: cycle timing needs 5 min or less. */
+    public static final double MAX_INTERVAL_S = 300.0;
+    private static final int MAX_HEADER_CHARS = 65_536;
+    private static final int MAX_SHOWN_CHARS = 40;
+    private static final double RH_SATURATION_SLACK_PCT = 3.0;
+    private static final double GAP_FACTOR = 3.0;
+    private static final Channel[] CHANNELS = Channel.values();
+
+    private final UnitSystem units;
+    private final Map<String, String> maps;
+    private final ImportProgress progress;
+
+    /**
+     * @param units    unit system of the temperature columns
+     * @param maps     logger header → generic field name ({@code --map HEADER=field}), any order
+     * @param progress told how far the import has got
+     */
+    public LogCsvImporter(UnitSystem units, Map<String, String> maps, ImportProgress progress) {
+        this.units = units;
+        this.maps = new LinkedHashMap<>(maps);
+        this.progress = progress == null ? ImportProgress.NONE : progress;
+    }
+
+    /** Reads a file (UTF-8; undecodable bytes become U+FFFD and so fail as values, not as a crash). */
+    public LogImport read(Path file) throws IOException, LogRefusedException {
+        long size = Files.size(file);
+        try (Reader r = new InputStreamReader(Files.newInputStream(file), StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPLACE).onUnmappableCharacter(CodingErrorAction.REPLACE))) {
+            return read(r, size);
+        }
+    }
+
+    /**
+     * @param in         the text
+     * @param totalChars its length for progress (≤ 0 when unknown)
+     */
+    public LogImport read(Reader in, long totalChars) throws IOException, LogRefusedException {
+        BufferedReader buffered = new BufferedReader(in, 1 << 16);
+        buffered.mark(MAX_HEADER_CHARS + 2);
+        String headerLine = firstLine(buffered);
+        buffered.reset();
+        if (headerLine == null) {
+            throw new LogRefusedException("the file is empty: a log needs a header row and sample rows");
+        }
+        char delimiter = sniffDelimiter(headerLine);
+        boolean decimalComma = delimiter == ';';
+        CSVFormat format = format(delimiter);
+        try (CSVParser parser = CSVParser.builder().setReader(buffered).setFormat(format).get()) {
+            Iterator<CSVRecord> it = parser.iterator();
+            if (!it.hasNext()) {
+                throw new LogRefusedException("the file is empty: a log needs a header row and sample rows");
+            }
+            Header header = header(it.next());
+            // rows are about as long as the header: size the columns once instead of doubling them
+            int capacity = (int) Math.max(1024, Math.min(50_000_000L, totalChars / Math.max(20, headerLine.length())));
+            Rows rows = new Rows(header, capacity);
+            int rowsRead = 0;
+            IsoTimes.Parsed parsed = new IsoTimes.Parsed();
+            Boolean offsetMode = null;
+            while (true) {
+                long lineBefore = parser.getCurrentLineNumber();
+                if (!it.hasNext()) {
+                    break;
+                }
+                CSVRecord rec = it.next();
+                rowsRead++;
+                long line = lineBefore + 1;
+                if ((rowsRead & 8191) == 0 && totalChars > 0) {
+                    progress.progress(Math.min(1.0, rec.getCharacterPosition() / (double) totalChars));
+                }
+                String problem = rows.add(rec, line, decimalComma, parsed, offsetMode);
+                if (problem != null) {
+                    rows.reject(problem);
+                } else if (offsetMode == null && header.timeIsIso) {
+                    offsetMode = parsed.hasOffset;
+                    rows.firstOffsetSeconds = parsed.offsetSeconds;
+                }
+            }
+            progress.progress(1.0);
+            return rows.finish(rowsRead, delimiter, decimalComma, Boolean.TRUE.equals(offsetMode));
+        }
+    }
+
+    /** The same format the benchmark's bare parse uses. */
+    public static CSVFormat format(char delimiter) {
+        return CSVFormat.DEFAULT.builder().setDelimiter(delimiter).setQuote(null).setIgnoreEmptyLines(true)
+                .setTrim(true).get();
+    }
+
+    private static String firstLine(BufferedReader r) throws IOException, LogRefusedException {
+        StringBuilder b = new StringBuilder();
+        int c;
+        while ((c = r.read()) != -1) {
+            if (c == '\n' || c == '\r') {
+                if (b.length() > 0) {
+                    return b.toString();
+                }
+                continue;
+            }
+            b.append((char) c);
+            if (b.length() > MAX_HEADER_CHARS) {
+                throw new LogRefusedException("the first line is over " + MAX_HEADER_CHARS
+                        + " characters: not a header row of a log");
+            }
+        }
+        return b.length() > 0 ? b.toString() : null;
+    }
+
+    static char sniffDelimiter(String header) {
+        int comma = 0;
+        int semi = 0;
+        int tab = 0;
+        for (int i = 0; i < header.length(); i++) {
+            char c = header.charAt(i);
+            if (c == ',') {
+                comma++;
+            } else if (c == ';') {
+                semi++;
+            } else if (c == '\t') {
+                tab++;
+            }
+        }
+        if (tab > comma && tab > semi) {
+            return '\t';
+        }
+        return semi > comma ? ';' : ',';
+    }
+
+    private static String clean(String s) {
+        String t = s.strip();
+        if (!t.isEmpty() && t.charAt(0) == '\uFEFF') {
+            t = t.substring(1).strip();
+        }
+        if (t.length() >= 2 && t.charAt(0) == '"' && t.charAt(t.length() - 1) == '"') {
+            t = t.substring(1, t.length() - 1).strip();
+        }
+        return t;
+    }
+
+    /** Where each field sits in the header. */
+    private static final class Header {
+        final int width;
+        int timeColumn = -1;
+        boolean timeIsIso;
+        final int[] analogColumn = new int[Channel.values().length];
+        final String[] names;
+        final Map<String, String> columns = new LinkedHashMap<>();
+        final List<String> ignored = new ArrayList<>();
+        /** Channels present, with their columns, in reading order (built once, read per row). */
+        Channel[] present = new Channel[0];
+        int[] presentColumn = new int[0];
+
+        Header(int width) {
+            this.width = width;
+            this.names = new String[width];
+            Arrays.fill(analogColumn, -1);
+        }
+    }
+
+    private Header header(CSVRecord rec) throws LogRefusedException {
+        Header h = new Header(rec.size());
+        Map<String, String> lowerMaps = new LinkedHashMap<>();
+        for (Map.Entry<String, String> e : maps.entrySet()) {
+            String field = e.getValue().strip().toLowerCase(Locale.ROOT);
+            if (!field.equals("time") && !field.equals("seconds") && Channel.ofField(field) == null) {
+                throw new LogRefusedException("--map " + e.getKey() + "=" + e.getValue() + ": '" + e.getValue()
+                        + "' is not a field; fields are time, seconds, " + fieldList());
+            }
+            lowerMaps.put(e.getKey().strip().toLowerCase(Locale.ROOT), field);
+        }
+        List<String> unmatched = new ArrayList<>(lowerMaps.keySet());
+        for (int c = 0; c < rec.size(); c++) {
+            String name = clean(rec.get(c));
+            h.names[c] = name;
+            String key = name.toLowerCase(Locale.ROOT);
+            String field = lowerMaps.get(key);
+            if (field != null) {
+                unmatched.remove(key);
+            } else if (key.equals("time") || key.equals("seconds") || Channel.ofField(key) != null) {
+                field = key;
+            }
+            if (field == null) {
+                if (!name.isEmpty()) {
+                    h.ignored.add(name);
+                }
+                continue;
+            }
+            if (h.columns.containsValue(field)) {
+                throw new LogRefusedException("two columns are read as " + field + " (the second is '" + name
+                        + "', column " + (c + 1) + "); map one of them to another field");
+            }
+            h.columns.put(name, field);
+            if (field.equals("time") || field.equals("seconds")) {
+                if (h.timeColumn >= 0) {
+                    throw new LogRefusedException("both a time and a seconds column: keep one (map the other"
+                            + " to a different field or delete it)");
+                }
+                h.timeColumn = c;
+                h.timeIsIso = field.equals("time");
+            } else {
+                h.analogColumn[Channel.ofField(field).ordinal()] = c;
+            }
+        }
+        List<Channel> present = new ArrayList<>();
+        for (Channel ch : CHANNELS) {
+            if (h.analogColumn[ch.ordinal()] >= 0) {
+                present.add(ch);
+            }
+        }
+        h.present = present.toArray(new Channel[0]);
+        h.presentColumn = new int[h.present.length];
+        for (int k = 0; k < h.present.length; k++) {
+            h.presentColumn[k] = h.analogColumn[h.present[k].ordinal()];
+        }
+        if (!unmatched.isEmpty()) {
+            throw new LogRefusedException("--map names header(s) not in the file: " + unmatched
+                    + "; headers are " + Arrays.toString(h.names));
+        }
+        if (h.timeColumn < 0) {
+            throw new LogRefusedException("no time column: expected a column named 'time' (ISO-8601 date-time)"
+                    + " or 'seconds' (elapsed), or --map HEADER=time; headers are " + shown(h.names));
+        }
+        boolean anyTemperature = false;
+        for (Channel ch : Channel.values()) {
+            anyTemperature |= ch.isTemperature() && h.analogColumn[ch.ordinal()] >= 0;
+        }
+        if (!anyTemperature) {
+            throw new LogRefusedException("no temperature column: expected at least one of return_db, supply_db,"
+                    + " return_wb, supply_wb, coil_temp, outdoor_db (or --map HEADER=field); headers are "
+                    + shown(h.names));
+        }
+        return h;
+    }
+
+    private static String fieldList() {
+        StringBuilder b = new StringBuilder();
+        for (Channel c : Channel.values()) {
+            b.append(b.length() == 0 ? "" : ", ").append(c.field());
+        }
+        return b.toString();
+    }
+
+    private static String shown(String[] names) {
+        String s = Arrays.toString(names);
+        return s.length() > 300 ? s.substring(0, 300) + "…]" : s;
+    }
+
+    private static String quote(String v) {
+        String s = v.length() > MAX_SHOWN_CHARS ? v.substring(0, MAX_SHOWN_CHARS) + "…" : v;
+        StringBuilder b = new StringBuilder("'");
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            b.append(Character.isISOControl(c) ? '?' : c);
+        }
+        return b.append('\'').toString();
+    }
+
+    /** Growing columns of good rows. */
+    private final class Rows {
+        final Header header;
+        double[] time;
+        final double[][] analog = new double[Channel.values().length][];
+        final byte[][] status = new byte[Channel.values().length][];
+        int n;
+        int rejectedCount;
+        final List<String> rejected = new ArrayList<>();
+        int firstOffsetSeconds;
+
+        Rows(Header header, int capacity) {
+            this.header = header;
+            this.time = new double[capacity];
+            for (Channel c : CHANNELS) {
+                if (header.analogColumn[c.ordinal()] >= 0) {
+                    if (c.isStatus()) {
+                        status[c.ordinal()] = new byte[capacity];
+                    } else {
+                        analog[c.ordinal()] = new double[capacity];
+                    }
+                }
+            }
+        }
+
+        void reject(String message) {
+            rejectedCount++;
+            if (rejected.size() < MAX_MESSAGES) {
+                rejected.add(message);
+            }
+        }
+
+        /** Adds the record, or returns why it was kept out. */
+        String add(CSVRecord rec, long line, boolean decimalComma, IsoTimes.Parsed parsed, Boolean offsetMode) {
+            int size = rec.size();
+            if (size < header.width) {
+                if (size == 1 && rec.get(0).isEmpty()) {
+                    return line + ": empty row";
+                }
+                return line + ": " + size + " of " + header.width + " columns (line cut short?)";
+            }
+            for (int c = header.width; c < size; c++) {
+                if (!rec.get(c).isEmpty()) {
+                    return line + ": " + size + " columns, the header has " + header.width;
+                }
+            }
+            if (n == time.length) {
+                grow();
+            }
+            int tc = header.timeColumn;
+            String tv = clean(rec.get(tc));
+            double t;
+            if (header.timeIsIso) {
+                if (!IsoTimes.parse(tv, parsed)) {
+                    return line + ":" + (tc + 1) + ": time " + quote(tv) + " is not an ISO-8601 date-time"
+                            + " (e.g. 2026-07-14T13:05:00 or 2026-07-14T13:05:00-04:00)";
+                }
+                if (offsetMode != null && offsetMode != parsed.hasOffset) {
+                    return line + ":" + (tc + 1) + ": time " + quote(tv) + (parsed.hasOffset
+                            ? " has a UTC offset, earlier rows had none" : " has no UTC offset, earlier rows had one");
+                }
+                t = parsed.epochSeconds;
+            } else {
+                t = number(tv, decimalComma);
+                if (!Double.isFinite(t)) {
+                    return line + ":" + (tc + 1) + ": seconds " + quote(tv) + " is not a number";
+                }
+            }
+            time[n] = t;
+            for (int k = 0; k < header.present.length; k++) {
+                Channel ch = header.present[k];
+                int c = header.presentColumn[k];
+                String v = clean(rec.get(c));
+                String problem = ch.isStatus() ? status(ch, v) : analog(ch, v, decimalComma);
+                if (problem != null) {
+                    return line + ":" + (c + 1) + ": " + ch.field() + " " + problem;
+                }
+            }
+            n++;
+            return null;
+        }
+
+        private String status(Channel ch, String v) {
+            byte b;
+            if (missing(v)) {
+                b = LogSeries.UNKNOWN;
+            } else if (v.equals("1") || v.equalsIgnoreCase("on") || v.equalsIgnoreCase("true")) {
+                b = 1;
+            } else if (v.equals("0") || v.equalsIgnoreCase("off") || v.equalsIgnoreCase("false")) {
+                b = 0;
+            } else {
+                double d = number(v, false);
+                if (!(d >= 0 && d <= 1)) {
+                    return quote(v) + " is not a status (0/1, on/off)";
+                }
+                b = (byte) (d >= 0.5 ? 1 : 0);
+            }
+            status[ch.ordinal()][n] = b;
+            return null;
+        }
+
+        private String analog(Channel ch, String v, boolean decimalComma) {
+            double si;
+            if (missing(v)) {
+                si = Double.NaN;
+            } else {
+                double shown = number(v, decimalComma);
+                if (!Double.isFinite(shown)) {
+                    return quote(v) + " is not a number";
+                }
+                if (ch.isTemperature()) {
+                    si = Quantity.TEMPERATURE.fromDisplay(units, shown);
+                    if (si < InputLimits.MIN_TEMP_C || si > InputLimits.MAX_TEMP_C) {
+                        return String.format(Locale.ROOT, "%s %s outside %.0f to %.0f %s", quote(v),
+                                Quantity.TEMPERATURE.symbol(units),
+                                Quantity.TEMPERATURE.toDisplay(units, InputLimits.MIN_TEMP_C),
+                                Quantity.TEMPERATURE.toDisplay(units, InputLimits.MAX_TEMP_C),
+                                Quantity.TEMPERATURE.symbol(units));
+                    }
+                } else {
+                    if (shown < 0 || shown > 100 + RH_SATURATION_SLACK_PCT) {
+                        return quote(v) + " % outside 0 to 100 %";
+                    }
+                    si = Math.min(100.0, shown);
+                }
+            }
+            analog[ch.ordinal()][n] = si;
+            return null;
+        }
+
+        private void grow() {
+            int cap = time.length * 2;
+            time = Arrays.copyOf(time, cap);
+            for (int i = 0; i < analog.length; i++) {
+                if (analog[i] != null) {
+                    analog[i] = Arrays.copyOf(analog[i], cap);
+                }
+                if (status[i] != null) {
+                    status[i] = Arrays.copyOf(status[i], cap);
+                }
+            }
+        }
+
+        LogImport finish(int rowsRead, char delimiter, boolean decimalComma, boolean hasOffset)
+                throws LogRefusedException {
+            if (n == 0) {
+                throw new LogRefusedException("no readable rows: " + rowsRead + " data row(s), all kept out"
+                        + (rejected.isEmpty() ? "" : "; first: " + rejected.get(0)));
+            }
+            int[] order = timeOrder();
+            int outOfOrder = 0;
+            double maxSoFar = Double.NEGATIVE_INFINITY;
+            for (int i = 0; i < n; i++) {
+                if (time[i] < maxSoFar) {
+                    outOfOrder++;
+                }
+                maxSoFar = Math.max(maxSoFar, time[i]);
+            }
+            int[] keep = new int[n];
+            int kept = 0;
+            int duplicates = 0;
+            for (int k = 0; k < n; k++) {
+                int i = order == null ? k : order[k];
+                if (kept > 0 && time[i] == time[keep[kept - 1]]) {
+                    duplicates++;
+                    continue;
+                }
+                keep[kept++] = i;
+            }
+            if (kept < 2) {
+                throw new LogRefusedException("only " + kept + " readable sample time(s): a log needs at least two");
+            }
+            double t0 = time[keep[0]];
+            double[] t = new double[kept];
+            for (int k = 0; k < kept; k++) {
+                t[k] = time[keep[k]] - t0;
+            }
+            Map<Channel, double[]> a = new EnumMap<>(Channel.class);
+            Map<Channel, byte[]> s = new EnumMap<>(Channel.class);
+            for (Channel ch : CHANNELS) {
+                if (analog[ch.ordinal()] != null) {
+                    a.put(ch, pick(analog[ch.ordinal()], keep, kept));
+                }
+                if (status[ch.ordinal()] != null) {
+                    s.put(ch, pick(status[ch.ordinal()], keep, kept));
+                }
+            }
+            TimeOrigin origin = header.timeIsIso ? new TimeOrigin(t0, firstOffsetSeconds, hasOffset) : null;
+            LogSeries series = new LogSeries(t, a, s, origin);
+            double median = series.nominalIntervalS();
+            if (median > MAX_INTERVAL_S) {
+                throw new LogRefusedException(String.format(Locale.ROOT, "samples are %.0f s apart (median): cycle"
+                        + " timing needs an interval of 1 s to 5 min", median));
+            }
+            int gaps = 0;
+            int irregular = 0;
+            double longest = 0;
+            for (int k = 1; k < kept; k++) {
+                double x = t[k] - t[k - 1];
+                if (x > GAP_FACTOR * median) {
+                    gaps++;
+                    longest = Math.max(longest, x);
+                } else if (Math.abs(x - median) > 0.1 * median) {
+                    irregular++;
+                }
+            }
+            ImportReport report = new ImportReport(delimiter, decimalComma, header.timeIsIso ? "time" : "seconds",
+                    hasOffset, header.columns, header.ignored, rowsRead, kept, rejectedCount, rejected, outOfOrder,
+                    duplicates, median, gaps, longest, irregular);
+            return new LogImport(series, report);
+        }
+
+        /** Stable sort order of the rows by time, or null when they are already in order. */
+        private int[] timeOrder() {
+            boolean sorted = true;
+            for (int i = 1; i < n && sorted; i++) {
+                sorted = time[i] >= time[i - 1];
+            }
+            if (sorted) {
+                return null;
+            }
+            Integer[] idx = new Integer[n];
+            for (int i = 0; i < n; i++) {
+                idx[i] = i;
+            }
+            Arrays.sort(idx, (x, y) -> Double.compare(time[x], time[y]));
+            int[] out = new int[n];
+            for (int i = 0; i < n; i++) {
+                out[i] = idx[i];
+            }
+            return out;
+        }
+    }
+
+    private static double[] pick(double[] v, int[] keep, int kept) {
+        double[] out = new double[kept];
+        for (int k = 0; k < kept; k++) {
+            out[k] = v[keep[k]];
+        }
+        return out;
+    }
+
+    private static byte[] pick(byte[] v, int[] keep, int kept) {
+        byte[] out = new byte[kept];
+        for (int k = 0; k < kept; k++) {
+            out[k] = v[keep[k]];
+        }
+        return out;
+    }
+
+    private static boolean missing(String v) {
+        return v.isEmpty() || v.equalsIgnoreCase("nan") || v.equalsIgnoreCase("na") || v.equals("-")
+                || v.equalsIgnoreCase("null");
+    }
+
+    private static final double[] POWERS_OF_TEN = new double[23];
+
+    static {
+        POWERS_OF_TEN[0] = 1;
+        for (int i = 1; i < POWERS_OF_TEN.length; i++) {
+            POWERS_OF_TEN[i] = POWERS_OF_TEN[i - 1] * 10;
+        }
+    }
+
+    /**
+     * A plain decimal number, or NaN. No hex, no NaN/Infinity words, no thousands separators.
+     * Logger readings have a few digits: up to 15 significant digits without an exponent the value
+     * is mantissa ÷ 10^k, both exact in a double, so the one division is correctly rounded and equals
+     * Double.parseDouble (Clinger's fast path); anything else goes to Double.parseDouble.
+     */
+    static double number(String v, boolean decimalComma) {
+        int n = v.length();
+        if (n == 0 || n > 40) {
+            return Double.NaN;
+        }
+        int i = 0;
+        boolean negative = false;
+        char first = v.charAt(0);
+        if (first == '+' || first == '-') {
+            negative = first == '-';
+            i = 1;
+        }
+        long mantissa = 0;
+        int digits = 0;
+        int fraction = -1;
+        boolean exponent = false;
+        boolean anyDigit = false;
+        for (; i < n; i++) {
+            char c = v.charAt(i);
+            if (c >= '0' && c <= '9') {
+                anyDigit = true;
+                if (fraction >= 0) {
+                    fraction++;
+                }
+                if (mantissa != 0 || c != '0') {
+                    digits++;
+                }
+                mantissa = digits <= 18 ? mantissa * 10 + (c - '0') : mantissa;
+            } else if ((c == '.' || c == ',' && decimalComma) && fraction < 0) {
+                fraction = 0;
+            } else if ((c == 'e' || c == 'E') && i > 0) {
+                exponent = true;
+                break;
+            } else {
+                return Double.NaN;
+            }
+        }
+        if (!anyDigit) {
+            return Double.NaN;
+        }
+        if (!exponent && digits <= 15 && Math.max(0, fraction) < POWERS_OF_TEN.length) {
+            double x = mantissa / POWERS_OF_TEN[Math.max(0, fraction)];
+            return negative ? -x : x;
+        }
+        // rare forms (exponent, many digits): check the shape, then let the JDK parse it
+        if (exponent) {
+            String e = v.substring(i + 1);
+            int j = e.startsWith("+") || e.startsWith("-") ? 1 : 0;
+            if (j == e.length()) {
+                return Double.NaN;
+            }
+            for (; j < e.length(); j++) {
+                if (e.charAt(j) < '0' || e.charAt(j) > '9') {
+                    return Double.NaN;
+                }
+            }
+        }
+        try {
+            return Double.parseDouble(decimalComma ? v.replace(',', '.') : v);
+        } catch (NumberFormatException ex) {
+            return Double.NaN;
+        }
+    }
+}
