@@ -101,17 +101,17 @@ final class CycleFindings {
         if (r.blowerOnRests() == 0 && !(r.returnedKg() > 0) || !(share >= min)) {
             return;
         }
-        boolean kg = !Double.isNaN(r.airflowM3PerS());
         double[] blower = r.cycles().stream().mapToDouble(c -> c.cycle().blowerOnSeconds())
                 .filter(v -> v > 0).sorted().toArray();
         double medianBlower = blower.length == 0 ? Double.NaN : blower[blower.length / 2];
         out.add(new Finding("off-cycle-reevaporation", Severity.FIX,
                 String.format(Locale.ROOT, "After the compressor stops, the blower keeps running and blows water"
                         + " from the wet coil back into the house: about %.0f %% of what it removed.", 100 * share),
-                String.format(Locale.ROOT, "blower-on rests returned %.0f %% of the moisture removed%s;"
+                // the masses themselves go in the evidence, which every display shows in the tech's units
+                String.format(Locale.ROOT, "blower-on rests returned %.0f %% of the moisture removed;"
                                 + " blower ran on after the compressor in %d of %d rests (median %.1f min);"
                                 + " limit %.0f %% (common practice, no source)",
-                        100 * share, kg ? String.format(Locale.ROOT, " (%.2f of %.2f kg)", r.returnedKg(), r.removedKg()) : "",
+                        100 * share,
                         r.blowerOnRests(), r.cycles().size(), medianBlower / 60.0, 100 * min),
                 List.of(Evidence.of("reevaporationShare", "share of removed moisture put back",
                                 Quantity.FRACTION_PERCENT, share),
