@@ -7,6 +7,7 @@ import app.latentledger.chart.draw.Stroke;
 import app.latentledger.chart.draw.TextMeasurer;
 import app.latentledger.chart.draw.TextStyle;
 import app.latentledger.chart.draw.Theme;
+import app.latentledger.core.units.Quantity;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -40,10 +41,22 @@ final class Legend {
             t.add("filled entering, hollow leaving");
         }
         t.add("relative humidity, 10 % steps");
-        t.add("wet bulb");
-        t.add("enthalpy");
-        t.add("specific volume");
+        t.add(wetBulb());
+        t.add(enthalpy());
+        t.add(volume());
         return t;
+    }
+
+    private String wetBulb() {
+        return "wet bulb, " + Quantity.TEMPERATURE.symbol(data.units());
+    }
+
+    private String enthalpy() {
+        return "enthalpy, " + Quantity.ENTHALPY.symbol(data.units());
+    }
+
+    private String volume() {
+        return "specific volume, " + Quantity.SPECIFIC_VOLUME.symbol(data.units());
     }
 
     /** {x, y, width, height} of the legend box in device units. */
@@ -84,11 +97,11 @@ final class Legend {
         }
         sample(p, x, y, Stroke.solid(theme.relativeHumidity(), 1.4), textX, "relative humidity, 10 % steps", ts);
         y += rowHeight();
-        sample(p, x, y, new Stroke(theme.wetBulb(), 1.2, DashPattern.DASHED), textX, "wet bulb", ts);
+        sample(p, x, y, new Stroke(theme.wetBulb(), 1.2, DashPattern.DASHED), textX, wetBulb(), ts);
         y += rowHeight();
-        sample(p, x, y, Stroke.solid(theme.enthalpy(), 1.0), textX, "enthalpy", ts);
+        sample(p, x, y, Stroke.solid(theme.enthalpy(), 1.0), textX, enthalpy(), ts);
         y += rowHeight();
-        sample(p, x, y, new Stroke(theme.volume(), 1.2, DashPattern.DASH_DOT), textX, "specific volume", ts);
+        sample(p, x, y, new Stroke(theme.volume(), 1.2, DashPattern.DASH_DOT), textX, volume(), ts);
         p.endGroup();
     }
 

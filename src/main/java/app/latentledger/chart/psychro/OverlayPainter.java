@@ -54,7 +54,8 @@ final class OverlayPainter {
             String text = prefix + "dew point " + PsychroChart.Format.temperature(lines.units(),
                     overlay.enteringDewPointC());
             double half = labels.boxWidth(text, small) / 2;
-            labels.firstFree(text, small, dx - half - 10, dy - 14, dx - half - 10, dy + 14, dx + half + 10, dy - 16);
+            labels.firstFree(text, small, dx - half - 10, dy - 14, dx - half - 10, dy + 14, dx - half - 10, dy - 36,
+                    dx - half - 10, dy + 36, dx + half + 10, dy - 16);
             p.endGroup();
         }
 

@@ -205,14 +205,10 @@ public final class PsychroChart {
     private void paintEnthalpyScale(Painter p, Theme theme, ChartViewport vp, Labels labels, List<ChartCurve> curves) {
         TextStyle style = TextStyle.of(theme.smallText(), theme.enthalpy());
         double reach = 30;
-        ChartCurve top = null;
-        for (ChartCurve c : curves) {
-            if (c.kind() == ChartCurve.Kind.ENTHALPY && c.dryBulbC()[0] > vp.range().dbMinC() + 1e-9
-                    && vp.y(c.humidityRatio()[0]) > vp.top() + 40) {
-                top = c;
-            }
-        }
-        for (ChartCurve c : curves) {
+        boolean unitShown = false;
+        // from the top down, so the unit goes on the highest label that fits
+        for (int k = curves.size() - 1; k >= 0; k--) {
+            ChartCurve c = curves.get(k);
             if (c.kind() != ChartCurve.Kind.ENTHALPY || c.dryBulbC()[0] <= vp.range().dbMinC() + 1e-9) {
                 continue;
             }
@@ -234,20 +230,43 @@ public final class PsychroChart {
             double y1 = y0 + dy * reach;
             p.beginGroup("enthalpy-scale:" + c.label());
             p.line(x0, y0, x1, y1, Stroke.solid(theme.enthalpy(), 0.9));
-            double angle = Math.toDegrees(Math.atan2(-dy, -dx));
-            String text = c == top ? c.label() + " " + Quantity.ENTHALPY.symbol(data.units()) : c.label();
-            double half = labels.boxWidth(text, style) / 2;
-            labels.centred(x1 + dx * (half + 2), y1 + dy * (half + 2), text, style.rotated(angle));
+            TextStyle rotated = style.rotated(Math.toDegrees(Math.atan2(-dy, -dx)));
+            String withUnit = c.label() + " " + Quantity.ENTHALPY.symbol(data.units());
+            if (!unitShown && labelOutward(labels, x1, y1, dx, dy, withUnit, rotated)) {
+                unitShown = true;
+            } else {
+                labelOutward(labels, x1, y1, dx, dy, c.label(), rotated);
+            }
             p.endGroup();
         }
     }
 
+    private static boolean labelOutward(Labels labels, double x, double y, double dx, double dy, String text,
+                                        TextStyle style) {
+        double half = labels.boxWidth(text, style) / 2;
+        return labels.centred(x + dx * (half + 2), y + dy * (half + 2), text, style);
+    }
+
     private void paintCurveLabels(Theme theme, ChartViewport vp, Labels labels, List<ChartCurve> curves) {
         double small = theme.smallText();
-        ChartCurve lastVolume = null;
-        for (ChartCurve c : curves) {
-            if (c.kind() == ChartCurve.Kind.SPECIFIC_VOLUME) {
-                lastVolume = c;
+        boolean volumeUnitShown = false;
+        for (int k = curves.size() - 1; k >= 0; k--) {
+            ChartCurve c = curves.get(k);
+            if (c.kind() != ChartCurve.Kind.SPECIFIC_VOLUME) {
+                continue;
+            }
+            double wLabel = vp.range().wMin() + vp.range().wSpan() * 0.07;
+            int i = indexNearestW(c, wLabel);
+            if (i < 0) {
+                continue;
+            }
+            double angle = angleAt(vp, c, i);
+            TextStyle vs = TextStyle.of(small, theme.volume()).rotated(angle);
+            String withUnit = c.label() + " " + Quantity.SPECIFIC_VOLUME.symbol(data.units());
+            if (!volumeUnitShown && labelAlongLine(vp, labels, c, i, angle, withUnit, vs)) {
+                volumeUnitShown = true;
+            } else {
+                labelAlongLine(vp, labels, c, i, angle, c.label(), vs);
             }
         }
         for (ChartCurve c : curves) {
@@ -260,23 +279,18 @@ public final class PsychroChart {
                     double y = vp.y(c.humidityRatio()[0]);
                     labels.firstFree(c.label(), TextStyle.of(small, theme.wetBulb()), x - 14, y - 12, x - 20, y - 4);
                 }
-                case SPECIFIC_VOLUME -> {
-                    double wLabel = vp.range().wMin() + vp.range().wSpan() * 0.07;
-                    int i = indexNearestW(c, wLabel);
-                    if (i >= 0) {
-                        double angle = angleAt(vp, c, i);
-                        String text = c == lastVolume
-                                ? c.label() + " " + Quantity.SPECIFIC_VOLUME.symbol(data.units()) : c.label();
-                        TextStyle vs = TextStyle.of(small, theme.volume()).rotated(angle);
-                        double along = labels.boxWidth(text, vs) / 2 - 14;
-                        double rad = Math.toRadians(angle);
-                        labels.centred(vp.x(c.dryBulbC()[i]) + 10 + Math.cos(rad) * along,
-                                vp.y(c.humidityRatio()[i]) + Math.sin(rad) * along, text, vs);
-                    }
-                }
                 default -> { }
             }
         }
+    }
+
+    /** A label that starts just right of sample i and runs up the line. */
+    private static boolean labelAlongLine(ChartViewport vp, Labels labels, ChartCurve c, int i, double angle,
+                                          String text, TextStyle style) {
+        double along = labels.boxWidth(text, style) / 2 - 14;
+        double rad = Math.toRadians(angle);
+        return labels.centred(vp.x(c.dryBulbC()[i]) + 10 + Math.cos(rad) * along,
+                vp.y(c.humidityRatio()[i]) + Math.sin(rad) * along, text, style);
     }
 
     /** Labels a curve at a fraction of the visible width, or where it leaves the top of the plot. */

@@ -111,17 +111,26 @@ public final class MinMaxDecimator {
         java.util.Arrays.fill(min, 0, columns, Double.NaN);
         java.util.Arrays.fill(max, 0, columns, Double.NaN);
         double perColumn = vp.spanS() / columns;
-        for (int i = lowerBound(timeS, vp.startS()); i < timeS.length && timeS[i] <= vp.endS(); i++) {
-            double v = values[i];
-            if (Double.isNaN(v)) {
-                continue;
+        int n = timeS.length;
+        int i = lowerBound(timeS, vp.startS());
+        for (int c = 0; c < columns && i < n; c++) {
+            // the last column also takes samples exactly at the window's end
+            double columnEnd = c == columns - 1 ? Math.nextUp(vp.endS()) : vp.startS() + (c + 1) * perColumn;
+            double lo = Double.POSITIVE_INFINITY;
+            double hi = Double.NEGATIVE_INFINITY;
+            for (; i < n && timeS[i] < columnEnd; i++) {
+                double v = values[i];
+                // NaN fails both tests and is skipped
+                if (v < lo) {
+                    lo = v;
+                }
+                if (v > hi) {
+                    hi = v;
+                }
             }
-            int c = (int) Math.min(columns - 1, Math.floor((timeS[i] - vp.startS()) / perColumn));
-            if (!(min[c] <= v)) {
-                min[c] = v;
-            }
-            if (!(max[c] >= v)) {
-                max[c] = v;
+            if (lo <= hi) {
+                min[c] = lo;
+                max[c] = hi;
             }
         }
         return columns;

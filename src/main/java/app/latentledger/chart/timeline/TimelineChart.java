@@ -31,8 +31,6 @@ public final class TimelineChart {
     private final OnRuns blower;
     private final MinMaxDecimator decimator = new MinMaxDecimator();
     private final double[][] scratch = new double[2][];
-    private double[] envMin;
-    private double[] envMax;
 
     public TimelineChart(TimelineData data) {
         this.data = data;
@@ -134,21 +132,12 @@ public final class TimelineChart {
                                   TimelineLayout.Band band, Quantity q, String header, double[] ret, double[] sup,
                                   String key) {
         UnitSystem u = data.units();
-        // decimate both first: their envelope sets the value axis
-        int nr = decimator.decimate(data.timeS(), ret, vp);
-        double[][] r = {copy(decimator.xs(), nr), copy(decimator.ys(), nr)};
-        int ns = decimator.decimate(data.timeS(), sup, vp);
-        double[][] s = {copy(decimator.xs(), ns), copy(decimator.ys(), ns)};
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        for (double[] ys : new double[][] {r[1], s[1]}) {
-            for (double v : ys) {
-                if (!Double.isNaN(v)) {
-                    lo = Math.min(lo, v);
-                    hi = Math.max(hi, v);
-                }
-            }
-        }
+        boolean reduced = bandsShown(vp);
+        Series r = reduced ? Series.envelope(data.timeS(), ret, vp) : Series.line(decimator, data.timeS(), ret, vp);
+        Series s = reduced ? Series.envelope(data.timeS(), sup, vp) : Series.line(decimator, data.timeS(), sup, vp);
+        // the envelope of both sets the value axis
+        double lo = Math.min(r.lo(), s.lo());
+        double hi = Math.max(r.hi(), s.hi());
         if (!(hi >= lo)) {
             lo = 0;
             hi = 1;
@@ -173,22 +162,21 @@ public final class TimelineChart {
 
         p.save();
         p.clip(vp.left(), band.top(), vp.width(), band.height());
-        boolean reduced = decimator.reduced();
         p.beginGroup("series:supply-" + key);
         Stroke supplyStroke = new Stroke(theme.supplyAir(), 2.2, DashPattern.DASHED);
         if (reduced) {
             // edges of a supply band zigzag with every part-cycle in a column: fill only
-            paintEnvelope(p, vp, sup, axis, q, u, theme.supplyAir(), null);
+            paintEnvelope(p, vp, s, axis, q, u, theme.supplyAir(), null);
         } else {
-            paintLine(p, s[0], s[1], ns, axis, q, u, supplyStroke);
+            paintLine(p, s.xs(), s.ys(), s.xs().length, axis, q, u, supplyStroke);
         }
         p.endGroup();
         p.beginGroup("series:return-" + key);
         Stroke returnStroke = new Stroke(theme.returnAir(), 2.2, DashPattern.SOLID);
         if (reduced) {
-            paintEnvelope(p, vp, ret, axis, q, u, theme.returnAir(), returnStroke.withWidth(1.6));
+            paintEnvelope(p, vp, r, axis, q, u, theme.returnAir(), returnStroke.withWidth(1.6));
         } else {
-            paintLine(p, r[0], r[1], nr, axis, q, u, returnStroke);
+            paintLine(p, r.xs(), r.ys(), r.xs().length, axis, q, u, returnStroke);
         }
         p.endGroup();
         p.restore();
@@ -217,14 +205,11 @@ public final class TimelineChart {
      * A series with several samples per pixel column, drawn as its min/max band: filled lightly (and
      * edged, if {@code edge} is given), so a week of cycling reads as a band, not a scribble.
      */
-    private void paintEnvelope(Painter p, TimeViewport vp, double[] values, ValueAxis axis, Quantity q, UnitSystem u,
+    private void paintEnvelope(Painter p, TimeViewport vp, Series series, ValueAxis axis, Quantity q, UnitSystem u,
                                Colour colour, Stroke edge) {
-        int columns = (int) Math.ceil(vp.width());
-        if (envMin == null || envMin.length < columns) {
-            envMin = new double[columns];
-            envMax = new double[columns];
-        }
-        int n = MinMaxDecimator.envelope(data.timeS(), values, vp, envMin, envMax);
+        double[] envMin = series.ys();
+        double[] envMax = series.ys2();
+        int n = envMin.length;
         int start = 0;
         for (int c = 0; c <= n; c++) {
             if (c == n || Double.isNaN(envMin[c])) {
@@ -253,10 +238,6 @@ public final class TimelineChart {
                 start = c + 1;
             }
         }
-    }
-
-    private static double[] copy(double[] a, int n) {
-        return java.util.Arrays.copyOf(a, n);
     }
 
     /** Draws a decimated series in display units, split into pieces at NaN gaps. */
@@ -432,6 +413,44 @@ public final class TimelineChart {
             p.text(x, y + 9, t.label(), t.major() ? ts.emphasised() : ts);
         }
         p.endGroup();
+    }
+
+    /**
+     * A series ready to draw: either decimated points (xs, ys) or, when reduced, per-column minima
+     * (ys) and maxima (ys2) with xs unused; lo and hi are its finite extremes.
+     */
+    private record Series(double[] xs, double[] ys, double[] ys2, double lo, double hi) {
+
+        static Series line(MinMaxDecimator d, double[] t, double[] v, TimeViewport vp) {
+            int n = d.decimate(t, v, vp);
+            double[] xs = java.util.Arrays.copyOf(d.xs(), n);
+            double[] ys = java.util.Arrays.copyOf(d.ys(), n);
+            double[] range = range(ys, ys);
+            return new Series(xs, ys, null, range[0], range[1]);
+        }
+
+        static Series envelope(double[] t, double[] v, TimeViewport vp) {
+            int columns = (int) Math.ceil(vp.width());
+            double[] min = new double[columns];
+            double[] max = new double[columns];
+            MinMaxDecimator.envelope(t, v, vp, min, max);
+            double[] range = range(min, max);
+            return new Series(null, min, max, range[0], range[1]);
+        }
+
+        private static double[] range(double[] a, double[] b) {
+            double lo = Double.POSITIVE_INFINITY;
+            double hi = Double.NEGATIVE_INFINITY;
+            for (int i = 0; i < a.length; i++) {
+                if (!Double.isNaN(a[i])) {
+                    lo = Math.min(lo, a[i]);
+                }
+                if (!Double.isNaN(b[i])) {
+                    hi = Math.max(hi, b[i]);
+                }
+            }
+            return new double[] {lo, hi};
+        }
     }
 
     /** A linear value axis over a band, in display units. */
