@@ -287,8 +287,9 @@ public final class TimelineChart {
                 Marker.TRIANGLE_DOWN.paint(p, x, band.bottom() - 8, 11, theme.coil(), null);
             }
             if (cycleWidth >= 220) {
-                p.text(x + 8, band.bottom() - 10, "removal begins", TextStyle.of(theme.smallText(), theme.coil())
-                        .align(TextStyle.HAlign.LEFT, TextStyle.VAlign.BOTTOM));
+                p.text(x + 6, band.top() + theme.baseText() * 1.8, "removal begins",
+                        TextStyle.of(theme.smallText(), theme.coil()).align(TextStyle.HAlign.LEFT,
+                                TextStyle.VAlign.TOP));
             }
         }
         p.restore();

@@ -11,7 +11,6 @@ import javafx.scene.paint.Color;
 import javafx.scene.shape.StrokeLineCap;
 import javafx.scene.shape.StrokeLineJoin;
 import javafx.scene.text.Font;
-import javafx.scene.text.FontWeight;
 import javafx.scene.text.TextAlignment;
 
 /** Paints the chart drawing calls onto a JavaFX canvas. */
@@ -118,14 +117,13 @@ public final class CanvasPainter implements Painter {
         });
         // MIDDLE is centred on the digits' height rather than the font box, which sits too low
         double shift = 0;
-        VPos base = VPos.BASELINE;
         switch (style.vAlign()) {
             case TOP -> shift = measurer.ascent(style.size());
             case MIDDLE -> shift = measurer.ascent(style.size()) / 2;
             case BOTTOM -> shift = -measurer.descent(style.size());
             default -> { }
         }
-        g.setTextBaseline(base);
+        g.setTextBaseline(VPos.BASELINE);
         if (style.rotationDeg() == 0) {
             g.fillText(text, x, y + shift);
         } else {

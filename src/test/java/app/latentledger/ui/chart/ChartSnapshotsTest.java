@@ -48,6 +48,17 @@ class ChartSnapshotsTest {
                 shoot(robot, () -> new PsychroChartView(vm), "psychro-" + u.key() + "-" + t.name());
             }
         }
+        // zoomed about the coil processes, then a tap on the after-supply state
+        PsychroChartViewModel vm = new PsychroChartViewModel(SaltreedDemo.beforeAfter(UnitSystem.IP));
+        shoot(robot, () -> new PsychroChartView(vm), "psychro-ip-zoomed");
+        var supply = vm.chart().data().overlays().get(1).leaving();
+        robot.interact(() -> {
+            var vp = vm.viewportProperty().get();
+            vm.zoom(3, vp.x(supply.dryBulbC()), vp.y(supply.humidityRatio()));
+            var z = vm.viewportProperty().get();
+            vm.tap(z.x(supply.dryBulbC()), z.y(supply.humidityRatio()));
+        });
+        save(robot, "psychro-ip-zoomed");
     }
 
     @Test
