@@ -79,6 +79,16 @@ public final class PsychroChart {
         return Optional.ofNullable(best);
     }
 
+    /**
+     * Paints the whole, unzoomed chart into a {@code width} × {@code height} area: what the report
+     * draws. For print, paint at screen size (e.g. 1000 × 620) and let the painter scale the
+     * vectors to the page, so type and line weights keep their proportions.
+     */
+    public void paintWhole(Painter p, Theme theme, double width, double height) {
+        PsychroChartLayout layout = PsychroChartLayout.forSize(width, height, theme);
+        paint(p, theme, layout, initialViewport(layout));
+    }
+
     /** Paints the whole chart: frame, line families, axes, overlays, legend and title. */
     public void paint(Painter p, Theme theme, PsychroChartLayout layout, ChartViewport vp) {
         p.rect(0, 0, layout.width(), layout.height(), theme.background(), null);

@@ -54,6 +54,15 @@ public final class TimelineChart {
         return OptionalInt.empty();
     }
 
+    /**
+     * Paints the whole log into a {@code width} × {@code height} area: what the report draws (see
+     * {@code PsychroChart.paintWhole} on sizes for print).
+     */
+    public void paintWhole(Painter p, Theme theme, double width, double height) {
+        TimelineLayout layout = TimelineLayout.forSize(width, height, theme);
+        paint(p, theme, layout, layout.viewport(data), -1);
+    }
+
     /** Paints everything; {@code selectedCycle} (−1 for none) is shaded across the panels. */
     public void paint(Painter p, Theme theme, TimelineLayout layout, TimeViewport vp, int selectedCycle) {
         UnitSystem u = data.units();

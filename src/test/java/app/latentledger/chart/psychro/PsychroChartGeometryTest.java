@@ -183,4 +183,16 @@ class PsychroChartGeometryTest {
         assertEquals(g.vp.x(adp), ring.cx(), 1e-9);
         assertTrue(ChartGeometry.distance(g.polyline("saturation"), ring.cx(), ring.cy()) < 1.0);
     }
+
+    @Test
+    @DisplayName("painted whole at print size, every label's anchor lies inside the chart area")
+    void printSizedChartKeepsItsLabelsInside() {
+        PsychroChart chart = new PsychroChart(app.latentledger.chart.demo.SaltreedDemo.beforeAfter(UnitSystem.SI));
+        RecordingPainter rec = new RecordingPainter();
+        chart.paintWhole(rec, app.latentledger.chart.draw.Theme.LIGHT, 1000, 620);
+        assertTrue(rec.balanced());
+        for (RecordingPainter.Text t : rec.ops(RecordingPainter.Text.class, null)) {
+            assertTrue(t.x() >= 0 && t.x() <= 1000 && t.y() >= 0 && t.y() <= 620, t.toString());
+        }
+    }
 }
