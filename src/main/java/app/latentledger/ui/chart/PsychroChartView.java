@@ -1,0 +1,96 @@
+package app.latentledger.ui.chart;
+
+import app.latentledger.chart.draw.Painter;
+import app.latentledger.chart.psychro.ChartPoint;
+import app.latentledger.chart.psychro.ChartViewport;
+import javafx.scene.layout.BorderPane;
+
+/**
+ * The psychrometric chart on screen: the canvas, the tapped state's readout and zoom buttons.
+ * Binds and forwards gestures only; the view model holds the state. The view keeps a strong
+ * reference to its view model because bindings alone would let it be collected.
+ */
+public final class PsychroChartView extends BorderPane {
+    private final PsychroChartViewModel viewModel;
+    private final Surface surface;
+    private final ChartSidePanel side;
+
+    public PsychroChartView(PsychroChartViewModel viewModel) {
+        this.viewModel = viewModel;
+        this.surface = new Surface();
+        surface.setId("psychro-canvas");
+        side = new ChartSidePanel("Tapped state", viewModel.readoutProperty());
+        side.addButton("zoom-in", "Zoom in", () -> zoomAboutCentre(1.4));
+        side.addButton("zoom-out", "Zoom out", () -> zoomAboutCentre(1 / 1.4));
+        side.addButton("whole-chart", "Whole chart", viewModel::reset);
+        side.addSpacer();
+        setCenter(surface);
+        setRight(side);
+        viewModel.viewportProperty().addListener((o, a, b) -> surface.repaint());
+        viewModel.selectedProperty().addListener((o, a, b) -> surface.repaint());
+        viewModel.themeProperty().addListener((o, a, b) -> applyTheme());
+        applyTheme();
+    }
+
+    public PsychroChartViewModel viewModel() {
+        return viewModel;
+    }
+
+    private void applyTheme() {
+        side.applyTheme(viewModel.themeProperty().get());
+        setStyle("-fx-background-color: " + viewModel.themeProperty().get().background().hex() + ";");
+        if (surface.getWidth() > 0) {
+            viewModel.resize(surface.canvas().getWidth(), surface.canvas().getHeight());
+        }
+        surface.repaint();
+    }
+
+    private void zoomAboutCentre(double factor) {
+        ChartViewport vp = viewModel.viewportProperty().get();
+        if (vp != null) {
+            viewModel.zoom(factor, vp.left() + vp.width() / 2, vp.top() + vp.height() / 2);
+        }
+    }
+
+    /** Screen position of a plotted state, in this view's coordinates (for tests and tooltips). */
+    public double[] screenPosition(ChartPoint p) {
+        ChartViewport vp = viewModel.viewportProperty().get();
+        return new double[] {surface.getLayoutX() + vp.x(p.dryBulbC()), surface.getLayoutY() + vp.y(p.humidityRatio())};
+    }
+
+    private final class Surface extends ChartCanvas {
+        @Override
+        void resized(double width, double height) {
+            viewModel.resize(width, height);
+        }
+
+        @Override
+        void paint(Painter painter, double width, double height) {
+            if (viewModel.layout() == null || viewModel.viewportProperty().get() == null) {
+                return;
+            }
+            viewModel.chart().paint(painter, viewModel.themeProperty().get(), viewModel.layout(),
+                    viewModel.viewportProperty().get());
+            ChartPoint sel = viewModel.selectedProperty().get();
+            if (sel != null) {
+                viewModel.chart().paintSelection(painter, viewModel.themeProperty().get(),
+                        viewModel.viewportProperty().get(), sel);
+            }
+        }
+
+        @Override
+        void zoom(double factor, double x, double y) {
+            viewModel.zoom(factor, x, y);
+        }
+
+        @Override
+        void pan(double dx, double dy) {
+            viewModel.pan(dx, dy);
+        }
+
+        @Override
+        void tap(double x, double y, int clicks) {
+            viewModel.tap(x, y);
+        }
+    }
+}
