@@ -13,7 +13,7 @@ import app.latentledger.core.psychro.SaturationPressure;
  * W = 0.621945·pw/(p − pw)), or from a wet bulb by eq. 33/35 when no RH was logged; enthalpy by
  * eq. 32; specific volume by eq. 28. Valid for −50 to 95 °C, the core's input limits.
  */
-final class AirSeries {
+public final class AirSeries {
     private static final HandbookEdition EDITION = HandbookEdition.SI;
 
     final int size;
@@ -26,6 +26,31 @@ final class AirSeries {
     /** 1 / v of the return air, kg dry air per m³: turns airflow into dry-air mass flow. */
     final double[] returnDryAirDensity;
     final boolean humidity;
+
+    /** Per-sample air of {@code log} at {@code pressurePa}, as the analysis sees it (before any probe-offset correction). */
+    public static AirSeries of(LogSeries log, double pressurePa) {
+        return new AirSeries(log, pressurePa);
+    }
+
+    /** Return humidity ratio per sample, kg/kg (NaN where missing), or null without return humidity. */
+    public double[] returnHumidityRatio() {
+        return returnW;
+    }
+
+    /** Supply humidity ratio per sample, kg/kg (NaN where missing), or null without supply humidity. */
+    public double[] supplyHumidityRatio() {
+        return supplyW;
+    }
+
+    /** Return dry bulb per sample, °C. */
+    public double[] returnDryBulbC() {
+        return returnDbC;
+    }
+
+    /** Supply dry bulb per sample, °C. */
+    public double[] supplyDryBulbC() {
+        return supplyDbC;
+    }
 
     AirSeries(LogSeries log, double pressurePa) {
         size = log.size();
