@@ -91,24 +91,33 @@ public enum HandbookEdition {
     }
 
     /**
-     * The psychrometer equation and its slope in one pass, for Newton's method: returns W(t*)
-     * and stores dW/dt* (per K) in {@code slope[0]}. The caller supplies pws(t*) and
-     * d(ln pws)/dT at t*, so a value it already has costs no further exp or log.
+     * The psychrometer equation with its first and second derivatives in one pass, for Halley's
+     * method: returns W(t*) and stores dW/dt* (per K) in {@code slope[0]} and d²W/dt*² (per K²) in
+     * {@code slope[1]}. The caller supplies pws(t*) and the first two derivatives of ln pws at t*,
+     * so a value it already has costs no further exp or log.
      */
     double humidityRatioAndSlope(double dryBulbC, double wetBulbC, double pressurePa, boolean iceBulb,
-                                 double pws, double dLnPwsDT, double[] slope) {
-        double denom = pressurePa - pws;
-        double wsStar = MASS_RATIO * pws / denom;
-        double dWsDT = MASS_RATIO * pressurePa * pws * dLnPwsDT / (denom * denom);
+                                 double pws, double dLnPwsDT, double d2LnPwsDT2, double[] slope) {
+        double q = pressurePa - pws;
+        double wsStar = MASS_RATIO * pws / q;
+        double dPws = pws * dLnPwsDT;
+        double d2Pws = pws * (dLnPwsDT * dLnPwsDT + d2LnPwsDT2);
+        double perK = degreesPerKelvin();
+        // Ws* and its derivatives per degree of this edition's scale
+        double dWs = MASS_RATIO * pressurePa * dPws / (q * q) / perK;
+        double d2Ws = MASS_RATIO * pressurePa * (d2Pws * q + 2 * dPws * dPws) / (q * q * q) / (perK * perK);
         double[] k = iceBulb ? ice : liquid;
         double t = scale(dryBulbC);
         double s = scale(wetBulbC);
         double d = k[0] + k[3] * t - k[4] * s;
         double w = ((k[0] - k[1] * s) * wsStar - k[2] * (t - s)) / d;
-        double perK = degreesPerKelvin();
-        // dN/ds with Ws' per degree of this scale; dW/ds = (dN/ds + e W) / D
-        double dN = -k[1] * wsStar + (k[0] - k[1] * s) * dWsDT / perK + k[2];
-        slope[0] = (dN + k[4] * w) / d * perK;
+        // W·D = N with D linear in s: W' = (N' + e W)/D, W'' = (N'' + 2 e W')/D
+        double dN = -k[1] * wsStar + (k[0] - k[1] * s) * dWs + k[2];
+        double d2N = -2 * k[1] * dWs + (k[0] - k[1] * s) * d2Ws;
+        double dW = (dN + k[4] * w) / d;
+        double d2W = (d2N + 2 * k[4] * dW) / d;
+        slope[0] = dW * perK;
+        slope[1] = d2W * perK * perK;
         return w;
     }
 
