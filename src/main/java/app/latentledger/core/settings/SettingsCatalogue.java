@@ -40,9 +40,7 @@ public final class SettingsCatalogue {
     public static final String THEME = "theme";
     public static final String PAPER = "paper";
 
-    private static final String TOLERANCE_SOURCE = "domain-practice.md §1.4, typical field kit (common practice, no source)";
-    private static final String TOLERANCE_RANGE = "0 to a value no field instrument worth computing with exceeds"
-            + " (common practice, no source)";
+    private static final String TOLERANCE_SOURCE = "typical field kit, domain-practice.md §1.4 (common practice, no source)";
 
     private static final List<ChoiceSetting> CHOICES = List.of(
             new ChoiceSetting(UNITS, "units", SettingGroup.UNITS_AND_SITE, List.of("ip", "si"), "ip",
@@ -98,7 +96,7 @@ public final class SettingsCatalogue {
 
     private static NumberSetting tolerance(String key, String label, Quantity q, double defaultSi, double maxSi) {
         return new NumberSetting(key, label, SettingGroup.INSTRUMENTS, q, defaultSi, 0.0, maxSi,
-                TOLERANCE_SOURCE + "; range " + TOLERANCE_RANGE);
+                TOLERANCE_SOURCE);
     }
 
     private static double fahrenheitDifference(double f) {
