@@ -118,7 +118,7 @@ public final class SettingsViewModel {
             showAll();
             return;
         }
-        save(next, row.label() + " " + next.choice(row.key()));
+        save(next, row.label() + ": " + ChoiceRow.caption(row.key(), next.choice(row.key())));
     }
 
     private void apply(NumberRow row, UnaryOperator<Settings> change) {

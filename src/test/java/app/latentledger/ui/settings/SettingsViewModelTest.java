@@ -80,6 +80,9 @@ class SettingsViewModelTest {
         vm.number(HIGH).commit();
         vm.choice(SettingsCatalogue.UNITS).choose("si");
         assertEquals("si", vm.choice(SettingsCatalogue.UNITS).valueProperty().get());
+        assertEquals("Saved units: SI  °C · L/s", vm.statusProperty().get());
+        // -450…4500 m is -1476.378…14763.78 ft (÷ 0.3048): the hint rounds inward in ft, exact in m
+        assertEquals("default 0 m · accepts -450 to 4500 m", vm.number(SettingsCatalogue.DEFAULT_ELEVATION).hintProperty().get());
         NumberRow high = vm.number(HIGH);
         assertEquals("L/s per kW", high.unitProperty().get());
         // 400 cfm/ton × 0.47194745 L/s per cfm ÷ 3.5168525 kW per ton = 53.678 L/s per kW (by hand, NIST SP 811 factors)
@@ -91,6 +94,7 @@ class SettingsViewModelTest {
         // 0.5 K typed in SI is 0.9 °F (× 1.8)
         vm.choice(SettingsCatalogue.UNITS).choose("ip");
         assertEquals("0.9", vm.number(SettingsCatalogue.TOL_DRY_BULB).textProperty().get());
+        assertEquals("default 0 ft · accepts -1476 to 14763 ft", vm.number(SettingsCatalogue.DEFAULT_ELEVATION).hintProperty().get());
     }
 
     @Test
