@@ -15,6 +15,7 @@ import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.core.findings.Thresholds;
 import app.latentledger.core.psychro.MoistAirState;
 import app.latentledger.core.psychro.SitePressure;
+import app.latentledger.core.settings.Settings;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 
@@ -48,21 +49,24 @@ public final class CoilCommand implements Command {
                 + "  with --outdoor-* and --outdoor-fraction (outdoor air's share of the airflow by volume, %),\n"
                 + "  return is the return air and the entering air is computed as the adiabatic mix\n"
                 + "  (outdoor readings use the same --tol-db/--tol-wb/--tol-rh/--tol-dew-point; fraction ±5 %-points)\n"
-                + "  tolerances are ± half-widths in °F (ip) or K (si); defaults ±0.5 °F db and wb, ±2 %RH,\n"
-                + "  ±1 °F dew point and coil, ±10 % airflow, ±2 % condensate volume\n"
+                + "  tolerances are ± half-widths in °F (ip) or K (si); defaults from 'settings show' (out of the box\n"
+                + "  ±0.5 °F db and wb, ±2 %RH, ±1 °F dew point and coil, ±10 % airflow, ±2 % condensate volume)\n"
                 + "  --airflow-at: where the airflow was measured (default return; with outdoor air it is the coil's\n"
                 + "  whole airflow, read downstream of the outdoor-air intake: return|mixed = entering air, or supply);\n"
                 + "  --condensate is in mL in both unit systems\n"
-                + "  --rh-target: indoor RH target for findings (default 60 %)\n"
+                + "  --rh-target: indoor RH target for findings (default: the stored setting, 60 % out of the box)\n"
+                + "  --units, the elevation and every finding threshold default to the stored settings\n"
+                + "  (latent-ledger [--data-dir DIR] settings show); no ledger yet means ip, sea level, the catalogue\n"
                 + "  verdict: dehumidifying | not-dehumidifying | cant-tell (margin within its k = 2 uncertainty)\n";
     }
 
     @Override
     public int run(Args args, CliContext context) {
-        UnitSystem units = UnitOptions.units(args);
-        SitePressure site = UnitOptions.site(args, units);
-        CoilReadings readings = CoilOptions.read(args, units, site);
-        ThresholdSettings thresholds = thresholds(args);
+        Settings settings = CommandSettings.read(context);
+        UnitSystem units = UnitOptions.units(args, settings.units());
+        SitePressure site = UnitOptions.site(args, units, settings.defaultElevationM());
+        CoilReadings readings = CoilOptions.read(args, units, site, settings.tolerances());
+        ThresholdSettings thresholds = thresholds(args, settings);
         boolean json = args.flag("json");
         args.rejectUnknown();
         CoilResult result = CoilCheck.run(readings, thresholds, units);
@@ -70,16 +74,17 @@ public final class CoilCommand implements Command {
         return Cli.OK;
     }
 
-    private static ThresholdSettings thresholds(Args args) {
+    /** The stored thresholds, with {@code --rh-target} in place of the stored indoor RH target when given. */
+    private static ThresholdSettings thresholds(Args args, Settings settings) {
         Double target = args.number("rh-target");
         if (target == null) {
-            return ThresholdSettings.DEFAULTS;
+            return settings.thresholds();
         }
         if (!(target > 0 && target < 100)) {
             throw UnitOptions.refused(new InvalidInputException("indoor RH target", Quantity.RELATIVE_HUMIDITY,
                     target, 1, 99, null), UnitSystem.IP, "--rh-target");
         }
-        Map<String, Double> overrides = new HashMap<>();
+        Map<String, Double> overrides = new HashMap<>(settings.thresholds().overridesSi());
         overrides.put(Thresholds.INDOOR_RH_TARGET.key(), target);
         return new ThresholdSettings(overrides);
     }

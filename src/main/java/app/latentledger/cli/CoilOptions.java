@@ -11,6 +11,7 @@ import app.latentledger.core.coil.OutdoorAir;
 import app.latentledger.core.coil.Tolerances;
 import app.latentledger.core.psychro.HandbookEdition;
 import app.latentledger.core.psychro.SitePressure;
+import app.latentledger.core.settings.InstrumentTolerances;
 import app.latentledger.core.units.Conversions;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
@@ -43,16 +44,17 @@ final class CoilOptions {
     private CoilOptions() {
     }
 
-    static CoilReadings read(Args args, UnitSystem units, SitePressure site) {
+    /** @param defaults the tolerances a reading gets when no {@code --tol-*} option is given (from settings) */
+    static CoilReadings read(Args args, UnitSystem units, SitePressure site, InstrumentTolerances defaults) {
         double p = site.pressurePa();
-        double tolDb = tolerance(args, "tol-db", Quantity.TEMPERATURE_DIFFERENCE, units, Tolerances.DRY_BULB_K);
+        double tolDb = tolerance(args, "tol-db", Quantity.TEMPERATURE_DIFFERENCE, units, defaults.dryBulbK());
         Map<HumidityKind, Double> tolHumidity = new LinkedHashMap<>();
         tolHumidity.put(HumidityKind.WET_BULB,
-                tolerance(args, "tol-wb", Quantity.TEMPERATURE_DIFFERENCE, units, Tolerances.WET_BULB_K));
+                tolerance(args, "tol-wb", Quantity.TEMPERATURE_DIFFERENCE, units, defaults.wetBulbK()));
         tolHumidity.put(HumidityKind.RELATIVE_HUMIDITY,
-                tolerance(args, "tol-rh", Quantity.RELATIVE_HUMIDITY, units, Tolerances.RELATIVE_HUMIDITY_PCT));
+                tolerance(args, "tol-rh", Quantity.RELATIVE_HUMIDITY, units, defaults.relativeHumidityPct()));
         tolHumidity.put(HumidityKind.DEW_POINT,
-                tolerance(args, "tol-dew-point", Quantity.TEMPERATURE_DIFFERENCE, units, Tolerances.DEW_POINT_K));
+                tolerance(args, "tol-dew-point", Quantity.TEMPERATURE_DIFFERENCE, units, defaults.dewPointK()));
         AirReading entering = air(args, units, p, "return", tolDb, tolHumidity);
         AirReading leaving = air(args, units, p, "supply", tolDb, tolHumidity);
         OutdoorAir outdoor = outdoor(args, units, p, tolDb, tolHumidity);
@@ -62,11 +64,11 @@ final class CoilOptions {
             throw new UsageException("--airflow is required (" + Quantity.AIRFLOW.symbol(units) + ")");
         }
         double airflowTol = tolerance(args, "tol-airflow-pct", Quantity.RELATIVE_HUMIDITY, units,
-                Tolerances.AIRFLOW_FRACTION * 100) / 100.0;
+                defaults.airflowFraction() * 100) / 100.0;
         AirflowLocation at = airflowAt(args.value("airflow-at"));
 
         Double coil = UnitOptions.si(args, "coil-temp", Quantity.TEMPERATURE, units);
-        double coilTol = tolerance(args, "tol-coil", Quantity.TEMPERATURE_DIFFERENCE, units, Tolerances.COIL_K);
+        double coilTol = tolerance(args, "tol-coil", Quantity.TEMPERATURE_DIFFERENCE, units, defaults.coilK());
         String kindText = args.value("coil-temp-kind");
         CoilTemperatureKind coilKind = null;
         if (coil != null) {
@@ -80,7 +82,7 @@ final class CoilOptions {
         }
 
         double nominal = nominalW(args);
-        Condensate condensate = condensate(args, units);
+        Condensate condensate = condensate(args, units, defaults.condensateFraction());
         try {
             return new CoilReadings(p, entering, leaving, airflow, airflowTol, at,
                     coil == null ? Double.NaN : coil, coilTol, coilKind, nominal, condensate, outdoor);
@@ -195,12 +197,12 @@ final class CoilOptions {
         return kw != null ? Quantity.POWER_LARGE.fromDisplay(UnitSystem.SI, kw) : Double.NaN;
     }
 
-    private static Condensate condensate(Args args, UnitSystem units) {
+    private static Condensate condensate(Args args, UnitSystem units, double defaultFraction) {
         Double ml = args.number("condensate");
         Double floz = args.number("condensate-floz");
         Double minutes = args.number("condensate-minutes");
         double tolPct = tolerance(args, "tol-condensate-pct", Quantity.RELATIVE_HUMIDITY, units,
-                Tolerances.CONDENSATE_FRACTION * 100);
+                defaultFraction * 100);
         if (ml != null && floz != null) {
             throw new UsageException("give --condensate (mL) or --condensate-floz, not both");
         }

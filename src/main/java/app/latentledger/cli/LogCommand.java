@@ -4,8 +4,8 @@ import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.cycles.LogNotAnalysableException;
 import app.latentledger.core.cycles.RunCycleAnalysis;
 import app.latentledger.core.cycles.RunCycleReport;
-import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.core.psychro.SitePressure;
+import app.latentledger.core.settings.Settings;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.io.logcsv.LogCsvImporter;
@@ -46,13 +46,15 @@ public final class LogCommand implements Command {
                 + "  --units   temperatures in the file and the output: ip (°F, lb, default) or si (°C, kg)\n"
                 + "  --airflow air handler airflow (cfm | L/s); without it moisture is given only as fractions\n"
                 + "  --map     read another logger's header as a field, e.g. --map \"RA Temp=return_db\" (repeatable)\n"
-                + "  --json    machine-readable output\n";
+                + "  --json    machine-readable output\n"
+                + "  --units, the elevation and the finding thresholds default to the stored settings (settings show)\n";
     }
 
     @Override
     public int run(Args args, CliContext context) {
-        UnitSystem units = UnitOptions.units(args);
-        SitePressure site = UnitOptions.site(args, units);
+        Settings settings = CommandSettings.read(context);
+        UnitSystem units = UnitOptions.units(args, settings.units());
+        SitePressure site = UnitOptions.site(args, units, settings.defaultElevationM());
         Double airflow = UnitOptions.si(args, "airflow", Quantity.AIRFLOW, units);
         Map<String, String> maps = maps(args.values("map"));
         boolean json = args.flag("json");
@@ -66,7 +68,7 @@ public final class LogCommand implements Command {
         LogImport imported = importLog(file, units, maps, context.err());
         RunCycleReport report;
         try {
-            report = new RunCycleAnalysis(ThresholdSettings.DEFAULTS)
+            report = new RunCycleAnalysis(settings.thresholds())
                     .analyse(imported.series(), site.pressurePa(), airflow == null ? Double.NaN : airflow);
         } catch (InvalidInputException e) {
             throw UnitOptions.refused(e, units, e.field().equals("airflow") ? "--airflow" : null);

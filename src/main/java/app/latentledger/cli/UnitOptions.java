@@ -15,9 +15,14 @@ final class UnitOptions {
     }
 
     static UnitSystem units(Args args) {
+        return units(args, UnitSystem.IP);
+    }
+
+    /** {@code --units}, or {@code fallback} (the tech's stored setting) when not given. */
+    static UnitSystem units(Args args, UnitSystem fallback) {
         String u = args.value("units");
         if (u == null) {
-            return UnitSystem.IP;
+            return fallback;
         }
         try {
             return UnitSystem.parse(u);
@@ -27,6 +32,14 @@ final class UnitOptions {
     }
 
     static SitePressure site(Args args, UnitSystem units) {
+        return site(args, units, 0.0);
+    }
+
+    /**
+     * The site pressure from {@code --elevation} or {@code --pressure}; with neither, the standard
+     * atmosphere at {@code defaultElevationM} (the tech's stored default elevation; 0 m is sea level).
+     */
+    static SitePressure site(Args args, UnitSystem units, double defaultElevationM) {
         Double elevation = args.number("elevation");
         Double pressure = args.number("pressure");
         if (elevation != null && pressure != null) {
@@ -39,7 +52,7 @@ final class UnitOptions {
             if (elevation != null) {
                 return SitePressure.fromElevation(Quantity.ELEVATION.fromDisplay(units, elevation));
             }
-            return SitePressure.SEA_LEVEL;
+            return SitePressure.fromElevation(defaultElevationM);
         } catch (InvalidInputException e) {
             throw refused(e, units, elevation != null ? "--elevation" : "--pressure");
         }

@@ -17,6 +17,7 @@ public final class Ledger implements AutoCloseable {
     private final ReadingSetRepository readings;
     private final LogRepository logs;
     private final SnapshotRepository snapshots;
+    private final SettingsRepository settings;
 
     public Ledger(Database db) {
         this.db = db;
@@ -26,6 +27,7 @@ public final class Ledger implements AutoCloseable {
         this.readings = new ReadingSetRepository(db);
         this.logs = new LogRepository(db);
         this.snapshots = new SnapshotRepository(db);
+        this.settings = new SettingsRepository(db);
     }
 
     /**
@@ -69,6 +71,11 @@ public final class Ledger implements AutoCloseable {
 
     public SnapshotRepository snapshots() {
         return snapshots;
+    }
+
+    /** The tech's settings (units, tolerances, thresholds, theme, paper). */
+    public SettingsRepository settings() {
+        return settings;
     }
 
     /** Runs {@code work} as one transaction: every save inside it commits together or not at all. */

@@ -24,7 +24,8 @@ record Migration(int version, String name, List<String> statements) {
     static final List<String> FILES = List.of(
             "V1__sites_systems_visits_readings.sql",
             "V2__imported_logs.sql",
-            "V3__results_snapshots_and_labels.sql");
+            "V3__results_snapshots_and_labels.sql",
+            "V4__settings.sql");
 
     static List<Migration> all() {
         List<Migration> all = new ArrayList<>();

@@ -2,6 +2,8 @@ package app.latentledger.store;
 
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.ReadingSet;
+import app.latentledger.core.records.SnapshotSubject;
+import app.latentledger.core.settings.Settings;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -31,7 +33,7 @@ class MigrationsTest {
     Path dir;
 
     @ParameterizedTest(name = "database made at schema version {0}")
-    @ValueSource(ints = {1, 2})
+    @ValueSource(ints = {1, 2, 3})
     void opensADatabaseMadeByAnEarlierVersion(int version) throws Exception {
         assertTrue(version < Migration.latestVersion(), "list every earlier version here");
         Path file = dir.resolve("v" + version + ".db");
@@ -41,6 +43,9 @@ class MigrationsTest {
                 writeVersion1Rows(c);
                 if (version >= 2) {
                     writeVersion2Rows(c);
+                }
+                if (version >= 3) {
+                    writeVersion3Rows(c);
                 }
                 return null;
             });
@@ -52,7 +57,7 @@ class MigrationsTest {
             assertEquals(3 * 3516.85, ledger.systems().find("y").orElseThrow().nominalCapacityW());
             assertEquals("complaint", ledger.visits().find("v").orElseThrow().purpose().key());
             ReadingSet r = ledger.readings().find("r").orElseThrow();
-            assertEquals("", r.label(), "label added in V3 defaults to empty");
+            assertEquals(version >= 3 ? "before" : "", r.label(), "label added in V3 defaults to empty");
             assertEquals(24.4, r.returnDryBulb().valueSi());
             assertEquals(0.6655, r.airflow().volume().valueSi());
             if (version >= 2) {
@@ -60,10 +65,17 @@ class MigrationsTest {
                 assertEquals(3, log.samples().size());
                 assertEquals(25.5, log.samples().channels().get(0).value(2));
             }
+            if (version >= 3) {
+                assertEquals(1, ledger.snapshots().forSubject(SnapshotSubject.READING_SET, "r").size());
+            }
+            assertEquals(Settings.DEFAULTS, ledger.settings().load(), "no settings before V4: the defaults");
             // and the current code can write to it
             ledger.readings().save(TestRecords.fullReadingSet("r-new", "v", 1));
             assertEquals(2, ledger.readings().count());
-            assertEquals(appliedSteps(ledger.database()), List.of(1, 2, 3));
+            Settings changed = Settings.DEFAULTS.withChoice("units", "si");
+            ledger.settings().save(changed);
+            assertEquals(changed, ledger.settings().load());
+            assertEquals(appliedSteps(ledger.database()), List.of(1, 2, 3, 4));
         }
     }
 
@@ -89,7 +101,8 @@ class MigrationsTest {
         Map<String, String> released = Map.of(
                 "V1__sites_systems_visits_readings.sql", "00151f48aced556301847e1d4762c55fb5ac52b1b73e719d3a10623eeb57d518",
                 "V2__imported_logs.sql", "b83fdf6d6fc0db62404a6563f87aed961f82e97128605ea6d566277fce83894c",
-                "V3__results_snapshots_and_labels.sql", "22ac719e9e4eac5cc2007254d923acba9f96424c710d782779efe17e1cd33e68");
+                "V3__results_snapshots_and_labels.sql", "22ac719e9e4eac5cc2007254d923acba9f96424c710d782779efe17e1cd33e68",
+                "V4__settings.sql", "bb110aba1a9644e2a20a56beda68be0079e63521b3164734bcf3e049cb8142d5");
         for (Map.Entry<String, String> e : released.entrySet()) {
             try (InputStream in = Migration.class.getResourceAsStream("migrations/" + e.getKey())) {
                 assertEquals(e.getValue(), java.util.HexFormat.of().formatHex(
@@ -145,6 +158,13 @@ class MigrationsTest {
             p.setBytes(2, SampleChunks.values(new double[][] {{25.1, 25.3, 25.5}}, 0, 3));
             p.executeUpdate();
         }
+    }
+
+    /** Version 3 added reading-set labels and results snapshots. */
+    private static void writeVersion3Rows(Connection c) throws SQLException {
+        exec(c, "UPDATE reading_set SET label = 'before' WHERE id = 'r'");
+        exec(c, "INSERT INTO results_snapshot (id, reading_set_id, log_id, app_version, computed_at, json)"
+                + " VALUES ('snap', 'r', NULL, '0.1.0', '2023-07-01T09:31:00-04:00', '{}')");
     }
 
     private static void exec(Connection c, String sql) throws SQLException {

@@ -1,0 +1,118 @@
+package app.latentledger.ui.settings;
+
+import app.latentledger.core.settings.NumberSetting;
+import app.latentledger.core.settings.Settings;
+import app.latentledger.core.settings.ShownNumber;
+import app.latentledger.core.units.UnitSystem;
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+
+/**
+ * One numeric setting on the screen: the text the tech types, its unit, default and range in the
+ * tech's units, its source, and the message of the last refused value.
+ */
+public final class NumberRow {
+    private final NumberSetting setting;
+    private final SettingsViewModel owner;
+    private final StringProperty text = new SimpleStringProperty("");
+    private final ReadOnlyStringWrapper unit = new ReadOnlyStringWrapper("");
+    private final ReadOnlyStringWrapper hint = new ReadOnlyStringWrapper("");
+    private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper("");
+    private final SimpleBooleanProperty changed = new SimpleBooleanProperty();
+
+    NumberRow(NumberSetting setting, SettingsViewModel owner) {
+        this.setting = setting;
+        this.owner = owner;
+    }
+
+    /** Shows the saved value in {@code s}'s units and forgets any typing not committed. */
+    void show(Settings s) {
+        UnitSystem u = s.units();
+        text.set(shown(s.numberSi(setting.key()), u));
+        unit.set(setting.quantity().symbol(u));
+        String symbol = unit.get().isEmpty() ? "" : " " + unit.get();
+        hint.set("default " + shown(setting.defaultSi(), u) + symbol + " · accepts " + rangeEnd(setting.minSi(), u, true)
+                + " to " + rangeEnd(setting.maxSi(), u, false) + symbol);
+        changed.set(!s.isDefault(setting.key()));
+    }
+
+    String shown(double si, UnitSystem u) {
+        return ShownNumber.text(setting.quantity().toDisplay(u, si));
+    }
+
+    /**
+     * A range end as a tech reads it: where the limit is a large converted number (elevation in ft:
+     * -1476.378 … 14763.7795) it is rounded inward to a whole number, so every value the hint
+     * promises is accepted; the refusal message keeps the exact limits.
+     */
+    private String rangeEnd(double si, UnitSystem u, boolean lower) {
+        double shown = setting.quantity().toDisplay(u, si);
+        double widest = Math.max(Math.abs(setting.quantity().toDisplay(u, setting.minSi())),
+                Math.abs(setting.quantity().toDisplay(u, setting.maxSi())));
+        if (widest < 1000) {
+            return ShownNumber.text(shown);
+        }
+        return ShownNumber.text(lower ? Math.ceil(shown - 1e-9) : Math.floor(shown + 1e-9));
+    }
+
+    void refuse(String why) {
+        message.set(why);
+    }
+
+    void clearMessage() {
+        message.set("");
+    }
+
+    /** Saves what was typed, or keeps the saved value and says why not. */
+    public void commit() {
+        owner.commit(this);
+    }
+
+    /** Puts the setting back to its default and saves that. */
+    public void resetToDefault() {
+        owner.reset(this);
+    }
+
+    public NumberSetting setting() {
+        return setting;
+    }
+
+    public String key() {
+        return setting.key();
+    }
+
+    public String label() {
+        return setting.label();
+    }
+
+    /** Where the default comes from; "common practice, no source" when nothing published gives it. */
+    public String source() {
+        return setting.source();
+    }
+
+    public StringProperty textProperty() {
+        return text;
+    }
+
+    public ReadOnlyStringProperty unitProperty() {
+        return unit.getReadOnlyProperty();
+    }
+
+    public ReadOnlyStringProperty hintProperty() {
+        return hint.getReadOnlyProperty();
+    }
+
+    /** Empty, or why the last value typed was refused. */
+    public ReadOnlyStringProperty messageProperty() {
+        return message.getReadOnlyProperty();
+    }
+
+    /** True when the saved value differs from the default. */
+    public ReadOnlyBooleanProperty changedProperty() {
+        return changed;
+    }
+}
