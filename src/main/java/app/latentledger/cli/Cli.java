@@ -29,7 +29,8 @@ public final class Cli {
 
     /** All commands this build offers. */
     public static Cli standard() {
-        return new Cli(List.of(new StateCommand(), new CoilCommand(), new LogCommand(), new VisitsCommand()));
+        return new Cli(List.of(new StateCommand(), new CoilCommand(), new LogCommand(), new VisitsCommand(),
+                new ReportCommand()));
     }
 
     public int run(List<String> words, PrintStream out, PrintStream err) {
