@@ -15,6 +15,21 @@ import java.util.List;
 public record BeforeAfter(CheckedReadings before, VisitEvidence beforeVisit, CheckedReadings after,
                           VisitEvidence afterVisit, AnalysedLog beforeLog, AnalysedLog afterLog) {
 
+    /** Whether the two sides come from two visits. */
+    public boolean acrossVisits() {
+        return beforeVisit != afterVisit;
+    }
+
+    /** "As found", or "Earlier visit" when two visits are compared. */
+    public String beforeTitle() {
+        return acrossVisits() ? "Earlier visit" : "As found";
+    }
+
+    /** "After the work", or "Later visit" when two visits are compared. */
+    public String afterTitle() {
+        return acrossVisits() ? "Later visit" : "After the work";
+    }
+
     /** The pair within one visit, or null when it has fewer than two complete reading sets. */
     static BeforeAfter within(VisitEvidence v) {
         List<CheckedReadings> sets = v.checkedReadings();

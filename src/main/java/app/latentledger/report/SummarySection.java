@@ -91,10 +91,13 @@ final class SummarySection {
 
     private void facts(Typeset t) {
         VisitEvidence latest = data.latest();
-        Site site = latest.site();
-        HvacSystem system = latest.system();
-        fact(t, "Site", site.name() + ", " + site.address() + " (elevation "
-                + Numbers.withUnit(Quantity.ELEVATION, units, site.elevationM()) + ")");
+        for (VisitEvidence v : data.visits()) {
+            Site s = v.site();
+            if (v == data.visits().get(0) || !s.id().equals(data.visits().get(0).site().id())) {
+                fact(t, "Site", s.name() + ", " + s.address() + " (elevation "
+                        + Numbers.withUnit(Quantity.ELEVATION, units, s.elevationM()) + ")");
+            }
+        }
         for (VisitEvidence v : data.visits()) {
             if (data.differentSystems() || v == data.visits().get(0)) {
                 HvacSystem s = v.system();
@@ -104,11 +107,8 @@ final class SummarySection {
                         + (s.blowerType().isEmpty() ? "" : "; blower " + s.blowerType()));
             }
         }
-        if (data.comparesVisits() && !data.differentSystems() && !system.id().equals(data.visits().get(0).system().id())) {
-            fact(t, "System", system.label());
-        }
         for (VisitEvidence v : data.visits()) {
-            fact(t, data.comparesVisits() ? (v == data.visits().get(0) ? "Before visit" : "After visit") : "Visit",
+            fact(t, data.comparesVisits() ? (v == data.visits().get(0) ? "Earlier visit" : "Later visit") : "Visit",
                     PlainWords.dateTime(v.visit().startedAt()) + " · " + PlainWords.purpose(v.visit().purpose())
                             + " · technician " + v.visit().technician());
         }
@@ -126,9 +126,9 @@ final class SummarySection {
         List<String[]> lines = new ArrayList<>();
         BeforeAfter pair = data.pair();
         if (pair != null) {
-            lines.add(new String[] {"As found (" + pair.before().name() + ", " + PlainWords.time(pair.before().set().takenAt())
+            lines.add(new String[] {pair.beforeTitle() + " (" + pair.before().name() + ", " + PlainWords.time(pair.before().set().takenAt())
                     + "): ", PlainWords.verdict(pair.before().result().verdict())});
-            lines.add(new String[] {"After the work (" + pair.after().name() + ", "
+            lines.add(new String[] {pair.afterTitle() + " (" + pair.after().name() + ", "
                     + PlainWords.time(pair.after().set().takenAt()) + "): ",
                     PlainWords.verdict(pair.after().result().verdict())});
             CoilResult b = pair.before().result();
@@ -211,8 +211,8 @@ final class SummarySection {
         BeforeAfter pair = data.pair();
         t.heading("What we found", 60);
         if (pair != null) {
-            findings(t, "As found", pair.before().result().findings());
-            findings(t, "After the work", pair.after().result().findings());
+            findings(t, pair.beforeTitle(), pair.before().result().findings());
+            findings(t, pair.afterTitle(), pair.after().result().findings());
         } else {
             for (CheckedReadings c : data.latest().checkedReadings()) {
                 findings(t, data.latest().checkedReadings().size() > 1 ? c.name() : null, c.result().findings());
