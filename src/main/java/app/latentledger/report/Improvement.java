@@ -83,9 +83,9 @@ public record Improvement(String key, String label, Quantity quantity, Estimate 
         AnalysedLog lb = pair.beforeLog();
         AnalysedLog la = pair.afterLog();
         if (lb != null && la != null && lb.analysed() && la.analysed()) {
-            rows.add(log("cyclesPerHour", "Compressor cycles per hour (logged)", Quantity.DIMENSIONLESS,
+            rows.add(log("cyclesPerHour", "Cycles per hour (logged)", Quantity.DIMENSIONLESS,
                     lb.report(), la.report(), RunCycleReport::cyclesPerHour, -1, 1));
-            rows.add(log("latentFraction", "Latent fraction of run time delivered (logged)", Quantity.FRACTION_PERCENT,
+            rows.add(log("latentFraction", "Latent fraction (logged)", Quantity.FRACTION_PERCENT,
                     lb.report(), la.report(), RunCycleReport::latentFractionMeasured, +1, 0));
         }
         return rows;
