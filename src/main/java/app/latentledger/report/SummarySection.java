@@ -90,7 +90,6 @@ final class SummarySection {
     }
 
     private void facts(Typeset t) {
-        VisitEvidence latest = data.latest();
         for (VisitEvidence v : data.visits()) {
             Site s = v.site();
             if (v == data.visits().get(0) || !s.id().equals(data.visits().get(0).site().id())) {
