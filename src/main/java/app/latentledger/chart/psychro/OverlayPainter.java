@@ -117,7 +117,9 @@ final class OverlayPainter {
             style.marker().paint(p, x, y, PsychroChart.MARKER_PX, theme.plotBackground(), Stroke.solid(style.colour(), 3));
         }
         TextStyle ts = TextStyle.of(theme.smallText() + 1, theme.text()).emphasised();
-        String text = prefix.isEmpty() ? pt.label() : prefix + pt.label().toLowerCase(java.util.Locale.ROOT);
+        // a label that already names its process ("Before return", as CoilChartSource makes it) is not prefixed twice
+        String text = prefix.isEmpty() || pt.label().regionMatches(true, 0, prefix, 0, prefix.length()) ? pt.label()
+                : prefix + pt.label().toLowerCase(java.util.Locale.ROOT);
         double half = labels.boxWidth(text, ts) / 2;
         double off = PsychroChart.MARKER_PX / 2 + 6;
         labels.firstFree(text, ts, x + off + half, y - 2, x + off + half, y - 20, x - off - half, y - 2,

@@ -1,0 +1,234 @@
+package app.latentledger.report;
+
+import app.latentledger.core.coil.CoilResult;
+import app.latentledger.core.coil.Estimate;
+import app.latentledger.core.coil.Measurand;
+import app.latentledger.core.records.Airflow;
+import app.latentledger.core.records.HumidityKind;
+import app.latentledger.core.records.HumidityReading;
+import app.latentledger.core.records.Measurement;
+import app.latentledger.core.records.ReadingSet;
+import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.UnitSystem;
+import app.latentledger.report.pdf.Ink;
+import app.latentledger.report.pdf.Table;
+import app.latentledger.report.pdf.Typeset;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Function;
+
+/**
+ * The readings as taken, each with the instrument tolerance it was entered with, and the coil
+ * check's results with their expanded uncertainty (k = 2), reading sets side by side.
+ */
+final class ReadingsSection {
+    /** Reading sets per table: more would squeeze the cells below a readable width. */
+    private static final int PER_TABLE = 3;
+
+    private final ReportData data;
+    private final UnitSystem units;
+
+    ReadingsSection(ReportData data) {
+        this.data = data;
+        this.units = data.units();
+    }
+
+    void write(Typeset t) {
+        t.heading("Readings taken", 120);
+        t.paragraph("Each reading with the tolerance (±) of the instrument it was taken with, as entered on site."
+                + " Temperatures in " + Quantity.TEMPERATURE.symbol(units) + ".", Ink.SMALL, 0);
+        for (VisitEvidence v : data.visits()) {
+            if (data.comparesVisits()) {
+                t.subheading("Visit of " + PlainWords.dateTime(v.visit().startedAt()), 60);
+            }
+            if (v.readings().isEmpty()) {
+                t.paragraph("No readings were stored on this visit.", Ink.BODY, 0);
+            }
+            for (List<CheckedReadings> chunk : chunks(v.readings())) {
+                readings(chunk).draw(t);
+            }
+        }
+        t.heading("Computed results", 120);
+        t.paragraph("Worked out from the readings by the mass-flow method of the ASHRAE Handbook—Fundamentals,"
+                + " ch. 1. ± is the expanded uncertainty (k = 2, about 95 % coverage) carried from the instrument"
+                + " tolerances (first-order GUM, JCGM 100:2008).", Ink.SMALL, 0);
+        for (VisitEvidence v : data.visits()) {
+            List<CheckedReadings> sets = v.readings();
+            if (data.comparesVisits()) {
+                t.subheading("Visit of " + PlainWords.dateTime(v.visit().startedAt()), 60);
+            }
+            for (List<CheckedReadings> chunk : chunks(sets)) {
+                results(chunk).draw(t);
+            }
+        }
+        BeforeAfter pair = data.pair();
+        if (pair != null) {
+            t.heading("Before and after, every figure", 100);
+            t.paragraph("Before: " + pair.before().name() + " (" + PlainWords.dateTime(pair.before().set().takenAt())
+                    + "). After: " + pair.after().name() + " (" + PlainWords.dateTime(pair.after().set().takenAt())
+                    + "). U of the change = √(U_before² + U_after²), treating the two sets as independent (cautious when"
+                    + " they share instruments). A change is measured when it is larger than its U.", Ink.SMALL, 0);
+            SummarySection.changesTable(pair, units, true).draw(t);
+        }
+    }
+
+    private static List<List<CheckedReadings>> chunks(List<CheckedReadings> sets) {
+        List<List<CheckedReadings>> out = new ArrayList<>();
+        for (int i = 0; i < sets.size(); i += PER_TABLE) {
+            out.add(sets.subList(i, Math.min(sets.size(), i + PER_TABLE)));
+        }
+        return out;
+    }
+
+    private Table table(List<CheckedReadings> sets, String first) {
+        String[] header = new String[sets.size() + 1];
+        double[] weights = new double[header.length];
+        boolean[] right = new boolean[header.length];
+        header[0] = first;
+        weights[0] = 1.25;
+        for (int i = 0; i < sets.size(); i++) {
+            header[i + 1] = sets.get(i).name() + " (" + PlainWords.time(sets.get(i).set().takenAt()) + ")";
+            weights[i + 1] = sets.size() == 1 ? 2.2 : 1.5;
+            right[i + 1] = false;
+        }
+        return new Table(header, weights, right);
+    }
+
+    private Table readings(List<CheckedReadings> sets) {
+        Table tb = table(sets, "Reading");
+        row(tb, sets, "Return air dry bulb", s -> temperature(s.returnDryBulb()));
+        row(tb, sets, "Return air humidity", s -> humidity(s.returnHumidity()));
+        row(tb, sets, "Supply air dry bulb", s -> temperature(s.supplyDryBulb()));
+        row(tb, sets, "Supply air humidity", s -> humidity(s.supplyHumidity()));
+        if (sets.stream().anyMatch(c -> c.set().outdoorDryBulb() != null)) {
+            row(tb, sets, "Outdoor dry bulb", s -> temperature(s.outdoorDryBulb()));
+            row(tb, sets, "Outdoor humidity", s -> humidity(s.outdoorHumidity()));
+        }
+        row(tb, sets, "Coil temperature", s -> s.coilTemperature() == null ? "not measured"
+                : temperature(s.coilTemperature().value()) + " (" + s.coilTemperature().kind().key().replace('-', ' ') + ")");
+        row(tb, sets, "Airflow", this::airflow);
+        rowChecked(tb, sets, "Pressure used", this::pressure);
+        row(tb, sets, "Condensate caught", s -> s.condensate() == null ? "not caught"
+                : Numbers.withSpread(Quantity.WATER_VOLUME, units, s.condensate().volume().valueSi(),
+                s.condensate().volume().toleranceSi()) + " in "
+                + Numbers.withSpread(Quantity.DURATION_MINUTES, units, s.condensate().seconds().valueSi(),
+                s.condensate().seconds().toleranceSi()));
+        row(tb, sets, "Instruments", s -> s.instrument().isEmpty() ? "not recorded" : s.instrument());
+        row(tb, sets, "Notes", s -> s.notes().isEmpty() ? "—" : s.notes());
+        return tb;
+    }
+
+    private Table results(List<CheckedReadings> sets) {
+        Table tb = table(sets, "Result (± U, k = 2)");
+        if (sets.stream().noneMatch(CheckedReadings::checked)) {
+            String[] cells = new String[sets.size() + 1];
+            cells[0] = "Coil check";
+            for (int i = 0; i < sets.size(); i++) {
+                cells[i + 1] = "not worked out: lacks " + String.join(", ", sets.get(i).missing());
+            }
+            return tb.row(cells);
+        }
+        rowResult(tb, sets, "Coil check verdict", r -> PlainWords.verdictShort(r.verdict()) + " (" + r.verdict().key() + ")");
+        est(tb, sets, Measurand.RETURN_DEW_POINT, "Indoor (return) dew point");
+        est(tb, sets, Measurand.RETURN_RELATIVE_HUMIDITY, "Indoor (return) relative humidity");
+        est(tb, sets, Measurand.LEAVING_DEW_POINT, "Supply dew point");
+        est(tb, sets, Measurand.TEMPERATURE_DROP, "Dry-bulb drop across the coil");
+        est(tb, sets, Measurand.HUMIDITY_RATIO_DROP, "Humidity-ratio drop across the coil");
+        est(tb, sets, Measurand.SENSIBLE, "Sensible capacity");
+        est(tb, sets, Measurand.LATENT, "Latent capacity");
+        rowResult(tb, sets, "Total capacity", r -> Numbers.estimate(Quantity.POWER, units, r.estimate(Measurand.TOTAL))
+                + " (" + Numbers.withUnit(Quantity.POWER_LARGE, units, r.process().totalW()) + ")");
+        est(tb, sets, Measurand.SHR, "Sensible heat ratio");
+        rowResult(tb, sets, "Moisture removal", r -> Numbers.estimate(Quantity.WATER_RATE, units,
+                r.estimate(Measurand.MOISTURE_REMOVAL)) + " ("
+                + Numbers.withUnit(Quantity.WATER_RATE_DAILY, units, r.process().moistureRemovalKgPerS()) + ")");
+        est(tb, sets, Measurand.LATENT_PER_AIRFLOW, "Latent capacity per airflow");
+        est(tb, sets, Measurand.AIRFLOW_PER_CAPACITY, "Airflow per measured capacity");
+        rowResult(tb, sets, "Airflow per nominal capacity", r -> Numbers.withUnit(Quantity.AIRFLOW_PER_CAPACITY, units,
+                r.airflowPerNominalCapacity()));
+        rowResult(tb, sets, "Apparatus dew point", r -> r.adp().found()
+                ? Numbers.estimate(Quantity.TEMPERATURE, units, r.estimate(Measurand.APPARATUS_DEW_POINT))
+                : r.adp().explanation());
+        rowResult(tb, sets, "Bypass factor", r -> r.adp().found()
+                ? Numbers.estimate(Quantity.DIMENSIONLESS, units, r.estimate(Measurand.BYPASS_FACTOR)) : "—");
+        rowResult(tb, sets, "Coil temperature compared", r -> Double.isFinite(r.coilTemperatureC())
+                ? Numbers.estimate(Quantity.TEMPERATURE, units, r.estimate(Measurand.COIL_TEMPERATURE)) + " ("
+                + (CoilResult.SOURCE_MEASURED.equals(r.coilTemperatureSource()) ? "measured" : "apparatus dew point")
+                + ")" : "none");
+        est(tb, sets, Measurand.DEW_POINT_MARGIN, "Entering dew point minus coil temperature");
+        if (sets.stream().anyMatch(c -> c.checked() && c.result().condensate() != null)) {
+            est(tb, sets, Measurand.CONDENSATE_RATE, "Condensate caught per hour");
+            est(tb, sets, Measurand.CONDENSATE_MINUS_AIRSIDE, "Condensate minus air-side removal");
+        }
+        return tb;
+    }
+
+    private void est(Table tb, List<CheckedReadings> sets, Measurand m, String label) {
+        rowResult(tb, sets, label, r -> {
+            Estimate e = r.estimate(m);
+            return e.exists() ? Numbers.estimate(m.quantity(), units, e) : "—";
+        });
+    }
+
+    private static void row(Table tb, List<CheckedReadings> sets, String label, Function<ReadingSet, String> f) {
+        String[] cells = new String[sets.size() + 1];
+        cells[0] = label;
+        for (int i = 0; i < sets.size(); i++) {
+            cells[i + 1] = f.apply(sets.get(i).set());
+        }
+        tb.row(cells);
+    }
+
+    private static void rowChecked(Table tb, List<CheckedReadings> sets, String label,
+                                   Function<CheckedReadings, String> f) {
+        String[] cells = new String[sets.size() + 1];
+        cells[0] = label;
+        for (int i = 0; i < sets.size(); i++) {
+            cells[i + 1] = f.apply(sets.get(i));
+        }
+        tb.row(cells);
+    }
+
+    private static void rowResult(Table tb, List<CheckedReadings> sets, String label, Function<CoilResult, String> f) {
+        rowChecked(tb, sets, label, c -> c.checked() ? f.apply(c.result()) : "not worked out");
+    }
+
+    private String temperature(Measurement m) {
+        return m == null ? "not measured" : Numbers.withSpread(Quantity.TEMPERATURE, units, m.valueSi(), m.toleranceSi());
+    }
+
+    private String humidity(HumidityReading h) {
+        if (h == null) {
+            return "not measured";
+        }
+        if (h.kind() == HumidityKind.RH) {
+            return Numbers.withSpread(Quantity.RELATIVE_HUMIDITY, units, h.value().valueSi(), h.value().toleranceSi())
+                    + " RH";
+        }
+        return temperature(h.value()) + (h.kind() == HumidityKind.WET_BULB ? " wet bulb" : " dew point");
+    }
+
+    private String airflow(ReadingSet s) {
+        Airflow a = s.airflow();
+        if (a == null) {
+            return "not measured";
+        }
+        return Numbers.withSpread(Quantity.AIRFLOW, units, a.volume().valueSi(), a.volume().toleranceSi())
+                + " at the " + (a.point().key().equals("entering") ? "return (entering)" : "supply (leaving)") + " side"
+                + (a.method().isEmpty() ? "" : "; " + a.method());
+    }
+
+    private String pressure(CheckedReadings c) {
+        ReadingSet s = c.set();
+        if (s.stationPressurePa() != null) {
+            return Numbers.withSpread(Quantity.PRESSURE, units, s.stationPressurePa().valueSi(),
+                    s.stationPressurePa().toleranceSi()) + " measured";
+        }
+        if (!c.checked()) {
+            return "standard atmosphere at the site elevation";
+        }
+        return Numbers.withUnit(Quantity.PRESSURE, units, c.result().readings().pressurePa())
+                + " (standard atmosphere at the site elevation)";
+    }
+}

@@ -1,0 +1,110 @@
+package app.latentledger.report;
+
+import app.latentledger.core.units.UnitSystem;
+import app.latentledger.store.Ledger;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.time.OffsetDateTime;
+
+/**
+ * The visit report as a PDF: the API the command line and the app's visit and compare views call.
+ * Runs without a display ({@code java.awt.headless=true}, no JavaFX): the charts are painted as
+ * vectors straight into the PDF.
+ *
+ * <p>Nothing is left behind on failure: the PDF is written to a temporary file in the target
+ * folder and moved into place only when complete.
+ */
+public final class VisitReport {
+    private VisitReport() {
+    }
+
+    /**
+     * Writes the report of {@code visitId} (compared with {@code compareVisitIdOrNull} when given) to
+     * {@code output}, replacing a file already there.
+     *
+     * @param visitId              exact visit id
+     * @param compareVisitIdOrNull exact id of another visit, or null for a one-visit report
+     * @param paper                page size
+     * @param units                display units
+     * @return the file written
+     * @throws ReportRefusedException for an unknown visit, a visit compared with itself, or an output
+     *                                path that cannot be written (missing folder, a folder, no permission)
+     */
+    public static Path write(Ledger ledger, String visitId, String compareVisitIdOrNull, Paper paper, UnitSystem units,
+                             Path output) {
+        ReportData data = ReportData.load(ledger, visitId, compareVisitIdOrNull, units);
+        OffsetDateTime now = OffsetDateTime.now(data.latest().visit().startedAt().getOffset());
+        return SafeFile.write(output, out -> ReportDocument.write(data, paper, now, out));
+    }
+
+    /** As {@link #write}, into a stream (the caller owns it); for previews and tests. */
+    public static void write(Ledger ledger, String visitId, String compareVisitIdOrNull, Paper paper, UnitSystem units,
+                             OutputStream out) throws IOException {
+        ReportData data = ReportData.load(ledger, visitId, compareVisitIdOrNull, units);
+        ReportDocument.write(data, paper, OffsetDateTime.now(data.latest().visit().startedAt().getOffset()), out);
+    }
+
+    /** Writes through a temporary file in the target folder, then moves it into place. */
+    static final class SafeFile {
+        interface Body {
+            void write(OutputStream out) throws IOException;
+        }
+
+        private SafeFile() {
+        }
+
+        static Path write(Path output, Body body) {
+            Path target = output.toAbsolutePath().normalize();
+            Path folder = target.getParent();
+            if (folder == null || !Files.isDirectory(folder)) {
+                throw new ReportRefusedException("cannot write " + output + ": folder " + folder + " does not exist");
+            }
+            if (Files.isDirectory(target)) {
+                throw new ReportRefusedException("cannot write " + output + ": it is a folder; give a file name");
+            }
+            Path temp;
+            try {
+                temp = Files.createTempFile(folder, "." + target.getFileName() + "-", ".part");
+            } catch (IOException | SecurityException e) {
+                throw new ReportRefusedException("cannot write " + output + ": no permission to create files in "
+                        + folder, e);
+            }
+            boolean moved = false;
+            try {
+                readableByOthers(temp);
+                try (OutputStream out = Files.newOutputStream(temp)) {
+                    body.write(out);
+                }
+                try {
+                    Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+                } catch (AtomicMoveNotSupportedException e) {
+                    Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
+                }
+                moved = true;
+                return target;
+            } catch (IOException e) {
+                throw new ReportRefusedException("cannot write " + output + ": " + e.getMessage(), e);
+            } finally {
+                if (!moved) {
+                    try {
+                        Files.deleteIfExists(temp);
+                    } catch (IOException ignored) {
+                        // the temporary file is hidden and named .part; nothing more can be done
+                    }
+                }
+            }
+        }
+
+        /** A temporary file is private (rw-------); a report is a document to hand on (rw-r--r--). */
+        private static void readableByOthers(Path file) throws IOException {
+            if (file.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+                Files.setPosixFilePermissions(file, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+            }
+        }
+    }
+}
