@@ -29,7 +29,7 @@ public final class Cli {
 
     /** All commands this build offers. */
     public static Cli standard() {
-        return new Cli(List.of(new StateCommand(), new CoilCommand(), new VisitsCommand()));
+        return new Cli(List.of(new StateCommand(), new CoilCommand(), new VisitsCommand(), new ScreensCommand()));
     }
 
     public int run(List<String> words, PrintStream out, PrintStream err) {

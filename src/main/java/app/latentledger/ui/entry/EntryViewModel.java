@@ -38,6 +38,9 @@ public final class EntryViewModel {
     private final ReadOnlyBooleanWrapper refused = new ReadOnlyBooleanWrapper(false);
     private final Map<Slot, StringBinding> valueTexts = new EnumMap<>(Slot.class);
     private final Map<Slot, StringBinding> toleranceTexts = new EnumMap<>(Slot.class);
+    private final StringBinding padTitle;
+    private final StringBinding padDisplay;
+    private final StringBinding padUnit;
 
     public EntryViewModel(AppSession session) {
         this.session = session;
@@ -48,6 +51,34 @@ public final class EntryViewModel {
             message.set(b == Slot.COIL_TEMPERATURE ? Cautions.BEFORE_COIL_READINGS : "");
         });
         toleranceMode.addListener((o, a, b) -> pad.clear());
+        padTitle = Bindings.createStringBinding(() -> {
+            Slot sel = selected.get();
+            return toleranceMode.get() ? "Tolerance of " + title(sel).toLowerCase(java.util.Locale.ROOT) : title(sel);
+        }, selected, toleranceMode, session.draftProperty());
+        padDisplay = Bindings.createStringBinding(() -> {
+            if (!pad.text().isEmpty()) {
+                return pad.text();
+            }
+            Slot sel = selected.get();
+            return toleranceMode.get() ? shownTolerance(sel).replaceFirst("^± ", "").replaceFirst(" \\S+$", "")
+                    : shownValue(sel);
+        }, pad.textProperty(), selected, toleranceMode, session.draftProperty(), session.systemProperty());
+        padUnit = Bindings.createStringBinding(this::unit, selected, toleranceMode, session.draftProperty());
+    }
+
+    /** The pad's heading: the selected box, or its tolerance. */
+    public StringBinding padTitle() {
+        return padTitle;
+    }
+
+    /** What the pad shows: the number being typed, else the box's current value. */
+    public StringBinding padDisplay() {
+        return padDisplay;
+    }
+
+    /** The unit beside the pad's number. */
+    public StringBinding padUnit() {
+        return padUnit;
     }
 
     public KeypadViewModel pad() {

@@ -22,7 +22,7 @@ public enum Slot {
     AIRFLOW("airflow", "Airflow", "Airflow", Group.AIRFLOW, 0.07),
     NOMINAL_TONS("nominal-tons", "System", "Nominal size", Group.AIRFLOW, 0),
     CONDENSATE_VOLUME("condensate-volume", "Condensate", "Water caught", Group.CONDENSATE, 20e-6),
-    CONDENSATE_MINUTES("condensate-minutes", "Condensate", "Over", Group.CONDENSATE, 5);
+    CONDENSATE_MINUTES("condensate-minutes", "Condensate", "Collection time", Group.CONDENSATE, 5);
 
     /** Where a box sits on the screen. */
     public enum Group { RETURN, SUPPLY, OUTDOOR, COIL, AIRFLOW, CONDENSATE }
@@ -150,6 +150,19 @@ public enum Slot {
             case "entering" -> "Return side";
             case "leaving" -> "Supply side";
             default -> choice;
+        };
+    }
+
+    /** The tile's own short title under its group heading, e.g. "Wet bulb". */
+    public String shortTitle(String choice) {
+        if (isHumidity()) {
+            return choiceLabel(choice);
+        }
+        return switch (this) {
+            case COIL_TEMPERATURE -> "evaporator-saturation".equals(choice) ? "Coil (saturation)" : "Coil (surface)";
+            case AIRFLOW -> "entering".equals(choice) ? "Airflow (return side)" : "Airflow (supply side)";
+            case CONDENSATE_MINUTES -> "Collection time";
+            default -> label;
         };
     }
 

@@ -76,7 +76,7 @@ public final class LogImportViewModel {
             return;
         }
         try {
-            LogAnalysis a = session.logAnalysis().importAndAnalyse(Path.of(f), session.visit(), session.system(),
+            LogAnalysis a = session.logAnalysis().importAndAnalyse(session.ledger(), Path.of(f), session.visit(), session.system(),
                     session.units());
             summary.setAll(a.summary());
             findings.clear();
