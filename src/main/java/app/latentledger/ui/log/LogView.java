@@ -37,6 +37,7 @@ public final class LogView extends VBox implements Reflowing {
         file.setPromptText("Logger file (CSV)");
         file.textProperty().bindBidirectional(viewModel.fileProperty());
         HBox.setHgrow(file, Priority.ALWAYS);
+        file.setMinWidth(220);
         var choose = Ui.button("choose-log", "Choose…", Icons.FOLDER, () -> {
             FileChooser fc = new FileChooser();
             fc.setTitle("Logger file");
