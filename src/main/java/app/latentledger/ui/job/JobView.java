@@ -38,7 +38,8 @@ public final class JobView extends VBox implements Reflowing {
         TextField siteName = field("new-site-name", "New site name", viewModel.newSiteNameProperty());
         TextField siteAddress = field("new-site-address", "Address", viewModel.newSiteAddressProperty());
         TextField siteElevation = field("new-site-elevation", "Elevation, ft", viewModel.newSiteElevationFtProperty());
-        VBox siteCol = Ui.panel(8, Ui.label("1  Site", "heading"), sites, siteName, siteAddress, siteElevation,
+        VBox siteCol = Ui.panel(8, Ui.label("1  Site", "heading"), sites, siteName, siteAddress,
+                Ui.label("Elevation, ft", "figure-label"), siteElevation,
                 Ui.button("add-site", "Add site", Icons.NEW, viewModel::addSite));
 
         ListView<HvacSystem> systems = list("system-list", viewModel.systems(), s -> s.label() + "\n"
@@ -47,7 +48,8 @@ public final class JobView extends VBox implements Reflowing {
         bindSelection(systems, viewModel.systemProperty());
         TextField sysLabel = field("new-system-label", "New system name", viewModel.newSystemLabelProperty());
         TextField sysTons = field("new-system-tons", "Nominal tons", viewModel.newSystemTonsProperty());
-        VBox systemCol = Ui.panel(8, Ui.label("2  System", "heading"), systems, sysLabel, sysTons,
+        VBox systemCol = Ui.panel(8, Ui.label("2  System", "heading"), systems, sysLabel,
+                Ui.label("Nominal size, tons", "figure-label"), sysTons,
                 Ui.button("add-system", "Add system", Icons.NEW, viewModel::addSystem));
 
         FlowPane purposes = new FlowPane(8, 8);

@@ -27,6 +27,10 @@ public final class Columns extends StackPane implements Reflowing {
     public void setPortrait(boolean portrait) {
         Pane box = portrait ? new VBox(gap) : new HBox(gap);
         for (Node n : parts) {
+            if (n instanceof javafx.scene.layout.Region r) {
+                // side by side, equal shares whatever each part would like; stacked, its own height
+                r.setPrefWidth(portrait ? javafx.scene.layout.Region.USE_COMPUTED_SIZE : 10);
+            }
             if (n instanceof Reflowing r) {
                 r.setPortrait(portrait);
             }
@@ -37,6 +41,13 @@ public final class Columns extends StackPane implements Reflowing {
                 HBox.setHgrow(n, Priority.ALWAYS);
             }
         }
-        getChildren().setAll(box);
+        if (portrait && !(parts.get(0) instanceof javafx.scene.control.ScrollPane)) {
+            javafx.scene.control.ScrollPane scroll = new javafx.scene.control.ScrollPane(box);
+            scroll.setFitToWidth(true);
+            scroll.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
+            getChildren().setAll(scroll);
+        } else {
+            getChildren().setAll(box);
+        }
     }
 }

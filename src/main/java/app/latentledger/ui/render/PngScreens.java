@@ -36,7 +36,7 @@ public final class PngScreens implements ScreenRendering {
     @Override
     public List<Path> render(Path dataFolder, Path outDir) throws Exception {
         Files.createDirectories(outDir);
-        startToolkit();
+        boolean started = startToolkit();
         CompletableFuture<List<Path>> done = new CompletableFuture<>();
         Platform.runLater(() -> {
             try {
@@ -48,7 +48,9 @@ public final class PngScreens implements ScreenRendering {
         try {
             return done.get(120, TimeUnit.SECONDS);
         } finally {
-            Platform.exit();
+            if (started) {
+                Platform.exit();
+            }
         }
     }
 
@@ -67,16 +69,29 @@ public final class PngScreens implements ScreenRendering {
                 Scene scene = shell.scene(portrait ? SHORT_SIDE : LONG_SIDE, portrait ? LONG_SIDE : SHORT_SIDE);
                 previous = scene;
                 for (Screen s : Screen.values()) {
+                    showcase(session, s);
                     session.screenProperty().set(s);
                     files.add(write(scene, outDir.resolve(s.key() + (portrait ? "-portrait" : "-landscape") + ".png")));
                 }
                 session.darkProperty().set(true);
+                showcase(session, Screen.RESULTS);
                 session.screenProperty().set(Screen.RESULTS);
                 files.add(write(scene, outDir.resolve("results-" + (portrait ? "portrait" : "landscape") + "-dark.png")));
                 session.darkProperty().set(false);
             }
         }
         return files;
+    }
+
+    /**
+     * On the demo, the results screen shows the "before" set (a coil that does not dry, with its
+     * findings) and every other screen the "after" set (so compare has a before to show).
+     */
+    private static void showcase(AppSession session, Screen s) {
+        if (session.visit() == null || !session.visit().id().equals(DemoScenario.VISIT_COMPLAINT)) {
+            return;
+        }
+        session.openReadingSet(s == Screen.RESULTS ? DemoScenario.READINGS_BEFORE : DemoScenario.READINGS_AFTER);
     }
 
     private static Path write(Scene scene, Path file) {
@@ -89,14 +104,20 @@ public final class PngScreens implements ScreenRendering {
         return file;
     }
 
-    private static void startToolkit() throws InterruptedException {
+    /** Starts JavaFX unless it already runs (a test); true when this call started it. */
+    private static boolean startToolkit() throws InterruptedException {
         CountDownLatch ready = new CountDownLatch(1);
+        boolean started = true;
         try {
             Platform.startup(ready::countDown);
         } catch (IllegalStateException alreadyRunning) {
+            started = false;
             ready.countDown();
         }
-        Platform.setImplicitExit(false);
+        if (started) {
+            Platform.setImplicitExit(false);
+        }
         ready.await(30, TimeUnit.SECONDS);
+        return started;
     }
 }

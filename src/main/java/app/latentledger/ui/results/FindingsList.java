@@ -60,6 +60,7 @@ public final class FindingsList extends VBox {
         };
         Label sev = Ui.label(f.severityWord(), "severity-word");
         sev.setGraphic(icon.node(24));
+        sev.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         HBox head = new HBox(10, sev, Ui.wrapped(f.message(), "finding-message"));
         head.setAlignment(Pos.TOP_LEFT);
         VBox box = new VBox(4, head, Ui.wrapped(f.technical(), "finding-detail"));
