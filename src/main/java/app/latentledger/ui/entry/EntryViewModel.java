@@ -41,6 +41,21 @@ public final class EntryViewModel {
     private final StringBinding padTitle;
     private final StringBinding padDisplay;
     private final StringBinding padUnit;
+    private final javafx.collections.ObservableList<SetChoice> sets = javafx.collections.FXCollections.observableArrayList();
+    private final ObjectProperty<SetChoice> currentSet = new SimpleObjectProperty<>();
+
+    /**
+     * A reading set of the visit as the picker names it.
+     *
+     * @param id   reading-set id
+     * @param name e.g. "10:05 · before", or "new (not complete)"
+     */
+    public record SetChoice(String id, String name) {
+        @Override
+        public String toString() {
+            return name;
+        }
+    }
 
     public EntryViewModel(AppSession session) {
         this.session = session;
@@ -64,6 +79,46 @@ public final class EntryViewModel {
                     : shownValue(sel);
         }, pad.textProperty(), selected, toleranceMode, session.draftProperty(), session.systemProperty());
         padUnit = Bindings.createStringBinding(this::unit, selected, toleranceMode, session.draftProperty());
+        session.draftProperty().addListener((o, a, b) -> {
+            if (a == null || b == null || !a.readingSetId().equals(b.readingSetId()) || a.takenAt() != b.takenAt()) {
+                loadSets();
+            }
+        });
+        currentSet.addListener((o, a, b) -> {
+            if (b != null && session.draft() != null && !b.id().equals(session.draft().readingSetId())) {
+                session.openReadingSet(b.id());
+            }
+        });
+        loadSets();
+    }
+
+    /** The visit's reading sets, the one being entered included. */
+    public javafx.collections.ObservableList<SetChoice> sets() {
+        return sets;
+    }
+
+    /** The reading set shown; choosing another opens it. */
+    public ObjectProperty<SetChoice> currentSetProperty() {
+        return currentSet;
+    }
+
+    private void loadSets() {
+        Draft d = session.draft();
+        if (d == null || session.visit() == null) {
+            return;
+        }
+        java.util.List<SetChoice> list = new java.util.ArrayList<>();
+        java.time.format.DateTimeFormatter hm = java.time.format.DateTimeFormatter.ofPattern("HH:mm");
+        boolean stored = false;
+        for (app.latentledger.core.records.ReadingSet rs : session.ledger().readings().forVisit(session.visit().id())) {
+            list.add(new SetChoice(rs.id(), rs.takenAt().format(hm) + (rs.label().isEmpty() ? "" : " · " + rs.label())));
+            stored |= rs.id().equals(d.readingSetId());
+        }
+        if (!stored) {
+            list.add(new SetChoice(d.readingSetId(), "New set (not complete yet)"));
+        }
+        sets.setAll(list);
+        currentSet.set(list.stream().filter(c -> c.id().equals(d.readingSetId())).findFirst().orElse(null));
     }
 
     /** The pad's heading: the selected box, or its tolerance. */

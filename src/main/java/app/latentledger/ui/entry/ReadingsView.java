@@ -42,7 +42,12 @@ public final class ReadingsView extends VBox implements Reflowing {
         Label caution = Ui.wrapped(Cautions.BEFORE_COIL_READINGS, "caution");
         caution.setId("coil-caution");
         caution.setGraphic(Icons.CAUTION.node(22));
-        boxesColumn = new VBox(8, boxes, caution);
+        javafx.scene.control.ComboBox<EntryViewModel.SetChoice> set = new javafx.scene.control.ComboBox<>(viewModel.sets());
+        set.setId("reading-set-pick");
+        set.valueProperty().bindBidirectional(viewModel.currentSetProperty());
+        HBox setRow = new HBox(10, Ui.label("Reading set", "group-title"), set);
+        setRow.setAlignment(Pos.CENTER_LEFT);
+        boxesColumn = new VBox(8, setRow, boxes, caution);
         VerdictBanner live = new VerdictBanner(results.sheetProperty(), true);
         live.setId("live-verdict");
         HBox.setHgrow(boxesColumn, Priority.ALWAYS);

@@ -42,9 +42,7 @@ public final class JobView extends VBox implements Reflowing {
                 Ui.label("Elevation, ft", "figure-label"), siteElevation,
                 Ui.button("add-site", "Add site", Icons.NEW, viewModel::addSite));
 
-        ListView<HvacSystem> systems = list("system-list", viewModel.systems(), s -> s.label() + "\n"
-                + app.latentledger.ui.results.Shown.of(app.latentledger.core.units.Quantity.POWER_LARGE,
-                app.latentledger.core.units.UnitSystem.IP, s.nominalCapacityW(), 1) + " tons · " + s.type().key());
+        ListView<HvacSystem> systems = list("system-list", viewModel.systems(), viewModel::describe);
         bindSelection(systems, viewModel.systemProperty());
         TextField sysLabel = field("new-system-label", "New system name", viewModel.newSystemLabelProperty());
         TextField sysTons = field("new-system-tons", "Nominal tons", viewModel.newSystemTonsProperty());

@@ -107,6 +107,12 @@ public final class JobViewModel {
         return status.getReadOnlyProperty();
     }
 
+    /** A system as its list shows it: label, nominal size, staging. */
+    public String describe(HvacSystem s) {
+        return s.label() + "\n" + app.latentledger.ui.results.Shown.of(Quantity.POWER_LARGE, session.units(),
+                s.nominalCapacityW(), 1) + " " + Quantity.POWER_LARGE.symbol(session.units()) + " · " + s.type().key();
+    }
+
     /** "Complaint", "Commissioning", "Before", "After", "Follow-up". */
     public static String purposeWord(VisitPurpose p) {
         String k = p.key();

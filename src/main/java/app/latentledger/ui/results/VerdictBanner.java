@@ -44,10 +44,11 @@ public final class VerdictBanner extends HBox {
             key.setText(s.verdictKey());
             getStyleClass().removeAll(KINDS);
             getStyleClass().add(s.verdictKey());
-            Icons i = s.verdict() == null ? Icons.WAITING : switch (s.verdict()) {
-                case DEHUMIDIFYING -> Icons.VERDICT_YES;
-                case NOT_DEHUMIDIFYING -> Icons.VERDICT_NO;
-                case CANT_TELL -> Icons.VERDICT_UNSURE;
+            Icons i = switch (s.verdictKey()) {
+                case "dehumidifying" -> Icons.VERDICT_YES;
+                case "not-dehumidifying" -> Icons.VERDICT_NO;
+                case "cant-tell" -> Icons.VERDICT_UNSURE;
+                default -> Icons.WAITING;
             };
             icon.getChildren().setAll(i.node(compact ? 36 : 52));
         };
