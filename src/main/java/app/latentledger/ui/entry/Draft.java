@@ -57,8 +57,10 @@ public record Draft(String readingSetId, String visitId, Map<Slot, SlotValue> va
     }
 
     /**
-     * The same draft with another choice in a box. A humidity box that changes between a
-     * temperature and an RH loses its value: 65 °F wet bulb is not 65 % RH.
+     * The same draft with another choice in a box. A humidity box loses its value when its kind
+     * changes: 65 °F wet bulb is neither 65 % RH nor a 65 °F dew point, and silently reading it as
+     * one would store a reading nobody took. A coil or airflow box keeps its number (the same
+     * quantity, only its source or place changes).
      */
     public Draft withChoice(Slot s, String choice) {
         if (!s.choices().contains(choice)) {
@@ -67,7 +69,7 @@ public record Draft(String readingSetId, String visitId, Map<Slot, SlotValue> va
         Map<Slot, String> c = copy(choices);
         c.put(s, choice);
         Draft d = new Draft(readingSetId, visitId, values, c, base, takenAt);
-        return s.quantity(choice) != s.quantity(choice(s)) ? d.without(s) : d;
+        return s.isHumidity() && !choice.equals(choice(s)) ? d.without(s) : d;
     }
 
     public Draft takenAt(OffsetDateTime t) {

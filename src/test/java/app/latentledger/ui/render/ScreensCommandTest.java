@@ -21,6 +21,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * folder gets the demo, and every screen comes out at the tablet size, landscape and portrait.
  */
 class ScreensCommandTest {
+    /**
+     * Starts the toolkit the TestFX way first: the renderer then finds it running and leaves it
+     * running for the UI tests that share this JVM (it only exits a toolkit it started itself).
+     */
+    @org.junit.jupiter.api.BeforeAll
+    static void toolkit() throws Exception {
+        org.testfx.api.FxToolkit.registerPrimaryStage();
+    }
+
     @TempDir
     Path data;
     @TempDir
