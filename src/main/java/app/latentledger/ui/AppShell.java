@@ -43,12 +43,13 @@ public final class AppShell extends BorderPane {
     private static final DateTimeFormatter DAY = DateTimeFormatter.ofPattern("yyyy-MM-dd");
 
     private final AppSession session;
-    private final EntryViewModel entry;
-    private final ResultsViewModel results;
-    private final JobViewModel job;
-    private final LogImportViewModel logs;
-    private final CompareViewModel compare;
-    private final ExportViewModel export;
+    // built on first use, so the first frame waits only for the first screen's view model
+    private EntryViewModel entry;
+    private ResultsViewModel results;
+    private JobViewModel job;
+    private LogImportViewModel logs;
+    private CompareViewModel compare;
+    private ExportViewModel export;
     private final Map<Screen, Parent> views = new EnumMap<>(Screen.class);
     private final Pane rail = new VBox();
     private final Pane bar = new HBox();
@@ -58,18 +59,6 @@ public final class AppShell extends BorderPane {
 
     public AppShell(AppSession session) {
         this.session = session;
-        this.entry = new EntryViewModel(session);
-        this.results = new ResultsViewModel(session);
-        this.job = new JobViewModel(session);
-        this.logs = new LogImportViewModel(session);
-        this.compare = new CompareViewModel(session);
-        this.export = new ExportViewModel(session);
-        views.put(Screen.JOB, new JobView(job));
-        views.put(Screen.READINGS, new ReadingsView(entry, results));
-        views.put(Screen.RESULTS, new ResultsView(results));
-        views.put(Screen.LOGS, new LogView(logs));
-        views.put(Screen.COMPARE, new CompareView(compare));
-        views.put(Screen.EXPORT, new ExportView(export));
         setId("shell");
         setTop(header());
         ToggleGroup group = new ToggleGroup();
@@ -115,32 +104,80 @@ public final class AppShell extends BorderPane {
     }
 
     public EntryViewModel entry() {
+        if (entry == null) {
+            entry = new EntryViewModel(session);
+        }
         return entry;
     }
 
     public ResultsViewModel results() {
+        if (results == null) {
+            results = new ResultsViewModel(session);
+        }
         return results;
     }
 
     public JobViewModel job() {
+        if (job == null) {
+            job = new JobViewModel(session);
+        }
         return job;
     }
 
     public LogImportViewModel logs() {
+        if (logs == null) {
+            logs = new LogImportViewModel(session);
+        }
         return logs;
     }
 
     public CompareViewModel compare() {
+        if (compare == null) {
+            compare = new CompareViewModel(session);
+        }
         return compare;
     }
 
     public ExportViewModel export() {
+        if (export == null) {
+            export = new ExportViewModel(session);
+        }
         return export;
     }
 
-    /** The view of a screen (for wiring the chart builds into their slots). */
+    /** Keeps a number typed but not entered (the app is pausing or closing). */
+    public void keepPending() {
+        if (entry != null) {
+            entry.keepPending();
+        }
+    }
+
+    /** Builds the screens not shown yet, one per pulse, so the first switch to each is instant. */
+    public void prepareOtherScreens() {
+        for (Screen s : Screen.values()) {
+            javafx.application.Platform.runLater(() -> view(s));
+        }
+    }
+
+    /**
+     * The view of a screen (for wiring the chart builds into their slots), built on first use:
+     * only the first screen is built before the first frame.
+     */
     public Parent view(Screen s) {
-        return views.get(s);
+        return views.computeIfAbsent(s, k -> {
+            Parent v = switch (k) {
+                case JOB -> new JobView(job());
+                case READINGS -> new ReadingsView(entry(), results());
+                case RESULTS -> new ResultsView(results());
+                case LOGS -> new LogView(logs());
+                case COMPARE -> new CompareView(compare());
+                case EXPORT -> new ExportView(export());
+            };
+            if (laidOut) {
+                ((Reflowing) v).setPortrait(portrait);
+            }
+            return v;
+        });
     }
 
     /** Lays everything out for an upright (portrait) or a landscape tablet. */
@@ -173,7 +210,7 @@ public final class AppShell extends BorderPane {
     }
 
     private void show(Screen s) {
-        setCenter(views.get(s));
+        setCenter(view(s));
         navButtons.get(s).setSelected(true);
     }
 
