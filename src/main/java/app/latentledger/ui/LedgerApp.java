@@ -56,7 +56,6 @@ public final class LedgerApp extends Application {
         stage.setTitle("Latent Ledger");
         stage.setScene(scene);
         // typed but not yet entered: keep it if it is a valid reading
-        TabletPlatform.onPause(shell::keepPending);
         stage.setOnCloseRequest(e -> shell.keepPending());
         afterFirstFrame(shell);
         stage.show();
@@ -91,6 +90,8 @@ public final class LedgerApp extends Application {
                 if (++pulses == 2) {
                     mark("first frame");
                     stop();
+                    // nothing can pause an app that has not drawn yet: ask for the event now
+                    TabletPlatform.onPause(shell::keepPending);
                     shell.prepareOtherScreens();
                 }
             }
