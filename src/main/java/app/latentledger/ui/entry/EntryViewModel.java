@@ -223,17 +223,21 @@ public final class EntryViewModel {
         return ok;
     }
 
-    /** Enter, then move to the next box, the way a tech reads down the list. */
+    /**
+     * Enter, then move to the next box, the way a tech reads down the list. A tolerance entry stays
+     * on its box: the value usually comes next.
+     */
     public boolean enterAndAdvance() {
         Slot s = selected.get();
+        boolean tolerance = toleranceMode.get();
         if (!enter()) {
             return false;
         }
-        if (!toleranceMode.get()) {
+        if (!tolerance) {
             String saved = message.get();
             List<Slot> order = List.of(Slot.values());
             selected.set(order.get((order.indexOf(s) + 1) % order.size()));
-            if (!refused.get() && selected.get() != Slot.COIL_TEMPERATURE) {
+            if (selected.get() != Slot.COIL_TEMPERATURE) {
                 message.set(saved);
             }
         }

@@ -151,4 +151,22 @@ class EntryViewModelTest {
             assertEquals("incomplete", new ResultsViewModel(again).sheet().verdictKey());
         }
     }
+
+    @Test
+    void enterMovesToTheNextBoxButATolerancesStays() {
+        try (AppSession s = TestSessions.withNewVisit(dir)) {
+            EntryViewModel vm = new EntryViewModel(s);
+            vm.select(Slot.RETURN_DRY_BULB);
+            vm.pad().digit(7);
+            vm.pad().digit(5);
+            assertTrue(vm.enterAndAdvance());
+            assertEquals(Slot.RETURN_HUMIDITY, vm.selectedProperty().get());
+            vm.select(Slot.RETURN_DRY_BULB);
+            vm.toleranceModeProperty().set(true);
+            vm.pad().digit(1);
+            assertTrue(vm.enterAndAdvance());
+            assertEquals(Slot.RETURN_DRY_BULB, vm.selectedProperty().get());
+            assertEquals("± 1.0 °F", vm.toleranceText(Slot.RETURN_DRY_BULB).get());
+        }
+    }
 }
