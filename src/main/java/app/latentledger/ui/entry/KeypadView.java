@@ -69,7 +69,7 @@ final class KeypadView extends VBox {
 
         Label message = Ui.wrapped("", "message");
         message.setId("pad-message");
-        message.setMinHeight(56);
+        message.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
         message.textProperty().bind(vm.messageProperty());
         vm.refusedProperty().addListener((o, a, b) -> {
             message.getStyleClass().remove("refused");

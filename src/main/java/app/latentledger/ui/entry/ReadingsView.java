@@ -67,6 +67,11 @@ public final class ReadingsView extends VBox implements Reflowing {
 
     @Override
     public void setPortrait(boolean upright) {
+        getStyleClass().remove("portrait");
+        if (upright) {
+            // an upright tablet has 1280 px for everything: tiles and keys give up a little height
+            getStyleClass().add("portrait");
+        }
         fillBoxes(2);
         landscape.getChildren().clear();
         portrait.getChildren().clear();
