@@ -50,6 +50,9 @@ class VisitWalkUiTest {
     private void open() {
         session = TestSessions.open(dir);
         stage.setScene(new AppShell(session).scene(1280, 800));
+        // the primary stage is shared between tests: put it back to the landscape tablet size
+        stage.setWidth(1280);
+        stage.setHeight(800);
     }
 
     @Test
@@ -132,6 +135,28 @@ class VisitWalkUiTest {
         }
         Label any = robot.lookup("#context").queryAs(Label.class);
         assertTrue(any.getFont().getSize() >= 18, "base font " + any.getFont().getSize());
+    }
+
+    @Test
+    void uprightTheScreensReflowAndEverythingStaysOnScreen(FxRobot robot) {
+        robot.interact(() -> {
+            AppShell shell = new AppShell(session);
+            stage.setScene(shell.scene(800, 1280));
+            stage.setWidth(800);
+            stage.setHeight(1280);
+        });
+        for (Screen s : Screen.values()) {
+            robot.interact(() -> session.screenProperty().set(s));
+            for (String id : java.util.List.of("#nav-job", "#nav-export", "#theme-toggle")) {
+                var b = robot.lookup(id).query().localToScene(robot.lookup(id).query().getLayoutBounds());
+                assertTrue(b.getMaxY() <= 1280 && b.getMaxX() <= 800, s + " " + id + " off screen: " + b);
+            }
+        }
+        robot.interact(() -> session.screenProperty().set(Screen.READINGS));
+        var nav = robot.lookup("#nav-job").query().localToScene(robot.lookup("#nav-job").query().getLayoutBounds());
+        assertTrue(nav.getMinY() > 1000, "upright, the screen list sits at the bottom: " + nav);
+        var enter = robot.lookup("#key-enter").query().localToScene(robot.lookup("#key-enter").query().getLayoutBounds());
+        assertTrue(enter.getMaxY() < nav.getMinY(), "the pad is above the screen list: " + enter);
     }
 
     /** Taps a box, the digits and Enter. */
