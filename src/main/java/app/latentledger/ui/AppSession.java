@@ -38,7 +38,8 @@ public final class AppSession implements AutoCloseable {
     private final LogAnalysisService logAnalysis;
     private final UnitSystem units;
     private final ThresholdSettings thresholds = ThresholdSettings.DEFAULTS;
-    private final ObjectProperty<Screen> screen = new SimpleObjectProperty<>(Screen.JOB);
+    /** The app opens on what the system in hand is doing; Job and Readings are one tap away. */
+    private final ObjectProperty<Screen> screen = new SimpleObjectProperty<>(Screen.RESULTS);
     private final BooleanProperty dark = new SimpleBooleanProperty(false);
     private final ReadOnlyObjectWrapper<Site> site = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyObjectWrapper<HvacSystem> system = new ReadOnlyObjectWrapper<>();

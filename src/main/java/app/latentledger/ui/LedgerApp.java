@@ -2,6 +2,7 @@ package app.latentledger.ui;
 
 import app.latentledger.store.DataLocation;
 import app.latentledger.ui.log.LogAnalysisService;
+import app.latentledger.ui.results.VisitResults;
 import javafx.animation.AnimationTimer;
 import javafx.application.Application;
 import javafx.geometry.Dimension2D;
@@ -39,7 +40,24 @@ public final class LedgerApp extends Application {
 
     private static AppSession openSession(String[] args) {
         Path dataDir = DataLocation.dataDirOption(args);
-        return AppSession.open(DataLocation.resolve(dataDir).folder(), LogAnalysisService.find());
+        AppSession s = AppSession.open(DataLocation.resolve(dataDir).folder(), LogAnalysisService.find());
+        warmUp(s);
+        return s;
+    }
+
+    /**
+     * Works the open reading set out once, off the FX thread, while the toolkit is still starting:
+     * the first screen then finds the core's classes loaded. The result is thrown away; the
+     * screens compute their own.
+     */
+    private static void warmUp(AppSession s) {
+        if (s.draft() != null && s.system() != null) {
+            try {
+                VisitResults.of(s.draft(), s.site(), s.system(), s.thresholds(), s.units());
+            } catch (RuntimeException ignored) {
+                // the screen will show whatever the check says; warming up must never stop the app
+            }
+        }
     }
 
     @Override
