@@ -30,7 +30,7 @@ public final class Cli {
     /** All commands this build offers. */
     public static Cli standard() {
         return new Cli(List.of(new StateCommand(), new CoilCommand(), new LogCommand(), new VisitsCommand(),
-                new ReportCommand(), new DataCommand(), new SettingsCommand()));
+                new ReportCommand(), new DataCommand(), new SettingsCommand(), new ScreensCommand()));
     }
 
     public int run(List<String> words, PrintStream out, PrintStream err) {

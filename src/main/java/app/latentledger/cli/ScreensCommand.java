@@ -1,0 +1,56 @@
+package app.latentledger.cli;
+
+import app.latentledger.store.DataLocation;
+
+import java.nio.file.Path;
+import java.util.List;
+
+/**
+ * {@code screens --out DIR}: every main screen of the app as PNG, 1280 × 800 landscape and 800 × 1280
+ * portrait, on the data folder's ledger (the demo when it is new). Needs a display (e.g.
+ * {@code xvfb-run}); the drawing lives in the UI layer, loaded by name so this package never
+ * touches JavaFX.
+ */
+public final class ScreensCommand implements Command {
+    static final String RENDERER = "app.latentledger.ui.render.PngScreens";
+
+    @Override
+    public String name() {
+        return "screens";
+    }
+
+    @Override
+    public String summary() {
+        return "draw every app screen to PNG (landscape and portrait)";
+    }
+
+    @Override
+    public String usage() {
+        return "usage: latent-ledger [--data-dir DIR] screens --out DIR\n"
+                + "  Renders every main screen with the ledger's data (the Saltreed demo in a new data folder)\n"
+                + "  to DIR/<screen>-landscape.png (1280x800) and DIR/<screen>-portrait.png (800x1280).\n"
+                + "  Needs a display; on a server run it under xvfb-run.\n";
+    }
+
+    @Override
+    public int run(Args args, CliContext context) throws Exception {
+        String out = args.value("out");
+        args.rejectUnknown();
+        if (out == null || out.isBlank()) {
+            throw new UsageException("screens needs --out DIR\n" + usage());
+        }
+        Path folder = DataLocation.resolve(context.dataDir()).folder();
+        ScreenRendering renderer;
+        try {
+            renderer = (ScreenRendering) Class.forName(RENDERER).getDeclaredConstructor().newInstance();
+        } catch (ReflectiveOperationException | LinkageError e) {
+            context.err().println("latent-ledger: this build has no screen renderer (" + e + ")");
+            return Cli.FAILED;
+        }
+        List<Path> files = renderer.render(folder, Path.of(out));
+        for (Path f : files) {
+            context.out().println(f);
+        }
+        return Cli.OK;
+    }
+}

@@ -1,0 +1,217 @@
+package app.latentledger.ui;
+
+import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.records.HvacSystem;
+import app.latentledger.core.records.Ids;
+import app.latentledger.core.records.ReadingSet;
+import app.latentledger.core.records.Site;
+import app.latentledger.core.records.Visit;
+import app.latentledger.core.units.UnitSystem;
+import app.latentledger.store.Ledger;
+import app.latentledger.ui.entry.Draft;
+import app.latentledger.ui.entry.DraftRecords;
+import app.latentledger.ui.entry.DraftStore;
+import app.latentledger.ui.entry.FileDraftStore;
+import app.latentledger.ui.log.LogAnalysisService;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+
+import java.nio.file.Path;
+import java.time.OffsetDateTime;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * The app's state for one run: the ledger, the visit and reading set being worked on, the screen
+ * shown and the theme. Every screen's view model reads from it; only it writes to the ledger and
+ * the draft store.
+ */
+public final class AppSession implements AutoCloseable {
+    private final Ledger ledger;
+    private final Path dataFolder;
+    private final DraftStore drafts;
+    private final LogAnalysisService logAnalysis;
+    private final UnitSystem units;
+    private final ThresholdSettings thresholds = ThresholdSettings.DEFAULTS;
+    /** The app opens on what the system in hand is doing; Job and Readings are one tap away. */
+    private final ObjectProperty<Screen> screen = new SimpleObjectProperty<>(Screen.RESULTS);
+    private final BooleanProperty dark = new SimpleBooleanProperty(false);
+    private final ReadOnlyObjectWrapper<Site> site = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyObjectWrapper<HvacSystem> system = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyObjectWrapper<Visit> visit = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyObjectWrapper<Draft> draft = new ReadOnlyObjectWrapper<>();
+
+    public AppSession(Ledger ledger, Path dataFolder, UnitSystem units, LogAnalysisService logAnalysis) {
+        this.ledger = ledger;
+        this.dataFolder = dataFolder;
+        this.units = units;
+        this.drafts = new FileDraftStore(dataFolder);
+        this.logAnalysis = logAnalysis;
+        openLatestVisit();
+    }
+
+    /** Opens the ledger in {@code dataFolder} (seeding the demo when empty) in IP units. */
+    public static AppSession open(Path dataFolder, LogAnalysisService logAnalysis) {
+        return new AppSession(Ledger.open(dataFolder), dataFolder, UnitSystem.IP, logAnalysis);
+    }
+
+    /** The visit with a draft in progress, else the newest visit. */
+    private void openLatestVisit() {
+        List<Visit> all = ledger.visits().all();
+        Optional<Visit> inProgress = all.stream().filter(v -> !drafts.forVisit(v.id()).isEmpty()).findFirst();
+        inProgress.or(() -> all.stream().findFirst()).ifPresent(this::openVisit);
+    }
+
+    /** Makes {@code v} the visit worked on, with its draft in progress or its latest reading set. */
+    public void openVisit(Visit v) {
+        site.set(ledger.sites().find(v.siteId()).orElseThrow());
+        system.set(ledger.systems().find(v.systemId()).orElseThrow());
+        visit.set(v);
+        List<String> kept = drafts.forVisit(v.id());
+        if (!kept.isEmpty()) {
+            openReadingSet(kept.get(0));
+            return;
+        }
+        List<ReadingSet> sets = ledger.readings().forVisit(v.id());
+        draft.set(sets.isEmpty() ? Draft.empty(Ids.newId(), v.id())
+                : DraftRecords.fromReadingSet(sets.get(sets.size() - 1)));
+    }
+
+    /** Opens one reading set of the current visit: its kept draft if any, else the stored record. */
+    public void openReadingSet(String readingSetId) {
+        Optional<ReadingSet> stored = ledger.readings().find(readingSetId);
+        Optional<Draft> kept = drafts.find(readingSetId);
+        Draft d = kept.map(k -> new Draft(k.readingSetId(), k.visitId(), k.values(), k.choices(),
+                        stored.orElse(null), k.takenAt()))
+                .orElseGet(() -> stored.map(DraftRecords::fromReadingSet)
+                        .orElseGet(() -> Draft.empty(readingSetId, visit.get().id())));
+        draft.set(d);
+    }
+
+    /** Starts an empty reading set on the current visit (e.g. the "after" set). */
+    public void newReadingSet() {
+        draft.set(Draft.empty(Ids.newId(), visit.get().id()));
+    }
+
+    /** Starts a visit now and opens it with an empty reading set. */
+    public Visit startVisit(Site s, HvacSystem sys, app.latentledger.core.records.VisitPurpose purpose,
+                            String technician, String notes) {
+        Visit v = new Visit(Ids.newId(), s.id(), sys.id(), OffsetDateTime.now(), technician, purpose, notes);
+        ledger.visits().save(v);
+        site.set(s);
+        system.set(sys);
+        visit.set(v);
+        draft.set(Draft.empty(Ids.newId(), v.id()));
+        return v;
+    }
+
+    /**
+     * Keeps an accepted draft: first the draft file (so nothing typed is lost), then, once it makes
+     * a reading set, that record in the ledger in its own transaction.
+     */
+    public void keep(Draft d) {
+        Draft timed = DraftRecords.complete(d) && d.takenAt() == null ? d.takenAt(OffsetDateTime.now()) : d;
+        ReadingSet rs = DraftRecords.toReadingSet(timed, timed.takenAt());
+        drafts.save(timed);
+        if (rs != null) {
+            ledger.readings().save(rs);
+        }
+        draft.set(timed);
+    }
+
+    /** Saves a changed system (e.g. its nominal size typed on the pad). */
+    public void keep(HvacSystem changed) {
+        ledger.systems().save(changed);
+        system.set(changed);
+    }
+
+    public void addSite(Site s) {
+        ledger.sites().save(s);
+    }
+
+    public void addSystem(HvacSystem s) {
+        ledger.systems().save(s);
+    }
+
+    /** Reading sets of every visit to the current system, oldest first, for comparing. */
+    public List<ReadingSet> readingSetsOfSystem() {
+        if (system.get() == null) {
+            return List.of();
+        }
+        return ledger.visits().forSite(site.get().id()).stream()
+                .filter(v -> v.systemId().equals(system.get().id()))
+                .flatMap(v -> ledger.readings().forVisit(v.id()).stream())
+                .sorted(Comparator.comparing(ReadingSet::takenAt))
+                .toList();
+    }
+
+    public Ledger ledger() {
+        return ledger;
+    }
+
+    public Path dataFolder() {
+        return dataFolder;
+    }
+
+    public UnitSystem units() {
+        return units;
+    }
+
+    public ThresholdSettings thresholds() {
+        return thresholds;
+    }
+
+    public LogAnalysisService logAnalysis() {
+        return logAnalysis;
+    }
+
+    public ObjectProperty<Screen> screenProperty() {
+        return screen;
+    }
+
+    public BooleanProperty darkProperty() {
+        return dark;
+    }
+
+    public ReadOnlyObjectProperty<Site> siteProperty() {
+        return site.getReadOnlyProperty();
+    }
+
+    public ReadOnlyObjectProperty<HvacSystem> systemProperty() {
+        return system.getReadOnlyProperty();
+    }
+
+    public ReadOnlyObjectProperty<Visit> visitProperty() {
+        return visit.getReadOnlyProperty();
+    }
+
+    public ReadOnlyObjectProperty<Draft> draftProperty() {
+        return draft.getReadOnlyProperty();
+    }
+
+    public Site site() {
+        return site.get();
+    }
+
+    public HvacSystem system() {
+        return system.get();
+    }
+
+    public Visit visit() {
+        return visit.get();
+    }
+
+    public Draft draft() {
+        return draft.get();
+    }
+
+    @Override
+    public void close() {
+        ledger.close();
+    }
+}

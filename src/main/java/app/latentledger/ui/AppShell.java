@@ -1,0 +1,260 @@
+package app.latentledger.ui;
+
+import app.latentledger.ui.compare.CompareView;
+import app.latentledger.ui.compare.CompareViewModel;
+import app.latentledger.ui.entry.EntryViewModel;
+import app.latentledger.ui.entry.ReadingsView;
+import app.latentledger.ui.export.ExportView;
+import app.latentledger.ui.export.ExportViewModel;
+import app.latentledger.ui.job.JobView;
+import app.latentledger.ui.job.JobViewModel;
+import app.latentledger.ui.log.LogImportViewModel;
+import app.latentledger.ui.log.LogView;
+import app.latentledger.ui.look.Icons;
+import app.latentledger.ui.look.Reflowing;
+import app.latentledger.ui.look.Theme;
+import app.latentledger.ui.look.Ui;
+import app.latentledger.ui.results.ResultsView;
+import app.latentledger.ui.results.ResultsViewModel;
+import javafx.beans.binding.Bindings;
+import javafx.geometry.Pos;
+import javafx.scene.Parent;
+import javafx.scene.Scene;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Pane;
+import javafx.scene.layout.VBox;
+
+import java.time.format.DateTimeFormatter;
+import java.util.EnumMap;
+import java.util.Map;
+
+/**
+ * The frame around every screen: a header with the job in hand and the theme switch, the screen
+ * list (a rail on the left in landscape, a bar at the bottom in portrait), and the screen itself.
+ * It holds every view model for the life of the window (views bind to them weakly).
+ */
+public final class AppShell extends BorderPane {
+    private static final DateTimeFormatter DAY = DateTimeFormatter.ofPattern("yyyy-MM-dd");
+
+    private final AppSession session;
+    // built on first use, so the first frame waits only for the first screen's view model
+    private EntryViewModel entry;
+    private ResultsViewModel results;
+    private JobViewModel job;
+    private LogImportViewModel logs;
+    private CompareViewModel compare;
+    private ExportViewModel export;
+    private final Map<Screen, Parent> views = new EnumMap<>(Screen.class);
+    private final Pane rail = new VBox();
+    private final Pane bar = new HBox();
+    private final Map<Screen, ToggleButton> navButtons = new EnumMap<>(Screen.class);
+    private boolean portrait;
+    private boolean laidOut;
+
+    public AppShell(AppSession session) {
+        this.session = session;
+        setId("shell");
+        setTop(header());
+        ToggleGroup group = new ToggleGroup();
+        for (Screen s : Screen.values()) {
+            ToggleButton b = new ToggleButton(s.title());
+            b.setId("nav-" + s.key());
+            b.setGraphic(icon(s).node(28));
+            b.setToggleGroup(group);
+            b.setOnAction(e -> session.screenProperty().set(s));
+            navButtons.put(s, b);
+        }
+        rail.getStyleClass().addAll("nav", "rail");
+        ((VBox) rail).setSpacing(8);
+        bar.getStyleClass().addAll("nav", "bar");
+        ((HBox) bar).setAlignment(Pos.CENTER);
+        session.screenProperty().addListener((o, a, b) -> show(b));
+        sceneProperty().addListener((o, a, scene) -> {
+            if (scene != null) {
+                Theme.apply(scene, session.darkProperty().get());
+                scene.widthProperty().addListener((x, y, z) -> fit(scene));
+                scene.heightProperty().addListener((x, y, z) -> fit(scene));
+                fit(scene);
+            }
+        });
+        session.darkProperty().addListener((o, a, b) -> {
+            if (getScene() != null) {
+                Theme.apply(getScene(), b);
+            }
+        });
+        placeNav();
+        show(session.screenProperty().get());
+    }
+
+    /** A scene for this shell, styled, at the given size. */
+    public Scene scene(double width, double height) {
+        Scene scene = new Scene(this, width, height);
+        Theme.install(scene);
+        return scene;
+    }
+
+    public AppSession session() {
+        return session;
+    }
+
+    public EntryViewModel entry() {
+        if (entry == null) {
+            entry = new EntryViewModel(session);
+        }
+        return entry;
+    }
+
+    public ResultsViewModel results() {
+        if (results == null) {
+            results = new ResultsViewModel(session);
+        }
+        return results;
+    }
+
+    public JobViewModel job() {
+        if (job == null) {
+            job = new JobViewModel(session);
+        }
+        return job;
+    }
+
+    public LogImportViewModel logs() {
+        if (logs == null) {
+            logs = new LogImportViewModel(session);
+        }
+        return logs;
+    }
+
+    public CompareViewModel compare() {
+        if (compare == null) {
+            compare = new CompareViewModel(session);
+        }
+        return compare;
+    }
+
+    public ExportViewModel export() {
+        if (export == null) {
+            export = new ExportViewModel(session);
+        }
+        return export;
+    }
+
+    /** Keeps a number typed but not entered (the app is pausing or closing). */
+    public void keepPending() {
+        if (entry != null) {
+            entry.keepPending();
+        }
+    }
+
+    /** Builds the screens not shown yet, one per pulse, so the first switch to each is instant. */
+    public void prepareOtherScreens() {
+        for (Screen s : Screen.values()) {
+            javafx.application.Platform.runLater(() -> view(s));
+        }
+    }
+
+    /**
+     * The view of a screen (for wiring the chart builds into their slots), built on first use:
+     * only the first screen is built before the first frame.
+     */
+    public Parent view(Screen s) {
+        return views.computeIfAbsent(s, k -> {
+            Parent v = switch (k) {
+                case JOB -> new JobView(job());
+                case READINGS -> new ReadingsView(entry(), results());
+                case RESULTS -> new ResultsView(results());
+                case LOGS -> new LogView(logs());
+                case COMPARE -> new CompareView(compare());
+                case EXPORT -> new ExportView(export());
+            };
+            if (laidOut) {
+                ((Reflowing) v).setPortrait(portrait);
+            }
+            return v;
+        });
+    }
+
+    /** Lays everything out for an upright (portrait) or a landscape tablet. */
+    public void setPortrait(boolean upright) {
+        if (laidOut && upright == portrait) {
+            return;
+        }
+        laidOut = true;
+        portrait = upright;
+        placeNav();
+        views.values().forEach(v -> ((Reflowing) v).setPortrait(upright));
+    }
+
+    private void fit(Scene scene) {
+        setPortrait(scene.getHeight() > scene.getWidth());
+    }
+
+    private void placeNav() {
+        rail.getChildren().clear();
+        bar.getChildren().clear();
+        setLeft(null);
+        setBottom(null);
+        if (portrait) {
+            bar.getChildren().addAll(navButtons.values());
+            setBottom(bar);
+        } else {
+            rail.getChildren().addAll(navButtons.values());
+            setLeft(rail);
+        }
+    }
+
+    private void show(Screen s) {
+        setCenter(view(s));
+        navButtons.get(s).setSelected(true);
+    }
+
+    private HBox header() {
+        Label title = Ui.label("Latent Ledger", "app-title");
+        Label context = Ui.label("", "context");
+        context.setId("context");
+        context.textProperty().bind(Bindings.createStringBinding(() -> {
+            if (session.visit() == null) {
+                return "No visit open";
+            }
+            return session.site().name() + "  ·  " + session.system().label() + "  ·  "
+                    + JobViewModel.purposeWord(session.visit().purpose()) + " " + session.visit().startedAt().format(DAY);
+        }, session.visitProperty(), session.systemProperty()));
+        Button newSet = Ui.button("new-reading-set", "New set", Icons.NEW, () -> {
+            session.newReadingSet();
+            session.screenProperty().set(Screen.READINGS);
+        });
+        ToggleButton theme = new ToggleButton("Dark");
+        theme.setId("theme-toggle");
+        theme.setGraphic(Icons.THEME.node(24));
+        theme.selectedProperty().bindBidirectional(session.darkProperty());
+        HBox right = new HBox(8, newSet, theme);
+        right.setAlignment(Pos.CENTER_RIGHT);
+        right.setMinWidth(Region.USE_PREF_SIZE);
+        title.setMinWidth(Region.USE_PREF_SIZE);
+        context.setWrapText(true);
+        context.setMinWidth(0);
+        HBox.setHgrow(context, javafx.scene.layout.Priority.ALWAYS);
+        context.setMaxWidth(Double.MAX_VALUE);
+        HBox h = new HBox(16, title, context, right);
+        h.setAlignment(Pos.CENTER_LEFT);
+        h.getStyleClass().add("header");
+        return h;
+    }
+
+    private static Icons icon(Screen s) {
+        return switch (s) {
+            case JOB -> Icons.JOB;
+            case READINGS -> Icons.READINGS;
+            case RESULTS -> Icons.RESULTS;
+            case LOGS -> Icons.LOGS;
+            case COMPARE -> Icons.COMPARE;
+            case EXPORT -> Icons.EXPORT;
+        };
+    }
+}

@@ -1,0 +1,84 @@
+package app.latentledger.ui.compare;
+
+import app.latentledger.core.records.ReadingSet;
+import app.latentledger.ui.look.Reflowing;
+import app.latentledger.ui.look.Ui;
+import javafx.collections.ListChangeListener;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.layout.ColumnConstraints;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+
+/** The compare screen: pick an earlier reading set, see before, after and the change. Binds only. */
+public final class CompareView extends VBox implements Reflowing {
+    private final CompareViewModel viewModel;
+
+    public CompareView(CompareViewModel viewModel) {
+        super(12);
+        this.viewModel = viewModel;
+        getStyleClass().add("screen");
+        setId("screen-compare");
+        ComboBox<ReadingSet> pick = new ComboBox<>(viewModel.earlier());
+        pick.setId("compare-pick");
+        pick.setPrefWidth(420);
+        pick.setCellFactory(v -> cell());
+        pick.setButtonCell(cell());
+        pick.valueProperty().bindBidirectional(viewModel.chosenProperty());
+        Label verdicts = Ui.label("", "subheading");
+        verdicts.setId("compare-verdicts");
+        verdicts.textProperty().bind(viewModel.verdictsProperty());
+        Label status = Ui.wrapped("", "muted");
+        status.setId("compare-status");
+        status.textProperty().bind(viewModel.statusProperty());
+        GridPane table = new GridPane();
+        table.setId("compare-table");
+        table.setHgap(24);
+        table.setVgap(6);
+        ColumnConstraints first = new ColumnConstraints();
+        first.setHgrow(Priority.ALWAYS);
+        table.getColumnConstraints().add(first);
+        Runnable fill = () -> {
+            table.getChildren().clear();
+            table.addRow(0, Ui.label("Figure", "table-head"), Ui.label("Before", "table-head"),
+                    Ui.label("After", "table-head"), Ui.label("Change", "table-head"), Ui.label("", "table-head"));
+            int r = 1;
+            for (CompareRow row : viewModel.rows()) {
+                Label after = Ui.label(row.after(), "figure-value");
+                after.setId("after-" + row.key());
+                Label before = Ui.label(row.before(), "figure-value");
+                before.setId("before-" + row.key());
+                Label change = Ui.label(row.change(), "figure-value");
+                change.setId("change-" + row.key());
+                table.addRow(r++, Ui.label(row.label(), "figure-label"), before, after, change,
+                        Ui.label(row.unit(), "muted"));
+            }
+        };
+        viewModel.rows().addListener((ListChangeListener<CompareRow>) c -> fill.run());
+        fill.run();
+        VBox panel = Ui.panel(10, Ui.label("Compare with an earlier reading set", "heading"),
+                Ui.label("Earlier reading set of this system", "figure-label"), pick, verdicts, status, table);
+        getChildren().add(Ui.scroll(panel));
+    }
+
+    public CompareViewModel viewModel() {
+        return viewModel;
+    }
+
+    @Override
+    public void setPortrait(boolean portrait) {
+        // one table reads the same both ways; the scroll pane takes up the extra height
+    }
+
+    private static ListCell<ReadingSet> cell() {
+        return new ListCell<>() {
+            @Override
+            protected void updateItem(ReadingSet item, boolean empty) {
+                super.updateItem(item, empty);
+                setText(empty || item == null ? null : CompareViewModel.describe(item));
+            }
+        };
+    }
+}

@@ -1,0 +1,153 @@
+package app.latentledger.ui.compare;
+
+import app.latentledger.core.coil.CoilResult;
+import app.latentledger.core.records.ReadingSet;
+import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.UnitSystem;
+import app.latentledger.core.visit.ReadingSetCheck;
+import app.latentledger.ui.AppSession;
+import app.latentledger.ui.entry.DraftRecords;
+import app.latentledger.ui.results.Shown;
+import app.latentledger.ui.results.VisitResults;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+
+import java.time.OffsetDateTime;
+import java.time.format.DateTimeFormatter;
+import java.util.List;
+
+/**
+ * The compare screen: an earlier reading set of the same system beside the one being worked on,
+ * each through the same coil check, with the change.
+ */
+public final class CompareViewModel {
+    private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm");
+
+    private final AppSession session;
+    private final ObservableList<ReadingSet> earlier = FXCollections.observableArrayList();
+    private final ObjectProperty<ReadingSet> chosen = new SimpleObjectProperty<>();
+    private final ObservableList<CompareRow> rows = FXCollections.observableArrayList();
+    private final ReadOnlyStringWrapper verdicts = new ReadOnlyStringWrapper("");
+    private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
+
+    public CompareViewModel(AppSession session) {
+        this.session = session;
+        session.draftProperty().addListener((o, a, b) -> refresh());
+        chosen.addListener((o, a, b) -> recompute());
+        refresh();
+    }
+
+    /** Reading sets of this system other than the current one, oldest first. */
+    public ObservableList<ReadingSet> earlier() {
+        return earlier;
+    }
+
+    public ObjectProperty<ReadingSet> chosenProperty() {
+        return chosen;
+    }
+
+    public ObservableList<CompareRow> rows() {
+        return rows;
+    }
+
+    /** "Not dehumidifying → Dehumidifying". */
+    public ReadOnlyStringProperty verdictsProperty() {
+        return verdicts.getReadOnlyProperty();
+    }
+
+    public ReadOnlyStringProperty statusProperty() {
+        return status.getReadOnlyProperty();
+    }
+
+    /** How a reading set is named in the pick list. */
+    public static String describe(ReadingSet rs) {
+        return rs.takenAt().format(WHEN) + (rs.label().isEmpty() ? "" : " · " + rs.label());
+    }
+
+    private void refresh() {
+        String current = session.draft() == null ? null : session.draft().readingSetId();
+        List<ReadingSet> others = session.readingSetsOfSystem().stream()
+                .filter(r -> !r.id().equals(current)).toList();
+        ReadingSet keep = chosen.get();
+        earlier.setAll(others);
+        ReadingSet pick = keep != null && others.stream().anyMatch(r -> r.id().equals(keep.id()))
+                ? others.stream().filter(r -> r.id().equals(keep.id())).findFirst().get()
+                : latestBeforeCurrent(others);
+        if (pick == chosen.get()) {
+            recompute();
+        } else {
+            chosen.set(pick);
+        }
+    }
+
+    private ReadingSet latestBeforeCurrent(List<ReadingSet> others) {
+        OffsetDateTime now = session.draft() == null || session.draft().takenAt() == null ? null
+                : session.draft().takenAt();
+        ReadingSet best = null;
+        for (ReadingSet r : others) {
+            if (now == null || !r.takenAt().isAfter(now)) {
+                best = r;
+            }
+        }
+        return best != null ? best : others.isEmpty() ? null : others.get(0);
+    }
+
+    private void recompute() {
+        rows.clear();
+        verdicts.set("");
+        ReadingSet before = chosen.get();
+        if (before == null) {
+            status.set("No other reading set of this system to compare with yet.");
+            return;
+        }
+        CoilResult a = run(before);
+        CoilResult b = current();
+        if (a == null || b == null) {
+            status.set(b == null ? "The current readings are not complete yet: "
+                    + String.join(", ", VisitResults.waitingFor(session.draft())) + "."
+                    : "The earlier reading set has no airflow, so it cannot be worked out.");
+            return;
+        }
+        UnitSystem u = session.units();
+        for (CompareFigure f : CompareFigure.values()) {
+            double x = f.read.applyAsDouble(a);
+            double y = f.read.applyAsDouble(b);
+            String change = Double.isFinite(x) && Double.isFinite(y)
+                    ? signed(f.quantity.toDisplay(u, y) - f.quantity.toDisplay(u, x), f.decimals) : Shown.NONE;
+            rows.add(new CompareRow(f.key(), f.label, Shown.of(f.quantity, u, x, f.decimals),
+                    Shown.of(f.quantity, u, y, f.decimals), change, unit(f.quantity, u)));
+        }
+        verdicts.set(VisitResults.headline(a.verdict()) + "  →  " + VisitResults.headline(b.verdict()));
+        status.set("Before: " + describe(before) + ".  After: the reading set on this visit.");
+    }
+
+    private static String unit(Quantity q, UnitSystem u) {
+        return q.symbol(u);
+    }
+
+    private static String signed(double v, int decimals) {
+        String s = Shown.number(v, decimals);
+        return s.startsWith("-") || s.equals(Shown.NONE) || Shown.number(0, decimals).equals(s) ? s : "+" + s;
+    }
+
+    private CoilResult current() {
+        ReadingSet rs = DraftRecords.complete(session.draft())
+                ? DraftRecords.toReadingSet(session.draft(), OffsetDateTime.now()) : null;
+        return rs == null ? null : run(rs);
+    }
+
+    private CoilResult run(ReadingSet rs) {
+        try {
+            if (!ReadingSetCheck.missing(rs).isEmpty()) {
+                return null;
+            }
+            return ReadingSetCheck.run(rs, session.system(), session.site(), session.thresholds(), session.units());
+        } catch (IllegalArgumentException e) {
+            return null;
+        }
+    }
+}

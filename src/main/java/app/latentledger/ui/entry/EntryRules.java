@@ -1,0 +1,115 @@
+package app.latentledger.ui.entry;
+
+import app.latentledger.core.coil.AirReading;
+import app.latentledger.core.coil.CoilReadings;
+import app.latentledger.core.coil.HumidityKind;
+import app.latentledger.core.psychro.HandbookEdition;
+import app.latentledger.core.psychro.InputLimits;
+import app.latentledger.core.psychro.StandardAtmosphere;
+import app.latentledger.core.records.HvacSystem;
+import app.latentledger.core.records.ReadingSet;
+import app.latentledger.core.records.Site;
+import app.latentledger.core.units.Quantity;
+import app.latentledger.core.visit.ReadingSetCheck;
+
+import java.time.OffsetDateTime;
+
+/**
+ * Whether a value may go into a box. Nothing here is new physics or a new limit: each check is a
+ * limit the core or the field record already enforces, asked as soon as the value is typed, so the
+ * tech hears "why not" at the box instead of at the end.
+ */
+public final class EntryRules {
+    private EntryRules() {
+    }
+
+    /**
+     * Refuses {@code candidate} (the draft with the new value in {@code slot}) when the value is out
+     * of range, makes its air stream impossible (a wet bulb above the dry bulb), or makes a reading
+     * set the record or the coil check refuses.
+     *
+     * @throws app.latentledger.core.InvalidInputException naming field, value and accepted range
+     * @throws app.latentledger.core.records.InvalidRecordException when the record refuses it
+     */
+    public static void check(Draft candidate, Slot slot, Site site, HvacSystem system) {
+        SlotValue v = candidate.value(slot);
+        String choice = candidate.choice(slot);
+        String field = slot.title(choice).toLowerCase(java.util.Locale.ROOT).replace("rh", "RH");
+        range(field, slot, choice, v);
+        double pressurePa = pressure(candidate, site);
+        stream(candidate, Slot.RETURN_DRY_BULB, Slot.RETURN_HUMIDITY, "return", pressurePa);
+        stream(candidate, Slot.SUPPLY_DRY_BULB, Slot.SUPPLY_HUMIDITY, "supply", pressurePa);
+        stream(candidate, Slot.OUTDOOR_DRY_BULB, Slot.OUTDOOR_HUMIDITY, "outdoor", pressurePa);
+        ReadingSet rs = DraftRecords.toReadingSet(candidate, OffsetDateTime.now());
+        if (rs != null && ReadingSetCheck.missing(rs).isEmpty()) {
+            ReadingSetCheck.inputs(rs, system, site);
+        }
+    }
+
+    /** Refuses a nameplate size outside what a system record and the coil check accept. */
+    public static void checkNominal(double capacityW) {
+        InputLimits.check("nominal size", Quantity.POWER_LARGE, capacityW,
+                Math.max(HvacSystem.MIN_CAPACITY_W, CoilReadings.MIN_NOMINAL_W),
+                Math.min(HvacSystem.MAX_CAPACITY_W, CoilReadings.MAX_NOMINAL_W), null);
+    }
+
+    /** The site pressure the draft is worked out at (measured, else the standard atmosphere). */
+    public static double pressure(Draft d, Site site) {
+        ReadingSet b = d.base();
+        return b != null && b.stationPressurePa() != null ? b.stationPressurePa().valueSi()
+                : StandardAtmosphere.pressurePa(site.elevationM());
+    }
+
+    private static void range(String field, Slot slot, String choice, SlotValue v) {
+        Quantity q = slot.quantity(choice);
+        Quantity tq = slot.toleranceQuantity(choice);
+        switch (slot) {
+            case COIL_TEMPERATURE -> {
+                // the coil check's own band for a cooling coil
+                InputLimits.check(field, q, v.valueSi(), -30.0, 35.0, "a cooling coil runs between about −20 °F and 95 °F");
+                InputLimits.check(field + " tolerance", tq, v.toleranceSi(), 0, 10, null);
+            }
+            case AIRFLOW -> {
+                InputLimits.check(field, q, v.valueSi(),
+                        Math.max(ReadingSet.MIN_AIRFLOW_M3_PER_S, CoilReadings.MIN_AIRFLOW_M3_PER_S),
+                        Math.min(ReadingSet.MAX_AIRFLOW_M3_PER_S, CoilReadings.MAX_AIRFLOW_M3_PER_S), null);
+                InputLimits.check(field + " tolerance", tq, v.toleranceSi(), 0, 0.5, null);
+            }
+            case CONDENSATE_VOLUME -> {
+                InputLimits.check(field, q, v.valueSi(), 0, ReadingSet.MAX_CONDENSATE_M3, null);
+                InputLimits.check(field + " tolerance", tq, v.toleranceSi(), 0, ReadingSet.MAX_CONDENSATE_M3, null);
+            }
+            case CONDENSATE_MINUTES -> {
+                InputLimits.check("condensate collection time", q, v.valueSi(), ReadingSet.MIN_COLLECTION_S,
+                        ReadingSet.MAX_COLLECTION_S, null);
+                InputLimits.check("condensate collection time tolerance", tq, v.toleranceSi(), 0,
+                        ReadingSet.MAX_COLLECTION_S / 24, null);
+            }
+            case NOMINAL_TONS -> checkNominal(v.valueSi());
+            default -> {
+                if (q == Quantity.RELATIVE_HUMIDITY) {
+                    InputLimits.check(field, q, v.valueSi(), 0, 100, null);
+                    InputLimits.check(field + " tolerance", tq, v.toleranceSi(), 0, 20, null);
+                } else {
+                    InputLimits.check(field, q, v.valueSi(), InputLimits.MIN_TEMP_C, InputLimits.MAX_TEMP_C, null);
+                    InputLimits.check(field + " tolerance", tq, v.toleranceSi(), 0, 10, null);
+                }
+            }
+        }
+    }
+
+    private static void stream(Draft d, Slot dry, Slot hum, String where, double pressurePa) {
+        SlotValue db = d.value(dry);
+        SlotValue h = d.value(hum);
+        if (db == null || h == null) {
+            return;
+        }
+        HumidityKind kind = switch (d.choice(hum)) {
+            case "rh" -> HumidityKind.RELATIVE_HUMIDITY;
+            case "dew-point" -> HumidityKind.DEW_POINT;
+            default -> HumidityKind.WET_BULB;
+        };
+        new AirReading(where, db.valueSi(), db.toleranceSi(), kind, h.valueSi(), h.toleranceSi())
+                .state(pressurePa, HandbookEdition.SI);
+    }
+}

@@ -1,0 +1,66 @@
+package app.latentledger.ui.export;
+
+import app.latentledger.bundle.Bundles;
+import app.latentledger.ui.AppSession;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.LocalDate;
+
+/**
+ * The export screen: writes the visit (or the whole site) as a bundle into the data folder's
+ * {@code exports} folder, where the tablet's file sharing can pick it up.
+ */
+public final class ExportViewModel {
+    private final AppSession session;
+    private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
+
+    public ExportViewModel(AppSession session) {
+        this.session = session;
+    }
+
+    public ReadOnlyStringProperty statusProperty() {
+        return status.getReadOnlyProperty();
+    }
+
+    /** The folder bundles are written to. */
+    public Path folder() {
+        return session.dataFolder().resolve("exports");
+    }
+
+    /** Exports the current visit; returns the file or null when it failed (status says why). */
+    public Path exportVisit() {
+        return export("visit", session.visit().id(), true);
+    }
+
+    public Path exportSite() {
+        return export("site", session.site().id(), false);
+    }
+
+    private Path export(String what, String id, boolean visit) {
+        try {
+            Files.createDirectories(folder());
+            String name = slug(session.site().name()) + "-" + what + "-" + LocalDate.now() + "-"
+                    + id.substring(0, Math.min(8, id.length())) + ".zip";
+            Path file = folder().resolve(name);
+            if (visit) {
+                Bundles.exportVisit(session.ledger(), id, file);
+            } else {
+                Bundles.exportSite(session.ledger(), id, file);
+            }
+            status.set("Saved " + file.getFileName() + " in " + folder());
+            return file;
+        } catch (IOException | RuntimeException e) {
+            status.set("Not exported: " + e.getMessage());
+            return null;
+        }
+    }
+
+    private static String slug(String s) {
+        String t = s.toLowerCase(java.util.Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("(^-|-$)", "");
+        return t.isEmpty() ? "site" : t;
+    }
+}

@@ -1,0 +1,131 @@
+package app.latentledger.ui.job;
+
+import app.latentledger.core.records.HvacSystem;
+import app.latentledger.core.records.Site;
+import app.latentledger.core.records.Visit;
+import app.latentledger.core.records.VisitPurpose;
+import app.latentledger.ui.look.Columns;
+import app.latentledger.ui.look.Icons;
+import app.latentledger.ui.look.Reflowing;
+import app.latentledger.ui.look.Ui;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
+import javafx.scene.control.TextField;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.layout.FlowPane;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+
+import java.time.format.DateTimeFormatter;
+import java.util.function.Function;
+
+/** The job screen: site, system, and the visit to start or go back to. Binds only. */
+public final class JobView extends VBox implements Reflowing {
+    private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm");
+    private final JobViewModel viewModel;
+    private final Columns columns;
+
+    public JobView(JobViewModel viewModel) {
+        super(12);
+        this.viewModel = viewModel;
+        getStyleClass().add("screen");
+        setId("screen-job");
+
+        ListView<Site> sites = list("site-list", viewModel.sites(), s -> s.name() + "\n" + s.address());
+        bindSelection(sites, viewModel.siteProperty());
+        TextField siteName = field("new-site-name", "New site name", viewModel.newSiteNameProperty());
+        TextField siteAddress = field("new-site-address", "Address", viewModel.newSiteAddressProperty());
+        TextField siteElevation = field("new-site-elevation", "Elevation, ft", viewModel.newSiteElevationFtProperty());
+        VBox siteCol = Ui.panel(8, Ui.label("1  Site", "heading"), sites, siteName, siteAddress,
+                Ui.label("Elevation, ft", "figure-label"), siteElevation,
+                Ui.button("add-site", "Add site", Icons.NEW, viewModel::addSite));
+
+        ListView<HvacSystem> systems = list("system-list", viewModel.systems(), viewModel::describe);
+        bindSelection(systems, viewModel.systemProperty());
+        TextField sysLabel = field("new-system-label", "New system name", viewModel.newSystemLabelProperty());
+        TextField sysTons = field("new-system-tons", "Nominal tons", viewModel.newSystemTonsProperty());
+        VBox systemCol = Ui.panel(8, Ui.label("2  System", "heading"), systems, sysLabel,
+                Ui.label("Nominal size, tons", "figure-label"), sysTons,
+                Ui.button("add-system", "Add system", Icons.NEW, viewModel::addSystem));
+
+        FlowPane purposes = new FlowPane(8, 8);
+        ToggleGroup group = new ToggleGroup();
+        for (VisitPurpose p : VisitPurpose.values()) {
+            ToggleButton b = new ToggleButton(JobViewModel.purposeWord(p));
+            b.setId("purpose-" + p.key());
+            b.setToggleGroup(group);
+            b.setSelected(p == viewModel.purposeProperty().get());
+            b.setOnAction(e -> {
+                b.setSelected(true);
+                viewModel.purposeProperty().set(p);
+            });
+            purposes.getChildren().add(b);
+        }
+        TextField tech = field("technician", "Technician", viewModel.technicianProperty());
+        ListView<Visit> visits = list("visit-list", viewModel.visits(), v -> v.startedAt().format(WHEN) + " · "
+                + JobViewModel.purposeWord(v.purpose()) + "\n" + v.technician());
+        visits.setOnMouseClicked(e -> {
+            Visit v = visits.getSelectionModel().getSelectedItem();
+            if (v != null) {
+                viewModel.resume(v);
+            }
+        });
+        javafx.scene.control.Button start = Ui.button("start-visit", "Start visit", Icons.READINGS, viewModel::startVisit);
+        start.getStyleClass().add("primary");
+        start.setMaxWidth(Double.MAX_VALUE);
+        Label status = Ui.wrapped("", "message");
+        status.setId("job-status");
+        status.textProperty().bind(viewModel.statusProperty());
+        VBox visitCol = Ui.panel(8, Ui.label("3  Visit", "heading"), Ui.label("Purpose", "figure-label"), purposes,
+                tech, start, status, Ui.label("Earlier visits (tap to open)", "figure-label"), visits);
+
+        columns = new Columns(12, siteCol, systemCol, visitCol);
+        VBox.setVgrow(columns, Priority.ALWAYS);
+        getChildren().add(columns);
+    }
+
+    public JobViewModel viewModel() {
+        return viewModel;
+    }
+
+    @Override
+    public void setPortrait(boolean portrait) {
+        columns.setPortrait(portrait);
+    }
+
+    private static TextField field(String id, String prompt, javafx.beans.property.StringProperty value) {
+        TextField f = new TextField();
+        f.setId(id);
+        f.setPromptText(prompt);
+        f.textProperty().bindBidirectional(value);
+        return f;
+    }
+
+    private static <T> ListView<T> list(String id, javafx.collections.ObservableList<T> items, Function<T, String> text) {
+        ListView<T> l = new ListView<>(items);
+        l.setId(id);
+        l.setPrefHeight(240);
+        l.setMinHeight(140);
+        VBox.setVgrow(l, Priority.ALWAYS);
+        l.setCellFactory(v -> new ListCell<>() {
+            @Override
+            protected void updateItem(T item, boolean empty) {
+                super.updateItem(item, empty);
+                setText(empty || item == null ? null : text.apply(item));
+            }
+        });
+        return l;
+    }
+
+    private static <T> void bindSelection(ListView<T> l, javafx.beans.property.ObjectProperty<T> chosen) {
+        l.getSelectionModel().select(chosen.get());
+        chosen.addListener((o, a, b) -> l.getSelectionModel().select(b));
+        l.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            if (b != null && b != chosen.get()) {
+                chosen.set(b);
+            }
+        });
+    }
+}

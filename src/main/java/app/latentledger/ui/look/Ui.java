@@ -1,0 +1,64 @@
+package app.latentledger.ui.look;
+
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+
+/** Small builders so the views read as layout, not as styling code. */
+public final class Ui {
+    /** 48 px: the smallest target a gloved finger hits reliably (common practice, no source). */
+    public static final double MIN_TARGET_PX = 48;
+
+    private Ui() {
+    }
+
+    public static Label label(String text, String... styleClasses) {
+        Label l = new Label(text);
+        l.getStyleClass().addAll(styleClasses);
+        return l;
+    }
+
+    public static Label wrapped(String text, String... styleClasses) {
+        Label l = label(text, styleClasses);
+        l.setWrapText(true);
+        l.setMinHeight(Region.USE_PREF_SIZE);
+        return l;
+    }
+
+    public static Button button(String id, String text, Icons icon, Runnable action) {
+        Button b = new Button(text);
+        b.setId(id);
+        if (icon != null) {
+            b.setGraphic(icon.node(24));
+            b.setGraphicTextGap(10);
+        }
+        b.setMinHeight(MIN_TARGET_PX);
+        b.setOnAction(e -> action.run());
+        return b;
+    }
+
+    public static VBox panel(double spacing, Node... children) {
+        VBox v = new VBox(spacing, children);
+        v.getStyleClass().add("panel");
+        return v;
+    }
+
+    public static ScrollPane scroll(Node content) {
+        ScrollPane s = new ScrollPane(content);
+        s.setFitToWidth(true);
+        s.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+        VBox.setVgrow(s, Priority.ALWAYS);
+        return s;
+    }
+
+    public static Region grow() {
+        Region r = new Region();
+        javafx.scene.layout.HBox.setHgrow(r, Priority.ALWAYS);
+        VBox.setVgrow(r, Priority.ALWAYS);
+        return r;
+    }
+}

@@ -1,0 +1,86 @@
+package app.latentledger.ui.results;
+
+import app.latentledger.ui.look.Reflowing;
+import app.latentledger.ui.look.Ui;
+import javafx.scene.control.Label;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
+
+/**
+ * The results screen: the verdict, both air states, what the coil does, a place for the
+ * psychrometric chart, and the findings ending with the safety line. Binds only.
+ */
+public final class ResultsView extends VBox implements Reflowing {
+    /** Id of the pane the psychrometric chart goes into when the chart build is merged. */
+    public static final String CHART_SLOT_ID = "psychro-chart-slot";
+
+    private final ResultsViewModel viewModel;
+    private final FigureTable entering = new FigureTable();
+    private final FigureTable leaving = new FigureTable();
+    private final FigureTable performance = new FigureTable();
+    private final StackPane chartSlot = new StackPane();
+    private final VBox figures;
+    private final FindingsList findings;
+
+    public ResultsView(ResultsViewModel viewModel) {
+        super(12);
+        this.viewModel = viewModel;
+        getStyleClass().add("screen");
+        setId("screen-results");
+        VerdictBanner banner = new VerdictBanner(viewModel.sheetProperty(), false);
+        banner.setId("verdict");
+        HBox states = new HBox(16, Ui.panel(6, entering), Ui.panel(6, leaving));
+        states.getChildren().forEach(n -> HBox.setHgrow(n, Priority.ALWAYS));
+        chartSlot.setId(CHART_SLOT_ID);
+        chartSlot.getStyleClass().add("slot-placeholder");
+        chartSlot.getChildren().add(Ui.wrapped("Psychrometric chart: arrives with the chart build.", "muted"));
+        figures = new VBox(12, states, Ui.panel(6, performance), chartSlot);
+        findings = new FindingsList(viewModel.sheetProperty());
+        getChildren().addAll(banner, new VBox());
+        viewModel.sheetProperty().addListener((o, a, b) -> show(b));
+        show(viewModel.sheet());
+        setPortrait(false);
+    }
+
+    public ResultsViewModel viewModel() {
+        return viewModel;
+    }
+
+    /** The pane to put the psychrometric chart in. */
+    public StackPane chartSlot() {
+        return chartSlot;
+    }
+
+    @Override
+    public void setPortrait(boolean upright) {
+        javafx.scene.Node body;
+        if (upright) {
+            body = Ui.scroll(new VBox(12, figures, Ui.panel(8, findings)));
+        } else {
+            VBox right = Ui.panel(8, findings);
+            javafx.scene.control.ScrollPane left = Ui.scroll(figures);
+            javafx.scene.control.ScrollPane rightScroll = Ui.scroll(right);
+            left.setPrefWidth(560);
+            rightScroll.setPrefWidth(520);
+            HBox.setHgrow(left, Priority.ALWAYS);
+            HBox.setHgrow(rightScroll, Priority.ALWAYS);
+            body = new HBox(16, left, rightScroll);
+        }
+        VBox.setVgrow(body, Priority.ALWAYS);
+        getChildren().set(1, body);
+    }
+
+    private void show(ResultSheet s) {
+        if (s == null) {
+            return;
+        }
+        entering.show("Return (entering)", s.entering());
+        leaving.show("Supply (leaving)", s.leaving());
+        performance.show("What the coil does", s.performance());
+        if (s.performance().isEmpty()) {
+            performance.add(new Label(s.explanation()), 0, 1, 3, 1);
+        }
+    }
+}
