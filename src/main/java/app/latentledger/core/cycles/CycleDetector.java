@@ -27,7 +27,8 @@ import java.util.List;
  * the still supply probe stays colder and drier than that, drifting slowly (note §5.3).
  *
  * <p>A sample interval over {@link Thresholds#GAP_FACTOR} × the log's median breaks the record: a
- * run across it is dropped (its length is unknown) and a rest ends at it.
+ * run across it is dropped (its length is unknown) and a rest ends at it. A run still going when
+ * the log ends is dropped the same way, and the rest before it ends at its start (it is not rest).
  */
 public final class CycleDetector {
     private static final double BLOWER_JUDGE_FROM_S = 90.0;
@@ -85,6 +86,9 @@ public final class CycleDetector {
                 runs.add(new int[] {start, i});
             }
             state = s;
+        }
+        if (state == 1 && startSeen) {
+            runs.add(new int[] {start, BROKEN}); // still running at the log's end: it bounds the rest before it
         }
         return runs;
     }
@@ -155,6 +159,10 @@ public final class CycleDetector {
                     extreme = min(ts, start, i);
                 }
             }
+        }
+        if (state == on && startSeen) {
+            raw.add(new int[] {runStart, BROKEN}); // still running at the log's end: it bounds the rest before it
+            segmentOf.add(segment);
         }
         return mergeShort(log, raw, segmentOf);
     }
