@@ -109,17 +109,22 @@ public final class RunCycleAnalysis {
         double duration = log.durationS();
         double[] on = new double[cycles.size()];
         double onTotal = 0;
+        // the time the counted cycles cover (each run and its rest, gaps left out): the run-time
+        // share and the net rate are taken over it, so a log started or stopped mid-run, or broken
+        // by a gap, does not dilute them with minutes whose runs and water were not counted
+        double coveredS = 0;
         for (int k = 0; k < on.length; k++) {
             on[k] = cycles.get(k).onSeconds();
             onTotal += on[k];
+            coveredS += cycles.get(k).onSeconds() + cycles.get(k).offSeconds();
         }
         double flow = masses ? airflowM3PerS : Double.NaN;
         boolean anyHumidity = air.humidity && !cycles.isEmpty();
         RunCycleReport draft = new RunCycleReport(log.size(), duration, log.has(Channel.COMPRESSOR), results,
                 duration > 0 ? cycles.size() / (duration / 3600.0) : Double.NaN,
-                Stats.median(on, on.length), duration > 0 ? onTotal / duration : Double.NaN, flow,
+                Stats.median(on, on.length), coveredS > 0 ? onTotal / coveredS : Double.NaN, flow,
                 anyHumidity ? removed * flow : Double.NaN, anyHumidity ? returned * flow : Double.NaN,
-                anyHumidity && duration > 0 ? (removed - returned) * flow / duration : Double.NaN,
+                anyHumidity && coveredS > 0 ? (removed - returned) * flow / coveredS : Double.NaN,
                 steady[0], steady[1] * flow,
                 onForMeasured > 0 ? netPerFlow / (steady[1] * onForMeasured) : Double.NaN,
                 onForPredicted > 0 ? predictedWeighted / onForPredicted : Double.NaN,

@@ -13,11 +13,12 @@ import java.util.List;
  * @param cycles                  complete runs in order
  * @param cyclesPerHour           runs started per hour of log
  * @param medianOnS               median run time, s
- * @param runtimeFraction         total run time ÷ log duration
+ * @param runtimeFraction         Σ run time ÷ Σ (run + rest) of the cycles, the time they cover (not the
+ *                                whole log: runs cut by its ends or a gap are not counted)
  * @param airflowM3PerS           airflow used for the masses, m³/s (NaN when not given)
  * @param removedKg               total removed during runs, kg
  * @param returnedKg              total returned in blower-on rests, kg
- * @param netRemovalKgPerS        (removed − returned) ÷ log duration, kg/s
+ * @param netRemovalKgPerS        (removed − returned) ÷ the same covered time, kg/s
  * @param steadyDryingW           steady W_return − W_supply from the long runs, kg/kg
  * @param steadyRemovalKgPerS     steady-state moisture removal rate, kg/s
  * @param latentFractionMeasured  Σ net ÷ (steady rate × Σ on-time) over the cycles

@@ -113,4 +113,24 @@ class RunCycleLogEdgesTest {
         assertEquals(3 * returned, r.returnedKg(), 0.03 * returned, "returned over the log");
         assertEquals(3 * mda * dw * gross(1200, 45), r.removedKg(), 0.03 * mda * dw * 1200, "removed over the log");
     }
+
+    @ParameterizedTest(name = "log starts 10 min into the first run, status columns: {0}")
+    @ValueSource(booleans = {true, false})
+    @DisplayName("run-time share and net rate cover the same time as the runs they count")
+    void logStartsDuringARun(boolean status) {
+        Rows rows = fourRuns();
+        double from = rows.runs.get(0)[0] + 600;
+        RunCycleReport r = ANALYSIS.analyse(window(rows.series(status), from, Double.POSITIVE_INFINITY), 101_325,
+                AIRFLOW);
+        assertEquals(3, r.cycles().size(), "the first run's start was not seen");
+        // the three counted cycles: 3 × 1200 s on out of 3 × (1200 + 900) s — 4/7 = 0.571 by hand
+        // (the unit's duty cycle, t_on/(t_on + t_off), H&R 1996 / EnergyPlus E3); the whole log is
+        // 600 + 900 + 3 × 2100 s and the old "counted run time ÷ log duration" gave 3600/7800 = 0.46
+        assertEquals(1200.0 / 2100.0, r.runtimeFraction(), 30.0 / 2100, "run-time share");
+        double mda = AIRFLOW * dryAirPerM3(rows);
+        double dw = rows.scenario.steadyDryingW;
+        double net = mda * dw * (gross(1200, 45) - evaporated(900, 1000, 1.5));
+        // net per cycle over the cycle's own 2100 s, not over minutes whose water was never counted
+        assertEquals(net / 2100, r.netRemovalKgPerS(), 0.02 * net / 2100, "net removal rate");
+    }
 }
