@@ -35,13 +35,13 @@ public record ReadingSet(String id, String visitId, OffsetDateTime takenAt, Stri
                          Condensate condensate, String notes) {
     /** 10 K: a wider dry-bulb tolerance is a typo, not an instrument (common practice, no source). */
     static final double MAX_TEMPERATURE_TOLERANCE_K = HumidityReading.MAX_TEMPERATURE_TOLERANCE_K;
-    /** 0.005 to 25 m³/s, about 10 to 53 000 cfm: any residential or light-commercial air handler. */
-    public static final double MIN_AIRFLOW_M3_PER_S = 0.005;
+    /** 0.0094 to 25 m³/s, about 20 to 53 000 cfm: the coil check's own lower limit, so a stored set always checks. */
+    public static final double MIN_AIRFLOW_M3_PER_S = app.latentledger.core.coil.CoilReadings.MIN_AIRFLOW_M3_PER_S;
     public static final double MAX_AIRFLOW_M3_PER_S = 25;
     /** 50 L in one catch is far beyond a timed catch at a drain (common practice, no source). */
     public static final double MAX_CONDENSATE_M3 = 0.05;
-    /** 10 s to 24 h collection time. */
-    public static final double MIN_COLLECTION_S = 10;
+    /** 30 s to 24 h collection time, as the coil check accepts. */
+    public static final double MIN_COLLECTION_S = 30;
     public static final double MAX_COLLECTION_S = 86_400;
     /** 5 kPa: wider than the spread between weather and the standard atmosphere. */
     static final double MAX_PRESSURE_TOLERANCE_PA = 5_000;
@@ -69,8 +69,9 @@ public record ReadingSet(String id, String visitId, OffsetDateTime takenAt, Stri
             temperature("coil temperature", coilTemperature.value());
         }
         if (airflow != null) {
+            // tolerances up to half the reading, as the coil check accepts them
             airflow.volume().within("airflow", Quantity.AIRFLOW, MIN_AIRFLOW_M3_PER_S, MAX_AIRFLOW_M3_PER_S,
-                    airflow.volume().valueSi());
+                    airflow.volume().valueSi() / 2);
         }
         if (stationPressurePa != null) {
             stationPressurePa.within("station pressure", Quantity.PRESSURE, InputLimits.MIN_PRESSURE_PA,
@@ -78,9 +79,9 @@ public record ReadingSet(String id, String visitId, OffsetDateTime takenAt, Stri
         }
         if (condensate != null) {
             condensate.volume().within("condensate volume", Quantity.WATER_VOLUME, 0, MAX_CONDENSATE_M3,
-                    MAX_CONDENSATE_M3);
+                    condensate.volume().valueSi() / 2);
             condensate.seconds().within("condensate collection time", Quantity.DURATION_MINUTES,
-                    MIN_COLLECTION_S, MAX_COLLECTION_S, MAX_COLLECTION_S / 24);
+                    MIN_COLLECTION_S, MAX_COLLECTION_S, condensate.seconds().valueSi() / 2);
         }
         notes = Check.optionalText("reading set notes", notes, 10_000);
     }
