@@ -35,7 +35,7 @@ public final class ResultsView extends VBox implements Reflowing {
         states.getChildren().forEach(n -> HBox.setHgrow(n, Priority.ALWAYS));
         chartSlot.setId(CHART_SLOT_ID);
         chartSlot.getStyleClass().add("slot-placeholder");
-        chartSlot.getChildren().add(Ui.wrapped("Psychrometric chart: arrives with the chart build.", "muted"));
+        chartSlot.getChildren().add(Ui.wrapped("Drawing the psychrometric chart…", "muted"));
         figures = new VBox(12, states, Ui.panel(6, performance), chartSlot);
         findings = new FindingsList(viewModel.sheetProperty());
         getChildren().addAll(banner, new VBox());
