@@ -12,7 +12,7 @@ import javafx.scene.layout.StackPane;
 public final class ChartSlots {
     /** Tall enough for the chart's axes and the readout beside it at 18 px text. */
     static final double PSYCHRO_HEIGHT_PX = 470;
-    static final double TIMELINE_HEIGHT_PX = 380;
+    static final double TIMELINE_HEIGHT_PX = 430;
 
     private ChartSlots() {
     }

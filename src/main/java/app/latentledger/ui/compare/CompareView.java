@@ -72,8 +72,8 @@ public final class CompareView extends VBox implements Reflowing {
         chartSlot.getStyleClass().add("slot-placeholder");
         chartSlot.getChildren().add(Ui.wrapped("Drawing the before/after chart…", "muted"));
         VBox panel = Ui.panel(10, Ui.label("Compare with an earlier reading set", "heading"),
-                Ui.label("Earlier reading set of this system", "figure-label"), pick, verdicts, status, table,
-                chartSlot, report, reportStatus);
+                Ui.label("Earlier reading set of this system", "figure-label"), pick, verdicts, status,
+                report, reportStatus, table, chartSlot);
         getChildren().add(Ui.scroll(panel));
     }
 

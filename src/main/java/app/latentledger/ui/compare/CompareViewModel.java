@@ -149,7 +149,7 @@ public final class CompareViewModel {
         CoilResult b = current();
         if (session.site() != null) {
             chartData.set(CoilCharts.of(session.units(), StandardAtmosphere.pressurePa(session.site().elevationM()),
-                    session.site().name() + " · before and after", a, b));
+                    "Before and after", a, b));
         }
         if (before == null) {
             status.set("No other reading set of this system to compare with yet.");

@@ -40,6 +40,9 @@ public final class ExportView extends VBox implements Reflowing {
         reportStatus.textProperty().bind(reports.statusProperty());
         javafx.scene.layout.FlowPane reportButtons = new javafx.scene.layout.FlowPane(12, 12, pdf, csv, json);
         javafx.scene.layout.FlowPane bundleButtons = new javafx.scene.layout.FlowPane(12, 12, visit, site);
+        // wrap only when the screen is narrower than the buttons (FlowPane's default wraps at 400 px)
+        reportButtons.setPrefWrapLength(700);
+        bundleButtons.setPrefWrapLength(700);
         VBox bundle = Ui.panel(12, Ui.label("Export a bundle", "heading"),
                 Ui.wrapped("A bundle is one file with the visit's site, system, readings, logs and results as"
                         + " shown, checked by its own manifest. Another tablet or the office imports it with"

@@ -114,6 +114,8 @@ public final class LogView extends VBox implements Reflowing {
         VBox.setVgrow(timelineSlot, Priority.ALWAYS);
         VBox right = Ui.panel(8, new FindingsList(viewModel.findings()));
         columns = new Columns(12, Ui.scroll(left), Ui.scroll(right));
+        // the timeline below keeps its height; the columns scroll in what is left
+        columns.setMinHeight(0);
         VBox.setVgrow(columns, Priority.ALWAYS);
         getChildren().addAll(columns, timelineSlot);
     }

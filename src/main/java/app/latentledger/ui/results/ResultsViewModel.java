@@ -72,8 +72,8 @@ public final class ResultsViewModel {
                 session.thresholds(), session.units());
         sheet.set(o.sheet());
         CoilResult pairedWith = before(session.draft());
-        String title = session.site().name() + " · " + (pairedWith != null && o.coil() != null
-                ? "before and after" : "this reading set");
+        // short: the header already names the site, and the chart's title shares its width with the plot
+        String title = pairedWith != null && o.coil() != null ? "Before and after" : "This reading set";
         chartData.set(CoilCharts.of(session.units(), StandardAtmosphere.pressurePa(session.site().elevationM()), title,
                 pairedWith, o.coil()));
     }
