@@ -58,6 +58,7 @@ public final class LogView extends VBox implements Reflowing {
         airflow.setId("log-airflow");
         airflow.setPromptText("Airflow");
         airflow.setPrefColumnCount(6);
+        airflow.setMinWidth(140);
         airflow.textProperty().bindBidirectional(viewModel.airflowProperty());
         Label airflowCaption = Ui.label("", "figure-label");
         airflowCaption.textProperty().bind(viewModel.airflowCaptionProperty());
