@@ -67,6 +67,9 @@ public final class CompareView extends VBox implements Reflowing {
         report.disableProperty().bind(viewModel.chosenProperty().isNull().or(viewModel.reports().busyProperty()));
         Label reportStatus = Ui.wrapped("", "message");
         reportStatus.setId("compare-report-status");
+        // takes room only when it has something to say
+        reportStatus.managedProperty().bind(reportStatus.textProperty().isNotEmpty());
+        reportStatus.visibleProperty().bind(reportStatus.managedProperty());
         reportStatus.textProperty().bind(viewModel.reports().statusProperty());
         chartSlot.setId(CHART_SLOT_ID);
         chartSlot.getStyleClass().add("slot-placeholder");

@@ -37,6 +37,9 @@ public final class ExportView extends VBox implements Reflowing {
         }
         Label reportStatus = Ui.wrapped("", "message");
         reportStatus.setId("report-status");
+        // takes room only when it has something to say
+        reportStatus.managedProperty().bind(reportStatus.textProperty().isNotEmpty());
+        reportStatus.visibleProperty().bind(reportStatus.managedProperty());
         reportStatus.textProperty().bind(reports.statusProperty());
         javafx.scene.layout.FlowPane reportButtons = new javafx.scene.layout.FlowPane(12, 12, pdf, csv, json);
         javafx.scene.layout.FlowPane bundleButtons = new javafx.scene.layout.FlowPane(12, 12, visit, site);
