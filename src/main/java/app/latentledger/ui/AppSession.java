@@ -1,6 +1,10 @@
 package app.latentledger.ui;
 
 import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.settings.DisplayTheme;
+import app.latentledger.core.settings.InstrumentTolerances;
+import app.latentledger.core.settings.SettingsCatalogue;
+import app.latentledger.core.settings.Settings;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Ids;
 import app.latentledger.core.records.ReadingSet;
@@ -12,6 +16,7 @@ import app.latentledger.ui.entry.Draft;
 import app.latentledger.ui.entry.DraftRecords;
 import app.latentledger.ui.entry.DraftStore;
 import app.latentledger.ui.entry.FileDraftStore;
+import app.latentledger.ui.entry.Slot;
 import app.latentledger.ui.log.LogAnalysisService;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
@@ -28,16 +33,18 @@ import java.util.Optional;
 
 /**
  * The app's state for one run: the ledger, the visit and reading set being worked on, the screen
- * shown and the theme. Every screen's view model reads from it; only it writes to the ledger and
- * the draft store.
+ * shown, and the tech's stored settings (units, theme, tolerances, thresholds, paper). Every
+ * screen's view model reads from it; only it writes to the ledger and the draft store. A change of
+ * settings is applied at once: view models that show numbers listen to {@link #unitsProperty()}
+ * or {@link #settingsProperty()}.
  */
 public final class AppSession implements AutoCloseable {
     private final Ledger ledger;
     private final Path dataFolder;
     private final DraftStore drafts;
     private final LogAnalysisService logAnalysis;
-    private final UnitSystem units;
-    private final ThresholdSettings thresholds = ThresholdSettings.DEFAULTS;
+    private final ReadOnlyObjectWrapper<Settings> settings = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyObjectWrapper<UnitSystem> units = new ReadOnlyObjectWrapper<>();
     /** The app opens on what the system in hand is doing; Job and Readings are one tap away. */
     private final ObjectProperty<Screen> screen = new SimpleObjectProperty<>(Screen.RESULTS);
     private final BooleanProperty dark = new SimpleBooleanProperty(false);
@@ -46,18 +53,60 @@ public final class AppSession implements AutoCloseable {
     private final ReadOnlyObjectWrapper<Visit> visit = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyObjectWrapper<Draft> draft = new ReadOnlyObjectWrapper<>();
 
-    public AppSession(Ledger ledger, Path dataFolder, UnitSystem units, LogAnalysisService logAnalysis) {
+    public AppSession(Ledger ledger, Path dataFolder, LogAnalysisService logAnalysis) {
         this.ledger = ledger;
         this.dataFolder = dataFolder;
-        this.units = units;
         this.drafts = new FileDraftStore(dataFolder);
         this.logAnalysis = logAnalysis;
+        Settings stored = ledger.settings().load();
+        settings.set(stored);
+        units.set(stored.units());
+        dark.set(stored.theme() == DisplayTheme.DARK);
+        settings.addListener((o, a, b) -> {
+            units.set(b.units());
+            dark.set(b.theme() == DisplayTheme.DARK);
+        });
+        // the header's theme switch is a setting too: keep it for the next start
+        dark.addListener((o, a, b) -> {
+            DisplayTheme wanted = b ? DisplayTheme.DARK : DisplayTheme.LIGHT;
+            if (settings.get().theme() != wanted) {
+                saveSettings(settings.get().withChoice(SettingsCatalogue.THEME, wanted.key()));
+            }
+        });
         openLatestVisit();
     }
 
-    /** Opens the ledger in {@code dataFolder} (seeding the demo when empty) in IP units. */
+    /** Opens the ledger in {@code dataFolder} (seeding the demo when empty) with its stored settings. */
     public static AppSession open(Path dataFolder, LogAnalysisService logAnalysis) {
-        return new AppSession(Ledger.open(dataFolder), dataFolder, UnitSystem.IP, logAnalysis);
+        return new AppSession(Ledger.open(dataFolder), dataFolder, logAnalysis);
+    }
+
+    /** Stores changed settings and applies them to every screen. */
+    public void saveSettings(Settings changed) {
+        ledger.settings().save(changed);
+        settings.set(changed);
+    }
+
+    /**
+     * The tolerance a freshly typed value gets: the tech's instrument tolerance from the settings
+     * where one applies, else the box's own default (coil saturation from a gauge, condensate, time).
+     */
+    public double defaultToleranceSi(Slot slot, String choice) {
+        InstrumentTolerances t = settings.get().tolerances();
+        if (slot.isHumidity()) {
+            return switch (choice == null ? "" : choice) {
+                case "rh" -> t.relativeHumidityPct();
+                case "wet-bulb" -> t.wetBulbK();
+                case "dew-point" -> t.dewPointK();
+                default -> slot.defaultToleranceSi(choice);
+            };
+        }
+        return switch (slot) {
+            case RETURN_DRY_BULB, SUPPLY_DRY_BULB, OUTDOOR_DRY_BULB -> t.dryBulbK();
+            case COIL_TEMPERATURE -> "coil-surface".equals(choice) ? t.coilK() : slot.defaultToleranceSi(choice);
+            case AIRFLOW -> t.airflowFraction();
+            default -> slot.defaultToleranceSi(choice);
+        };
     }
 
     /** The visit with a draft in progress, else the newest visit. */
@@ -159,11 +208,26 @@ public final class AppSession implements AutoCloseable {
     }
 
     public UnitSystem units() {
-        return units;
+        return units.get();
     }
 
+    /** The units the tech reads and types; changes when the setting does. */
+    public ReadOnlyObjectProperty<UnitSystem> unitsProperty() {
+        return units.getReadOnlyProperty();
+    }
+
+    /** The finding thresholds of the settings (the indoor RH target included). */
     public ThresholdSettings thresholds() {
-        return thresholds;
+        return settings.get().thresholds();
+    }
+
+    public Settings settings() {
+        return settings.get();
+    }
+
+    /** Read-only to screens: change settings through {@link #saveSettings}. */
+    public ReadOnlyObjectProperty<Settings> settingsProperty() {
+        return settings.getReadOnlyProperty();
     }
 
     public LogAnalysisService logAnalysis() {

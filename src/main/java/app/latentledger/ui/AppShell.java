@@ -16,6 +16,10 @@ import app.latentledger.ui.look.Theme;
 import app.latentledger.ui.look.Ui;
 import app.latentledger.ui.results.ResultsView;
 import app.latentledger.ui.results.ResultsViewModel;
+import app.latentledger.ui.chart.ChartSlots;
+import app.latentledger.ui.settings.SettingsStore;
+import app.latentledger.ui.settings.SettingsView;
+import app.latentledger.ui.settings.SettingsViewModel;
 import javafx.beans.binding.Bindings;
 import javafx.geometry.Pos;
 import javafx.scene.Parent;
@@ -43,6 +47,10 @@ public final class AppShell extends BorderPane {
     private static final DateTimeFormatter DAY = DateTimeFormatter.ofPattern("yyyy-MM-dd");
 
     private final AppSession session;
+    private final java.util.concurrent.Executor work;
+    private final java.util.concurrent.Executor fx;
+    /** One writer of reports for the export and compare screens. */
+    private app.latentledger.ui.export.ReportViewModel reports;
     // built on first use, so the first frame waits only for the first screen's view model
     private EntryViewModel entry;
     private ResultsViewModel results;
@@ -50,6 +58,9 @@ public final class AppShell extends BorderPane {
     private LogImportViewModel logs;
     private CompareViewModel compare;
     private ExportViewModel export;
+    private SettingsViewModel settings;
+    /** True once the first frame is up and the charts may be built. */
+    private boolean chartsAttached;
     private final Map<Screen, Parent> views = new EnumMap<>(Screen.class);
     private final Pane rail = new VBox();
     private final Pane bar = new HBox();
@@ -58,7 +69,18 @@ public final class AppShell extends BorderPane {
     private boolean laidOut;
 
     public AppShell(AppSession session) {
+        this(session, Background.worker(), Background.fx());
+    }
+
+    /**
+     * @param work where slow jobs (log import, reports) run
+     * @param fx   where their results are applied; {@link Background#DIRECT} for both renders a
+     *             screen complete in one call (the {@code screens} command, tests)
+     */
+    public AppShell(AppSession session, java.util.concurrent.Executor work, java.util.concurrent.Executor fx) {
         this.session = session;
+        this.work = work;
+        this.fx = fx;
         setId("shell");
         setTop(header());
         ToggleGroup group = new ToggleGroup();
@@ -126,23 +148,69 @@ public final class AppShell extends BorderPane {
 
     public LogImportViewModel logs() {
         if (logs == null) {
-            logs = new LogImportViewModel(session);
+            logs = new LogImportViewModel(session, work, fx);
         }
         return logs;
     }
 
     public CompareViewModel compare() {
         if (compare == null) {
-            compare = new CompareViewModel(session);
+            compare = new CompareViewModel(session, reports());
         }
         return compare;
     }
 
     public ExportViewModel export() {
         if (export == null) {
-            export = new ExportViewModel(session);
+            export = new ExportViewModel(session, reports());
         }
         return export;
+    }
+
+    public app.latentledger.ui.export.ReportViewModel reports() {
+        if (reports == null) {
+            reports = new app.latentledger.ui.export.ReportViewModel(session, work, fx);
+        }
+        return reports;
+    }
+
+    /** The settings screen's view model, saving through the session so every screen follows. */
+    public SettingsViewModel settings() {
+        if (settings == null) {
+            settings = new SettingsViewModel(new SettingsStore() {
+                @Override
+                public app.latentledger.core.settings.Settings load() {
+                    return session.settings();
+                }
+
+                @Override
+                public void save(app.latentledger.core.settings.Settings changed) {
+                    session.saveSettings(changed);
+                }
+            });
+            session.settingsProperty().addListener((o, a, b) -> settings.showSaved(b));
+        }
+        return settings;
+    }
+
+    /**
+     * Builds the charts into the screens that have a slot for one (results, compare) and into those
+     * built later. Called after the first frame: drawing a chart is the heaviest part of a screen.
+     */
+    public void attachCharts() {
+        if (chartsAttached) {
+            return;
+        }
+        chartsAttached = true;
+        views.forEach(this::wireCharts);
+    }
+
+    private void wireCharts(Screen s, Parent v) {
+        if (s == Screen.RESULTS) {
+            ChartSlots.psychro(((ResultsView) v).chartSlot(), results().chart());
+        } else if (s == Screen.COMPARE) {
+            ChartSlots.psychro(((CompareView) v).chartSlot(), compare().chart());
+        }
     }
 
     /** Keeps a number typed but not entered (the app is pausing or closing). */
@@ -172,9 +240,13 @@ public final class AppShell extends BorderPane {
                 case LOGS -> new LogView(logs());
                 case COMPARE -> new CompareView(compare());
                 case EXPORT -> new ExportView(export());
+                case SETTINGS -> new ReflowingSettings(new SettingsView(settings()));
             };
             if (laidOut) {
                 ((Reflowing) v).setPortrait(portrait);
+            }
+            if (chartsAttached) {
+                wireCharts(k, v);
             }
             return v;
         });
@@ -255,6 +327,7 @@ public final class AppShell extends BorderPane {
             case LOGS -> Icons.LOGS;
             case COMPARE -> Icons.COMPARE;
             case EXPORT -> Icons.EXPORT;
+            case SETTINGS -> Icons.SETTINGS;
         };
     }
 }

@@ -104,12 +104,13 @@ public final class LedgerApp extends Application {
             @Override
             public void handle(long now) {
                 // the second pulse runs after the first frame has been rendered
-                // the second pulse runs after the first frame has been rendered
                 if (++pulses == 2) {
                     mark("first frame");
                     stop();
                     // nothing can pause an app that has not drawn yet: ask for the event now
                     TabletPlatform.onPause(shell::keepPending);
+                    // the first screen's chart next, then the other screens, one per pulse
+                    javafx.application.Platform.runLater(shell::attachCharts);
                     shell.prepareOtherScreens();
                 }
             }

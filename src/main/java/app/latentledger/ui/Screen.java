@@ -7,7 +7,8 @@ public enum Screen {
     RESULTS("results", "Results"),
     LOGS("logs", "Logs"),
     COMPARE("compare", "Compare"),
-    EXPORT("export", "Export");
+    EXPORT("export", "Export"),
+    SETTINGS("settings", "Settings");
 
     private final String key;
     private final String title;

@@ -49,7 +49,10 @@ class VisitWalkUiTest {
 
     private void open() {
         session = TestSessions.open(dir);
-        stage.setScene(new AppShell(session).scene(1280, 800));
+        AppShell shell = new AppShell(session, Background.DIRECT, Background.DIRECT);
+        // as the app does after its first frame: the charts and their buttons are on screen too
+        shell.attachCharts();
+        stage.setScene(shell.scene(1280, 800));
         // the primary stage is shared between tests: put it back to the landscape tablet size
         stage.setWidth(1280);
         stage.setHeight(800);
@@ -94,6 +97,8 @@ class VisitWalkUiTest {
 
         robot.clickOn("#nav-results");
         assertEquals("dehumidifying", text(robot, "#verdict-key"));
+        assertTrue(robot.lookup("#psychro-chart-slot #psychro-canvas").tryQuery().isPresent(),
+                "the psychrometric chart sits in the results screen's slot");
         assertEquals(app.latentledger.core.findings.Cautions.SAFETY_LINE, text(robot, "#safety-line"));
 
         // close the app and open it again on the same data folder
@@ -140,7 +145,8 @@ class VisitWalkUiTest {
     @Test
     void uprightTheScreensReflowAndEverythingStaysOnScreen(FxRobot robot) {
         robot.interact(() -> {
-            AppShell shell = new AppShell(session);
+            AppShell shell = new AppShell(session, Background.DIRECT, Background.DIRECT);
+            shell.attachCharts();
             stage.setScene(shell.scene(800, 1280));
             stage.setWidth(800);
             stage.setHeight(1280);

@@ -16,7 +16,7 @@ import javafx.scene.layout.VBox;
 final class ChartSidePanel extends VBox {
     /** Smallest touch target, px (common practice for touch interfaces, no single source). */
     static final double TOUCH_PX = 48;
-    static final double WIDTH_PX = 300;
+    static final double WIDTH_PX = 240;
 
     private final Label readout = new Label();
     private final Label heading = new Label();
@@ -30,7 +30,7 @@ final class ChartSidePanel extends VBox {
         readout.setId("readout");
         readout.setWrapText(true);
         readout.textProperty().bind(readoutText);
-        readout.setMinHeight(200);
+        readout.setMinHeight(110);
         readout.setMaxWidth(Double.MAX_VALUE);
         readout.setAlignment(javafx.geometry.Pos.TOP_LEFT);
         getChildren().addAll(heading, readout);

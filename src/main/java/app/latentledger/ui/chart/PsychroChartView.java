@@ -28,6 +28,7 @@ public final class PsychroChartView extends BorderPane {
         setRight(side);
         viewModel.viewportProperty().addListener((o, a, b) -> surface.repaint());
         viewModel.selectedProperty().addListener((o, a, b) -> surface.repaint());
+        viewModel.chartProperty().addListener((o, a, b) -> surface.repaint());
         viewModel.themeProperty().addListener((o, a, b) -> applyTheme());
         applyTheme();
     }

@@ -18,22 +18,48 @@ import java.util.Optional;
 
 /**
  * State of a psychrometric chart on screen: the chart, the theme, the zoom/pan window, and the
- * state the tech last tapped. No drawing here; testable without a stage.
+ * state the tech last tapped. No drawing here; testable without a stage. {@link #show} puts new
+ * data on the same chart (a value typed on the pad): a window the tech zoomed or panned is kept,
+ * an untouched one is fitted to the new states.
  */
 public final class PsychroChartViewModel {
-    private final PsychroChart chart;
+    private final ReadOnlyObjectWrapper<PsychroChart> chart;
+    /** True once the tech zoomed or panned, until "whole chart". */
+    private boolean moved;
     private final ObjectProperty<Theme> theme = new SimpleObjectProperty<>(Theme.LIGHT);
     private final ReadOnlyObjectWrapper<ChartViewport> viewport = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyObjectWrapper<ChartPoint> selected = new ReadOnlyObjectWrapper<>();
-    private final ReadOnlyStringWrapper readout = new ReadOnlyStringWrapper("Tap a point to read its state");
+    private static final String HINT = "Tap a point to read its state";
+
+    private final ReadOnlyStringWrapper readout = new ReadOnlyStringWrapper(HINT);
     private PsychroChartLayout layout;
 
     public PsychroChartViewModel(PsychroChartData data) {
-        this.chart = new PsychroChart(data);
+        this.chart = new ReadOnlyObjectWrapper<>(new PsychroChart(data));
     }
 
     public PsychroChart chart() {
-        return chart;
+        return chart.get();
+    }
+
+    /** The chart drawn; replaced by {@link #show}. */
+    public ReadOnlyObjectProperty<PsychroChart> chartProperty() {
+        return chart.getReadOnlyProperty();
+    }
+
+    /** Draws other states (or the same states in other units). The tapped state is cleared. */
+    public void show(PsychroChartData data) {
+        PsychroChartData was = chart.get().data();
+        PsychroChart next = new PsychroChart(data);
+        boolean sameAxes = was.units() == data.units() && was.pressurePa() == data.pressurePa();
+        selected.set(null);
+        readout.set(HINT);
+        chart.set(next);
+        if (layout != null) {
+            ChartViewport vp = viewport.get();
+            viewport.set(moved && sameAxes && vp != null ? vp : next.initialViewport(layout));
+            moved = moved && sameAxes;
+        }
     }
 
     public ObjectProperty<Theme> themeProperty() {
@@ -60,25 +86,28 @@ public final class PsychroChartViewModel {
     public void resize(double width, double height) {
         layout = PsychroChartLayout.forSize(width, height, theme.get());
         ChartViewport vp = viewport.get();
-        viewport.set(vp == null ? chart.initialViewport(layout)
+        viewport.set(vp == null ? chart.get().initialViewport(layout)
                 : vp.withPlot(layout.plotLeft(), layout.plotTop(), layout.plotWidth(), layout.plotHeight()));
     }
 
     public void zoom(double factor, double x, double y) {
         if (viewport.get() != null) {
             viewport.set(viewport.get().zoomed(factor, x, y));
+            moved = true;
         }
     }
 
     public void pan(double dx, double dy) {
         if (viewport.get() != null) {
             viewport.set(viewport.get().panned(dx, dy));
+            moved = true;
         }
     }
 
     public void reset() {
         if (viewport.get() != null) {
             viewport.set(viewport.get().reset());
+            moved = false;
         }
     }
 
@@ -87,9 +116,10 @@ public final class PsychroChartViewModel {
         if (viewport.get() == null) {
             return;
         }
-        Optional<ChartPoint> hit = chart.pointNear(viewport.get(), x, y);
+        PsychroChart c = chart.get();
+        Optional<ChartPoint> hit = c.pointNear(viewport.get(), x, y);
         selected.set(hit.orElse(null));
-        readout.set(hit.map(p -> String.join("\n", StateReadout.lines(p, chart.data().pressurePa(),
-                chart.data().units()))).orElse("Tap a point to read its state"));
+        readout.set(hit.map(p -> String.join("\n", StateReadout.lines(p, c.data().pressurePa(),
+                c.data().units()))).orElse(HINT));
     }
 }

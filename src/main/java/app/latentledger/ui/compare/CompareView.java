@@ -14,7 +14,11 @@ import javafx.scene.layout.VBox;
 
 /** The compare screen: pick an earlier reading set, see before, after and the change. Binds only. */
 public final class CompareView extends VBox implements Reflowing {
+    /** Id of the pane the before/after psychrometric chart goes into (after the first frame). */
+    public static final String CHART_SLOT_ID = "compare-chart-slot";
+
     private final CompareViewModel viewModel;
+    private final javafx.scene.layout.StackPane chartSlot = new javafx.scene.layout.StackPane();
 
     public CompareView(CompareViewModel viewModel) {
         super(12);
@@ -58,13 +62,31 @@ public final class CompareView extends VBox implements Reflowing {
         };
         viewModel.rows().addListener((ListChangeListener<CompareRow>) c -> fill.run());
         fill.run();
+        var report = Ui.button("before-after-report", "Before/after report", app.latentledger.ui.look.Icons.EXPORT,
+                viewModel::beforeAfterReport);
+        report.disableProperty().bind(viewModel.chosenProperty().isNull().or(viewModel.reports().busyProperty()));
+        Label reportStatus = Ui.wrapped("", "message");
+        reportStatus.setId("compare-report-status");
+        // takes room only when it has something to say
+        reportStatus.managedProperty().bind(reportStatus.textProperty().isNotEmpty());
+        reportStatus.visibleProperty().bind(reportStatus.managedProperty());
+        reportStatus.textProperty().bind(viewModel.reports().statusProperty());
+        chartSlot.setId(CHART_SLOT_ID);
+        chartSlot.getStyleClass().add("slot-placeholder");
+        chartSlot.getChildren().add(Ui.wrapped("Drawing the before/after chart…", "muted"));
         VBox panel = Ui.panel(10, Ui.label("Compare with an earlier reading set", "heading"),
-                Ui.label("Earlier reading set of this system", "figure-label"), pick, verdicts, status, table);
+                Ui.label("Earlier reading set of this system", "figure-label"), pick, verdicts, status,
+                report, reportStatus, table, chartSlot);
         getChildren().add(Ui.scroll(panel));
     }
 
     public CompareViewModel viewModel() {
         return viewModel;
+    }
+
+    /** The pane the before/after chart goes into. */
+    public javafx.scene.layout.StackPane chartSlot() {
+        return chartSlot;
     }
 
     @Override

@@ -9,7 +9,14 @@ import app.latentledger.ui.AppSession;
 import app.latentledger.ui.entry.DraftRecords;
 import app.latentledger.ui.results.Shown;
 import app.latentledger.ui.results.VisitResults;
+import app.latentledger.chart.psychro.PsychroChartData;
+import app.latentledger.core.psychro.StandardAtmosphere;
+import app.latentledger.ui.chart.CoilCharts;
+import app.latentledger.ui.chart.PsychroChartViewModel;
+import app.latentledger.ui.export.ReportViewModel;
 import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.beans.property.SimpleObjectProperty;
@@ -22,7 +29,8 @@ import java.util.List;
 
 /**
  * The compare screen: an earlier reading set of the same system beside the one being worked on,
- * each through the same coil check, with the change.
+ * each through the same coil check, with the change, the two coil processes drawn together on
+ * the psychrometric chart, and the before/after report of the pair.
  */
 public final class CompareViewModel {
     private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm");
@@ -33,12 +41,49 @@ public final class CompareViewModel {
     private final ObservableList<CompareRow> rows = FXCollections.observableArrayList();
     private final ReadOnlyStringWrapper verdicts = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
+    private final ReadOnlyObjectWrapper<PsychroChartData> chartData = new ReadOnlyObjectWrapper<>();
+    private final ReportViewModel reports;
+    /** Built on first use, after the first frame. */
+    private PsychroChartViewModel chart;
 
     public CompareViewModel(AppSession session) {
+        this(session, new ReportViewModel(session));
+    }
+
+    public CompareViewModel(AppSession session, ReportViewModel reports) {
         this.session = session;
+        this.reports = reports;
         session.draftProperty().addListener((o, a, b) -> refresh());
+        session.settingsProperty().addListener((o, a, b) -> recompute());
         chosen.addListener((o, a, b) -> recompute());
         refresh();
+    }
+
+    /** The before/after chart: the earlier set as "Before", the set in hand as "After". */
+    public ReadOnlyObjectProperty<PsychroChartData> chartDataProperty() {
+        return chartData.getReadOnlyProperty();
+    }
+
+    public PsychroChartViewModel chart() {
+        if (chart == null) {
+            chart = new PsychroChartViewModel(CoilCharts.orEmpty(chartData.get(), session.units()));
+            chart.themeProperty().bind(javafx.beans.binding.Bindings.createObjectBinding(
+                    () -> CoilCharts.theme(session.darkProperty().get()), session.darkProperty()));
+            chartData.addListener((o, a, b) -> chart.show(b));
+        }
+        return chart;
+    }
+
+    public ReportViewModel reports() {
+        return reports;
+    }
+
+    /** Writes the before/after report: the visit in hand against the visit of the chosen set. */
+    public void beforeAfterReport() {
+        if (chosen.get() == null) {
+            return;
+        }
+        reports.beforeAfterReport(chosen.get().visitId());
     }
 
     /** Reading sets of this system other than the current one, oldest first. */
@@ -100,12 +145,16 @@ public final class CompareViewModel {
         rows.clear();
         verdicts.set("");
         ReadingSet before = chosen.get();
+        CoilResult a = before == null ? null : run(before);
+        CoilResult b = current();
+        if (session.site() != null) {
+            chartData.set(CoilCharts.of(session.units(), StandardAtmosphere.pressurePa(session.site().elevationM()),
+                    "Before and after", a, b));
+        }
         if (before == null) {
             status.set("No other reading set of this system to compare with yet.");
             return;
         }
-        CoilResult a = run(before);
-        CoilResult b = current();
         if (a == null || b == null) {
             status.set(b == null ? "The current readings are not complete yet: "
                     + String.join(", ", VisitResults.waitingFor(session.draft())) + "."

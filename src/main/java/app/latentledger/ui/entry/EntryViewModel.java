@@ -69,7 +69,7 @@ public final class EntryViewModel {
         padTitle = Bindings.createStringBinding(() -> {
             Slot sel = selected.get();
             return toleranceMode.get() ? "Tolerance of " + title(sel).toLowerCase(java.util.Locale.ROOT) : title(sel);
-        }, selected, toleranceMode, session.draftProperty());
+        }, selected, toleranceMode, session.draftProperty(), session.unitsProperty());
         padDisplay = Bindings.createStringBinding(() -> {
             if (!pad.text().isEmpty()) {
                 return pad.text();
@@ -77,8 +77,10 @@ public final class EntryViewModel {
             Slot sel = selected.get();
             return toleranceMode.get() ? shownTolerance(sel).replaceFirst("^± ", "").replaceFirst(" \\S+$", "")
                     : shownValue(sel);
-        }, pad.textProperty(), selected, toleranceMode, session.draftProperty(), session.systemProperty());
-        padUnit = Bindings.createStringBinding(this::unit, selected, toleranceMode, session.draftProperty());
+        }, pad.textProperty(), selected, toleranceMode, session.draftProperty(), session.systemProperty(),
+                session.unitsProperty());
+        padUnit = Bindings.createStringBinding(this::unit, selected, toleranceMode, session.draftProperty(),
+                session.unitsProperty());
         session.draftProperty().addListener((o, a, b) -> {
             if (a == null || b == null || !a.readingSetId().equals(b.readingSetId()) || a.takenAt() != b.takenAt()) {
                 loadSets();
@@ -165,13 +167,13 @@ public final class EntryViewModel {
     /** The value in a box as shown, "—" when empty. */
     public StringBinding valueText(Slot s) {
         return valueTexts.computeIfAbsent(s, k -> Bindings.createStringBinding(() -> shownValue(k),
-                session.draftProperty(), session.systemProperty()));
+                session.draftProperty(), session.systemProperty(), session.unitsProperty()));
     }
 
     /** "± 0.5 °F" for a box with a value, "" otherwise. */
     public StringBinding toleranceText(Slot s) {
         return toleranceTexts.computeIfAbsent(s, k -> Bindings.createStringBinding(() -> shownTolerance(k),
-                session.draftProperty()));
+                session.draftProperty(), session.unitsProperty()));
     }
 
     /** The box's current choice (e.g. "wet-bulb"). */
@@ -263,7 +265,7 @@ public final class EntryViewModel {
             }
             v = new SlotValue(old.valueSi(), s.toleranceFromDisplay(units(), c, Math.abs(shown)));
         } else {
-            double tol = old != null ? old.toleranceSi() : s.defaultToleranceSi(c);
+            double tol = old != null ? old.toleranceSi() : session.defaultToleranceSi(s, c);
             try {
                 v = new SlotValue(s.fromDisplay(units(), c, shown), tol);
             } catch (IllegalArgumentException e) {

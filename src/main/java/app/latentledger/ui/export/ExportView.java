@@ -7,7 +7,10 @@ import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.layout.VBox;
 
-/** The export screen: a bundle of the visit or of the whole site. Binds only. */
+/**
+ * The export screen: a bundle of the visit or of the whole site, the visit's PDF report and its
+ * data as CSV or JSON. Binds only.
+ */
 public final class ExportView extends VBox implements Reflowing {
     private final ExportViewModel viewModel;
 
@@ -22,11 +25,39 @@ public final class ExportView extends VBox implements Reflowing {
         Label status = Ui.wrapped("", "message");
         status.setId("export-status");
         status.textProperty().bind(viewModel.statusProperty());
-        getChildren().add(Ui.panel(12, Ui.label("Export a bundle", "heading"),
+        ReportViewModel reports = viewModel.reports();
+        Button pdf = Ui.button("report-pdf", "Report (PDF)", Icons.EXPORT, reports::visitReport);
+        pdf.getStyleClass().add("primary");
+        Button csv = Ui.button("data-csv", "Data (CSV)", Icons.EXPORT,
+                reports::csvData);
+        Button json = Ui.button("data-json", "Data (JSON)", Icons.EXPORT,
+                reports::jsonData);
+        for (Button b : new Button[] {pdf, csv, json}) {
+            b.disableProperty().bind(reports.busyProperty());
+        }
+        Label reportStatus = Ui.wrapped("", "message");
+        reportStatus.setId("report-status");
+        // takes room only when it has something to say
+        reportStatus.managedProperty().bind(reportStatus.textProperty().isNotEmpty());
+        reportStatus.visibleProperty().bind(reportStatus.managedProperty());
+        reportStatus.textProperty().bind(reports.statusProperty());
+        javafx.scene.layout.FlowPane reportButtons = new javafx.scene.layout.FlowPane(12, 12, pdf, csv, json);
+        javafx.scene.layout.FlowPane bundleButtons = new javafx.scene.layout.FlowPane(12, 12, visit, site);
+        // wrap only when the screen is narrower than the buttons (FlowPane's default wraps at 400 px)
+        reportButtons.setPrefWrapLength(700);
+        bundleButtons.setPrefWrapLength(700);
+        VBox bundle = Ui.panel(12, Ui.label("Export a bundle", "heading"),
                 Ui.wrapped("A bundle is one file with the visit's site, system, readings, logs and results as"
                         + " shown, checked by its own manifest. Another tablet or the office imports it with"
                         + " the visits command.", "muted"),
-                visit, site, status, Ui.wrapped("Bundles are written to " + viewModel.folder(), "muted")));
+                bundleButtons, status, Ui.wrapped("Bundles are written to " + viewModel.folder(), "muted"));
+        VBox report = Ui.panel(12, Ui.label("Report and data", "heading"),
+                Ui.wrapped("The report is a PDF for the customer and the file: readings, results with their"
+                        + " uncertainty, the chart, the findings in plain words and, when the visit has them,"
+                        + " its before and after readings compared. The data export is the same numbers as"
+                        + " CSV or JSON for a spreadsheet.", "muted"),
+                reportButtons, reportStatus, Ui.wrapped("Reports are written to " + reports.folder(), "muted"));
+        getChildren().add(Ui.scroll(new VBox(12, report, bundle)));
     }
 
     public ExportViewModel viewModel() {

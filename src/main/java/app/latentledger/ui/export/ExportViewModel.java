@@ -12,14 +12,26 @@ import java.time.LocalDate;
 
 /**
  * The export screen: writes the visit (or the whole site) as a bundle into the data folder's
- * {@code exports} folder, where the tablet's file sharing can pick it up.
+ * {@code exports} folder, where the tablet's file sharing can pick it up; and, through
+ * {@link #reports()}, the visit's PDF report and open data export into {@code reports}.
  */
 public final class ExportViewModel {
     private final AppSession session;
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
+    private final ReportViewModel reports;
 
     public ExportViewModel(AppSession session) {
+        this(session, new ReportViewModel(session));
+    }
+
+    public ExportViewModel(AppSession session, ReportViewModel reports) {
         this.session = session;
+        this.reports = reports;
+    }
+
+    /** The visit's PDF report and its CSV/JSON data, beside the bundle. */
+    public ReportViewModel reports() {
+        return reports;
     }
 
     public ReadOnlyStringProperty statusProperty() {

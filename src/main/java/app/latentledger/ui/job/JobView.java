@@ -37,9 +37,11 @@ public final class JobView extends VBox implements Reflowing {
         bindSelection(sites, viewModel.siteProperty());
         TextField siteName = field("new-site-name", "New site name", viewModel.newSiteNameProperty());
         TextField siteAddress = field("new-site-address", "Address", viewModel.newSiteAddressProperty());
-        TextField siteElevation = field("new-site-elevation", "Elevation, ft", viewModel.newSiteElevationFtProperty());
+        TextField siteElevation = field("new-site-elevation", "Elevation", viewModel.newSiteElevationFtProperty());
+        javafx.scene.control.Label elevationCaption = Ui.label("", "figure-label");
+        elevationCaption.textProperty().bind(viewModel.elevationCaptionProperty());
         VBox siteCol = Ui.panel(8, Ui.label("1  Site", "heading"), sites, siteName, siteAddress,
-                Ui.label("Elevation, ft", "figure-label"), siteElevation,
+                elevationCaption, siteElevation,
                 Ui.button("add-site", "Add site", Icons.NEW, viewModel::addSite));
 
         ListView<HvacSystem> systems = list("system-list", viewModel.systems(), viewModel::describe);

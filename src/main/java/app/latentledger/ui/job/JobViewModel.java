@@ -35,13 +35,18 @@ public final class JobViewModel {
     private final StringProperty technician = new SimpleStringProperty("");
     private final StringProperty newSiteName = new SimpleStringProperty("");
     private final StringProperty newSiteAddress = new SimpleStringProperty("");
+    /** The elevation of a new site, in the tech's units (the name is older than the SI setting). */
     private final StringProperty newSiteElevationFt = new SimpleStringProperty("0");
+    private final ReadOnlyStringWrapper elevationCaption = new ReadOnlyStringWrapper("");
     private final StringProperty newSystemLabel = new SimpleStringProperty("");
     private final StringProperty newSystemTons = new SimpleStringProperty("3");
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
 
     public JobViewModel(AppSession session) {
         this.session = session;
+        // a new site starts at the tech's default elevation, shown in the units of the moment
+        session.settingsProperty().addListener((o, a, b) -> showDefaultElevation());
+        showDefaultElevation();
         site.addListener((o, a, b) -> loadSystems());
         system.addListener((o, a, b) -> loadVisits());
         sites.setAll(session.ledger().sites().all());
@@ -52,6 +57,18 @@ public final class JobViewModel {
         if (session.visit() != null) {
             technician.set(session.visit().technician());
         }
+    }
+
+    /** "Elevation, ft" or "Elevation, m". */
+    public ReadOnlyStringProperty elevationCaptionProperty() {
+        return elevationCaption.getReadOnlyProperty();
+    }
+
+    private void showDefaultElevation() {
+        var u = session.units();
+        newSiteElevationFt.set(app.latentledger.ui.results.Shown.number(
+                Quantity.ELEVATION.toDisplay(u, session.settings().defaultElevationM()), 0).replace(",", ""));
+        elevationCaption.set("Elevation, " + Quantity.ELEVATION.symbol(u));
     }
 
     public ObservableList<Site> sites() {

@@ -1,37 +1,43 @@
 package app.latentledger.ui.log;
 
-import app.latentledger.core.records.HvacSystem;
-import app.latentledger.core.records.Visit;
-import app.latentledger.core.units.UnitSystem;
-import app.latentledger.store.Ledger;
+import app.latentledger.io.logcsv.ImportProgress;
 
 import java.nio.file.Path;
+import java.util.Optional;
 
 /**
  * The log screen's only way into log import and cycle analysis, so the screen does not depend on
- * how logs are parsed. The app starts with {@link #NOT_WIRED}; the build that carries the cycle
- * analysis registers its implementation as a service
- * ({@code META-INF/services/app.latentledger.ui.log.LogAnalysisService}, found by
- * {@link #find()}), or passes it to {@code AppSession} directly.
+ * how logs are parsed. {@link #find()} gives the build's implementation ({@link CycleLogAnalysis},
+ * unless another is registered as a service in
+ * {@code META-INF/services/app.latentledger.ui.log.LogAnalysisService}); {@link #NOT_WIRED} is a
+ * stand-in for tests of the screen without the analysis.
  */
 public interface LogAnalysisService {
-    /** False while this build has no log analysis; the screen then says so. */
+    /** False for a stand-in without log analysis; the screen then says so. */
     boolean wired();
 
     /**
-     * Imports the log file into the visit and analyses its cycles.
+     * Imports the log file, keeps it with the visit and analyses its cycles. Runs off the FX thread.
      *
+     * @param progress told how far the import has got (0–1), on the calling thread
      * @throws Exception with a message for the tech (file unreadable, columns not recognised, …)
      */
-    LogAnalysis importAndAnalyse(Ledger ledger, Path file, Visit visit, HvacSystem system, UnitSystem units)
-            throws Exception;
+    LogAnalysis importAndAnalyse(LogRequest request, Path file, ImportProgress progress) throws Exception;
 
-    /** The implementation registered with {@link java.util.ServiceLoader}, else {@link #NOT_WIRED}. */
+    /**
+     * The visit's latest kept log, analysed again (so a reopened visit shows it); empty when the
+     * visit has none.
+     *
+     * @throws Exception with a message for the tech when the kept log cannot be analysed
+     */
+    Optional<LogAnalysis> latestKept(LogRequest request) throws Exception;
+
+    /** The implementation registered with {@link java.util.ServiceLoader}, else {@link CycleLogAnalysis}. */
     static LogAnalysisService find() {
-        return java.util.ServiceLoader.load(LogAnalysisService.class).findFirst().orElse(NOT_WIRED);
+        return java.util.ServiceLoader.load(LogAnalysisService.class).findFirst().orElse(new CycleLogAnalysis());
     }
 
-    /** The stand-in until the cycle analysis is wired in. */
+    /** A stand-in without log analysis (screen tests). */
     LogAnalysisService NOT_WIRED = new LogAnalysisService() {
         @Override
         public boolean wired() {
@@ -39,9 +45,13 @@ public interface LogAnalysisService {
         }
 
         @Override
-        public LogAnalysis importAndAnalyse(Ledger ledger, Path file, Visit visit, HvacSystem system,
-                                           UnitSystem units) {
+        public LogAnalysis importAndAnalyse(LogRequest request, Path file, ImportProgress progress) {
             throw new UnsupportedOperationException(LogImportViewModel.NOT_WIRED_MESSAGE);
+        }
+
+        @Override
+        public Optional<LogAnalysis> latestKept(LogRequest request) {
+            return Optional.empty();
         }
     };
 }

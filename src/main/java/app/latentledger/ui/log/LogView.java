@@ -18,7 +18,11 @@ import javafx.stage.FileChooser;
 
 import java.io.File;
 
-/** The log screen: pick a logger file, import it, see its cycle summary and findings. Binds only. */
+/**
+ * The log screen: pick a logger file (with another logger's column names and the airflow when the
+ * visit has none), import it with a progress bar, see its cycle summary, findings and timeline.
+ * Binds only; the timeline goes into {@link #timelineSlot()} when the view model has one.
+ */
 public final class LogView extends VBox implements Reflowing {
     /** Id of the pane the cycle timeline goes into when the chart build is merged. */
     public static final String TIMELINE_SLOT_ID = "cycle-timeline-slot";
@@ -46,9 +50,41 @@ public final class LogView extends VBox implements Reflowing {
                 viewModel.fileProperty().set(f.getAbsolutePath());
             }
         });
+        TextField map = new TextField();
+        map.setId("log-header-map");
+        map.setPromptText("Other logger: RA Temp=return_db; RA RH=return_rh");
+        map.textProperty().bindBidirectional(viewModel.headerMapProperty());
+        TextField airflow = new TextField();
+        airflow.setId("log-airflow");
+        airflow.setPromptText("Airflow");
+        airflow.setPrefColumnCount(6);
+        airflow.setMinWidth(140);
+        airflow.textProperty().bindBidirectional(viewModel.airflowProperty());
+        Label airflowCaption = Ui.label("", "figure-label");
+        airflowCaption.textProperty().bind(viewModel.airflowCaptionProperty());
+        Label airflowWhy = Ui.wrapped("The visit's readings have no airflow: give it for water masses.", "muted");
+        HBox airflowRow = new HBox(12, airflowCaption, airflow, airflowWhy);
+        airflowRow.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        HBox.setHgrow(airflowWhy, Priority.ALWAYS);
+        airflowRow.visibleProperty().bind(viewModel.airflowNeededProperty());
+        airflowRow.managedProperty().bind(viewModel.airflowNeededProperty());
         var go = Ui.button("import-log", "Import and analyse", Icons.LOGS, viewModel::importFile);
         go.getStyleClass().add("primary");
-        go.disableProperty().set(!viewModel.wired());
+        if (viewModel.wired()) {
+            go.disableProperty().bind(viewModel.busyProperty());
+        } else {
+            go.setDisable(true);
+        }
+        javafx.scene.control.ProgressBar bar = new javafx.scene.control.ProgressBar();
+        bar.setId("log-progress");
+        bar.setMaxWidth(Double.MAX_VALUE);
+        bar.setMinHeight(24);
+        bar.progressProperty().bind(viewModel.progressProperty());
+        bar.visibleProperty().bind(viewModel.busyProperty());
+        bar.managedProperty().bind(viewModel.busyProperty());
+        Label notes = Ui.wrapped("", "muted");
+        notes.setId("log-notes");
+        notes.textProperty().bind(viewModel.notesProperty());
         Label status = Ui.wrapped("", "message");
         status.setId("log-status");
         status.textProperty().bind(viewModel.statusProperty());
@@ -72,13 +108,17 @@ public final class LogView extends VBox implements Reflowing {
         keptText.run();
         timelineSlot.setId(TIMELINE_SLOT_ID);
         timelineSlot.getStyleClass().add("slot-placeholder");
-        timelineSlot.getChildren().add(Ui.wrapped("Cycle timeline: arrives with the chart build.", "muted"));
-        VBox left = Ui.panel(10, Ui.label("Import a log", "heading"), new HBox(8, file, choose), go, status, kept,
-                Ui.label("Cycle summary", "subheading"), summary, timelineSlot);
+        app.latentledger.ui.chart.ChartSlots.timeline(timelineSlot, viewModel.timelineProperty(),
+                "The cycle timeline appears here once a log is imported.");
+        VBox left = Ui.panel(10, Ui.label("Import a log", "heading"), new HBox(8, file, choose), map, airflowRow, go,
+                bar, status, kept, notes, Ui.label("Cycle summary", "subheading"), summary);
+        VBox.setVgrow(timelineSlot, Priority.ALWAYS);
         VBox right = Ui.panel(8, new FindingsList(viewModel.findings()));
         columns = new Columns(12, Ui.scroll(left), Ui.scroll(right));
+        // the timeline below keeps its height; the columns scroll in what is left
+        columns.setMinHeight(0);
         VBox.setVgrow(columns, Priority.ALWAYS);
-        getChildren().add(columns);
+        getChildren().addAll(columns, timelineSlot);
     }
 
     public LogImportViewModel viewModel() {

@@ -4,6 +4,7 @@ import app.latentledger.cli.ScreenRendering;
 import app.latentledger.store.DemoScenario;
 import app.latentledger.ui.AppSession;
 import app.latentledger.ui.AppShell;
+import app.latentledger.ui.Background;
 import app.latentledger.ui.Screen;
 import app.latentledger.ui.log.LogAnalysisService;
 import javafx.application.Platform;
@@ -25,8 +26,10 @@ import java.util.concurrent.TimeUnit;
 /**
  * The {@code screens} command's renderer: each main screen in a scene of the tablet's size,
  * snapshot to PNG. On the demo it opens the complaint visit, whose before and after
- * reading sets show every screen with something on it. Also draws the results screen in the dark
- * theme.
+ * reading sets show every screen with something on it, and gives it a demo logger file
+ * ({@link DemoLog}) for the log screen. The charts are built before the snapshots, and slow jobs
+ * run on the calling thread so each screen is complete when it is drawn. Also draws the results
+ * screen in the dark theme.
  */
 public final class PngScreens implements ScreenRendering {
     /** Landscape and portrait tablet sizes the layouts are designed for. */
@@ -57,9 +60,16 @@ public final class PngScreens implements ScreenRendering {
     /** Renders on the FX thread; usable from a test that already runs the toolkit. */
     public static List<Path> renderAll(Path dataFolder, Path outDir) {
         List<Path> files = new ArrayList<>();
-        try (AppSession session = AppSession.open(dataFolder, LogAnalysisService.NOT_WIRED)) {
+        try (AppSession session = AppSession.open(dataFolder, LogAnalysisService.find())) {
+            try {
+                DemoLog.seed(session);
+            } catch (Exception e) {
+                throw new IllegalStateException("cannot import the demo log: " + e.getMessage(), e);
+            }
             session.ledger().visits().find(DemoScenario.VISIT_COMPLAINT).ifPresent(session::openVisit);
-            AppShell shell = new AppShell(session);
+            session.darkProperty().set(false);
+            AppShell shell = new AppShell(session, Background.DIRECT, Background.DIRECT);
+            shell.attachCharts();
             Scene previous = null;
             for (boolean portrait : new boolean[] {false, true}) {
                 if (previous != null) {

@@ -22,6 +22,8 @@ public final class ResultsView extends VBox implements Reflowing {
     private final FigureTable performance = new FigureTable();
     private final StackPane chartSlot = new StackPane();
     private final VBox figures;
+    private final VBox enteringPanel;
+    private final VBox leavingPanel;
     private final FindingsList findings;
 
     public ResultsView(ResultsViewModel viewModel) {
@@ -31,12 +33,14 @@ public final class ResultsView extends VBox implements Reflowing {
         setId("screen-results");
         VerdictBanner banner = new VerdictBanner(viewModel.sheetProperty(), false);
         banner.setId("verdict");
-        HBox states = new HBox(16, Ui.panel(6, entering), Ui.panel(6, leaving));
-        states.getChildren().forEach(n -> HBox.setHgrow(n, Priority.ALWAYS));
+        enteringPanel = Ui.panel(6, entering);
+        leavingPanel = Ui.panel(6, leaving);
+        HBox.setHgrow(enteringPanel, Priority.ALWAYS);
+        HBox.setHgrow(leavingPanel, Priority.ALWAYS);
         chartSlot.setId(CHART_SLOT_ID);
         chartSlot.getStyleClass().add("slot-placeholder");
-        chartSlot.getChildren().add(Ui.wrapped("Psychrometric chart: arrives with the chart build.", "muted"));
-        figures = new VBox(12, states, Ui.panel(6, performance), chartSlot);
+        chartSlot.getChildren().add(Ui.wrapped("Drawing the psychrometric chart…", "muted"));
+        figures = new VBox(12, new HBox(16, enteringPanel, leavingPanel), Ui.panel(6, performance));
         findings = new FindingsList(viewModel.sheetProperty());
         getChildren().addAll(banner, new VBox());
         viewModel.sheetProperty().addListener((o, a, b) -> show(b));
@@ -56,17 +60,19 @@ public final class ResultsView extends VBox implements Reflowing {
     @Override
     public void setPortrait(boolean upright) {
         javafx.scene.Node body;
+        // upright the two states sit side by side; on its side the chart takes the width, so they stack
+        figures.getChildren().set(0, upright ? new HBox(16, enteringPanel, leavingPanel)
+                : new VBox(12, enteringPanel, leavingPanel));
         if (upright) {
-            body = Ui.scroll(new VBox(12, figures, Ui.panel(8, findings)));
+            body = Ui.scroll(new VBox(12, figures, chartSlot, Ui.panel(8, findings)));
         } else {
-            VBox right = Ui.panel(8, findings);
-            javafx.scene.control.ScrollPane left = Ui.scroll(figures);
-            javafx.scene.control.ScrollPane rightScroll = Ui.scroll(right);
-            left.setPrefWidth(560);
-            rightScroll.setPrefWidth(520);
-            HBox.setHgrow(left, Priority.ALWAYS);
-            HBox.setHgrow(rightScroll, Priority.ALWAYS);
-            body = new HBox(16, left, rightScroll);
+            // the figures and findings scroll on the left; the chart stands on the right, read at a glance
+            javafx.scene.control.ScrollPane left = Ui.scroll(new VBox(12, figures, Ui.panel(8, findings)));
+            left.setPrefWidth(520);
+            left.setMinWidth(480);
+            HBox.setHgrow(chartSlot, Priority.ALWAYS);
+            chartSlot.setMaxHeight(Double.MAX_VALUE);
+            body = new HBox(16, left, chartSlot);
         }
         VBox.setVgrow(body, Priority.ALWAYS);
         getChildren().set(1, body);

@@ -1,21 +1,42 @@
 package app.latentledger.ui.results;
 
+import app.latentledger.chart.psychro.PsychroChartData;
+import app.latentledger.core.coil.CoilResult;
+import app.latentledger.core.psychro.StandardAtmosphere;
+import app.latentledger.core.records.ReadingSet;
+import app.latentledger.core.visit.ReadingSetCheck;
 import app.latentledger.ui.AppSession;
+import app.latentledger.ui.chart.CoilCharts;
+import app.latentledger.ui.chart.PsychroChartViewModel;
+import app.latentledger.ui.entry.Draft;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 
+import java.util.Locale;
+
 /**
  * The results screen: the sheet of the draft being entered, recomputed whenever an accepted value
- * changes the draft or the system (its nominal size).
+ * changes the draft, the system (its nominal size) or the settings (units, thresholds), and the
+ * psychrometric chart of the same coil check. When the visit has a reading set labelled "before"
+ * and the set in hand is another one, the chart draws the pair together.
  */
 public final class ResultsViewModel {
     private final AppSession session;
     private final ReadOnlyObjectWrapper<ResultSheet> sheet = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyObjectWrapper<PsychroChartData> chartData = new ReadOnlyObjectWrapper<>();
+    /** Built on first use: after the first frame, so the chart never delays it. */
+    private PsychroChartViewModel chart;
+    private String beforeKey;
+    private CoilResult before;
 
     public ResultsViewModel(AppSession session) {
         this.session = session;
         session.draftProperty().addListener((o, a, b) -> recompute());
         session.systemProperty().addListener((o, a, b) -> recompute());
+        session.settingsProperty().addListener((o, a, b) -> {
+            beforeKey = null;
+            recompute();
+        });
         recompute();
     }
 
@@ -27,11 +48,61 @@ public final class ResultsViewModel {
         return sheet.get();
     }
 
+    /** What the chart shows: the set in hand's coil process, with its "before" when there is one. */
+    public ReadOnlyObjectProperty<PsychroChartData> chartDataProperty() {
+        return chartData.getReadOnlyProperty();
+    }
+
+    /** The chart's view model, in the app's theme, following the readings. */
+    public PsychroChartViewModel chart() {
+        if (chart == null) {
+            chart = new PsychroChartViewModel(CoilCharts.orEmpty(chartData.get(), session.units()));
+            chart.themeProperty().bind(javafx.beans.binding.Bindings.createObjectBinding(
+                    () -> CoilCharts.theme(session.darkProperty().get()), session.darkProperty()));
+            chartData.addListener((o, a, b) -> chart.show(b));
+        }
+        return chart;
+    }
+
     private void recompute() {
         if (session.draft() == null || session.system() == null) {
             return;
         }
-        sheet.set(VisitResults.of(session.draft(), session.site(), session.system(), session.thresholds(),
-                session.units()));
+        VisitResults.Outcome o = VisitResults.work(session.draft(), session.site(), session.system(),
+                session.thresholds(), session.units());
+        sheet.set(o.sheet());
+        CoilResult pairedWith = before(session.draft());
+        // short: the header already names the site, and the chart's title shares its width with the plot
+        String title = pairedWith != null && o.coil() != null ? "Before and after" : "This reading set";
+        chartData.set(CoilCharts.of(session.units(), StandardAtmosphere.pressurePa(session.site().elevationM()), title,
+                pairedWith, o.coil()));
+    }
+
+    /**
+     * The coil check of the visit's "before" set when the draft is another set of the same visit;
+     * worked out again only when the visit or the set in hand changes, not on every keypad entry.
+     */
+    private CoilResult before(Draft d) {
+        String key = d.visitId() + "/" + d.readingSetId();
+        if (key.equals(beforeKey)) {
+            return before;
+        }
+        beforeKey = key;
+        before = null;
+        if (d.base() != null && "before".equals(d.base().label().toLowerCase(Locale.ROOT))) {
+            return null;
+        }
+        for (ReadingSet rs : session.ledger().readings().forVisit(d.visitId())) {
+            if (!rs.id().equals(d.readingSetId()) && "before".equals(rs.label().toLowerCase(Locale.ROOT))
+                    && ReadingSetCheck.missing(rs).isEmpty()) {
+                try {
+                    before = ReadingSetCheck.run(rs, session.system(), session.site(), session.thresholds(),
+                            session.units());
+                } catch (IllegalArgumentException e) {
+                    before = null;
+                }
+            }
+        }
+        return before;
     }
 }

@@ -36,18 +36,34 @@ public final class VisitResults {
 
     public static ResultSheet of(Draft draft, Site site, HvacSystem system, ThresholdSettings thresholds,
                                  UnitSystem units) {
+        return work(draft, site, system, thresholds, units).sheet();
+    }
+
+    /**
+     * The sheet and the coil check behind it (for the chart).
+     *
+     * @param sheet the worded results
+     * @param coil  the coil check, or null while the readings are incomplete or refused
+     */
+    public record Outcome(ResultSheet sheet, CoilResult coil) {
+    }
+
+    /** The draft's coil check and its sheet, worked out once for both the figures and the chart. */
+    public static Outcome work(Draft draft, Site site, HvacSystem system, ThresholdSettings thresholds,
+                               UnitSystem units) {
         List<String> waiting = waitingFor(draft);
         if (!waiting.isEmpty()) {
-            return incomplete("Waiting for " + String.join(", ", waiting),
-                    "Results appear as soon as these readings are in.");
+            return new Outcome(incomplete("Waiting for " + String.join(", ", waiting),
+                    "Results appear as soon as these readings are in."), null);
         }
         try {
             ReadingSet rs = DraftRecords.toReadingSet(draft, OffsetDateTime.now());
-            return of(ReadingSetCheck.run(rs, system, site, thresholds, units), units);
+            CoilResult r = ReadingSetCheck.run(rs, system, site, thresholds, units);
+            return new Outcome(of(r, units), r);
         } catch (InvalidInputException e) {
-            return incomplete("Readings refused", e.message(units));
+            return new Outcome(incomplete("Readings refused", e.message(units)), null);
         } catch (InvalidRecordException e) {
-            return incomplete("Readings refused", e.getMessage());
+            return new Outcome(incomplete("Readings refused", e.getMessage()), null);
         }
     }
 

@@ -48,6 +48,17 @@ public final class SettingsViewModel {
         return saved.getReadOnlyProperty();
     }
 
+    /**
+     * Settings changed elsewhere (the header's theme switch): shown here, so the next change on
+     * this screen starts from them and does not undo them.
+     */
+    public void showSaved(Settings changed) {
+        if (changed != null && !changed.equals(saved.get())) {
+            saved.set(changed);
+            showAll();
+        }
+    }
+
     /** What happened last: "Saved …", or why nothing was saved. */
     public ReadOnlyStringProperty statusProperty() {
         return status.getReadOnlyProperty();

@@ -42,12 +42,24 @@ class ScreensCommandTest {
         int code = Cli.standard().run(List.of("--data-dir", data.resolve("new").toString(), "screens", "--out",
                 out.toString()), new PrintStream(o, true, StandardCharsets.UTF_8), new PrintStream(e, true, StandardCharsets.UTF_8));
         assertEquals(0, code, e.toString(StandardCharsets.UTF_8));
-        for (String screen : List.of("job", "readings", "results", "logs", "compare", "export")) {
+        for (String screen : List.of("job", "readings", "results", "logs", "compare", "export", "settings")) {
             check(out.resolve(screen + "-landscape.png"), 1280, 800);
             check(out.resolve(screen + "-portrait.png"), 800, 1280);
         }
         check(out.resolve("results-landscape-dark.png"), 1280, 800);
         assertTrue(Files.exists(data.resolve("new").resolve("ledger.db")), "the demo was seeded into the new folder");
+        try (app.latentledger.store.Ledger l = app.latentledger.store.Ledger.open(data.resolve("new"))) {
+            assertEquals(1, l.logs().idsForVisit(app.latentledger.store.DemoScenario.VISIT_COMPLAINT).size(),
+                    "the demo visit got its logger file, once");
+        }
+    }
+
+    @Test
+    void theDemoLogIsTheFieldDataSampleItNames() throws Exception {
+        try (var in = DemoLog.class.getResourceAsStream(DemoLog.RESOURCE)) {
+            assertTrue(java.util.Arrays.equals(Files.readAllBytes(Path.of("field-data-samples", DemoLog.FILE_NAME)),
+                    in.readAllBytes()), "the resource must stay a copy of the invented sample");
+        }
     }
 
     @Test
