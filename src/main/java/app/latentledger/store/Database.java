@@ -17,7 +17,7 @@ import java.util.List;
 /**
  * The ledger's SQLite file. One connection, used by one thread at a time.
  *
- * <p>Durability choices (see docs/methods/records.md): write-ahead log, so a killed process leaves
+ * <p>Durability choices (see docs/methods.md §4): write-ahead log, so a killed process leaves
  * either the old or the new state and readers never block the writer; {@code synchronous=FULL},
  * so a commit has reached the disk (WAL fsync) before the save call returns, which is what "saved"
  * means to a tech; foreign keys on; a busy timeout so the command line and the app can share the

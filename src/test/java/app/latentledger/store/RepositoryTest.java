@@ -42,7 +42,7 @@ class RepositoryTest {
 
     @Test
     void durabilitySettingsAreInForce() throws Exception {
-        // the settings docs/methods/records.md relies on, read back from SQLite itself
+        // the settings docs/methods.md §4 relies on, read back from SQLite itself
         assertEquals("wal", ledger.database().read(c -> Database.pragma(c, "journal_mode")));
         assertEquals("2", ledger.database().read(c -> Database.pragma(c, "synchronous")), "2 = FULL");
         assertEquals("1", ledger.database().read(c -> Database.pragma(c, "foreign_keys")));

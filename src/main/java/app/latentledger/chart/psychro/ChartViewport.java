@@ -4,7 +4,7 @@ package app.latentledger.chart.psychro;
  * Maps chart coordinates (dry bulb °C, humidity ratio kg/kg) to device coordinates and back, and
  * carries the zoom and pan state. Dry bulb runs left to right and humidity ratio bottom to top, both
  * linear (a rectangular t–W chart; the handbook's charts are drawn on oblique h–W axes instead, see
- * docs/methods/charts.md). Immutable: zooming or panning returns a new viewport.
+ * docs/methods.md §5). Immutable: zooming or panning returns a new viewport.
  *
  * @param range  visible window
  * @param limits the farthest the tech may zoom out or pan to

@@ -12,7 +12,7 @@ import java.util.List;
  * The coil check as a function of its readings, for uncertainty propagation: the same equations as
  * {@link CoilProcess} and {@link ApparatusDewPoint}, evaluated at any perturbed set of readings.
  * The site pressure is held exact (it is common to both states; its effect is discussed in
- * docs/methods/coil.md). Probes are treated as independent (return and supply read by different
+ * docs/methods.md §2). Probes are treated as independent (return and supply read by different
  * instruments); a single probe moved between the two would make the errors correlated and the
  * humidity-ratio drop markedly more certain (domain-practice.md §5.3). With outdoor air the
  * entering state is the {@link MixedAir mix} of the return and outdoor readings, so the outdoor

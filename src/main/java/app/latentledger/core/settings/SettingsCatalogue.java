@@ -15,9 +15,9 @@ import java.util.Optional;
 
 /**
  * Every setting a tech can change, with its default, accepted range and source: the one list the
- * store, the {@code settings} command, the settings screen and docs/methods/settings.md follow.
+ * store, the {@code settings} command, the settings screen and docs/methods.md §6 follow.
  *
- * <p>Ranges (see docs/methods/settings.md). Instrument tolerances: 0 (a perfect instrument) up to a
+ * <p>Ranges (see docs/methods.md §6). Instrument tolerances: 0 (a perfect instrument) up to a
  * value no field instrument worth computing with exceeds (common practice, no source). Finding
  * thresholds: ±50 % around the catalogue default, cut at the physical limit of the quantity (an RH
  * at 100 %, a fraction at 100 %), except where a band around the default makes no sense: the

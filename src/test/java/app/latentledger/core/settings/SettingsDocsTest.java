@@ -11,9 +11,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class SettingsDocsTest {
     @Test
     void methodsDocumentNamesEveryKey() throws Exception {
-        String doc = Files.readString(Path.of("docs/methods/settings.md"));
+        String doc = Files.readString(Path.of("docs/methods.md"));
         for (String key : SettingsCatalogue.keys()) {
-            assertTrue(doc.contains("| `" + key + "` |"), key + " missing from docs/methods/settings.md");
+            assertTrue(doc.contains("| `" + key + "` |"), key + " missing from docs/methods.md");
         }
     }
 }
