@@ -25,6 +25,9 @@ package app.latentledger.core.psychro;
 public final class WetBulb {
     private static final double STEP_DONE_K = 1e-3;
     private static final double BISECTION_DONE_K = 1e-10;
+    /** The triple point, where the saturation-pressure fit changes from ice to water. */
+    private static final double KINK_C = SaturationPressure.TRIPLE_POINT_K - SaturationPressure.ZERO_CELSIUS_K;
+    private static final double KINK_BAND_K = 0.1;
     private static final int MAX_ITERATIONS = 100;
     /** Below this dry bulb no field pressure (≥ 50 kPa, boiling at 81 °C) brings Ws* near its pole. */
     private static final double NO_POLE_BELOW_C = 80.0;
@@ -136,7 +139,10 @@ public final class WetBulb {
                 }
                 next = 0.5 * (lo + hi);
             }
-            if (inBracket ? Math.abs(next - x) < STEP_DONE_K : hi - lo < BISECTION_DONE_K) {
+            // near the triple point pws switches from eq. 5 to eq. 6: W(t*) has a kink there, the
+            // cubic error estimate does not hold, so steps must shrink to nothing before stopping
+            double done = Math.abs(next - KINK_C) < KINK_BAND_K ? BISECTION_DONE_K : STEP_DONE_K;
+            if (inBracket ? Math.abs(next - x) < done : hi - lo < BISECTION_DONE_K) {
                 return next;
             }
             x = next;

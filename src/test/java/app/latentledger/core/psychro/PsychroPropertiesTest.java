@@ -88,6 +88,7 @@ class PsychroPropertiesTest {
         Assume.that(SaturationPressure.pascals(db) < 0.5 * p);
         MoistAirState s = MoistAirState.fromRelativeHumidity(p, db, rh, edition);
         Assume.that(s.wetBulbC() < s.dryBulbC() - 1e-6);
+        Assume.that(Math.abs(s.wetBulbC() - 0.01) > 2e-4); // the numerical slope below would straddle the kink
         double h = 1e-4;
         double w = edition.humidityRatioFromWetBulb(db, s.wetBulbC(), p);
         double slope = (edition.humidityRatioFromWetBulb(db, s.wetBulbC() + h, p)

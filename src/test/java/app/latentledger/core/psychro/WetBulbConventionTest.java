@@ -45,4 +45,21 @@ class WetBulbConventionTest {
             previous = wb;
         }
     }
+
+    /**
+     * A wet bulb a hair above the triple point (0.0102 °C), where pws switches from eq. 5 to eq. 6
+     * and W(t*) has a kink: the solver must still satisfy eq. 33 to far better than 1e-6 K. Found by
+     * a random search of 2 million states; the implied error had been 1.1e-5 K.
+     */
+    @Test
+    void convergesAtTheTriplePointKink() {
+        double p = 95_500.05573449326;
+        double db = 7.077869995467097;
+        MoistAirState s = MoistAirState.fromRelativeHumidity(p, db, 17.700424087687463, HandbookEdition.IP);
+        assertEquals(0.0102, s.wetBulbC(), 1e-4);
+        double w = HandbookEdition.IP.humidityRatioFromWetBulb(db, s.wetBulbC(), p);
+        double slope = (HandbookEdition.IP.humidityRatioFromWetBulb(db, s.wetBulbC() + 1e-3, p)
+                - HandbookEdition.IP.humidityRatioFromWetBulb(db, s.wetBulbC(), p)) / 1e-3;
+        assertTrue(Math.abs(w - s.humidityRatio()) / slope < 1e-9);
+    }
 }
