@@ -54,7 +54,11 @@ public final class SaturationPressure {
 
     /** Natural log of eq. 5 or 6, ln(Pa), at absolute temperature {@code tK}. */
     static double lnPwsOfKelvin(double tK) {
-        double lnT = Math.log(tK);
+        return lnPwsOfKelvin(tK, Math.log(tK));
+    }
+
+    /** As {@link #lnPwsOfKelvin(double)} with ln T already known. */
+    static double lnPwsOfKelvin(double tK, double lnT) {
         if (tK <= TRIPLE_POINT_K) {
             return C1 / tK + C2 + tK * (C3 + tK * (C4 + tK * (C5 + tK * C6))) + C7 * lnT;
         }

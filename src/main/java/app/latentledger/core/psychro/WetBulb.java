@@ -66,7 +66,8 @@ public final class WetBulb {
                 pwsUpper = Double.NaN;
             }
         }
-        double[] slope = new double[2];
+        // [0] dW/dt*, [1] d²W/dt*², [2..5] the last evaluation's T, ln T, ln pws and pws (see evaluate)
+        double[] slope = {Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN};
         if (upper >= 0) {
             double guess = tangentGuess(dryBulbC, humidityRatio, pressurePa, dewPointC, false);
             double liquid = solve(dryBulbC, humidityRatio, pressurePa, edition, false, upper, pwsUpper, 0.0, guess, slope);
@@ -152,10 +153,37 @@ public final class WetBulb {
     }
 
     private static double evaluate(double dryBulbC, double wetBulbC, double pressurePa, HandbookEdition edition,
-                                   boolean iceBulb, double knownPws, double[] slope) {
+                                   boolean iceBulb, double knownPws, double[] work) {
         double tK = wetBulbC + SaturationPressure.ZERO_CELSIUS_K;
-        double pws = Double.isNaN(knownPws) ? Math.exp(SaturationPressure.lnPwsOfKelvin(tK)) : knownPws;
+        double pws;
+        if (!Double.isNaN(knownPws)) {
+            pws = knownPws;
+        } else {
+            // successive iterates lie within a fraction of a kelvin: take ln T and pws from the last
+            // evaluation by short series (exact to rounding for these step sizes) instead of log and exp
+            double u = (tK - work[2]) / work[2];
+            double lnT = Math.abs(u) < 0.01 ? work[3] + log1p(u) : Math.log(tK);
+            double lnPws = SaturationPressure.lnPwsOfKelvin(tK, lnT);
+            double d = lnPws - work[4];
+            pws = Math.abs(d) < 0.05 ? work[5] * expSmall(d) : Math.exp(lnPws);
+            work[2] = tK;
+            work[3] = lnT;
+            work[4] = lnPws;
+            work[5] = pws;
+        }
         return edition.humidityRatioAndSlope(dryBulbC, wetBulbC, pressurePa, iceBulb, pws,
-                SaturationPressure.dLnPwsDT(tK), SaturationPressure.d2LnPwsDT2(tK), slope);
+                SaturationPressure.dLnPwsDT(tK), SaturationPressure.d2LnPwsDT2(tK), work);
+    }
+
+    /** ln(1 + u) for |u| &lt; 0.01 by its Taylor series to u⁹ (remainder below 1e−19). */
+    static double log1p(double u) {
+        return u * (1 + u * (-1.0 / 2 + u * (1.0 / 3 + u * (-1.0 / 4 + u * (1.0 / 5 + u * (-1.0 / 6
+                + u * (1.0 / 7 + u * (-1.0 / 8 + u / 9))))))));
+    }
+
+    /** e^d for |d| &lt; 0.05 by its Taylor series to d¹¹ (remainder below 1e−22). */
+    static double expSmall(double d) {
+        return 1 + d * (1 + d / 2 * (1 + d / 3 * (1 + d / 4 * (1 + d / 5 * (1 + d / 6 * (1 + d / 7
+                * (1 + d / 8 * (1 + d / 9 * (1 + d / 10 * (1 + d / 11))))))))));
     }
 }

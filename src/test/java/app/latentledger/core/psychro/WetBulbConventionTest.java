@@ -62,4 +62,15 @@ class WetBulbConventionTest {
                 - HandbookEdition.IP.humidityRatioFromWetBulb(db, s.wetBulbC(), p)) / 1e-3;
         assertTrue(Math.abs(w - s.humidityRatio()) / slope < 1e-9);
     }
+
+    /** The short series the solver uses between close iterates agree with the JDK's log1p and exp. */
+    @Test
+    void shortSeriesMatchTheJdk() {
+        for (double u = -0.01; u <= 0.01; u += 1e-4) {
+            assertEquals(Math.log1p(u), WetBulb.log1p(u), 1e-17);
+        }
+        for (double d = -0.05; d <= 0.05; d += 1e-4) {
+            assertEquals(Math.exp(d), WetBulb.expSmall(d), 3e-16);
+        }
+    }
 }
