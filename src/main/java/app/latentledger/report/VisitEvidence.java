@@ -39,7 +39,8 @@ public record VisitEvidence(Visit visit, Site site, HvacSystem system, List<Chec
                 .orElseThrow(() -> new ReportRefusedException("no visit with id '" + visitId + "'"));
         Site site = ledger.sites().find(v.siteId()).orElseThrow();
         HvacSystem system = ledger.systems().find(v.systemId()).orElseThrow();
-        ThresholdSettings thresholds = ThresholdSettings.DEFAULTS;
+        // the tech's stored thresholds, so the report finds what the app showed on site
+        ThresholdSettings thresholds = ledger.settings().load().thresholds();
         List<CheckedReadings> checked = new ArrayList<>();
         for (ReadingSet rs : ledger.readings().forVisit(v.id())) {
             List<String> missing = ReadingSetCheck.missing(rs);
