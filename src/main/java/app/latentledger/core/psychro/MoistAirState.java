@@ -65,7 +65,8 @@ public record MoistAirState(
         double ws = saturationOf(pws, pressurePa);
         w = Math.min(w, ws);
         double pw = Psychrometrics.vaporPressurePa(w, pressurePa);
-        return finish(pressurePa, dryBulbC, wetBulbC, dewPointOf(w, pw, dryBulbC), 100.0 * pw / pws, w, pw, ws, edition);
+        return finish(pressurePa, dryBulbC, wetBulbC, dewPointOf(w, pw, dryBulbC), 100.0 * pw / pws, w, pw, ws,
+                edition);
     }
 
     /**
@@ -80,7 +81,8 @@ public record MoistAirState(
         if (pw >= 0.99 * pressurePa) {
             // only above the boiling point for the pressure: the vapor alone would exceed the barometer
             throw new InvalidInputException("relative humidity", Quantity.RELATIVE_HUMIDITY, relativeHumidityPct,
-                    0.0, 99.0 * pressurePa / pws, "at this dry bulb and pressure the vapor would exceed the barometric pressure");
+                    0.0, 99.0 * pressurePa / pws,
+                    "at this dry bulb and pressure the vapor would exceed the barometric pressure");
         }
         double w = Psychrometrics.humidityRatio(pw, pressurePa);
         return fromKnownHumidityRatio(pressurePa, dryBulbC, w, pw, pws, edition);

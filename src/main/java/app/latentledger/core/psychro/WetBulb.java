@@ -67,10 +67,11 @@ public final class WetBulb {
             }
         }
         // [0] dW/dt*, [1] d²W/dt*², [2..5] the last evaluation's T, ln T, ln pws and pws (see evaluate)
-        double[] slope = {Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN};
+        double[] work = {Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN};
         if (upper >= 0) {
             double guess = tangentGuess(dryBulbC, humidityRatio, pressurePa, dewPointC, false);
-            double liquid = solve(dryBulbC, humidityRatio, pressurePa, edition, false, upper, pwsUpper, 0.0, guess, slope);
+            double liquid = solve(dryBulbC, humidityRatio, pressurePa, edition, false, upper, pwsUpper, 0.0, guess,
+                    work);
             if (!Double.isNaN(liquid)) {
                 return liquid;
             }
@@ -79,7 +80,7 @@ public final class WetBulb {
         }
         double guess = tangentGuess(dryBulbC, humidityRatio, pressurePa, dewPointC, true);
         return solve(dryBulbC, humidityRatio, pressurePa, edition, true, upper, pwsUpper,
-                SaturationPressure.MIN_C, guess, slope);
+                SaturationPressure.MIN_C, guess, work);
     }
 
     /** The tangent-line first guess described in the class comment; NaN for bone-dry air. */
@@ -96,14 +97,14 @@ public final class WetBulb {
     }
 
     /**
-     * Newton on one branch inside [lower, upper]. Returns NaN on the liquid branch when the root
-     * lies below {@code lower} (0 °C), so the caller moves to the ice branch.
+     * Halley (or Newton) steps on one branch inside [lower, upper]. Returns NaN on the liquid branch
+     * when the root lies below {@code lower} (0 °C), so the caller moves to the ice branch.
      */
     private static double solve(double dryBulbC, double target, double pressurePa, HandbookEdition edition,
                                 boolean iceBulb, double upper, double pwsUpper, double lower, double guess,
-                                double[] slope) {
+                                double[] work) {
         // saturated, or a hair above on the rounded IP ice coefficients: the wet bulb is the upper end
-        double fUpper = evaluate(dryBulbC, upper, pressurePa, edition, iceBulb, pwsUpper, slope) - target;
+        double fUpper = evaluate(dryBulbC, upper, pressurePa, edition, iceBulb, pwsUpper, work) - target;
         if (fUpper <= 0) {
             return Math.min(upper, dryBulbC);
         }
@@ -114,7 +115,7 @@ public final class WetBulb {
         double f;
         if (guess > lower && guess < upper) {
             x = guess;
-            f = evaluate(dryBulbC, x, pressurePa, edition, iceBulb, Double.NaN, slope) - target;
+            f = evaluate(dryBulbC, x, pressurePa, edition, iceBulb, Double.NaN, work) - target;
         } else {
             x = upper;
             f = fUpper;
@@ -127,8 +128,9 @@ public final class WetBulb {
                 hi = x;
             }
             // Halley's step (cubic convergence); Newton's if the curvature term would misbehave
-            double denom = 2 * slope[0] * slope[0] - f * slope[1];
-            double next = denom > slope[0] * slope[0] ? x - 2 * f * slope[0] / denom : x - f / slope[0];
+            double slope = work[0];
+            double denom = 2 * slope * slope - f * work[1];
+            double next = denom > slope * slope ? x - 2 * f * slope / denom : x - f / slope;
             boolean inBracket = next > lo && next < hi;
             if (!inBracket) {
                 if (!lowerKnown) {
@@ -147,7 +149,7 @@ public final class WetBulb {
                 return next;
             }
             x = next;
-            f = evaluate(dryBulbC, x, pressurePa, edition, iceBulb, Double.NaN, slope) - target;
+            f = evaluate(dryBulbC, x, pressurePa, edition, iceBulb, Double.NaN, work) - target;
         }
         return x;
     }
