@@ -4,7 +4,7 @@ import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.core.visit.StoredLogSeries;
 import app.latentledger.io.logcsv.LogCsvImporter;
-import app.latentledger.report.Paper;
+import app.latentledger.core.settings.PaperSize;
 import app.latentledger.report.ReportData;
 import app.latentledger.report.VisitReport;
 import app.latentledger.store.DemoScenario;
@@ -68,25 +68,25 @@ public class ReportBenchmark {
 
     @Benchmark
     public int complaintBeforeAfterPdf() throws Exception {
-        return pdf(ledger, DemoScenario.VISIT_COMPLAINT, null, Paper.LETTER, UnitSystem.IP);
+        return pdf(ledger, DemoScenario.VISIT_COMPLAINT, null, PaperSize.LETTER, UnitSystem.IP);
     }
 
     @Benchmark
     public int commissioningPdfSi() throws Exception {
-        return pdf(ledger, DemoScenario.VISIT_COMMISSIONING, null, Paper.A4, UnitSystem.SI);
+        return pdf(ledger, DemoScenario.VISIT_COMMISSIONING, null, PaperSize.A4, UnitSystem.SI);
     }
 
     @Benchmark
     public int twoVisitsComparedPdf() throws Exception {
-        return pdf(ledger, DemoScenario.VISIT_COMPLAINT, DemoScenario.VISIT_COMMISSIONING, Paper.LETTER, UnitSystem.IP);
+        return pdf(ledger, DemoScenario.VISIT_COMPLAINT, DemoScenario.VISIT_COMMISSIONING, PaperSize.LETTER, UnitSystem.IP);
     }
 
     @Benchmark
     public int complaintWithLogPdf() throws Exception {
-        return pdf(withLog, DemoScenario.VISIT_COMPLAINT, null, Paper.LETTER, UnitSystem.IP);
+        return pdf(withLog, DemoScenario.VISIT_COMPLAINT, null, PaperSize.LETTER, UnitSystem.IP);
     }
 
-    private static int pdf(Ledger l, String visit, String compare, Paper paper, UnitSystem units) throws Exception {
+    private static int pdf(Ledger l, String visit, String compare, PaperSize paper, UnitSystem units) throws Exception {
         ByteArrayOutputStream out = new ByteArrayOutputStream(1 << 17);
         VisitReport.write(l, visit, compare, paper, units, out);
         return out.size();

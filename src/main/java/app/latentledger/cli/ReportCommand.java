@@ -2,7 +2,7 @@ package app.latentledger.cli;
 
 import app.latentledger.core.records.Visit;
 import app.latentledger.core.units.UnitSystem;
-import app.latentledger.report.Paper;
+import app.latentledger.core.settings.PaperSize;
 import app.latentledger.report.ReportRefusedException;
 import app.latentledger.report.VisitReport;
 import app.latentledger.store.DataLocation;
@@ -54,9 +54,9 @@ public final class ReportCommand implements Command {
         if (out == null || out.isBlank()) {
             throw new UsageException("report needs --out FILE.pdf\n" + usage());
         }
-        Paper paper;
+        PaperSize paper;
         try {
-            paper = paperText == null ? Paper.defaultFor(units) : Paper.parse(paperText);
+            paper = paperText == null ? PaperSize.defaultFor(units) : PaperSize.parse(paperText);
         } catch (IllegalArgumentException e) {
             throw new UsageException("--paper " + e.getMessage());
         }

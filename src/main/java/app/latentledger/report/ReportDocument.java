@@ -1,5 +1,6 @@
 package app.latentledger.report;
 
+import app.latentledger.core.settings.PaperSize;
 import app.latentledger.report.pdf.Ink;
 import app.latentledger.report.pdf.PageFlow;
 import app.latentledger.report.pdf.ReportFonts;
@@ -26,7 +27,7 @@ final class ReportDocument {
     private ReportDocument() {
     }
 
-    static void write(ReportData data, Paper paper, OffsetDateTime generated, OutputStream out) throws IOException {
+    static void write(ReportData data, PaperSize paper, OffsetDateTime generated, OutputStream out) throws IOException {
         try (PDDocument doc = new PDDocument()) {
             ReportFonts fonts = ReportFonts.load(doc);
             try (PageFlow flow = new PageFlow(doc, fonts, paper.widthPt(), paper.heightPt(), MARGIN_PT)) {

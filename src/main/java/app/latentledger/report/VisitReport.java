@@ -1,5 +1,6 @@
 package app.latentledger.report;
 
+import app.latentledger.core.settings.PaperSize;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.store.Ledger;
 
@@ -35,7 +36,7 @@ public final class VisitReport {
      * @throws ReportRefusedException for an unknown visit, a visit compared with itself, or an output
      *                                path that cannot be written (missing folder, a folder, no permission)
      */
-    public static Path write(Ledger ledger, String visitId, String compareVisitIdOrNull, Paper paper, UnitSystem units,
+    public static Path write(Ledger ledger, String visitId, String compareVisitIdOrNull, PaperSize paper, UnitSystem units,
                              Path output) {
         ReportData data = ReportData.load(ledger, visitId, compareVisitIdOrNull, units);
         OffsetDateTime now = OffsetDateTime.now(data.latest().visit().startedAt().getOffset());
@@ -43,7 +44,7 @@ public final class VisitReport {
     }
 
     /** As {@link #write}, into a stream (the caller owns it); for previews and tests. */
-    public static void write(Ledger ledger, String visitId, String compareVisitIdOrNull, Paper paper, UnitSystem units,
+    public static void write(Ledger ledger, String visitId, String compareVisitIdOrNull, PaperSize paper, UnitSystem units,
                              OutputStream out) throws IOException {
         ReportData data = ReportData.load(ledger, visitId, compareVisitIdOrNull, units);
         ReportDocument.write(data, paper, OffsetDateTime.now(data.latest().visit().startedAt().getOffset()), out);

@@ -1,5 +1,6 @@
 package app.latentledger.report;
 
+import app.latentledger.core.settings.PaperSize;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.Estimate;
 import app.latentledger.core.coil.Measurand;
@@ -76,7 +77,7 @@ class VisitReportTest {
     void complaintBeforeAfter() throws Exception {
         Path out = dir.resolve("complaint.pdf");
         try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
-            VisitReport.write(ledger, DemoScenario.VISIT_COMPLAINT, null, Paper.LETTER, UnitSystem.IP, out);
+            VisitReport.write(ledger, DemoScenario.VISIT_COMPLAINT, null, PaperSize.LETTER, UnitSystem.IP, out);
             CoilResult b = check(ledger, DemoScenario.READINGS_BEFORE, UnitSystem.IP);
             CoilResult a = check(ledger, DemoScenario.READINGS_AFTER, UnitSystem.IP);
             try (PDDocument doc = ReportPdfs.open(out)) {
@@ -127,7 +128,7 @@ class VisitReportTest {
     void commissioningSi() throws Exception {
         Path out = dir.resolve("commissioning.pdf");
         try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
-            VisitReport.write(ledger, DemoScenario.VISIT_COMMISSIONING.substring(0, 36), null, Paper.A4, UnitSystem.SI, out);
+            VisitReport.write(ledger, DemoScenario.VISIT_COMMISSIONING.substring(0, 36), null, PaperSize.A4, UnitSystem.SI, out);
             CoilResult r = check(ledger, DemoScenario.READINGS_COMMISSIONING, UnitSystem.SI);
             try (PDDocument doc = ReportPdfs.open(out)) {
                 String text = ReportPdfs.text(doc);
@@ -153,7 +154,7 @@ class VisitReportTest {
     void twoVisitsCompared() throws Exception {
         Path out = dir.resolve("compare.pdf");
         try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
-            VisitReport.write(ledger, DemoScenario.VISIT_COMMISSIONING, DemoScenario.VISIT_COMPLAINT, Paper.LETTER,
+            VisitReport.write(ledger, DemoScenario.VISIT_COMMISSIONING, DemoScenario.VISIT_COMPLAINT, PaperSize.LETTER,
                     UnitSystem.IP, out);
             CoilResult b = check(ledger, DemoScenario.READINGS_BEFORE, UnitSystem.IP);
             CoilResult a = check(ledger, DemoScenario.READINGS_COMMISSIONING, UnitSystem.IP);
@@ -183,8 +184,8 @@ class VisitReportTest {
         try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
             ReportPdfs.addLog(ledger, DemoScenario.VISIT_COMPLAINT, "oversized-short-cycling.csv");
             ReportPdfs.addLog(ledger, DemoScenario.VISIT_COMMISSIONING, "healthy-long-cycling.csv");
-            VisitReport.write(ledger, DemoScenario.VISIT_COMPLAINT, null, Paper.LETTER, UnitSystem.IP, one);
-            VisitReport.write(ledger, DemoScenario.VISIT_COMPLAINT, DemoScenario.VISIT_COMMISSIONING, Paper.LETTER,
+            VisitReport.write(ledger, DemoScenario.VISIT_COMPLAINT, null, PaperSize.LETTER, UnitSystem.IP, one);
+            VisitReport.write(ledger, DemoScenario.VISIT_COMPLAINT, DemoScenario.VISIT_COMMISSIONING, PaperSize.LETTER,
                     UnitSystem.IP, pair);
             // the analysis as the log command would run it: 1080 cfm from the "after" set, standard atmosphere at 12 m
             var log = ledger.logs().find(ReportPdfs.logId("oversized-short-cycling.csv")).orElseThrow();

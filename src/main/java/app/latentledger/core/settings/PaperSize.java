@@ -1,5 +1,7 @@
 package app.latentledger.core.settings;
 
+import app.latentledger.core.units.UnitSystem;
+
 import java.util.Locale;
 
 /**
@@ -7,14 +9,42 @@ import java.util.Locale;
  * (ISO 216).
  */
 public enum PaperSize {
-    LETTER(215.9, 279.4), A4(210.0, 297.0);
+    LETTER(215.9, 279.4, 612, 792), A4(210.0, 297.0, 595.276, 841.890);
 
     private final double widthMm;
     private final double heightMm;
+    private final double widthPt;
+    private final double heightPt;
 
-    PaperSize(double widthMm, double heightMm) {
+    PaperSize(double widthMm, double heightMm, double widthPt, double heightPt) {
         this.widthMm = widthMm;
         this.heightMm = heightMm;
+        this.widthPt = widthPt;
+        this.heightPt = heightPt;
+    }
+
+    /** Portrait width in PostScript points (1/72 in), as a PDF page takes it. */
+    public double widthPt() {
+        return widthPt;
+    }
+
+    /** Portrait height in PostScript points. */
+    public double heightPt() {
+        return heightPt;
+    }
+
+    /** Letter where inch-pound units are used (the US), A4 elsewhere. */
+    public static PaperSize defaultFor(UnitSystem units) {
+        return units == UnitSystem.IP ? LETTER : A4;
+    }
+
+    /** "letter" or "a4", any case; refuses anything else with a message saying what is accepted. */
+    public static PaperSize parse(String text) {
+        PaperSize p = parseOrNull(text);
+        if (p == null) {
+            throw new IllegalArgumentException("'" + text + "' is not a paper size; use letter or a4");
+        }
+        return p;
     }
 
     /** Portrait width, mm. */

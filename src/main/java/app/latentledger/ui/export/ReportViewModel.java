@@ -1,6 +1,6 @@
 package app.latentledger.ui.export;
 
-import app.latentledger.report.Paper;
+import app.latentledger.core.settings.PaperSize;
 import app.latentledger.report.ReportRefusedException;
 import app.latentledger.report.VisitDataExport;
 import app.latentledger.report.VisitReport;
@@ -94,8 +94,8 @@ public final class ReportViewModel {
                 () -> VisitDataExport.write(session.ledger(), visitId, format, session.units(), file));
     }
 
-    private Paper paper() {
-        return Paper.parse(session.settings().paper().key());
+    private PaperSize paper() {
+        return session.settings().paper();
     }
 
     private Path file(String what, String visitId, String extension) {
