@@ -50,8 +50,7 @@ public final class ReadingSetCheck {
         if (!missing.isEmpty()) {
             throw new IllegalStateException("reading set " + rs.id() + " lacks " + String.join(", ", missing));
         }
-        double pressurePa = rs.stationPressurePa() != null ? rs.stationPressurePa().valueSi()
-                : StandardAtmosphere.pressurePa(site.elevationM());
+        double pressurePa = pressurePa(rs, site);
         AirReading entering = air("return", rs.returnDryBulb(), rs.returnHumidity());
         AirReading leaving = air("supply", rs.supplyDryBulb(), rs.supplyHumidity());
         Measurement flow = rs.airflow().volume();
@@ -78,6 +77,16 @@ public final class ReadingSetCheck {
         }
         return new CoilReadings(pressurePa, entering, leaving, flow.valueSi(), fraction(flow), at, coilC, coilTolK,
                 coilKind, system.nominalCapacityW(), condensate);
+    }
+
+    /**
+     * The barometric pressure a reading set is worked out at: its measured station pressure when
+     * one was entered, else the standard atmosphere at the site's elevation (ASHRAE HoF 2017 ch. 1,
+     * eq. 3), Pa.
+     */
+    public static double pressurePa(ReadingSet rs, Site site) {
+        return rs.stationPressurePa() != null ? rs.stationPressurePa().valueSi()
+                : StandardAtmosphere.pressurePa(site.elevationM());
     }
 
     /** Runs the coil check on a stored reading set. */

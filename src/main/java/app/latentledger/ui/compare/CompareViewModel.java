@@ -148,8 +148,9 @@ public final class CompareViewModel {
         CoilResult a = before == null ? null : run(before);
         CoilResult b = current();
         if (session.site() != null) {
-            chartData.set(CoilCharts.of(session.units(), StandardAtmosphere.pressurePa(session.site().elevationM()),
-                    "Before and after", a, b));
+            double pressurePa = b != null ? b.readings().pressurePa()
+                    : StandardAtmosphere.pressurePa(session.site().elevationM());
+            chartData.set(CoilCharts.of(session.units(), pressurePa, "Before and after", a, b));
         }
         if (before == null) {
             status.set("No other reading set of this system to compare with yet.");

@@ -56,8 +56,7 @@ public final class EntryRules {
     /** The site pressure the draft is worked out at (measured, else the standard atmosphere). */
     public static double pressure(Draft d, Site site) {
         ReadingSet b = d.base();
-        return b != null && b.stationPressurePa() != null ? b.stationPressurePa().valueSi()
-                : StandardAtmosphere.pressurePa(site.elevationM());
+        return b != null ? ReadingSetCheck.pressurePa(b, site) : StandardAtmosphere.pressurePa(site.elevationM());
     }
 
     private static void range(String field, Slot slot, String choice, SlotValue v) {

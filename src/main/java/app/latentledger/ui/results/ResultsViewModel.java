@@ -2,12 +2,12 @@ package app.latentledger.ui.results;
 
 import app.latentledger.chart.psychro.PsychroChartData;
 import app.latentledger.core.coil.CoilResult;
-import app.latentledger.core.psychro.StandardAtmosphere;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.visit.ReadingSetCheck;
 import app.latentledger.ui.AppSession;
 import app.latentledger.ui.chart.CoilCharts;
 import app.latentledger.ui.chart.PsychroChartViewModel;
+import app.latentledger.ui.entry.EntryRules;
 import app.latentledger.ui.entry.Draft;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
@@ -74,7 +74,8 @@ public final class ResultsViewModel {
         CoilResult pairedWith = before(session.draft());
         // short: the header already names the site, and the chart's title shares its width with the plot
         String title = pairedWith != null && o.coil() != null ? "Before and after" : "This reading set";
-        chartData.set(CoilCharts.of(session.units(), StandardAtmosphere.pressurePa(session.site().elevationM()), title,
+        // drawn at the pressure the draft was worked out at (a measured station pressure if entered)
+        chartData.set(CoilCharts.of(session.units(), EntryRules.pressure(session.draft(), session.site()), title,
                 pairedWith, o.coil()));
     }
 
