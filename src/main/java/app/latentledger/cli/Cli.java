@@ -30,7 +30,10 @@ public final class Cli {
     /** All commands this build offers. */
     public static Cli standard() {
         return new Cli(List.of(new StateCommand(), new CoilCommand(), new LogCommand(), new VisitsCommand(),
-                new ReportCommand(), new DataCommand(), new SettingsCommand(), new ScreensCommand()));
+                new ReportCommand(), new DataCommand(), new SettingsCommand(), new ScreensCommand(),
+                // recording from the command line
+                new SitesCommand(), new SystemsCommand(), new ReadingsCommand(), DeleteCommand.delete(),
+                DeleteCommand.restore(), new RecycleBinCommand()));
     }
 
     public int run(List<String> words, PrintStream out, PrintStream err) {
@@ -61,7 +64,7 @@ public final class Cli {
                 out.print(command.usage());
                 return OK;
             }
-            Args args = Args.parse(rest, Set.of("json", "help"));
+            Args args = Args.parse(rest, Set.of("json", "help", "yes", "with-deletions", "dry-run"));
             return command.run(args, new CliContext(out, err, dataDir));
         } catch (UsageException e) {
             err.println("latent-ledger: " + e.getMessage());
@@ -86,7 +89,7 @@ public final class Cli {
         StringBuilder b = new StringBuilder("usage: latent-ledger [--data-dir DIR] COMMAND [options]\n"
                 + "       latent-ledger            (no command: opens the tablet app)\ncommands:\n");
         for (Command c : commands.values()) {
-            b.append(String.format("  %-8s %s%n", c.name(), c.summary()));
+            b.append(String.format("  %-11s %s%n", c.name(), c.summary()));
         }
         return b.append("Each command takes --help.\n").toString();
     }

@@ -109,7 +109,7 @@ public final class RecycleBin {
                     p.executeUpdate();
                 }
             }
-            requireNoDanglingKeys(c, "delete " + kind.key() + " " + id);
+            requireNoDanglingKeys(c, "delete " + kind.key() + " " + id, table);
             return entry;
         });
     }
@@ -142,7 +142,7 @@ public final class RecycleBin {
                 }
             }
             String what = kind.key() + " " + recordId;
-            requireNoDanglingKeys(c, "restore " + what);
+            requireNoDanglingKeys(c, "restore " + what, TABLE.get(kind));
             for (String key : restored) {
                 String[] parts = key.split("\u0000", 2);
                 recheck(c, parts[0], parts[1], what);
@@ -359,17 +359,33 @@ public final class RecycleBin {
         }
     }
 
-    /** Refuses the transaction while any row points at one that is not there, naming what is missing. */
-    private static void requireNoDanglingKeys(Connection c, String action) throws SQLException {
+    /**
+     * Refuses the transaction while any row points at one that is not there, naming what is
+     * missing: the record's own parent when that is it, else the first dangling row found.
+     */
+    private static void requireNoDanglingKeys(Connection c, String action, String topTable) throws SQLException {
+        String child = null;
+        String parent = null;
         try (Statement s = c.createStatement(); ResultSet r = s.executeQuery("PRAGMA foreign_key_check")) {
-            if (r.next()) {
-                String child = r.getString("table");
-                String parent = r.getString("parent");
-                throw new InvalidRecordException(action.substring(action.indexOf(' ') + 1), "cannot " + action + ": a "
-                        + kindOf(child) + " in it belongs to a " + kindOf(parent)
-                        + " that is not in the ledger; restore that " + kindOf(parent) + " first");
+            while (r.next()) {
+                if (child == null || r.getString("table").equals(topTable)) {
+                    child = r.getString("table");
+                    parent = r.getString("parent");
+                }
+                if (child.equals(topTable)) {
+                    break;
+                }
             }
         }
+        if (child == null) {
+            return;
+        }
+        String what = action.substring(action.indexOf(' ') + 1);
+        String problem = child.equals(topTable)
+                ? "it belongs to a " + kindOf(parent) + " that is not in the ledger; restore that " + kindOf(parent) + " first"
+                : "its " + kindOf(child) + " refers to a " + kindOf(parent) + " that is not in the ledger; restore that "
+                        + kindOf(parent) + " (or what it was part of) first";
+        throw new InvalidRecordException(what, "cannot " + action + ": " + problem);
     }
 
     /** Reads a restored record back through its repository: the same checks as entering it. */
@@ -493,6 +509,7 @@ public final class RecycleBin {
             case "instrument" -> "instrument";
             case "results_snapshot" -> "saved result";
             case "visit_paperwork" -> "visit's paperwork";
+            case "reading_set_instrument" -> "instrument choice";
             default -> table.replace('_', ' ');
         };
     }
