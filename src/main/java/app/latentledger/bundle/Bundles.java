@@ -123,6 +123,36 @@ public final class Bundles {
         public ImportSummary(int added, int alreadyPresent, List<String> visitIds) {
             this(added, alreadyPresent, visitIds, 0, List.of(), java.util.Map.of());
         }
+
+        private static final List<String> ORDER = List.of("site", "system", "visit", "reading set", "log",
+                "instrument", "instrument choice", "paperwork", "snapshot");
+
+        /**
+         * What the import adds, leaves and deletes in words a tech reads before confirming, e.g.
+         * "Adds 1 site, 1 system, 1 visit, 2 reading sets. 0 already here. Moves 1 record to the recycle bin."
+         */
+        public String plainWords() {
+            List<String> parts = new ArrayList<>();
+            for (String kind : ORDER) {
+                int n = addedByKind.getOrDefault(kind, 0);
+                if (n > 0) {
+                    String noun = kind.equals("paperwork") ? "visit's paperwork" : kind;
+                    parts.add(n + " " + noun + (n == 1 || kind.equals("paperwork") ? "" : "s"));
+                }
+            }
+            StringBuilder b = new StringBuilder(parts.isEmpty() ? "Adds nothing new." : "Adds " + String.join(", ", parts) + ".");
+            b.append(' ').append(alreadyPresent).append(alreadyPresent == 1 ? " record is" : " records are")
+                    .append(" already here and stay as they are.");
+            if (deleted > 0) {
+                b.append(" Moves ").append(deleted).append(deleted == 1 ? " record" : " records")
+                        .append(" to the recycle bin, as deleted where the bundle was made.");
+            }
+            if (!conflicts.isEmpty()) {
+                b.append(" Cannot be imported: ").append(String.join("; ", conflicts))
+                        .append(" from the copy already here.");
+            }
+            return b.toString();
+        }
     }
 
     /**

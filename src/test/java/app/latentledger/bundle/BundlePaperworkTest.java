@@ -127,6 +127,8 @@ class BundlePaperworkTest {
         Bundles.exportSite(source, DemoScenario.SITE_HERON, file);
         Bundles.ImportSummary p = Bundles.preview(target, file);
         assertEquals(1, p.addedByKind().get("site"));
+        assertTrue(p.plainWords().startsWith("Adds 1 site, 1 system, "), p.plainWords());
+        assertTrue(p.plainWords().contains("0 records are already here"), p.plainWords());
         assertEquals(List.of(), p.conflicts());
         assertTrue(target.sites().all().isEmpty());
         Bundles.ImportSummary done = Bundles.importBundle(target, file);
