@@ -55,7 +55,7 @@ final class TechnicalSection {
         }
         for (Finding f : findings) {
             t.flow().need(60);
-            t.leadIn("[" + f.severity().key() + "] " + f.code() + " — ", f.message(), Ink.BODY, 10, t.flow().width() - 10);
+            t.leadIn("[" + f.severity().key() + "] " + f.code().key() + " — ", f.message(), Ink.BODY, 10, t.flow().width() - 10);
             t.gap(1);
             t.leadIn("Technical: ", f.technical(), Ink.BODY.sized(8.8), 10, t.flow().width() - 10);
             t.gap(1);

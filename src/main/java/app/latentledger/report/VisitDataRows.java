@@ -144,16 +144,16 @@ final class VisitDataRows {
 
     private void findings(String source, String id, String label, List<Finding> findings) {
         for (Finding f : findings) {
-            add(source, id, label, "finding", f.code(), f.severity().key(), null, Double.NaN, Double.NaN, "", f.code(),
+            add(source, id, label, "finding", f.code().key(), f.severity().key(), null, Double.NaN, Double.NaN, "", f.code().key(),
                     f.message());
-            add(source, id, label, "technical", f.code(), "technical", null, Double.NaN, Double.NaN, "", f.code(),
+            add(source, id, label, "technical", f.code().key(), "technical", null, Double.NaN, Double.NaN, "", f.code().key(),
                     f.technical());
             for (Evidence e : f.evidence()) {
                 add(source, id, label, "evidence", e.key(), e.label(), e.quantity(), e.valueSi(), e.uncertaintySi(),
-                        Double.isNaN(e.uncertaintySi()) ? "" : DataRow.EXPANDED, f.code(), "");
+                        Double.isNaN(e.uncertaintySi()) ? "" : DataRow.EXPANDED, f.code().key(), "");
             }
             for (String n : f.nextChecks()) {
-                add(source, id, label, "next-check", f.code(), "next check", null, Double.NaN, Double.NaN, "", f.code(), n);
+                add(source, id, label, "next-check", f.code().key(), "next check", null, Double.NaN, Double.NaN, "", f.code().key(), n);
             }
         }
     }

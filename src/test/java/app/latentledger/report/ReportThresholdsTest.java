@@ -1,5 +1,6 @@
 package app.latentledger.report;
 
+import app.latentledger.core.findings.FindingCode;
 import app.latentledger.core.findings.Thresholds;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.store.DemoScenario;
@@ -33,6 +34,6 @@ class ReportThresholdsTest {
         return VisitEvidence.load(ledger, DemoScenario.VISIT_COMPLAINT, UnitSystem.IP).checkedReadings().stream()
                 .filter(c -> c.set().id().equals(DemoScenario.READINGS_AFTER))
                 .flatMap(c -> c.result().findings().stream())
-                .anyMatch(f -> f.code().equals("high-airflow-per-ton"));
+                .anyMatch(f -> f.code() == FindingCode.HIGH_AIRFLOW_PER_TON);
     }
 }

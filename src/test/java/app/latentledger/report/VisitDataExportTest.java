@@ -89,9 +89,9 @@ class VisitDataExportTest {
                 assertEquals(rs.instrument(), row(rows, id, "info", "instrument").get("text"));
                 int evidence = 0;
                 for (Finding f : r.findings()) {
-                    assertEquals(f.message(), row(rows, id, "finding", f.code()).get("text"));
-                    assertEquals(f.severity().key(), row(rows, id, "finding", f.code()).get("label"));
-                    assertEquals(f.technical(), row(rows, id, "technical", f.code()).get("text"));
+                    assertEquals(f.message(), row(rows, id, "finding", f.code().key()).get("text"));
+                    assertEquals(f.severity().key(), row(rows, id, "finding", f.code().key()).get("label"));
+                    assertEquals(f.technical(), row(rows, id, "technical", f.code().key()).get("text"));
                     evidence += f.evidence().size();
                 }
                 long exported = rows.stream().filter(x -> x.get("source_id").equals(id)

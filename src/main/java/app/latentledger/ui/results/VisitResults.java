@@ -172,6 +172,6 @@ public final class VisitResults {
             String unit = e.quantity().symbol(u);
             evidence.add(e.label() + ": " + v + (unit.isEmpty() ? "" : " " + unit));
         }
-        return new FindingCard(f.code(), f.severity(), f.message(), f.technical(), evidence, f.nextChecks());
+        return new FindingCard(f.code().key(), f.severity(), f.message(), f.technical(), evidence, f.nextChecks());
     }
 }

@@ -1,6 +1,7 @@
 package app.latentledger.core.coil;
 
 import app.latentledger.core.findings.Finding;
+import app.latentledger.core.findings.FindingCode;
 import app.latentledger.core.findings.Threshold;
 import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.core.findings.Thresholds;
@@ -13,7 +14,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
 
-import static app.latentledger.core.coil.CoilFindings.*;
+import static app.latentledger.core.findings.FindingCode.*;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -25,7 +26,7 @@ class CoilFindingsTest {
         return IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).nominalTons(3).coilF(45);
     }
 
-    private static List<String> codes(CoilResult r) {
+    private static List<FindingCode> codes(CoilResult r) {
         return r.findings().stream().map(Finding::code).collect(Collectors.toList());
     }
 
@@ -43,8 +44,8 @@ class CoilFindingsTest {
         for (Finding f : r.findings()) {
             assertFalse(f.message().isBlank());
             assertFalse(f.technical().isBlank());
-            assertFalse(f.evidence().isEmpty(), f.code());
-            assertFalse(f.nextChecks().isEmpty(), f.code());
+            assertFalse(f.evidence().isEmpty(), f.code().key());
+            assertFalse(f.nextChecks().isEmpty(), f.code().key());
         }
     }
 
@@ -163,7 +164,7 @@ class CoilFindingsTest {
 
         @Test
         void quiet() {
-            List<String> c = codes(healthy().run());
+            List<FindingCode> c = codes(healthy().run());
             assertFalse(c.contains(HIGH_AIRFLOW_PER_TON));
             assertFalse(c.contains(LOW_AIRFLOW_PER_TON));
         }

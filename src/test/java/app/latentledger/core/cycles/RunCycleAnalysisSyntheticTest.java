@@ -1,5 +1,7 @@
 package app.latentledger.core.cycles;
 
+import app.latentledger.core.findings.FindingCode;
+
 import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.fielddata.SyntheticLog;
 import app.latentledger.fielddata.SyntheticLog.Blower;
@@ -108,9 +110,9 @@ class RunCycleAnalysisSyntheticTest {
         assertEquals(0.381, r.latentFractionPredicted(), 0.001);
         assertEquals("default", r.model().source());
         assertEquals(dw, r.steadyDryingW(), 1e-6);
-        assertTrue(r.has("off-cycle-reevaporation"));
-        assertFalse(r.has("short-cycling"));
-        assertFalse(r.has("coil-never-wet"));
+        assertTrue(r.has(FindingCode.OFF_CYCLE_REEVAPORATION));
+        assertFalse(r.has(FindingCode.SHORT_CYCLING));
+        assertFalse(r.has(FindingCode.COIL_NEVER_WET));
     }
 
     @ParameterizedTest(name = "blower off in rests (AUTO), 10 min on / 15 min off, status columns: {0}")
@@ -126,7 +128,7 @@ class RunCycleAnalysisSyntheticTest {
             assertEquals(removed, c.removedKg(), 0.01 * removed);
             assertEquals(0.0, c.returnedKg(), 1e-12);
         }
-        assertFalse(r.has("off-cycle-reevaporation"));
+        assertFalse(r.has(FindingCode.OFF_CYCLE_REEVAPORATION));
         // no run ≥ 15 min: the steady rate is unknown, so the measured fraction is too
         assertTrue(Double.isNaN(r.latentFractionMeasured()));
         // model with no evaporation: gross(600)/600 = (600 + 45(e^(−600/45) − 1))/600 = 0.925
@@ -158,9 +160,9 @@ class RunCycleAnalysisSyntheticTest {
         assertTimings(rows, r);
         assertTrue(r.cyclesPerHour() > 3);
         assertEquals(0.0, r.latentFractionPredicted(), 1e-9); // S1_6CPH_5ON_5OFF_P1: 0.000
-        assertTrue(r.has("short-cycling"));
-        assertTrue(r.has("short-cycling-limits-latent"));
-        assertTrue(r.has("off-cycle-reevaporation"));
+        assertTrue(r.has(FindingCode.SHORT_CYCLING));
+        assertTrue(r.has(FindingCode.SHORT_CYCLING_LIMITS_LATENT));
+        assertTrue(r.has(FindingCode.OFF_CYCLE_REEVAPORATION));
     }
 
     @Test
@@ -203,7 +205,7 @@ class RunCycleAnalysisSyntheticTest {
         Rows rows = SyntheticLog.generate(s);
         RunCycleReport r = ANALYSIS.analyse(rows.series(true), 101_325, AIRFLOW);
         assertEquals(4, r.cycles().size());
-        assertTrue(r.has("coil-never-wet"));
+        assertTrue(r.has(FindingCode.COIL_NEVER_WET));
         assertTrue(Double.isNaN(r.steadyDryingW()));
     }
 
@@ -215,11 +217,11 @@ class RunCycleAnalysisSyntheticTest {
         Rows rows = SyntheticLog.generate(s);
         RunCycleReport r = ANALYSIS.analyse(rows.series(false), 101_325, AIRFLOW);
         assertEquals(5, r.sensorOffsetRhPct(), 0.3);
-        assertTrue(r.has("sensor-offset"));
+        assertTrue(r.has(FindingCode.SENSOR_OFFSET));
         Scenario clean = repeated(base(Blower.CONTINUOUS, 1200, 3600), 3);
         RunCycleReport ok = ANALYSIS.analyse(SyntheticLog.generate(clean).series(false), 101_325, AIRFLOW);
         assertEquals(0, ok.sensorOffsetRhPct(), 0.1);
-        assertFalse(ok.has("sensor-offset"));
+        assertFalse(ok.has(FindingCode.SENSOR_OFFSET));
     }
 
     @ParameterizedTest(name = "a 15 min gap inside the third run, status columns: {0}")
