@@ -142,8 +142,8 @@ public final class ReadingsCommand implements Command {
             m.put("visitId", visit.id());
             m.put("label", set.label());
             m.put("verdict", result.verdict().key());
-            List<Object> codes = new ArrayList<>();
-            result.findings().forEach(f -> codes.add(f.code()));
+            List<String> codes = new ArrayList<>();
+            result.findings().forEach(f -> codes.add(f.code().key()));
             m.put("findings", codes);
             m.put("instruments", chosen.stream().map(Instrument::id).toList());
             if (json) {
@@ -153,7 +153,7 @@ public final class ReadingsCommand implements Command {
                         + (set.label().isEmpty() ? "" : " [" + set.label() + "]") + " to visit " + Visits.shortId(visit.id())
                         + "\n  verdict: " + result.verdict().key() + "\n");
                 for (Finding f : result.findings()) {
-                    b.append("  [").append(f.severity().key()).append("] ").append(f.code()).append(": ")
+                    b.append("  [").append(f.severity().key()).append("] ").append(f.code().key()).append(": ")
                             .append(f.message()).append('\n');
                 }
                 context.out().print(b.append(Cautions.SAFETY_LINE).append('\n'));
