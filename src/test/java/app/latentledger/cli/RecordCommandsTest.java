@@ -83,6 +83,11 @@ class RecordCommandsTest {
         JsonObject coil = ok(with(with(new String[] {"coil"}, READINGS), "--elevation", "650", "--nominal-tons", "3",
                 "--json")).json();
         assertEquals(coil.get("verdict").getAsString(), a.get("verdict").getAsString());
+        List<String> coilCodes = new ArrayList<>();
+        coil.getAsJsonArray("findings").forEach(f -> coilCodes.add(f.getAsJsonObject().get("code").getAsString()));
+        List<String> storedCodes = new ArrayList<>();
+        a.getAsJsonArray("findings").forEach(f -> storedCodes.add(f.getAsString()));
+        assertEquals(coilCodes, storedCodes, "the same findings as the coil command");
         JsonArray list = JsonParser.parseString(ok("visits", "list", "--json").out()).getAsJsonArray();
         JsonObject mine = null;
         for (var e : list) {
