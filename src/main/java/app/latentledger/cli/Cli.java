@@ -27,10 +27,15 @@ public final class Cli {
         }
     }
 
-    /** All commands this build offers. */
+    /** The commands that need no display; {@code Main} adds the ones that draw the app. */
+    public static List<Command> standardCommands() {
+        return List.of(new StateCommand(), new CoilCommand(), new LogCommand(), new VisitsCommand(),
+                new ReportCommand(), new DataCommand(), new SettingsCommand());
+    }
+
+    /** The display-free commands alone (tests and tools that never draw). */
     public static Cli standard() {
-        return new Cli(List.of(new StateCommand(), new CoilCommand(), new LogCommand(), new VisitsCommand(),
-                new ReportCommand(), new DataCommand(), new SettingsCommand(), new ScreensCommand()));
+        return new Cli(standardCommands());
     }
 
     public int run(List<String> words, PrintStream out, PrintStream err) {

@@ -1,6 +1,5 @@
 package app.latentledger.ui.render;
 
-import app.latentledger.cli.ScreenRendering;
 import app.latentledger.store.DemoScenario;
 import app.latentledger.ui.AppSession;
 import app.latentledger.ui.AppShell;
@@ -31,12 +30,17 @@ import java.util.concurrent.TimeUnit;
  * run on the calling thread so each screen is complete when it is drawn. Also draws the results
  * screen in the dark theme.
  */
-public final class PngScreens implements ScreenRendering {
+public final class PngScreens {
     /** Landscape and portrait tablet sizes the layouts are designed for. */
     static final int LONG_SIDE = 1280;
     static final int SHORT_SIDE = 800;
 
-    @Override
+    /**
+     * Renders every main screen of the app on the ledger in {@code dataFolder} (seeded with the
+     * demo when empty) to PNG files in {@code outDir}, landscape and portrait.
+     *
+     * @return the files written
+     */
     public List<Path> render(Path dataFolder, Path outDir) throws Exception {
         Files.createDirectories(outDir);
         boolean started = startToolkit();

@@ -1,6 +1,12 @@
-package app.latentledger.cli;
+package app.latentledger;
 
+import app.latentledger.cli.Args;
+import app.latentledger.cli.Cli;
+import app.latentledger.cli.CliContext;
+import app.latentledger.cli.Command;
+import app.latentledger.cli.UsageException;
 import app.latentledger.store.DataLocation;
+import app.latentledger.ui.render.PngScreens;
 
 import java.nio.file.Path;
 import java.util.List;
@@ -8,12 +14,13 @@ import java.util.List;
 /**
  * {@code screens --out DIR}: every main screen of the app as PNG, 1280 × 800 landscape and 800 × 1280
  * portrait, on the data folder's ledger (the demo when it is new). Needs a display (e.g.
- * {@code xvfb-run}); the drawing lives in the UI layer, loaded by name so this package never
- * touches JavaFX.
+ * {@code xvfb-run}).
+ *
+ * <p>It lives beside {@link Main}, the one place that knows both faces: the command line stays free
+ * of JavaFX, the app never knows the command line, and the renderer is an ordinary call the
+ * compiler checks. JavaFX is loaded only when the command runs.
  */
 public final class ScreensCommand implements Command {
-    static final String RENDERER = "app.latentledger.ui.render.PngScreens";
-
     @Override
     public String name() {
         return "screens";
@@ -40,14 +47,7 @@ public final class ScreensCommand implements Command {
             throw new UsageException("screens needs --out DIR\n" + usage());
         }
         Path folder = DataLocation.resolve(context.dataDir()).folder();
-        ScreenRendering renderer;
-        try {
-            renderer = (ScreenRendering) Class.forName(RENDERER).getDeclaredConstructor().newInstance();
-        } catch (ReflectiveOperationException | LinkageError e) {
-            context.err().println("latent-ledger: this build has no screen renderer (" + e + ")");
-            return Cli.FAILED;
-        }
-        List<Path> files = renderer.render(folder, Path.of(out));
+        List<Path> files = new PngScreens().render(folder, Path.of(out));
         for (Path f : files) {
             context.out().println(f);
         }
