@@ -12,6 +12,7 @@ import com.tngtech.archunit.library.dependencies.SliceIdentifier;
 import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAPackage;
 import static com.tngtech.archunit.core.domain.JavaClass.Predicates.simpleName;
 import static com.tngtech.archunit.core.domain.JavaClass.Predicates.simpleNameEndingWith;
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.classes;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static com.tngtech.archunit.library.Architectures.layeredArchitecture;
 import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
@@ -82,6 +83,47 @@ class ArchitectureTest {
                     CHART, IMPORT, STORE)
             .because("each floor is used by the floors above it and never the reverse, and the two faces"
                     + " meet only in Main; the picture in DEVELOPERS.md shows the same floors");
+
+    @ArchTest
+    static final ArchRule topLevelPackagesFormNoCycle = slices().matching("app.latentledger.(*)..")
+            .should().beFreeOfCycles()
+            .because("a knot between two floors means neither can change or be tested alone");
+
+    /** Each package of the app (ui, ui.session, ui.entry, …) is one slice; nothing outside ui is sliced. */
+    private static final SliceAssignment UI_PACKAGES = new SliceAssignment() {
+        @Override
+        public SliceIdentifier getIdentifierOf(JavaClass c) {
+            return c.getPackageName().startsWith("app.latentledger.ui")
+                    ? SliceIdentifier.of(c.getPackageName()) : SliceIdentifier.ignore();
+        }
+
+        @Override
+        public String getDescription() {
+            return "packages of the app";
+        }
+    };
+
+    @ArchTest
+    static final ArchRule uiPackagesFormNoCycle = slices().assignedFrom(UI_PACKAGES).should().beFreeOfCycles()
+            .because("screens share the session model (ui.session) and the wording (ui.present), never each"
+                    + " other's insides, so one screen can change without the others");
+
+    @ArchTest
+    static final ArchRule sharedUiPackagesKnowNoScreen = noClasses().that()
+            .resideInAnyPackage("app.latentledger.ui.session..", "app.latentledger.ui.present..")
+            .should().dependOnClassesThat().resideInAnyPackage("app.latentledger.ui.entry..",
+                    "app.latentledger.ui.results..", "app.latentledger.ui.compare..", "app.latentledger.ui.log..",
+                    "app.latentledger.ui.export..", "app.latentledger.ui.job..", "app.latentledger.ui.settings..",
+                    "app.latentledger.ui.render..", "app.latentledger.ui.chart..", "app.latentledger.ui.look..")
+            .orShould().dependOnClassesThat().resideInAPackage("app.latentledger.ui")
+            .because("every screen reads the session and the shared wording; they must not know a screen");
+
+    @ArchTest
+    static final ArchRule sharedWordingNeedsOnlyTheCore = classes().that()
+            .resideInAPackage("app.latentledger.ui.present..")
+            .should().onlyDependOnClassesThat().resideInAnyPackage("app.latentledger.ui.present..",
+                    "app.latentledger.core..", "java..")
+            .because("the wording of a check (rows, cards, the screen's numbers) depends on the check alone");
 
     @ArchTest
     static final ArchRule coreImportsNoUiSqlOrFiles = noClasses().that().resideInAPackage("app.latentledger.core..")

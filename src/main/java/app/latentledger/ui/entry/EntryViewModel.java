@@ -6,8 +6,11 @@ import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.InvalidRecordException;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
-import app.latentledger.ui.AppSession;
-import app.latentledger.ui.results.Shown;
+import app.latentledger.ui.present.Shown;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Draft;
+import app.latentledger.ui.session.Slot;
+import app.latentledger.ui.session.SlotValue;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
 import javafx.beans.property.BooleanProperty;
@@ -296,7 +299,7 @@ public final class EntryViewModel {
     private boolean tryKeep(Draft candidate, Slot s) {
         try {
             if (candidate.has(s)) {
-                EntryRules.check(candidate, s, session.site(), session.system());
+                EntryRules.check(candidate, s, session.site());
             }
             session.keep(candidate);
             refused.set(false);

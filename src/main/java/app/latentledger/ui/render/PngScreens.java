@@ -1,17 +1,17 @@
 package app.latentledger.ui.render;
 
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.AppSession;
 import app.latentledger.ui.AppShell;
-import app.latentledger.ui.Background;
-import app.latentledger.ui.Screen;
-import app.latentledger.ui.log.LogAnalysisService;
+import app.latentledger.ui.log.CycleLogAnalysis;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Background;
+import app.latentledger.ui.session.LogAnalysisService;
+import app.latentledger.ui.session.Screen;
 import javafx.application.Platform;
 import javafx.embed.swing.SwingFXUtils;
 import javafx.scene.Scene;
 import javafx.scene.image.WritableImage;
 
-import javax.imageio.ImageIO;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
@@ -21,6 +21,7 @@ import java.util.List;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
+import javax.imageio.ImageIO;
 
 /**
  * The {@code screens} command's renderer: each main screen in a scene of the tablet's size,
@@ -64,7 +65,7 @@ public final class PngScreens {
     /** Renders on the FX thread; usable from a test that already runs the toolkit. */
     public static List<Path> renderAll(Path dataFolder, Path outDir) {
         List<Path> files = new ArrayList<>();
-        try (AppSession session = AppSession.open(dataFolder, LogAnalysisService.find())) {
+        try (AppSession session = AppSession.open(dataFolder, LogAnalysisService.find(new CycleLogAnalysis()))) {
             try {
                 DemoLog.seed(session);
             } catch (Exception e) {

@@ -1,8 +1,11 @@
 package app.latentledger.ui.entry;
 
-import app.latentledger.ui.AppSession;
 import app.latentledger.ui.TestSessions;
 import app.latentledger.ui.results.ResultsViewModel;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Draft;
+import app.latentledger.ui.session.FileDraftStore;
+import app.latentledger.ui.session.Slot;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

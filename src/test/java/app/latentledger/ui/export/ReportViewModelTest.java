@@ -1,9 +1,9 @@
 package app.latentledger.ui.export;
 
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.AppSession;
-import app.latentledger.ui.Background;
 import app.latentledger.ui.TestSessions;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Background;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;

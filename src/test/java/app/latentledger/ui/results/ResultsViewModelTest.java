@@ -4,10 +4,12 @@ import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.visit.ReadingSetCheck;
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.AppSession;
 import app.latentledger.ui.TestSessions;
 import app.latentledger.ui.entry.EntryViewModel;
-import app.latentledger.ui.entry.Slot;
+import app.latentledger.ui.present.ResultSheet;
+import app.latentledger.ui.present.VisitResults;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Slot;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

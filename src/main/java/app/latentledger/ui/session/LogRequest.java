@@ -1,4 +1,4 @@
-package app.latentledger.ui.log;
+package app.latentledger.ui.session;
 
 import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.core.records.Visit;

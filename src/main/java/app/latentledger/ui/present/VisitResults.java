@@ -1,6 +1,5 @@
-package app.latentledger.ui.results;
+package app.latentledger.ui.present;
 
-import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.coil.CoilProcess;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.CoilVerdict;
@@ -8,75 +7,32 @@ import app.latentledger.core.coil.Measurand;
 import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.findings.Evidence;
 import app.latentledger.core.findings.Finding;
-import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.core.psychro.MoistAirState;
-import app.latentledger.core.records.HvacSystem;
-import app.latentledger.core.records.InvalidRecordException;
-import app.latentledger.core.records.ReadingSet;
-import app.latentledger.core.records.Site;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
-import app.latentledger.core.visit.ReadingSetCheck;
-import app.latentledger.ui.entry.Draft;
-import app.latentledger.ui.entry.DraftRecords;
-import app.latentledger.ui.entry.Slot;
 
-import java.time.OffsetDateTime;
 import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The results of a draft: its reading set through {@link ReadingSetCheck} (the same adapter the
- * commands and the report use, so the screen shows their numbers), worded for the screen. No
- * computation happens here beyond unit conversion for display.
+ * A coil check worded for the screen: the results sheet, the verdict's headline and the finding
+ * cards the results, compare and log screens share. The check itself comes from the session (the
+ * same adapter the commands and the report use, so the screen shows their numbers); nothing here
+ * computes beyond unit conversion for display.
  */
 public final class VisitResults {
     private VisitResults() {
     }
 
-    public static ResultSheet of(Draft draft, Site site, HvacSystem system, ThresholdSettings thresholds,
-                                 UnitSystem units) {
-        return work(draft, site, system, thresholds, units).sheet();
+    /** The sheet while the coil check still waits for readings, named as a tech names them. */
+    public static ResultSheet waiting(List<String> readings) {
+        return incomplete("Waiting for " + String.join(", ", readings),
+                "Results appear as soon as these readings are in.");
     }
 
-    /**
-     * The sheet and the coil check behind it (for the chart).
-     *
-     * @param sheet the worded results
-     * @param coil  the coil check, or null while the readings are incomplete or refused
-     */
-    public record Outcome(ResultSheet sheet, CoilResult coil) {
-    }
-
-    /** The draft's coil check and its sheet, worked out once for both the figures and the chart. */
-    public static Outcome work(Draft draft, Site site, HvacSystem system, ThresholdSettings thresholds,
-                               UnitSystem units) {
-        List<String> waiting = waitingFor(draft);
-        if (!waiting.isEmpty()) {
-            return new Outcome(incomplete("Waiting for " + String.join(", ", waiting),
-                    "Results appear as soon as these readings are in."), null);
-        }
-        try {
-            ReadingSet rs = DraftRecords.toReadingSet(draft, OffsetDateTime.now());
-            CoilResult r = ReadingSetCheck.run(rs, system, site, thresholds, units);
-            return new Outcome(of(r, units), r);
-        } catch (InvalidInputException e) {
-            return new Outcome(incomplete("Readings refused", e.message(units)), null);
-        } catch (InvalidRecordException e) {
-            return new Outcome(incomplete("Readings refused", e.getMessage()), null);
-        }
-    }
-
-    /** What the coil check still needs, as a tech names it; empty when it can run. */
-    public static List<String> waitingFor(Draft d) {
-        List<String> out = new ArrayList<>();
-        for (Slot s : List.of(Slot.RETURN_DRY_BULB, Slot.RETURN_HUMIDITY, Slot.SUPPLY_DRY_BULB,
-                Slot.SUPPLY_HUMIDITY, Slot.AIRFLOW)) {
-            if (!d.has(s)) {
-                out.add(s.title(d.choice(s)).toLowerCase(java.util.Locale.ROOT).replace("rh", "RH"));
-            }
-        }
-        return out;
+    /** The sheet when the record or the coil check refused the readings, with the reason. */
+    public static ResultSheet refused(String why) {
+        return incomplete("Readings refused", why);
     }
 
     /** The sheet of a finished coil check. */

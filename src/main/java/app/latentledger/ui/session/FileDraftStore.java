@@ -1,4 +1,4 @@
-package app.latentledger.ui.entry;
+package app.latentledger.ui.session;
 
 import com.google.gson.Gson;
 import com.google.gson.JsonObject;

@@ -1,8 +1,8 @@
-package app.latentledger.ui.log;
+package app.latentledger.ui.session;
 
 import app.latentledger.chart.timeline.TimelineData;
 import app.latentledger.core.findings.Finding;
-import app.latentledger.ui.results.Row;
+import app.latentledger.ui.present.Row;
 
 import java.util.List;
 

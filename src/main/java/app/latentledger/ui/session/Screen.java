@@ -1,4 +1,4 @@
-package app.latentledger.ui;
+package app.latentledger.ui.session;
 
 /** The app's main screens, in the order a visit walks through them. */
 public enum Screen {

@@ -1,16 +1,18 @@
-package app.latentledger.ui.log;
+package app.latentledger.ui.session;
 
 import app.latentledger.io.logcsv.ImportProgress;
 
 import java.nio.file.Path;
 import java.util.Optional;
+import java.util.ServiceLoader;
 
 /**
  * The log screen's only way into log import and cycle analysis, so the screen does not depend on
- * how logs are parsed. {@link #find()} gives the build's implementation ({@link CycleLogAnalysis},
- * unless another is registered as a service in
- * {@code META-INF/services/app.latentledger.ui.log.LogAnalysisService}); {@link #NOT_WIRED} is a
- * stand-in for tests of the screen without the analysis.
+ * how logs are parsed. {@link #find} gives the build's implementation (the one registered as a
+ * service in {@code META-INF/services/app.latentledger.ui.session.LogAnalysisService}, else the
+ * fallback the app passes, {@code ui.log.CycleLogAnalysis}); {@link #NOT_WIRED} is a stand-in for
+ * tests of the screen without the analysis. It lives with the session, not with the log screen, so
+ * the session imports no screen.
  */
 public interface LogAnalysisService {
     /** False for a stand-in without log analysis; the screen then says so. */
@@ -32,9 +34,13 @@ public interface LogAnalysisService {
      */
     Optional<LogAnalysis> latestKept(LogRequest request) throws Exception;
 
-    /** The implementation registered with {@link java.util.ServiceLoader}, else {@link CycleLogAnalysis}. */
-    static LogAnalysisService find() {
-        return java.util.ServiceLoader.load(LogAnalysisService.class).findFirst().orElse(new CycleLogAnalysis());
+    /** What the log screen says when the build has no log analysis. */
+    String NOT_WIRED_MESSAGE = "Log analysis arrives in a later build: this build can keep"
+            + " readings but cannot read a logger file yet.";
+
+    /** The implementation registered with {@link ServiceLoader}, else {@code fallback}. */
+    static LogAnalysisService find(LogAnalysisService fallback) {
+        return ServiceLoader.load(LogAnalysisService.class).findFirst().orElse(fallback);
     }
 
     /** A stand-in without log analysis (screen tests). */
@@ -46,7 +52,7 @@ public interface LogAnalysisService {
 
         @Override
         public LogAnalysis importAndAnalyse(LogRequest request, Path file, ImportProgress progress) {
-            throw new UnsupportedOperationException(LogImportViewModel.NOT_WIRED_MESSAGE);
+            throw new UnsupportedOperationException(NOT_WIRED_MESSAGE);
         }
 
         @Override

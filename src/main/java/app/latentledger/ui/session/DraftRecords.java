@@ -1,4 +1,4 @@
-package app.latentledger.ui.entry;
+package app.latentledger.ui.session;
 
 import app.latentledger.core.records.Airflow;
 import app.latentledger.core.records.AirflowPoint;

@@ -1,4 +1,4 @@
-package app.latentledger.ui.entry;
+package app.latentledger.ui.session;
 
 /**
  * One accepted value in a box, SI, with its tolerance (SI; for airflow a fraction of reading).

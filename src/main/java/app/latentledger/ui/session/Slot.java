@@ -1,4 +1,4 @@
-package app.latentledger.ui.entry;
+package app.latentledger.ui.session;
 
 import app.latentledger.core.records.HumidityKind;
 import app.latentledger.core.units.Quantity;

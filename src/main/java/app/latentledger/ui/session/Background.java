@@ -1,4 +1,4 @@
-package app.latentledger.ui;
+package app.latentledger.ui.session;
 
 import javafx.application.Platform;
 

@@ -1,4 +1,4 @@
-package app.latentledger.ui.entry;
+package app.latentledger.ui.session;
 
 import java.util.List;
 import java.util.Optional;

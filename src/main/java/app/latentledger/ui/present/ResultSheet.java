@@ -1,4 +1,4 @@
-package app.latentledger.ui.results;
+package app.latentledger.ui.present;
 
 import app.latentledger.core.coil.CoilVerdict;
 
