@@ -51,8 +51,9 @@ class VisitReportTest {
     @TempDir
     Path dir;
 
+    /** Fixed decimals, thousands grouped with a comma, the same on every locale; never "-0". */
     private static String f(double v, int decimals) {
-        String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
+        String s = String.format(Locale.ROOT, "%,." + decimals + "f", v);
         return s.matches("-0\\.?0*") ? s.substring(1) : s;
     }
 
@@ -167,7 +168,7 @@ class VisitReportTest {
                 Estimate da = a.estimate(Measurand.RETURN_DEW_POINT);
                 double d = Quantity.TEMPERATURE_DIFFERENCE.toDisplay(UnitSystem.IP, da.valueSi() - db.valueSi());
                 double u = Quantity.TEMPERATURE_DIFFERENCE.toDisplay(UnitSystem.IP, Math.hypot(db.expandedSi(), da.expandedSi()));
-                assertContains(text, "−" + f(-d, 1) + " ± " + f(u, 1) + " °F");
+                assertContains(text, "-" + f(-d, 1) + " ± " + f(u, 1) + " °F");
                 assertContains(text, "Saltreed Marina office");
                 assertContains(text, "Heron Spit Road residence");
                 pagesNumbered(doc, text);

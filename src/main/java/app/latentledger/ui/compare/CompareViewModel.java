@@ -3,7 +3,7 @@ package app.latentledger.ui.compare;
 import app.latentledger.chart.psychro.PsychroChartData;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.records.ReadingSet;
-import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.ui.chart.CoilCharts;
 import app.latentledger.ui.chart.PsychroChartViewModel;
@@ -165,21 +165,15 @@ public final class CompareViewModel {
         for (CompareFigure f : CompareFigure.values()) {
             double x = f.read.applyAsDouble(a);
             double y = f.read.applyAsDouble(b);
+            // printed as the report prints the same figures (DisplayNumber: decimals per quantity, signed change)
+            int decimals = DisplayNumber.decimals(f.quantity, u);
             String change = Double.isFinite(x) && Double.isFinite(y)
-                    ? signed(f.quantity.toDisplay(u, y) - f.quantity.toDisplay(u, x), f.decimals) : Shown.NONE;
-            rows.add(new CompareRow(f.key(), f.label, Shown.of(f.quantity, u, x, f.decimals),
-                    Shown.of(f.quantity, u, y, f.decimals), change, unit(f.quantity, u)));
+                    ? DisplayNumber.signed(f.quantity.toDisplay(u, y) - f.quantity.toDisplay(u, x), decimals) : Shown.NONE;
+            rows.add(new CompareRow(f.key(), f.label, Shown.of(f.quantity, u, x), Shown.of(f.quantity, u, y), change,
+                    f.quantity.symbol(u)));
         }
         verdicts.set(VisitResults.headline(a.verdict()) + "  →  " + VisitResults.headline(b.verdict()));
         status.set("Before: " + describe(before) + ".  After: the reading set on this visit.");
     }
 
-    private static String unit(Quantity q, UnitSystem u) {
-        return q.symbol(u);
-    }
-
-    private static String signed(double v, int decimals) {
-        String s = Shown.number(v, decimals);
-        return s.startsWith("-") || s.equals(Shown.NONE) || Shown.number(0, decimals).equals(s) ? s : "+" + s;
-    }
 }

@@ -1,41 +1,41 @@
 package app.latentledger.ui.present;
 
 import app.latentledger.core.coil.Estimate;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 
-import java.util.Locale;
-
-/** Numbers worded for the screen, in the tech's units; a dash for a number that does not exist. */
+/**
+ * Numbers worded for the screen, in the tech's units, without their unit (the screen sets the unit
+ * in its own column). Every number is printed by {@link DisplayNumber}, so the screen reads exactly
+ * like the PDF report and the command line.
+ */
 public final class Shown {
-    public static final String NONE = "—";
+    public static final String NONE = DisplayNumber.NONE;
 
     private Shown() {
     }
 
+    /** A number already in display units. */
     public static String number(double shown, int decimals) {
-        if (!Double.isFinite(shown)) {
-            return NONE;
-        }
-        String v = String.format(Locale.ROOT, "%,." + decimals + "f", shown);
-        return v.matches("-0\\.?0*") ? v.substring(1) : v;
+        return DisplayNumber.number(shown, decimals);
     }
 
-    /** Value only, no unit. */
+    /** Value only, no unit, with the quantity's decimals. */
+    public static String of(Quantity q, UnitSystem units, double si) {
+        return DisplayNumber.value(q, units, si);
+    }
+
+    /** Value only, no unit, with {@code decimals} places. */
     public static String of(Quantity q, UnitSystem units, double si, int decimals) {
-        return Double.isFinite(si) ? number(q.toDisplay(units, si), decimals) : NONE;
+        return DisplayNumber.value(q, units, si, decimals);
     }
 
-    /** "value ± U" (no unit), the ± part left out when there is no uncertainty. */
-    public static String of(Quantity q, UnitSystem units, Estimate e, int decimals) {
+    /** "value ± U" (no unit) with the quantity's decimals, the ± part left out when there is no uncertainty. */
+    public static String of(Quantity q, UnitSystem units, Estimate e) {
         if (e == null || !e.exists()) {
             return NONE;
         }
-        String v = of(q, units, e.valueSi(), decimals);
-        if (!Double.isFinite(e.expandedSi())) {
-            return v;
-        }
-        Quantity uq = q == Quantity.TEMPERATURE ? Quantity.TEMPERATURE_DIFFERENCE : q;
-        return v + " ± " + number(uq.toDisplay(units, e.expandedSi()), decimals);
+        return DisplayNumber.valueWithSpread(q, units, e.valueSi(), e.expandedSi(), DisplayNumber.decimals(q, units));
     }
 }

@@ -8,6 +8,7 @@ import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.findings.Evidence;
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.psychro.MoistAirState;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 
@@ -69,38 +70,39 @@ public final class VisitResults {
     private static List<Row> state(MoistAirState s, UnitSystem u, String prefix) {
         String t = Quantity.TEMPERATURE.symbol(u);
         return List.of(
-                new Row(prefix + "-dry-bulb", "Dry bulb", Shown.of(Quantity.TEMPERATURE, u, s.dryBulbC(), 1), t),
-                new Row(prefix + "-wet-bulb", "Wet bulb", Shown.of(Quantity.TEMPERATURE, u, s.wetBulbC(), 1), t),
-                new Row(prefix + "-dew-point", "Dew point", Shown.of(Quantity.TEMPERATURE, u, s.dewPointC(), 1), t),
-                new Row(prefix + "-rh", "Relative humidity", Shown.number(s.relativeHumidityPct(), 0), "%"),
+                new Row(prefix + "-dry-bulb", "Dry bulb", Shown.of(Quantity.TEMPERATURE, u, s.dryBulbC()), t),
+                new Row(prefix + "-wet-bulb", "Wet bulb", Shown.of(Quantity.TEMPERATURE, u, s.wetBulbC()), t),
+                new Row(prefix + "-dew-point", "Dew point", Shown.of(Quantity.TEMPERATURE, u, s.dewPointC()), t),
+                new Row(prefix + "-rh", "Relative humidity", Shown.of(Quantity.RELATIVE_HUMIDITY, u,
+                        s.relativeHumidityPct()), Quantity.RELATIVE_HUMIDITY.symbol(u)),
                 new Row(prefix + "-humidity-ratio", "Moisture", Shown.of(Quantity.HUMIDITY_RATIO_FINE, u,
-                        s.humidityRatio(), 1), Quantity.HUMIDITY_RATIO_FINE.symbol(u)),
-                new Row(prefix + "-enthalpy", "Enthalpy", Shown.of(Quantity.ENTHALPY, u, s.enthalpyJPerKg(), 1),
+                        s.humidityRatio()), Quantity.HUMIDITY_RATIO_FINE.symbol(u)),
+                new Row(prefix + "-enthalpy", "Enthalpy", Shown.of(Quantity.ENTHALPY, u, s.enthalpyJPerKg()),
                         Quantity.ENTHALPY.symbol(u)));
     }
 
     private static List<Row> performance(CoilResult r, UnitSystem u) {
         CoilProcess p = r.process();
         List<Row> rows = new ArrayList<>();
-        rows.add(row(r, u, "total", "Total capacity", Measurand.TOTAL, Quantity.POWER, 0));
-        rows.add(new Row("total-large", "Total capacity", Shown.of(Quantity.POWER_LARGE, u, p.totalW(), 2),
+        rows.add(row(r, u, "total", "Total capacity", Measurand.TOTAL, Quantity.POWER));
+        rows.add(new Row("total-large", "Total capacity", Shown.of(Quantity.POWER_LARGE, u, p.totalW()),
                 Quantity.POWER_LARGE.symbol(u)));
-        rows.add(row(r, u, "sensible", "Sensible", Measurand.SENSIBLE, Quantity.POWER, 0));
-        rows.add(row(r, u, "latent", "Latent", Measurand.LATENT, Quantity.POWER, 0));
-        rows.add(row(r, u, "shr", "Sensible heat ratio", Measurand.SHR, Quantity.DIMENSIONLESS, 2));
-        rows.add(row(r, u, "moisture-removal", "Water removed", Measurand.MOISTURE_REMOVAL, Quantity.WATER_RATE, 2));
+        rows.add(row(r, u, "sensible", "Sensible", Measurand.SENSIBLE, Quantity.POWER));
+        rows.add(row(r, u, "latent", "Latent", Measurand.LATENT, Quantity.POWER));
+        rows.add(row(r, u, "shr", "Sensible heat ratio", Measurand.SHR, Quantity.DIMENSIONLESS));
+        rows.add(row(r, u, "moisture-removal", "Water removed", Measurand.MOISTURE_REMOVAL, Quantity.WATER_RATE));
         rows.add(new Row("moisture-removal-daily", "Water removed per day",
-                Shown.of(Quantity.WATER_RATE_DAILY, u, p.moistureRemovalKgPerS(), 0), Quantity.WATER_RATE_DAILY.symbol(u)));
+                Shown.of(Quantity.WATER_RATE_DAILY, u, p.moistureRemovalKgPerS()), Quantity.WATER_RATE_DAILY.symbol(u)));
         rows.add(row(r, u, "latent-per-airflow", "Latent per airflow", Measurand.LATENT_PER_AIRFLOW,
-                Quantity.POWER_PER_AIRFLOW, 1));
+                Quantity.POWER_PER_AIRFLOW));
         rows.add(row(r, u, "humidity-drop", "Moisture drop", Measurand.HUMIDITY_RATIO_DROP,
-                Quantity.HUMIDITY_RATIO_FINE, 1));
+                Quantity.HUMIDITY_RATIO_FINE));
         rows.add(row(r, u, "dew-point-margin", "Dew point minus coil", Measurand.DEW_POINT_MARGIN,
-                Quantity.TEMPERATURE_DIFFERENCE, 1));
+                Quantity.TEMPERATURE_DIFFERENCE));
         rows.add(new Row("coil-temperature", "Coil temperature (" + coilSource(r) + ")",
-                Shown.of(Quantity.TEMPERATURE, u, r.coilTemperatureC(), 1), Quantity.TEMPERATURE.symbol(u)));
+                Shown.of(Quantity.TEMPERATURE, u, r.coilTemperatureC()), Quantity.TEMPERATURE.symbol(u)));
         rows.add(new Row("airflow-per-nominal", "Airflow per nominal size",
-                Shown.of(Quantity.AIRFLOW_PER_CAPACITY, u, r.airflowPerNominalCapacity(), 0),
+                Shown.of(Quantity.AIRFLOW_PER_CAPACITY, u, r.airflowPerNominalCapacity()),
                 Quantity.AIRFLOW_PER_CAPACITY.symbol(u)));
         return rows;
     }
@@ -113,20 +115,16 @@ public final class VisitResults {
         };
     }
 
-    private static Row row(CoilResult r, UnitSystem u, String key, String label, Measurand m, Quantity q, int d) {
-        return new Row(key, label, Shown.of(q, u, r.estimate(m), d), q.symbol(u));
+    private static Row row(CoilResult r, UnitSystem u, String key, String label, Measurand m, Quantity q) {
+        return new Row(key, label, Shown.of(q, u, r.estimate(m)), q.symbol(u));
     }
 
     /** A core finding worded for the screen. */
     public static FindingCard card(Finding f, UnitSystem u) {
         List<String> evidence = new ArrayList<>();
         for (Evidence e : f.evidence()) {
-            int decimals = e.quantity() == Quantity.DIMENSIONLESS || e.quantity() == Quantity.POWER_LARGE ? 2
-                    : e.quantity() == Quantity.POWER || e.quantity() == Quantity.AIRFLOW ? 0 : 1;
-            String v = Shown.of(e.quantity(), u, new app.latentledger.core.coil.Estimate(e.valueSi(),
-                    e.uncertaintySi()), decimals);
-            String unit = e.quantity().symbol(u);
-            evidence.add(e.label() + ": " + v + (unit.isEmpty() ? "" : " " + unit));
+            // worded as the PDF words it: the same value prints the same string on screen and paper
+            evidence.add(e.label() + ": " + DisplayNumber.withSpread(e.quantity(), u, e.valueSi(), e.uncertaintySi()));
         }
         return new FindingCard(f.code(), f.severity(), f.message(), f.technical(), evidence, f.nextChecks());
     }

@@ -90,7 +90,7 @@ class EntryViewModelTest {
             assertEquals("%", vm.unit());
             vm.pad().digit(5);
             assertTrue(vm.enter(), vm.messageProperty().get());
-            assertEquals("± 5.0 %", vm.toleranceText(Slot.AIRFLOW).get());
+            assertEquals("± 5 %", vm.toleranceText(Slot.AIRFLOW).get());
             assertEquals(0.05, s.draft().value(Slot.AIRFLOW).toleranceSi(), 1e-12);
         }
     }
