@@ -39,7 +39,7 @@ class ScreenAndPaperTest {
     @EnumSource(UnitSystem.class)
     void theScreensFiguresAndEvidenceReadTheSameInThePdf(UnitSystem units) throws Exception {
         Path out = dir.resolve("complaint-" + units + ".pdf");
-        try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
+        try (Ledger ledger = Ledger.open(dir.resolve("data"), Ledger.FirstRun.SEED_DEMO)) {
             VisitReport.write(ledger, DemoScenario.VISIT_COMPLAINT, null, PaperSize.LETTER, units, out);
             List<String> shown = new ArrayList<>();
             for (String set : List.of(DemoScenario.READINGS_BEFORE, DemoScenario.READINGS_AFTER)) {

@@ -46,7 +46,7 @@ class OneCheckPerChangeTest {
     }
 
     private App open() {
-        AppSession s = new AppSession(Ledger.open(dir), dir, LogAnalysisService.NOT_WIRED, counting);
+        AppSession s = new AppSession(Ledger.open(dir, Ledger.FirstRun.SEED_DEMO), dir, LogAnalysisService.NOT_WIRED, counting);
         s.ledger().visits().find(DemoScenario.VISIT_COMPLAINT).ifPresent(s::openVisit);
         s.openReadingSet(DemoScenario.READINGS_AFTER);
         EntryViewModel entry = new EntryViewModel(s);

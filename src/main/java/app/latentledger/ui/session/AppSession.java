@@ -104,7 +104,7 @@ public final class AppSession implements AutoCloseable {
 
     /** Opens the ledger in {@code dataFolder} (seeding the demo when empty) with its stored settings. */
     public static AppSession open(Path dataFolder, LogAnalysisService logAnalysis) {
-        return new AppSession(Ledger.open(dataFolder), dataFolder, logAnalysis);
+        return new AppSession(Ledger.open(dataFolder, Ledger.FirstRun.SEED_DEMO), dataFolder, logAnalysis);
     }
 
     /** Stores changed settings and applies them to every screen. */
