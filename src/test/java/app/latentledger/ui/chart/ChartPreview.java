@@ -1,6 +1,6 @@
 package app.latentledger.ui.chart;
 
-import app.latentledger.chart.demo.SaltreedDemo;
+import app.latentledger.fielddata.SaltreedDemo;
 import app.latentledger.chart.draw.Theme;
 import app.latentledger.core.units.UnitSystem;
 import javafx.application.Application;
@@ -11,7 +11,7 @@ import javafx.stage.Stage;
 
 /**
  * A window with both charts on the invented Saltreed demo data, for looking at them during
- * development: {@code java -cp target/latent-ledger.jar:target/lib/* app.latentledger.ui.chart.ChartPreview [si] [dark]}.
+ * development (a test-scope launcher, never shipped): {@code java -cp target/classes:target/test-classes:target/lib/* app.latentledger.ui.chart.ChartPreview [si] [dark]}.
  */
 public final class ChartPreview extends Application {
 
