@@ -1,18 +1,15 @@
 package app.latentledger.ui.session;
 
+import app.latentledger.files.SafeFiles;
 import com.google.gson.Gson;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonParseException;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.time.OffsetDateTime;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -125,21 +122,7 @@ public final class FileDraftStore implements DraftStore {
     private void write(Path target, byte[] bytes) {
         try {
             Files.createDirectories(folder);
-            Path tmp = folder.resolve(target.getFileName() + ".tmp");
-            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.CREATE, StandardOpenOption.WRITE,
-                    StandardOpenOption.TRUNCATE_EXISTING)) {
-                ByteBuffer b = ByteBuffer.wrap(bytes);
-                while (b.hasRemaining()) {
-                    ch.write(b);
-                }
-                ch.force(true);
-            }
-            Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            try (FileChannel dir = FileChannel.open(folder, StandardOpenOption.READ)) {
-                dir.force(true);
-            } catch (IOException ignored) {
-                // some platforms cannot open a folder for syncing; the rename is still atomic there
-            }
+            SafeFiles.writeAtomically(target, out -> out.write(bytes), SafeFiles.Durability.ON_DISK);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot save the draft in " + folder + ": " + e.getMessage(), e);
         }
