@@ -105,4 +105,21 @@ class ReportViewModelTest {
             assertTrue(vm.statusProperty().get().startsWith("Saved the report"), vm.statusProperty().get());
         }
     }
+
+    @Test
+    void anUnexpectedFailureIsASentenceNotAClassName() {
+        Path file = Path.of("heron-report.pdf");
+        String shown = ReportViewModel.failure("report", file, Path.of("reports"),
+                new IllegalStateException("page tree index 3 out of bounds"));
+        assertTrue(shown.startsWith("No report written (heron-report.pdf): something went wrong"), shown);
+        assertFalse(shown.contains("Exception") || shown.contains("java.") || shown.contains("out of bounds"), shown);
+        String disk = ReportViewModel.failure("report", file, Path.of("reports"),
+                new java.io.IOException("No space left on device"));
+        assertFalse(disk.contains("IOException"), disk);
+        assertTrue(disk.contains("could not be written"), disk);
+        // the report's own refusals are written for the tech already and are shown as they are
+        assertEquals("No report written (heron-report.pdf): cannot write x: it is a folder; give a file name",
+                ReportViewModel.failure("report", file, Path.of("reports"),
+                        new app.latentledger.report.ReportRefusedException("cannot write x: it is a folder; give a file name")));
+    }
 }
