@@ -23,7 +23,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * on the quiet side of the same threshold or uncertainty, so each quiet test can fail on its own.
  */
 class CoilFindingsTest {
-    /** Case A (domain-practice.md §4.2) on a 3-ton nameplate with a 45 °F coil: a healthy coil. */
+    /** Case A (docs/methods.md §9.5) on a 3-ton nameplate with a 45 °F coil: a healthy coil. */
     private static IpCase healthy() {
         return IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).nominalTons(3).coilF(45);
     }

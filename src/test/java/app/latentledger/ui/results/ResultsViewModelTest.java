@@ -22,7 +22,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The results screen's view model without a window. The verdicts expected are those of the coil
- * check's three-way rule (CoilVerdict, domain-practice.md §5.4) on the demo's readings, whose story
+ * check's three-way rule (CoilVerdict, docs/methods.md §9.7) on the demo's readings, whose story
  * (DemoScenario) was worked out with the core: "before" cools without drying, "after" dries.
  */
 class ResultsViewModelTest {
