@@ -32,6 +32,9 @@ public final class VisitReport {
      * @param compareVisitIdOrNull exact id of another visit, or null for a one-visit report
      * @param paper                page size
      * @param units                display units
+     * Each worked-out reading set of the report is kept as a results snapshot once the file is
+     * written ({@link ReportSnapshots}).
+     *
      * @return the file written
      * @throws ReportRefusedException for an unknown visit, a visit compared with itself, or an output
      *                                path that cannot be written (missing folder, a folder, no permission)
@@ -40,7 +43,10 @@ public final class VisitReport {
                              Path output) {
         ReportData data = ReportData.load(ledger, visitId, compareVisitIdOrNull, units);
         OffsetDateTime now = OffsetDateTime.now(data.latest().visit().startedAt().getOffset());
-        return SafeFile.write(output, out -> ReportDocument.write(data, paper, now, out));
+        Path written = SafeFile.write(output, out -> ReportDocument.write(data, paper, now, out));
+        // what the customer was given is kept with the readings, whatever a later version computes
+        ReportSnapshots.keep(ledger, data, now);
+        return written;
     }
 
     /** As {@link #write}, into a stream (the caller owns it); for previews and tests. */
