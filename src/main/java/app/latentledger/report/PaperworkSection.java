@@ -4,6 +4,7 @@ import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Instrument;
 import app.latentledger.core.records.StatedAccuracy;
 import app.latentledger.core.records.VisitPaperwork;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.report.pdf.Ink;
@@ -52,7 +53,7 @@ final class PaperworkSection {
     static List<String> systemLines(HvacSystem s, UnitSystem units) {
         List<String> lines = new ArrayList<>();
         lines.add(s.label() + ": " + PlainWords.systemType(s.type()) + ", "
-                + Numbers.withUnit(Quantity.POWER_LARGE, units, s.nominalCapacityW()) + " nominal");
+                + DisplayNumber.withUnit(Quantity.POWER_LARGE, units, s.nominalCapacityW()) + " nominal");
         lines.add("Refrigerant: " + orNone(s.refrigerant(), "not recorded"));
         lines.add("Metering device: " + orNone(s.meteringDevice(), "not recorded"));
         lines.add("Blower: " + orNone(s.blowerType(), "type not recorded") + "; setting "
@@ -78,20 +79,20 @@ final class PaperworkSection {
         List<String> parts = new ArrayList<>();
         temperature(parts, "dry bulb", a.dryBulbK(), units);
         if (a.relativeHumidityPct() != null) {
-            parts.add("RH ±" + Numbers.fixed(a.relativeHumidityPct(), 1) + " %");
+            parts.add("RH ±" + DisplayNumber.number(a.relativeHumidityPct(), 1) + " %");
         }
         temperature(parts, "wet bulb", a.wetBulbK(), units);
         temperature(parts, "dew point", a.dewPointK(), units);
         temperature(parts, "coil probe", a.coilK(), units);
         if (a.airflowFraction() != null) {
-            parts.add("airflow ±" + Numbers.fixed(a.airflowFraction() * 100, 0) + " % of reading");
+            parts.add("airflow ±" + DisplayNumber.number(a.airflowFraction() * 100, 0) + " % of reading");
         }
         return parts.isEmpty() ? "; accuracy not stated" : "; stated accuracy " + String.join(", ", parts);
     }
 
     private static void temperature(List<String> parts, String what, Double k, UnitSystem units) {
         if (k != null) {
-            parts.add(what + " ±" + Numbers.withUnit(Quantity.TEMPERATURE_DIFFERENCE, units, k));
+            parts.add(what + " ±" + DisplayNumber.withUnit(Quantity.TEMPERATURE_DIFFERENCE, units, k));
         }
     }
 

@@ -50,7 +50,7 @@ class BundlePaperworkTest {
 
     @BeforeEach
     void setUp() {
-        source = Ledger.open(dir.resolve("source"));
+        source = Ledger.open(dir.resolve("source"), Ledger.FirstRun.SEED_DEMO);
         HvacSystem s = source.systems().find(DemoScenario.SYSTEM_HERON).orElseThrow();
         source.systems().save(new HvacSystem(s.id(), s.siteId(), s.label(), s.type(), s.nominalCapacityW(),
                 s.refrigerant(), s.blowerType(), s.fanSetting(), s.thermostatNotes(), "TXV", "16x25x1 pleated, dirty"));

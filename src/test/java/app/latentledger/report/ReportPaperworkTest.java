@@ -6,6 +6,7 @@ import app.latentledger.core.records.SignOff;
 import app.latentledger.core.records.StatedAccuracy;
 import app.latentledger.core.records.VisitPaperwork;
 import app.latentledger.core.settings.PaperSize;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.store.DemoScenario;
@@ -29,7 +30,7 @@ class ReportPaperworkTest {
     @Test
     void paperworkInstrumentsAndSignOffsArePrinted() throws Exception {
         Path out = dir.resolve("report.pdf");
-        try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
+        try (Ledger ledger = Ledger.open(dir.resolve("data"), Ledger.FirstRun.SEED_DEMO)) {
             HvacSystem s = ledger.systems().find(DemoScenario.SYSTEM_HERON).orElseThrow();
             ledger.systems().save(new HvacSystem(s.id(), s.siteId(), s.label(), s.type(), s.nominalCapacityW(),
                     s.refrigerant(), s.blowerType(), s.fanSetting(), s.thermostatNotes(), "TXV", "20x25x1 pleated, clogged"));
@@ -46,7 +47,7 @@ class ReportPaperworkTest {
             String text = ReportPdfs.text(doc).replaceAll("\\s+", " ");
             for (String expected : List.of("Windows sweat every morning", "Cleaned the coil and slowed the blower",
                     "Metering device: TXV", "Filter: 20x25x1 pleated, clogged", "Probe kit A, s/n SR-1001, calibrated 2024-03-02",
-                    "dry bulb ±" + Numbers.withUnit(Quantity.TEMPERATURE_DIFFERENCE, UnitSystem.IP, 0.3),
+                    "dry bulb ±" + DisplayNumber.withUnit(Quantity.TEMPERATURE_DIFFERENCE, UnitSystem.IP, 0.3),
                     "RH ±2.0 %", "used for: Before", "Ada Marsh", "Signed on the tablet 16 July 2024",
                     "Technician's remark: cert 12-345", "Customer's remark: wants a follow-up in August")) {
                 assertTrue(text.contains(expected), "report holds: " + expected);
@@ -57,7 +58,7 @@ class ReportPaperworkTest {
     @Test
     void aVisitWithoutPaperworkSaysSo() throws Exception {
         Path out = dir.resolve("bare.pdf");
-        try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
+        try (Ledger ledger = Ledger.open(dir.resolve("data"), Ledger.FirstRun.SEED_DEMO)) {
             VisitReport.write(ledger, DemoScenario.VISIT_COMMISSIONING, null, PaperSize.A4, UnitSystem.SI, out);
         }
         try (PDDocument doc = ReportPdfs.open(out)) {

@@ -214,7 +214,7 @@ class RecycleBinTest {
     @Test
     void openingTheLedgerDropsEntriesOlderThanThirtyDays() {
         Path data = dir.resolve("data");
-        try (Ledger demo = Ledger.open(data)) {
+        try (Ledger demo = Ledger.open(data, Ledger.FirstRun.SEED_DEMO)) {
             var sets = demo.readings().count();
             assertTrue(sets >= 2, "the demo has reading sets");
             var visit = demo.visits().all().get(0);

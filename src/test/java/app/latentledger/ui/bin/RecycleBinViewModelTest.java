@@ -24,7 +24,7 @@ class RecycleBinViewModelTest {
 
     @BeforeEach
     void open() {
-        ledger = Ledger.open(dir);
+        ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO);
     }
 
     @AfterEach

@@ -75,10 +75,10 @@ class ShareAndImportViewModelsTest {
     @Test
     void aBundleIsPreviewedBeforeAnythingChanges() throws Exception {
         Path bundle = dir.resolve("visit.zip");
-        try (Ledger source = Ledger.open(dir.resolve("source"))) {
+        try (Ledger source = Ledger.open(dir.resolve("source"), Ledger.FirstRun.SEED_DEMO)) {
             Bundles.exportVisit(source, DemoScenario.VISIT_COMPLAINT, bundle);
         }
-        try (Ledger target = Ledger.open(dir.resolve("target"))) {
+        try (Ledger target = Ledger.open(dir.resolve("target"), Ledger.FirstRun.SEED_DEMO)) {
             // the target has the demo too: delete the visit so the bundle brings it back
             target.recycleBin().delete(app.latentledger.core.records.RecordKind.VISIT, DemoScenario.VISIT_COMPLAINT);
             target.recycleBin().empty();
