@@ -23,8 +23,9 @@ import java.util.List;
 
 /**
  * The instruments of the open visit: the list, a form to add one (name, serial, calibration date,
- * stated accuracy in the tech's units), and which of them took the reading set on the pad. The
- * chosen instruments' stated accuracy gives the tolerances that set's new entries start with.
+ * stated accuracy in the tech's units), and which of them took the reading set on the pad.
+ * {@link #tolerances} gives what the chosen instruments state, for the pad to start from (not yet
+ * wired into the pad, whose ± comes from the settings).
  */
 public final class InstrumentsViewModel {
     /** One instrument as the list shows it, with whether it took the current set. */

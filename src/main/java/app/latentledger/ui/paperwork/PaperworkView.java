@@ -74,8 +74,8 @@ public final class PaperworkView extends VBox implements Reflowing {
         form.addRow(r++, Ui.label("Stated ± coil probe", "figure-label"), field("instrument-acc-coil", instruments.coilProperty()));
         form.addRow(r, Ui.label("Stated ± airflow, %", "figure-label"), field("instrument-acc-airflow", instruments.airflowPctProperty()));
         VBox instrumentsPanel = Ui.panel(8, Ui.label("Instruments", "heading"),
-                Ui.wrapped("Tick the instruments that took the readings on the pad; their stated accuracy gives the"
-                        + " ± of that set's new entries.", "figure-label"),
+                Ui.wrapped("Tick the instruments that took the readings on the pad; the report lists them with"
+                        + " the set.", "figure-label"),
                 list, form, Ui.button("add-instrument", "Add instrument", Icons.NEW, instruments::add),
                 message(instruments.messageProperty()));
 
