@@ -27,6 +27,7 @@ public final class VisitRecordModel {
     private final InstrumentsViewModel instruments;
     private final RecycleBinViewModel bin;
     private final BundleImportViewModel importer;
+    private final SystemDetailsViewModel systemDetails;
     private final ReadOnlyStringWrapper setLabel = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper setMessage = new ReadOnlyStringWrapper("");
 
@@ -37,6 +38,9 @@ public final class VisitRecordModel {
         this.instruments = new InstrumentsViewModel(ledger);
         this.bin = new RecycleBinViewModel(ledger);
         this.importer = new BundleImportViewModel(ledger, work, fx);
+        this.systemDetails = new SystemDetailsViewModel(session::keep);
+        session.systemProperty().addListener((o, a, b) -> systemDetails.load(b));
+        systemDetails.load(session.system());
         bin.onChange(this::afterBinChange);
         importer.onImported(() -> {
             bin.refresh();
@@ -129,6 +133,10 @@ public final class VisitRecordModel {
 
     public RecycleBinViewModel bin() {
         return bin;
+    }
+
+    public SystemDetailsViewModel systemDetails() {
+        return systemDetails;
     }
 
     public BundleImportViewModel importer() {

@@ -50,12 +50,50 @@ public final class VisitRecordView extends VBox implements Reflowing {
                 labels, setMessage,
                 new FlowPane(8, 8, Ui.button("delete-set", "Delete this set", Icons.FIX, model::askDeleteSet),
                         Ui.button("delete-visit", "Delete this visit", Icons.FIX, model::askDeleteVisit)));
+        VBox system = systemPanel(model.systemDetails());
         RecycleBinView bin = new RecycleBinView(model.bin());
         bin.setMinHeight(360);
         BundleImportPanel importer = new BundleImportPanel(model.importer());
-        columns = new Columns(12, paperworkView, Ui.scroll(new VBox(12, thisSet, bin, importer)));
+        columns = new Columns(12, paperworkView, Ui.scroll(new VBox(12, thisSet, system, bin, importer)));
         VBox.setVgrow(columns, Priority.ALWAYS);
         getChildren().add(columns);
+    }
+
+    private static VBox systemPanel(SystemDetailsViewModel vm) {
+        ToggleGroup group = new ToggleGroup();
+        FlowPane stages = new FlowPane(8, 8);
+        for (app.latentledger.core.records.SystemType t : app.latentledger.core.records.SystemType.values()) {
+            ToggleButton b = new ToggleButton(t.key().replace('-', ' '));
+            b.setId("stages-" + t.key());
+            b.setMinHeight(Ui.MIN_TARGET_PX);
+            b.setToggleGroup(group);
+            b.setSelected(vm.stagesProperty().get() == t);
+            b.setOnAction(e -> {
+                b.setSelected(true);
+                vm.stagesProperty().set(t);
+            });
+            vm.stagesProperty().addListener((o, was, now) -> b.setSelected(now == t));
+            stages.getChildren().add(b);
+        }
+        Label message = Ui.wrapped("", "message");
+        message.textProperty().bind(vm.messageProperty());
+        return Ui.panel(8, Ui.label("The system as found", "heading"), stages,
+                detail("system-refrigerant", "Refrigerant, e.g. R-410A", vm.refrigerantProperty()),
+                detail("system-metering", "Metering device, e.g. TXV", vm.meteringDeviceProperty()),
+                detail("system-blower-type", "Blower type, e.g. PSC", vm.blowerTypeProperty()),
+                detail("system-blower-setting", "Blower setting as found", vm.blowerSettingProperty()),
+                detail("system-filter", "Filter: size, type, condition", vm.filterProperty()),
+                detail("system-thermostat", "Thermostat as found", vm.thermostatProperty()),
+                Ui.button("save-system", "Save system details", Icons.NEW, vm::save), message);
+    }
+
+    private static javafx.scene.control.TextField detail(String id, String prompt, javafx.beans.property.StringProperty p) {
+        javafx.scene.control.TextField f = new javafx.scene.control.TextField();
+        f.setId(id);
+        f.setPromptText(prompt);
+        f.setMinHeight(Ui.MIN_TARGET_PX);
+        f.textProperty().bindBidirectional(p);
+        return f;
     }
 
     private static void select(ToggleGroup group, String key) {

@@ -70,6 +70,16 @@ class RecordScreenUiTest {
         fire(robot, "#add-instrument");
         assertEquals(1, session.ledger().instruments().forVisit(DemoScenario.VISIT_COMPLAINT).size());
 
+        robot.interact(() -> robot.lookup("#system-metering").queryAs(TextField.class).setText("TXV"));
+        robot.interact(() -> robot.lookup("#system-filter").queryAs(TextField.class).setText("16x25x1, dirty"));
+        fire(robot, "#stages-two-stage");
+        fire(robot, "#save-system");
+        var system = session.ledger().systems().find(DemoScenario.SYSTEM_HERON).orElseThrow();
+        assertEquals("TXV", system.meteringDevice());
+        assertEquals("16x25x1, dirty", system.filter());
+        assertEquals(app.latentledger.core.records.SystemType.TWO_STAGE, system.type());
+        assertEquals(system, session.system(), "every screen sees the corrected system");
+
         String setId = session.draft().readingSetId();
         fire(robot, "#set-label-other");
         assertEquals("other", session.ledger().readings().find(setId).orElseThrow().label());
