@@ -143,6 +143,20 @@ if $CDS; then
         "$LAUNCHER" >"$OUT/cds/dump.log" 2>&1 || { tail -20 "$OUT/cds/dump.log" >&2; exit 1; }
     write_launcher "$JOPTS"
 fi
+# desktop entry for the .deb (copied to /usr/share/applications by its postinst); the icon is
+# the one jpackage put in lib/
+cat >"$IMG/lib/$NAME.desktop" <<DESKTOP
+[Desktop Entry]
+Type=Application
+Name=Latent Ledger
+GenericName=Moisture diagnostics
+Comment=Is this air conditioner taking moisture out of the air? Readings, coil checks, logs, reports
+Exec=/opt/$NAME/bin/$NAME
+Icon=/opt/$NAME/lib/$NAME.png
+Terminal=false
+Categories=Utility;Science;
+Keywords=HVAC;psychrometrics;dehumidification;coil;humidity;
+DESKTOP
 echo "app image: $IMG"
 
 if ! $IMAGE_ONLY && [ "$(uname -s)" = Linux ]; then
@@ -151,8 +165,7 @@ if ! $IMAGE_ONLY && [ "$(uname -s)" = Linux ]; then
         "$JPACKAGE" --type deb --app-image "$IMG" --name "$NAME" --app-version "$VERSION" \
             --vendor "Latent Ledger" --description "Air-conditioning moisture and dehumidification diagnostics" \
             --icon "$HERE/icons/latent-ledger.png" --resource-dir "$HERE/linux" \
-            --linux-package-name "$NAME" --linux-shortcut --linux-menu-group "Utility" \
-            --linux-app-category utils --linux-deb-maintainer "packaging@latentledger.invalid" \
+            --linux-package-name "$NAME" --linux-app-category utils --linux-deb-maintainer "packaging@latentledger.invalid" \
             --dest "$OUT"
         ls "$OUT"/*.deb
     else
