@@ -111,38 +111,67 @@ if [ -n "$SQLITE_NATIVE" ]; then
     JOPTS="$JOPTS -Dorg.sqlite.lib.path=\$APPDIR/native -Dorg.sqlite.lib.name=$(basename "$SQLITE_NATIVE")"
 fi
 if $CDS; then
-    JOPTS="$JOPTS -XX:SharedArchiveFile=\$APPDIR/$NAME.jsa -Xshare:auto -Xlog:cds=off,cds+dynamic=off -XX:+UnlockDiagnosticVMOptions -XX:ArchiveRelocationMode=0"
+    # no -Xshare:auto: it is the default, and a -Xshare:dump given in JAVA_TOOL_OPTIONS (below, and
+    # in the .deb's postinst) must not be overridden by the launcher's own options
+    JOPTS="$JOPTS -XX:SharedArchiveFile=\$APPDIR/$NAME.jsa -Xlog:cds=off,cds+dynamic=off -XX:+UnlockDiagnosticVMOptions -XX:ArchiveRelocationMode=0"
 fi
 write_launcher() {
-    # $1: java options; uses only shell built-ins, so it runs with an empty PATH
+    # $1: java options. Shell built-ins only (readlink by its full path), so it runs with an empty PATH
     local quoted=""
     for o in $1; do quoted="$quoted \"$o\""; done
     cat >"$LAUNCHER" <<SCRIPT
 #!/bin/sh
 # Latent Ledger: with a command word it runs the command line, with none it opens the app.
 # Runs the Java runtime inside this image; needs neither PATH nor JAVA_HOME.
-case "\$0" in
-    */*) BINDIR="\${0%/*}" ;;
+SELF="\$0"
+# follow links such as /usr/bin/latent-ledger -> /opt/latent-ledger/bin/latent-ledger
+while [ -L "\$SELF" ]; do
+    LINK="\$(/usr/bin/readlink "\$SELF" 2>/dev/null || /bin/readlink "\$SELF")" || break
+    case "\$LINK" in
+        /*) SELF="\$LINK" ;;
+        *) SELF="\${SELF%/*}/\$LINK" ;;
+    esac
+done
+case "\$SELF" in
+    */*) BINDIR="\${SELF%/*}" ;;
     *) BINDIR=. ;;
 esac
 ROOTDIR="\$(cd -P -- "\$BINDIR/.." && pwd -P)"
 APPDIR="\$ROOTDIR/lib/app"
-exec "\$ROOTDIR/lib/runtime/bin/java"$quoted -cp "$CP" $MAIN_CLASS "\$@"
+# Short commands end before the optimising compiler pays off (on two cores its compile threads
+# only compete with the command): they run on the quick compiler alone. The app, screens and log
+# (a week of samples) keep both.
+JIT=
+SKIP=
+for W in "\$@"; do
+    if [ -n "\$SKIP" ]; then SKIP=; continue; fi
+    case "\$W" in
+        --data-dir) SKIP=1 ;;
+        --data-dir=*) ;;
+        log|screens) break ;;
+        *) JIT=-XX:TieredStopAtLevel=1; break ;;
+    esac
+done
+exec "\$ROOTDIR/lib/runtime/bin/java"$quoted \$JIT -cp "$CP" $MAIN_CLASS "\$@"
 SCRIPT
     chmod 755 "$LAUNCHER"
 }
 rm -f "$IMG/lib/libapplauncher.so"
-write_launcher "${JOPTS/ -XX:SharedArchiveFile=*/}"
+write_launcher "$JOPTS"
 
 if $CDS; then
     echo "== class-data sharing: training runs"
+    # (the archive named in the launcher does not exist yet: the training runs start without one)
     "$HERE/train-cds.sh" "$IMG" "$ROOT" "$OUT/cds"
-    # dumped through the launcher itself, so the archive's class path is the launcher's own (the
-    # JVM still accepts it when the whole image is moved, e.g. installed under /opt)
-    JAVA_TOOL_OPTIONS="-Xshare:dump -XX:SharedClassListFile=$OUT/cds/classes.lst -XX:SharedArchiveFile=$IMG/lib/app/$NAME.jsa" \
+    # The list ships in the image: JDK 17 accepts an archive only at the class path it was dumped
+    # with, so the .deb dumps its own at install time (postinst) from the same list.
+    cp "$OUT/cds/classes.lst" "$IMG/lib/app/$NAME.classlist"
+    # dumped through the launcher itself, so the archive's class path is exactly the launcher's
+    JAVA_TOOL_OPTIONS="-Xshare:dump -XX:SharedClassListFile=$IMG/lib/app/$NAME.classlist" \
         "$LAUNCHER" >"$OUT/cds/dump.log" 2>&1 || { tail -20 "$OUT/cds/dump.log" >&2; exit 1; }
-    write_launcher "$JOPTS"
+    [ -f "$IMG/lib/app/$NAME.jsa" ] || { echo "package.sh: no class-data archive written" >&2; tail -20 "$OUT/cds/dump.log" >&2; exit 1; }
 fi
+
 # desktop entry for the .deb (copied to /usr/share/applications by its postinst); the icon is
 # the one jpackage put in lib/
 cat >"$IMG/lib/$NAME.desktop" <<DESKTOP
@@ -162,7 +191,12 @@ echo "app image: $IMG"
 if ! $IMAGE_ONLY && [ "$(uname -s)" = Linux ]; then
     if command -v dpkg-deb >/dev/null && command -v fakeroot >/dev/null; then
         echo "== .deb (jpackage)"
-        "$JPACKAGE" --type deb --app-image "$IMG" --name "$NAME" --app-version "$VERSION" \
+        # without this machine's archive: it only fits the image's build path; postinst makes one
+        DEBIMG="$OUT/deb-image/$NAME"
+        mkdir -p "$OUT/deb-image"
+        cp -a "$IMG" "$DEBIMG"
+        rm -f "$DEBIMG/lib/app/$NAME.jsa"
+        "$JPACKAGE" --type deb --app-image "$DEBIMG" --name "$NAME" --app-version "$VERSION" \
             --vendor "Latent Ledger" --description "Air-conditioning moisture and dehumidification diagnostics" \
             --icon "$HERE/icons/latent-ledger.png" --resource-dir "$HERE/linux" \
             --linux-package-name "$NAME" --linux-app-category utils --linux-deb-maintainer "packaging@latentledger.invalid" \

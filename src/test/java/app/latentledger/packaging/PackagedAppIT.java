@@ -116,6 +116,15 @@ class PackagedAppIT {
         assertEquals(2, refused.code, "a wet bulb above the dry bulb is refused: " + refused.err);
     }
 
+    /** As installed: /usr/bin/latent-ledger is a link to the launcher inside the image. */
+    @Test
+    void theLauncherWorksThroughALink(@TempDir Path dir) throws Exception {
+        Path link = Files.createSymbolicLink(dir.resolve("latent-ledger"), LAUNCHER.toAbsolutePath());
+        Run r = run(dir, List.of(link.toString(), "state", "--dry-bulb", "80", "--wet-bulb", "67", "--json"));
+        assertEquals(0, r.code, r.err);
+        assertTrue(r.out.contains("\"dewPoint\""), r.out);
+    }
+
     @Test
     void theAppFromTheImageWithoutADisplayExitsTwo(@TempDir Path dir) throws Exception {
         Run r = launch(dir);
@@ -131,6 +140,10 @@ class PackagedAppIT {
     private static Run launch(Path dir, String... words) throws Exception {
         List<String> cmd = new ArrayList<>(List.of(LAUNCHER.toString(), "--data-dir", dir.resolve("data").toString()));
         cmd.addAll(List.of(words));
+        return run(dir, cmd);
+    }
+
+    private static Run run(Path dir, List<String> cmd) throws Exception {
         ProcessBuilder pb = new ProcessBuilder(cmd);
         Map<String, String> env = pb.environment();
         env.clear();
