@@ -33,6 +33,7 @@ TARGET="$(cd "${TARGET:-$ROOT/target}" && pwd)"
 
 JAVA_BIN="${JAVA_HOME:+$JAVA_HOME/bin/}"
 JLINK="${JAVA_BIN}jlink"
+JAR="${JAVA_BIN}jar"   # the JDK's own jar tool unpacks entries, so the build needs no unzip
 JPACKAGE="${JAVA_BIN}jpackage"
 if ! command -v "$JPACKAGE" >/dev/null 2>&1; then
     echo "package.sh: jpackage not found (needs a full JDK 17+, not a JRE); no app image built" >&2
@@ -43,7 +44,10 @@ fi
 NAME=latent-ledger
 MAIN_CLASS=app.latentledger.Main
 # jpackage wants a plain numeric version
-VERSION="$(unzip -p "$TARGET/latent-ledger.jar" META-INF/MANIFEST.MF | sed -n 's/^Implementation-Version: *\([0-9.]*\).*/\1/p' | tr -d '\r')"
+MF_DIR="$(mktemp -d)"
+(cd "$MF_DIR" && "$JAR" xf "$TARGET/latent-ledger.jar" META-INF/MANIFEST.MF)
+VERSION="$(sed -n 's/^Implementation-Version: *\([0-9.]*\).*/\1/p' "$MF_DIR/META-INF/MANIFEST.MF" | tr -d '\r')"
+rm -rf "$MF_DIR"
 VERSION="${VERSION:-0.1.0}"
 # What the jars need, from `jdeps --print-module-deps` over the app and its libraries:
 # java.desktop (JavaFX, PDFBox images and fonts), java.sql (SQLite, Gson), java.management (start
@@ -66,7 +70,11 @@ done
 echo "== native libraries unpacked beside the jars"
 # JavaFX loads its libraries from the folder of its jar before it tries to extract them
 for j in "$OUT"/input/javafx-*.jar; do
-    (cd "$OUT/input" && unzip -qo "$j" '*.so' '*.dll' '*.dylib' 2>/dev/null || true)
+    libs="$("$JAR" tf "$j" | grep -E '\.(so|dll|dylib)$' || true)"
+    if [ -n "$libs" ]; then
+        # shellcheck disable=SC2086 # one word per entry
+        (cd "$OUT/input" && "$JAR" xf "$j" $libs)
+    fi
 done
 # SQLite's JDBC driver takes its library from org.sqlite.lib.path instead of extracting it to /tmp each run
 case "$(uname -s)-$(uname -m)" in
@@ -77,7 +85,8 @@ case "$(uname -s)-$(uname -m)" in
     *) SQLITE_NATIVE="" ;;
 esac
 if [ -n "$SQLITE_NATIVE" ]; then
-    unzip -qjo "$OUT"/input/sqlite-jdbc-*.jar "$SQLITE_NATIVE" -d "$OUT/input/native"
+    (cd "$OUT/input/native" && "$JAR" xf "$(ls "$OUT"/input/sqlite-jdbc-*.jar)" "$SQLITE_NATIVE" \
+        && mv "$SQLITE_NATIVE" . && rm -rf org)
 fi
 
 echo "== runtime (jlink: $MODULES)"
