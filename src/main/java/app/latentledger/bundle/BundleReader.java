@@ -62,10 +62,10 @@ public final class BundleReader {
             throw new BundleException("bundle format '" + format + "' is not " + BundleFormat.NAME + "; nothing was imported");
         }
         int version = manifest.integer("formatVersion");
-        if (version != BundleFormat.VERSION) {
-            throw new BundleException("bundle format version " + version + " is not one this app reads (it reads version "
-                    + BundleFormat.VERSION + ")" + (version > BundleFormat.VERSION ? "; update the app" : "")
-                    + "; nothing was imported");
+        if (version < BundleFormat.OLDEST_READ || version > BundleFormat.VERSION) {
+            throw new BundleException("bundle format version " + version + " is not one this app reads (it reads versions "
+                    + BundleFormat.OLDEST_READ + " to " + BundleFormat.VERSION + ")"
+                    + (version > BundleFormat.VERSION ? "; update the app" : "") + "; nothing was imported");
         }
         checkEntries(manifest, entries);
         BundleScope scope = scope(manifest.text("scope"));
@@ -90,7 +90,27 @@ public final class BundleReader {
             for (JsonFields f : array(entries, BundleFormat.SNAPSHOTS)) {
                 snapshots.add(RecordsJson.snapshot(f));
             }
-            BundleContent content = new BundleContent(scope, site, systems, visits, readings, logs, snapshots);
+            List<app.latentledger.core.records.Instrument> instruments = new ArrayList<>();
+            List<BundleContent.InstrumentUse> uses = new ArrayList<>();
+            List<app.latentledger.core.records.VisitPaperwork> paperwork = new ArrayList<>();
+            List<app.latentledger.core.records.BinEntry> deletions = new ArrayList<>();
+            if (version >= 2) {
+                for (JsonFields f : array(entries, BundleFormat.INSTRUMENTS)) {
+                    app.latentledger.core.records.Instrument i = PaperworkJson.instrument(f);
+                    instruments.add(i);
+                    for (String set : f.texts("usedOn")) {
+                        uses.add(new BundleContent.InstrumentUse(set, i.id()));
+                    }
+                }
+                for (JsonFields f : array(entries, BundleFormat.PAPERWORK)) {
+                    paperwork.add(PaperworkJson.paperwork(f));
+                }
+                for (JsonFields f : array(entries, BundleFormat.DELETIONS)) {
+                    deletions.add(PaperworkJson.deletion(f));
+                }
+            }
+            BundleContent content = new BundleContent(scope, site, systems, visits, readings, logs, snapshots,
+                    instruments, uses, paperwork, deletions);
             content.checkConsistent();
             return content;
         } catch (IllegalArgumentException e) {

@@ -12,7 +12,6 @@ import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
-import java.util.List;
 
 /**
  * The ledger's SQLite file. One connection, used by one thread at a time.
@@ -109,8 +108,10 @@ public final class Database implements AutoCloseable {
             throw new StoreException(file + " was written by a newer version of the app (schema " + current
                     + "; this build knows up to " + Migration.latestVersion() + "); update the app");
         }
-        List<Migration> all = Migration.all();
-        for (Migration m : all.subList(current, Math.min(target, all.size()))) {
+        for (Migration m : Migration.all()) {
+            if (m.version() <= current || m.version() > target) {
+                continue;
+            }
             // one transaction per step: a kill mid-step leaves the previous version intact
             write(c -> {
                 try (Statement s = c.createStatement()) {
