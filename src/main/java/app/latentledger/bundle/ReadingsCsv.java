@@ -2,11 +2,11 @@ package app.latentledger.bundle;
 
 import app.latentledger.core.records.Timestamps;
 import app.latentledger.core.records.Airflow;
-import app.latentledger.core.records.AirflowPoint;
+import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.records.CoilTemperature;
-import app.latentledger.core.records.CoilTemperatureKind;
+import app.latentledger.core.measure.CoilTemperatureKind;
 import app.latentledger.core.records.Condensate;
-import app.latentledger.core.records.HumidityKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;

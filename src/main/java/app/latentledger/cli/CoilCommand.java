@@ -1,7 +1,7 @@
 package app.latentledger.cli;
 
 import app.latentledger.core.InvalidInputException;
-import app.latentledger.core.coil.AirflowLocation;
+import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilProcess;
 import app.latentledger.core.coil.CoilReadings;
@@ -112,7 +112,7 @@ public final class CoilCommand implements Command {
         }
         b.append(Format.row("airflow", Format.fixed(Quantity.AIRFLOW.toDisplay(units, r.readings().airflowM3PerS()), 0),
                 Quantity.AIRFLOW.symbol(units) + " measured at " + r.readings().airflowAt().key()
-                        + (r.mixed() && r.readings().airflowAt() == AirflowLocation.ENTERING ? " (mixed)" : "") + " air"));
+                        + (r.mixed() && r.readings().airflowAt() == AirflowPoint.ENTERING ? " (mixed)" : "") + " air"));
         b.append(Format.row("dry-air mass flow", Format.fixed(Quantity.WATER_RATE.toDisplay(units, q.massFlowKgPerS()),
                 units == UnitSystem.IP ? 0 : 1), Quantity.WATER_RATE.symbol(units)));
         b.append("Capacity\n");
@@ -155,9 +155,11 @@ public final class CoilCommand implements Command {
             b.append(est("outdoor dew point", Measurand.OUTDOOR_DEW_POINT, r, units, 1));
         }
         b.append(est(r.mixed() ? "entering (mixed) dp" : "entering dew point", Measurand.ENTERING_DEW_POINT, r, units, 1));
-        String source = CoilResult.SOURCE_MEASURED.equals(r.coilTemperatureSource())
-                ? "measured " + r.readings().coilKind().label()
-                : CoilResult.SOURCE_ADP.equals(r.coilTemperatureSource()) ? "apparatus dew point stands in" : "none";
+        String source = switch (r.coilTemperatureSource()) {
+            case MEASURED -> "measured " + r.readings().coilKind().label();
+            case APPARATUS_DEW_POINT -> "apparatus dew point, from the same two readings as the drop";
+            case NONE -> "none";
+        };
         if (Double.isFinite(r.coilTemperatureC())) {
             b.append(est("coil temperature", Measurand.COIL_TEMPERATURE, r, units, 1).replaceAll("\n$", "")
                     .concat("  (" + source + ")\n"));

@@ -32,7 +32,7 @@ final class CoilJson {
         m.put("pressure", Quantity.PRESSURE.toDisplay(units, in.pressurePa()));
         m.put("entering", StateJson.of(r.entering(), units));
         m.put("leaving", StateJson.of(r.leaving(), units));
-        m.put("enteringSource", r.enteringSource());
+        m.put("enteringSource", r.enteringSource().key());
         m.put("return", StateJson.of(r.returnAir(), units));
         m.put("outdoor", r.mixed() ? StateJson.of(r.outdoorAir(), units) : null);
         m.put("outdoorAirFraction", r.mixed()
@@ -60,7 +60,7 @@ final class CoilJson {
         m.put("enteringDewPoint", shown(Quantity.TEMPERATURE, units, r.estimate(Measurand.ENTERING_DEW_POINT).valueSi()));
         m.put("leavingDewPoint", shown(Quantity.TEMPERATURE, units, r.estimate(Measurand.LEAVING_DEW_POINT).valueSi()));
         m.put("coilTemperature", shown(Quantity.TEMPERATURE, units, r.coilTemperatureC()));
-        m.put("coilTemperatureSource", r.coilTemperatureSource());
+        m.put("coilTemperatureSource", r.coilTemperatureSource().key());
         m.put("coilTemperatureKind", in.hasCoilTemperature() ? in.coilKind().key() : null);
         m.put("dewPointMargin", shown(Quantity.TEMPERATURE_DIFFERENCE, units,
                 r.estimate(Measurand.DEW_POINT_MARGIN).valueSi()));

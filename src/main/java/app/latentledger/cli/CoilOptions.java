@@ -2,11 +2,12 @@ package app.latentledger.cli;
 
 import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.coil.AirReading;
-import app.latentledger.core.coil.AirflowLocation;
+import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.coil.CoilReadings;
-import app.latentledger.core.coil.CoilTemperatureKind;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.InvalidChoiceException;
 import app.latentledger.core.coil.Condensate;
-import app.latentledger.core.coil.HumidityKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.coil.OutdoorAir;
 import app.latentledger.core.coil.Tolerances;
 import app.latentledger.core.psychro.HandbookEdition;
@@ -65,7 +66,7 @@ final class CoilOptions {
         }
         double airflowTol = tolerance(args, "tol-airflow-pct", Quantity.RELATIVE_HUMIDITY, units,
                 defaults.airflowFraction() * 100) / 100.0;
-        AirflowLocation at = airflowAt(args.value("airflow-at"));
+        AirflowPoint at = airflowAt(args.value("airflow-at"));
 
         Double coil = UnitOptions.si(args, "coil-temp", Quantity.TEMPERATURE, units);
         double coilTol = tolerance(args, "tol-coil", Quantity.TEMPERATURE_DIFFERENCE, units, defaults.coilK());
@@ -73,9 +74,10 @@ final class CoilOptions {
         CoilTemperatureKind coilKind = null;
         if (coil != null) {
             try {
-                coilKind = kindText == null ? CoilTemperatureKind.COIL_SURFACE : CoilTemperatureKind.parse(kindText);
-            } catch (IllegalArgumentException e) {
-                throw new UsageException("--coil-temp-kind: " + e.getMessage());
+                coilKind = kindText == null ? CoilTemperatureKind.COIL_SURFACE
+                        : CoilTemperatureKind.parse("--coil-temp-kind", kindText);
+            } catch (InvalidChoiceException e) {
+                throw new UsageException(e.getMessage());
             }
         } else if (kindText != null) {
             throw new UsageException("--coil-temp-kind needs --coil-temp");
@@ -174,13 +176,13 @@ final class CoilOptions {
         return q.fromDisplay(units, v);
     }
 
-    private static AirflowLocation airflowAt(String text) {
+    private static AirflowPoint airflowAt(String text) {
         if (text == null || text.equalsIgnoreCase("return") || text.equalsIgnoreCase("entering")
                 || text.equalsIgnoreCase("mixed")) {
-            return AirflowLocation.ENTERING;
+            return AirflowPoint.ENTERING;
         }
         if (text.equalsIgnoreCase("supply") || text.equalsIgnoreCase("leaving")) {
-            return AirflowLocation.LEAVING;
+            return AirflowPoint.LEAVING;
         }
         throw new UsageException("--airflow-at '" + text + "' not understood; accepted: return (or mixed), supply");
     }

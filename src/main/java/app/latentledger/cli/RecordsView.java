@@ -4,7 +4,7 @@ import app.latentledger.core.records.Timestamps;
 import app.latentledger.core.records.Airflow;
 import app.latentledger.core.records.CoilTemperature;
 import app.latentledger.core.records.Condensate;
-import app.latentledger.core.records.HumidityKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Measurement;
@@ -97,7 +97,7 @@ final class RecordsView {
         if (h == null) {
             return null;
         }
-        Map<String, Object> m = h.kind() == HumidityKind.RH
+        Map<String, Object> m = h.kind() == HumidityKind.RELATIVE_HUMIDITY
                 ? value(h.value(), Quantity.RELATIVE_HUMIDITY, Quantity.RELATIVE_HUMIDITY, units)
                 : value(h.value(), Quantity.TEMPERATURE, Quantity.TEMPERATURE_DIFFERENCE, units);
         m.put("kind", h.kind().key());
@@ -158,7 +158,7 @@ final class RecordsView {
     private static String air(String label, Measurement db, HumidityReading h, UnitSystem units) {
         String text = temperatureText(db, units) + " db";
         if (h != null) {
-            text += ", " + (h.kind() == HumidityKind.RH
+            text += ", " + (h.kind() == HumidityKind.RELATIVE_HUMIDITY
                     ? Format.fixed(h.value().valueSi(), 1) + " ± " + Format.fixed(h.value().toleranceSi(), 1) + " %RH"
                     : temperatureText(h.value(), units) + (h.kind() == HumidityKind.WET_BULB ? " wb" : " dew point"));
         }

@@ -52,16 +52,16 @@ public final class CoilCheck {
             estimates.put(m, new Estimate(u.values()[m.ordinal()], u.expanded()[m.ordinal()]));
         }
         double coil;
-        String source;
+        CoilTemperatureSource source;
         if (readings.hasCoilTemperature()) {
             coil = readings.coilTemperatureC();
-            source = CoilResult.SOURCE_MEASURED;
+            source = CoilTemperatureSource.MEASURED;
         } else if (adp.found()) {
             coil = adp.temperatureC();
-            source = CoilResult.SOURCE_ADP;
+            source = CoilTemperatureSource.APPARATUS_DEW_POINT;
         } else {
             coil = Double.NaN;
-            source = CoilResult.SOURCE_NONE;
+            source = CoilTemperatureSource.NONE;
         }
         CoilVerdict.Call margin = CoilVerdict.marginCall(estimates.get(Measurand.DEW_POINT_MARGIN));
         CoilVerdict.Call drop = CoilVerdict.dropCall(estimates.get(Measurand.HUMIDITY_RATIO_DROP));

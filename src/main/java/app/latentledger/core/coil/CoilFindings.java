@@ -33,7 +33,7 @@ public final class CoilFindings {
         Estimate margin = r.estimate(Measurand.DEW_POINT_MARGIN);
         Estimate drop = r.estimate(Measurand.HUMIDITY_RATIO_DROP);
         Estimate dp = r.estimate(Measurand.ENTERING_DEW_POINT);
-        boolean measured = CoilResult.SOURCE_MEASURED.equals(r.coilTemperatureSource());
+        boolean measured = r.coilTemperatureSource() == CoilTemperatureSource.MEASURED;
         String coilWord = measured ? r.readings().coilKind().label() : "apparatus dew point";
         String enteringWord = r.mixed() ? "the mixed air entering the coil" : "return";
         String enteringDp = r.mixed() ? "entering (mixed-air) dew point " : "entering dew point ";

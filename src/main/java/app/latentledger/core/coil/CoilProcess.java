@@ -1,5 +1,6 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.psychro.HandbookEdition;
 
 /**
@@ -60,9 +61,9 @@ public record CoilProcess(double massFlowKgPerS, double sensibleW, double latent
      * @param at            where the airflow was measured
      */
     public static CoilProcess of(double pressurePa, double t1C, double w1, double t2C, double w2,
-                                 double airflowM3PerS, AirflowLocation at) {
+                                 double airflowM3PerS, AirflowPoint at) {
         HandbookEdition si = HandbookEdition.SI;
-        double v = at == AirflowLocation.ENTERING
+        double v = at == AirflowPoint.ENTERING
                 ? si.specificVolumeM3PerKg(t1C, w1, pressurePa)
                 : si.specificVolumeM3PerKg(t2C, w2, pressurePa);
         double m = airflowM3PerS / v;

@@ -1,7 +1,8 @@
 package app.latentledger.core.coil;
 
-import app.latentledger.core.psychro.InputLimits;
-import app.latentledger.core.units.Quantity;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.FieldLimits;
 
 import java.util.Objects;
 
@@ -24,39 +25,29 @@ import java.util.Objects;
  *                           the entering reading already is the coil-entering air
  */
 public record CoilReadings(double pressurePa, AirReading entering, AirReading leaving,
-                           double airflowM3PerS, double airflowTolFraction, AirflowLocation airflowAt,
+                           double airflowM3PerS, double airflowTolFraction, AirflowPoint airflowAt,
                            double coilTemperatureC, double coilTolK, CoilTemperatureKind coilKind,
                            double nominalCapacityW, Condensate condensate, OutdoorAir outdoor) {
-    /** 20 cfm: below any air handler. */
-    public static final double MIN_AIRFLOW_M3_PER_S = 0.0094;
-    /** 100 000 cfm: above any single coil a field tablet meets. */
-    public static final double MAX_AIRFLOW_M3_PER_S = 47.2;
-    /** Half a ton. */
-    public static final double MIN_NOMINAL_W = 1758.0;
-    /** 500 tons. */
-    public static final double MAX_NOMINAL_W = 1.76e6;
-
     public CoilReadings {
         Objects.requireNonNull(entering, "entering");
         Objects.requireNonNull(leaving, "leaving");
         Objects.requireNonNull(airflowAt, "airflowAt");
-        InputLimits.checkPressure("pressure", pressurePa);
-        InputLimits.check("airflow", Quantity.AIRFLOW, airflowM3PerS, MIN_AIRFLOW_M3_PER_S, MAX_AIRFLOW_M3_PER_S, null);
-        InputLimits.check("airflow tolerance", Quantity.FRACTION_PERCENT, airflowTolFraction, 0, 0.5, null);
+        FieldLimits.PRESSURE.check(pressurePa);
+        FieldLimits.AIRFLOW.check(airflowM3PerS);
+        FieldLimits.AIRFLOW_TOLERANCE.check(airflowTolFraction);
         if (!Double.isNaN(coilTemperatureC)) {
-            InputLimits.check("coil temperature", Quantity.TEMPERATURE, coilTemperatureC, -30.0, 35.0,
-                    "a cooling coil runs between about −20 °F and 95 °F");
-            InputLimits.check("coil temperature tolerance", Quantity.TEMPERATURE_DIFFERENCE, coilTolK, 0, 10, null);
+            FieldLimits.COIL_TEMPERATURE.check(coilTemperatureC);
+            FieldLimits.TEMPERATURE_TOLERANCE.check("coil temperature tolerance", coilTolK);
             Objects.requireNonNull(coilKind, "coilKind");
         }
         if (!Double.isNaN(nominalCapacityW)) {
-            InputLimits.check("nominal capacity", Quantity.POWER_LARGE, nominalCapacityW, MIN_NOMINAL_W, MAX_NOMINAL_W, null);
+            FieldLimits.NOMINAL_CAPACITY.check(nominalCapacityW);
         }
     }
 
     /** Readings without outdoor air: the entering reading is the air entering the coil. */
     public CoilReadings(double pressurePa, AirReading entering, AirReading leaving,
-                        double airflowM3PerS, double airflowTolFraction, AirflowLocation airflowAt,
+                        double airflowM3PerS, double airflowTolFraction, AirflowPoint airflowAt,
                         double coilTemperatureC, double coilTolK, CoilTemperatureKind coilKind,
                         double nominalCapacityW, Condensate condensate) {
         this(pressurePa, entering, leaving, airflowM3PerS, airflowTolFraction, airflowAt, coilTemperatureC, coilTolK,

@@ -1,5 +1,7 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.measure.HumidityKind;
+
 /**
  * Default instrument tolerances, each the ± half-width a maker would state for typical field kit.
  * All overridable per reading. Sources: domain-practice.md §1.4 (common practice, no source, for

@@ -1,5 +1,7 @@
 package app.latentledger.core.records;
 
+import app.latentledger.core.measure.AirflowPoint;
+
 /**
  * Volumetric airflow through the coil.
  *

@@ -1,9 +1,9 @@
 package app.latentledger.ui.entry;
 
 import app.latentledger.core.records.Airflow;
-import app.latentledger.core.records.AirflowPoint;
+import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.records.CoilTemperature;
-import app.latentledger.core.records.CoilTemperatureKind;
+import app.latentledger.core.measure.CoilTemperatureKind;
 import app.latentledger.core.records.Condensate;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;

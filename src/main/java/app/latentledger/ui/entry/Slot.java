@@ -1,6 +1,6 @@
 package app.latentledger.ui.entry;
 
-import app.latentledger.core.records.HumidityKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 

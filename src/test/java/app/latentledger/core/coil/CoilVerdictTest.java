@@ -47,7 +47,7 @@ class CoilVerdictTest {
     void dehumidifying() {
         CoilResult r = IpCase.returnRh(78, 55).supplyRh(57, 92).cfm(1100).nominalTons(3).coilF(47).run();
         assertEquals(CoilVerdict.DEHUMIDIFYING, r.verdict());
-        assertEquals(CoilResult.SOURCE_MEASURED, r.coilTemperatureSource());
+        assertEquals(CoilTemperatureSource.MEASURED, r.coilTemperatureSource());
     }
 
     @Test
@@ -55,7 +55,7 @@ class CoilVerdictTest {
     void dehumidifyingOnAdp() {
         CoilResult r = IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).run();
         assertEquals(CoilVerdict.DEHUMIDIFYING, r.verdict());
-        assertEquals(CoilResult.SOURCE_ADP, r.coilTemperatureSource());
+        assertEquals(CoilTemperatureSource.APPARATUS_DEW_POINT, r.coilTemperatureSource());
         assertEquals(r.adp().temperatureC(), r.coilTemperatureC(), 0);
     }
 
@@ -71,7 +71,7 @@ class CoilVerdictTest {
     void notDehumidifyingAddingMoisture() {
         CoilResult r = IpCase.returnRh(75, 50).supplyRh(63, 86).cfm(1200).run();
         assertEquals(CoilVerdict.NOT_DEHUMIDIFYING, r.verdict());
-        assertEquals(CoilResult.SOURCE_NONE, r.coilTemperatureSource());
+        assertEquals(CoilTemperatureSource.NONE, r.coilTemperatureSource());
     }
 
     @Test

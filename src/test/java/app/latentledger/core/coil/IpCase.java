@@ -1,5 +1,8 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.psychro.SitePressure;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
@@ -10,7 +13,7 @@ final class IpCase {
     private AirReading entering;
     private AirReading leaving;
     private double airflow;
-    private AirflowLocation at = AirflowLocation.ENTERING;
+    private AirflowPoint at = AirflowPoint.ENTERING;
     private double coilC = Double.NaN;
     private CoilTemperatureKind coilKind;
     private double nominalW = Double.NaN;
@@ -59,7 +62,7 @@ final class IpCase {
     }
 
     IpCase airflowAtSupply() {
-        at = AirflowLocation.LEAVING;
+        at = AirflowPoint.LEAVING;
         return this;
     }
 
