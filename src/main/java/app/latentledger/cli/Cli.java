@@ -61,7 +61,7 @@ public final class Cli {
                 out.print(command.usage());
                 return OK;
             }
-            Args args = Args.parse(rest, Set.of("json", "help"));
+            Args args = Args.parse(rest, Set.of("json", "help", "same-probe"));
             return command.run(args, new CliContext(out, err, dataDir));
         } catch (UsageException e) {
             err.println("latent-ledger: " + e.getMessage());
