@@ -25,7 +25,8 @@ record Migration(int version, String name, List<String> statements) {
             "V1__sites_systems_visits_readings.sql",
             "V2__imported_logs.sql",
             "V3__results_snapshots_and_labels.sql",
-            "V4__settings.sql");
+            "V4__settings.sql",
+            "V5__airflow_basis_and_probes.sql");
 
     static List<Migration> all() {
         List<Migration> all = new ArrayList<>();

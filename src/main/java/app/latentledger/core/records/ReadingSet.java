@@ -1,6 +1,7 @@
 package app.latentledger.core.records;
 
 import app.latentledger.core.measure.FieldLimits;
+import app.latentledger.core.measure.ProbeMatch;
 
 import java.time.OffsetDateTime;
 import java.time.temporal.ChronoUnit;
@@ -25,13 +26,15 @@ import java.time.temporal.ChronoUnit;
  * @param stationPressurePa   measured station pressure, Pa ± Pa, or null to use the site elevation
  * @param condensate          condensate caught, or null
  * @param notes               free text
+ * @param probes              whether one instrument read return and supply, and the supply
+ *                            probe's dew-point offset; {@link ProbeMatch#INDEPENDENT} when not said
  */
 public record ReadingSet(String id, String visitId, OffsetDateTime takenAt, String label, String instrument,
                          Measurement returnDryBulb, HumidityReading returnHumidity,
                          Measurement supplyDryBulb, HumidityReading supplyHumidity,
                          Measurement outdoorDryBulb, HumidityReading outdoorHumidity,
                          CoilTemperature coilTemperature, Airflow airflow, Measurement stationPressurePa,
-                         Condensate condensate, String notes) {
+                         Condensate condensate, String notes, ProbeMatch probes) {
     // every range below is FieldLimits', the same the keypad and the coil check use, so a stored set always checks
 
     public ReadingSet {
@@ -72,6 +75,19 @@ public record ReadingSet(String id, String visitId, OffsetDateTime takenAt, Stri
                     condensate.seconds().valueSi() / 2);
         }
         notes = Check.optionalText("reading set notes", notes, 10_000);
+        probes = probes == null ? ProbeMatch.INDEPENDENT : probes;
+    }
+
+    /** A reading set with independent probes and no offset. */
+    public ReadingSet(String id, String visitId, OffsetDateTime takenAt, String label, String instrument,
+                      Measurement returnDryBulb, HumidityReading returnHumidity,
+                      Measurement supplyDryBulb, HumidityReading supplyHumidity,
+                      Measurement outdoorDryBulb, HumidityReading outdoorHumidity,
+                      CoilTemperature coilTemperature, Airflow airflow, Measurement stationPressurePa,
+                      Condensate condensate, String notes) {
+        this(id, visitId, takenAt, label, instrument, returnDryBulb, returnHumidity, supplyDryBulb, supplyHumidity,
+                outdoorDryBulb, outdoorHumidity, coilTemperature, airflow, stationPressurePa, condensate, notes,
+                ProbeMatch.INDEPENDENT);
     }
 
     private static void temperature(String field, Measurement m) {

@@ -69,7 +69,7 @@ public final class ReadingSetCheck {
             condensate = new Condensate(volume.valueSi(), fraction(volume), seconds.valueSi(), seconds.toleranceSi());
         }
         return new CoilReadings(pressurePa, entering, leaving, flow.valueSi(), fraction(flow), at, coilC, coilTolK,
-                coilKind, system.nominalCapacityW(), condensate);
+                coilKind, system.nominalCapacityW(), condensate, null, rs.airflow().basis(), rs.probes());
     }
 
     /**
