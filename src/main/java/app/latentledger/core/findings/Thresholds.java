@@ -67,8 +67,10 @@ public final class Thresholds {
     /** Entering wet bulbs within this of the 67 °F rating point count as near rating conditions. */
     public static final Threshold NEAR_RATING_WET_BULB_BAND = new Threshold("nearRatingWetBulbBand",
             "entering wet-bulb distance from the 67 °F (19.4 °C) rating point still called near rating",
-            Quantity.TEMPERATURE_DIFFERENCE, 5 / 1.8,
-            "rating point 80 °F db / 67 °F wb from AHRI Standard 210/240; the ±5 °F band is " + COMMON_PRACTICE);
+            Quantity.TEMPERATURE_DIFFERENCE, 8 / 1.8,
+            "rating point 80 °F db / 67 °F wb from AHRI Standard 210/240; the ±8 °F band is " + COMMON_PRACTICE
+                    + " (capacity falls roughly 2–3 % per °F of entering wet bulb, so 75 % of nominal stays"
+                    + " below a healthy unit across it)");
     /** A supply RH reading at or above this is likely a wetted or slow probe, not a measured state. */
     public static final Threshold SUPPLY_NEAR_SATURATION_RH = new Threshold("supplyNearSaturationRh",
             "supply relative humidity at which a wetted or slow probe is suspected", Quantity.RELATIVE_HUMIDITY,
