@@ -71,6 +71,7 @@ final class RecordsView {
         } else {
             Map<String, Object> f = value(a.volume(), Quantity.AIRFLOW, Quantity.AIRFLOW, units);
             f.put("point", a.point().key());
+            f.put("basis", a.basis().key());
             f.put("method", a.method());
             m.put("airflow", f);
         }
@@ -131,7 +132,7 @@ final class RecordsView {
             double perCapacity = a.volume().valueSi() / system.nominalCapacityW();
             b.append(line("airflow", Format.fixed(Quantity.AIRFLOW.toDisplay(units, a.volume().valueSi()), 0) + " ± "
                     + Format.fixed(Quantity.AIRFLOW.toDisplay(units, a.volume().toleranceSi()), 0) + " "
-                    + Quantity.AIRFLOW.symbol(units) + " " + a.point().key() + " ("
+                    + a.basis().label() + " " + Quantity.AIRFLOW.symbol(units) + " " + a.point().key() + " ("
                     + Format.fixed(Quantity.AIRFLOW_PER_CAPACITY.toDisplay(units, perCapacity), 0) + " "
                     + Quantity.AIRFLOW_PER_CAPACITY.symbol(units) + " of nominal)"
                     + (a.method().isEmpty() ? "" : "; " + a.method())));

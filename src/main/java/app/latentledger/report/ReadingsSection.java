@@ -4,6 +4,7 @@ import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.CoilTemperatureSource;
 import app.latentledger.core.coil.Estimate;
 import app.latentledger.core.coil.Measurand;
+import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.records.Airflow;
 import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
@@ -216,7 +217,7 @@ final class ReadingsSection {
             return "not measured";
         }
         return Numbers.withSpread(Quantity.AIRFLOW, units, a.volume().valueSi(), a.volume().toleranceSi())
-                + " at the " + (a.point().key().equals("entering") ? "return (entering)" : "supply (leaving)") + " side"
+                + (a.basis() == AirflowBasis.STANDARD ? " (standard air)" : "") + " at the " + (a.point().key().equals("entering") ? "return (entering)" : "supply (leaving)") + " side"
                 + (a.method().isEmpty() ? "" : "; " + a.method());
     }
 

@@ -77,7 +77,8 @@ final class VisitDataRows {
         }
         if (s.airflow() != null) {
             reading(id, label, "airflow", "airflow", Quantity.AIRFLOW, s.airflow().volume(),
-                    s.airflow().point().key() + (s.airflow().method().isEmpty() ? "" : "; " + s.airflow().method()));
+                    s.airflow().point().key() + "; " + s.airflow().basis().key()
+                            + (s.airflow().method().isEmpty() ? "" : "; " + s.airflow().method()));
         }
         if (s.stationPressurePa() != null) {
             reading(id, label, "stationPressure", "station pressure", Quantity.PRESSURE, s.stationPressurePa(), "measured");
