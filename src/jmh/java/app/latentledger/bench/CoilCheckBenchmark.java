@@ -1,16 +1,16 @@
 package app.latentledger.bench;
 
-import app.latentledger.core.measure.CoilTemperatureKind;
 import app.latentledger.core.coil.AirReading;
-import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilModel;
 import app.latentledger.core.coil.CoilReadings;
 import app.latentledger.core.coil.CoilResult;
-import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.coil.OutdoorAir;
 import app.latentledger.core.coil.Propagation;
 import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.psychro.HandbookEdition;
 import app.latentledger.core.psychro.MoistAirState;
 import app.latentledger.core.units.UnitSystem;

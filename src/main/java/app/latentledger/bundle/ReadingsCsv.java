@@ -1,17 +1,17 @@
 package app.latentledger.bundle;
 
-import app.latentledger.core.records.Timestamps;
-import app.latentledger.core.records.Airflow;
 import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.measure.AirflowPoint;
-import app.latentledger.core.measure.ProbeMatch;
-import app.latentledger.core.records.CoilTemperature;
 import app.latentledger.core.measure.CoilTemperatureKind;
-import app.latentledger.core.records.Condensate;
 import app.latentledger.core.measure.HumidityKind;
+import app.latentledger.core.measure.ProbeMatch;
+import app.latentledger.core.records.Airflow;
+import app.latentledger.core.records.CoilTemperature;
+import app.latentledger.core.records.Condensate;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
+import app.latentledger.core.records.Timestamps;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;

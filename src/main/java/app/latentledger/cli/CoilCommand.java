@@ -1,7 +1,6 @@
 package app.latentledger.cli;
 
 import app.latentledger.core.InvalidInputException;
-import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilProcess;
 import app.latentledger.core.coil.CoilReadings;
@@ -13,6 +12,7 @@ import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.core.findings.Thresholds;
+import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.psychro.MoistAirState;
 import app.latentledger.core.psychro.SitePressure;
 import app.latentledger.core.settings.Settings;

@@ -91,9 +91,10 @@ final class CoilJson {
     private static Map<String, Object> shortcuts(ShortcutFigures s, UnitSystem units) {
         Map<String, Object> m = new LinkedHashMap<>();
         double[] c = s.scaledConstants();
-        m.put("basis", units == UnitSystem.IP
+        m.put("basis", (units == UnitSystem.IP
                 ? "1.08 × cfm × Δt, 0.68 × cfm × Δgr, 4.5 × cfm × Δh, each × p/p0"
-                : "1.23 × L/s × Δt, 3010 × L/s × ΔW, 1.2 × L/s × Δh, each × p/p0");
+                : "1.23 × L/s × Δt, 3010 × L/s × ΔW, 1.2 × L/s × Δh, each × p/p0")
+                + (s.pressureRatio() == 1.0 ? " (1 for standard airflow)" : ""));
         m.put("pressureRatio", s.pressureRatio());
         m.put("sensibleConstant", c[0]);
         m.put("latentConstant", c[1]);

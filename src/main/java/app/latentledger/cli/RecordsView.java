@@ -1,15 +1,15 @@
 package app.latentledger.cli;
 
-import app.latentledger.core.records.Timestamps;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.Airflow;
 import app.latentledger.core.records.CoilTemperature;
 import app.latentledger.core.records.Condensate;
-import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.Site;
+import app.latentledger.core.records.Timestamps;
 import app.latentledger.core.records.Visit;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;

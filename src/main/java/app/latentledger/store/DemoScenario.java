@@ -1,11 +1,11 @@
 package app.latentledger.store;
 
-import app.latentledger.core.records.Airflow;
 import app.latentledger.core.measure.AirflowPoint;
-import app.latentledger.core.records.CoilTemperature;
 import app.latentledger.core.measure.CoilTemperatureKind;
-import app.latentledger.core.records.Condensate;
 import app.latentledger.core.measure.HumidityKind;
+import app.latentledger.core.records.Airflow;
+import app.latentledger.core.records.CoilTemperature;
+import app.latentledger.core.records.Condensate;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Measurement;

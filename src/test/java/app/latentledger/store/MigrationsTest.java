@@ -1,8 +1,8 @@
 package app.latentledger.store;
 
-import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.measure.ProbeMatch;
+import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.SnapshotSubject;
 import app.latentledger.core.settings.Settings;

@@ -1,8 +1,8 @@
 package app.latentledger.core.coil;
 
-import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.measure.FieldLimits;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.psychro.HandbookEdition;
 import app.latentledger.core.psychro.MoistAirState;
 import app.latentledger.core.psychro.Psychrometrics;

@@ -1,8 +1,8 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.measure.CoilTemperatureKind;
-import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.measure.ProbeMatch;
 

@@ -1,13 +1,13 @@
 package app.latentledger.core.visit;
 
 import app.latentledger.core.coil.AirReading;
-import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilReadings;
 import app.latentledger.core.coil.CoilResult;
-import app.latentledger.core.measure.CoilTemperatureKind;
 import app.latentledger.core.coil.Condensate;
 import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
 import app.latentledger.core.psychro.StandardAtmosphere;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.HvacSystem;

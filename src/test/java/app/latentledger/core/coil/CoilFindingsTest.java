@@ -1,8 +1,8 @@
 package app.latentledger.core.coil;
 
 import app.latentledger.core.findings.Finding;
-import app.latentledger.core.findings.Severity;
 import app.latentledger.core.findings.FindingCode;
+import app.latentledger.core.findings.Severity;
 import app.latentledger.core.findings.Threshold;
 import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.core.findings.Thresholds;

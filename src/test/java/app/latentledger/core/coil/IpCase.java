@@ -2,9 +2,9 @@ package app.latentledger.core.coil;
 
 import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.measure.AirflowPoint;
-import app.latentledger.core.measure.ProbeMatch;
 import app.latentledger.core.measure.CoilTemperatureKind;
 import app.latentledger.core.measure.HumidityKind;
+import app.latentledger.core.measure.ProbeMatch;
 import app.latentledger.core.psychro.SitePressure;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;

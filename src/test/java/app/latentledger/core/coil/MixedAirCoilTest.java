@@ -1,9 +1,9 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.findings.FindingCode;
 import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.measure.CoilTemperatureKind;
 import app.latentledger.core.measure.HumidityKind;
-import app.latentledger.core.findings.FindingCode;
 
 import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.findings.Finding;

@@ -1,8 +1,8 @@
 package app.latentledger.core.records;
 
+import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.measure.HumidityKind;
-import app.latentledger.core.InvalidInputException;
 import org.junit.jupiter.api.Test;
 
 import java.time.OffsetDateTime;

@@ -1,11 +1,11 @@
 package app.latentledger.core.visit;
 
-import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.CoilVerdict;
 import app.latentledger.core.findings.ThresholdSettings;
-import app.latentledger.core.records.Airflow;
 import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.FieldLimits;
+import app.latentledger.core.records.Airflow;
 import app.latentledger.core.records.Condensate;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Measurement;
