@@ -11,6 +11,7 @@ import app.latentledger.core.coil.UncertainInput;
 import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.findings.Evidence;
 import app.latentledger.core.findings.Finding;
+import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 
@@ -60,7 +61,7 @@ final class CoilJson {
         m.put("airflowPerMeasuredTon", shown(Quantity.AIRFLOW_PER_CAPACITY, units,
                 r.estimate(Measurand.AIRFLOW_PER_CAPACITY).valueSi()));
         m.put("shortcuts", shortcuts(ShortcutFigures.of(units, in.pressurePa(), in.airflowM3PerS(), q,
-                in.airflowBasis()), units));
+                in.airflowBasis()), units, in.airflowBasis() == AirflowBasis.STANDARD));
         m.put("apparatusDewPoint", shown(Quantity.TEMPERATURE, units, r.adp().temperatureC()));
         m.put("apparatusDewPointStatus", r.adp().status().key());
         m.put("bypassFactor", StateJson.finiteOrNull(r.estimate(Measurand.BYPASS_FACTOR).valueSi()));
@@ -88,13 +89,13 @@ final class CoilJson {
         return m;
     }
 
-    private static Map<String, Object> shortcuts(ShortcutFigures s, UnitSystem units) {
+    private static Map<String, Object> shortcuts(ShortcutFigures s, UnitSystem units, boolean standard) {
         Map<String, Object> m = new LinkedHashMap<>();
         double[] c = s.scaledConstants();
         m.put("basis", (units == UnitSystem.IP
                 ? "1.08 × cfm × Δt, 0.68 × cfm × Δgr, 4.5 × cfm × Δh, each × p/p0"
                 : "1.23 × L/s × Δt, 3010 × L/s × ΔW, 1.2 × L/s × Δh, each × p/p0")
-                + (s.pressureRatio() == 1.0 ? " (1 for standard airflow)" : ""));
+                + (standard ? " (p/p0 taken as 1: standard airflow already stands for standard air)" : ""));
         m.put("pressureRatio", s.pressureRatio());
         m.put("sensibleConstant", c[0]);
         m.put("latentConstant", c[1]);
