@@ -80,6 +80,23 @@ class CoilFindingsTest {
         }
 
         @Test
+        @DisplayName("Next checks leave out what was done: probes compared side by side, a catch already timed")
+        void nextChecksSkipWhatWasDone() {
+            CoilResult plain = IpCase.returnRh(75, 50).supplyRh(73, 53.5).cfm(1200).nominalTons(3).coilF(55).run();
+            CoilResult done = IpCase.returnRh(75, 50).supplyRh(73, 53.5).cfm(1200).nominalTons(3).coilF(55)
+                    .probes(true, 0).run();
+            List<String> before = next(plain, COIL_MARGIN_INCONCLUSIVE);
+            List<String> after = next(done, COIL_MARGIN_INCONCLUSIVE);
+            assertTrue(before.stream().anyMatch(x -> x.startsWith("Compare the two humidity probes")), before.toString());
+            assertTrue(after.stream().noneMatch(x -> x.startsWith("Compare the two humidity probes")), after.toString());
+            assertTrue(before.stream().anyMatch(x -> x.startsWith("Time a condensate catch")), before.toString());
+        }
+
+        private List<String> next(CoilResult r, FindingCode code) {
+            return r.findings().stream().filter(f -> f.code() == code).findFirst().orElseThrow().nextChecks();
+        }
+
+        @Test
         void firesWithoutAnyCoilTemperature() {
             // supply dew point 55.3 °F vs return 55.1 °F: no ADP, drop within uncertainty
             assertTrue(codes(IpCase.returnRh(75, 50).supplyDp(58, 55.3).cfm(1200).run()).contains(COIL_MARGIN_INCONCLUSIVE));
