@@ -2,6 +2,8 @@ package app.latentledger;
 
 import app.latentledger.cli.Cli;
 import app.latentledger.core.coil.Tolerances;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.settings.InstrumentTolerances;
 import app.latentledger.ui.entry.Slot;
 import com.google.gson.JsonObject;
@@ -43,6 +45,11 @@ class DefaultTolerancesTest {
                         Tolerances.DEW_POINT_K, Tolerances.COIL_K, Tolerances.AIRFLOW_FRACTION, Tolerances.CONDENSATE_FRACTION),
                 List.of(d.dryBulbK(), d.relativeHumidityPct(), d.wetBulbK(), d.dewPointK(), d.coilK(),
                         d.airflowFraction(), d.condensateFraction()));
+        for (HumidityKind k : HumidityKind.values()) {
+            assertEquals(Tolerances.humidity(k), d.humidity(k), k.key());
+        }
+        assertEquals(Tolerances.EVAPORATOR_SATURATION_K, d.coil(CoilTemperatureKind.EVAPORATOR_SATURATION));
+        assertEquals(Tolerances.COIL_K, d.coil(CoilTemperatureKind.COIL_SURFACE));
     }
 
     @Test
