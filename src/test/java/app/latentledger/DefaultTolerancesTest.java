@@ -5,7 +5,7 @@ import app.latentledger.core.coil.Tolerances;
 import app.latentledger.core.measure.CoilTemperatureKind;
 import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.settings.InstrumentTolerances;
-import app.latentledger.ui.entry.Slot;
+import app.latentledger.ui.session.Slot;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonParser;
 import org.junit.jupiter.api.DisplayName;
