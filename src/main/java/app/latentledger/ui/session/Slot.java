@@ -148,7 +148,7 @@ public enum Slot {
             case "rh" -> "RH";
             case "dew-point" -> "Dew point";
             case "coil-surface" -> "Surface probe";
-            case "evaporator-saturation" -> "Saturation (gauges)";
+            case "evaporator-saturation" -> "Evaporator saturation (gauges)";
             case "entering" -> "Return side";
             case "leaving" -> "Supply side";
             default -> choice;
@@ -161,11 +161,26 @@ public enum Slot {
             return choiceLabel(choice);
         }
         return switch (this) {
-            case COIL_TEMPERATURE -> "evaporator-saturation".equals(choice) ? "Coil (gauges)" : "Coil (probe)";
+            case COIL_TEMPERATURE -> "evaporator-saturation".equals(choice) ? "Coil (saturation)" : "Coil (probe)";
             case AIRFLOW -> "entering".equals(choice) ? "Airflow (return side)" : "Airflow (supply side)";
             case CONDENSATE_MINUTES -> "Collection time";
             default -> label;
         };
+    }
+
+    /**
+     * A line under the pad saying what the box's reading means, or "" when it needs none: a coil
+     * temperature is a surface probe or the refrigerant's saturation, never a suction-line reading.
+     */
+    public String hint(String choice) {
+        if (this != COIL_TEMPERATURE) {
+            return "";
+        }
+        return "evaporator-saturation".equals(choice)
+                ? "From the suction pressure, by a certified technician. The coil surface runs warmer than this,"
+                        + " so it can show a warm coil but not prove a cold one."
+                : "A probe on the coil fins. Not a suction-line (vapour-line) temperature: that includes the"
+                        + " superheat and makes the coil look warmer than it is.";
     }
 
     /** The box title with its choice, e.g. "Return wet bulb". */
