@@ -71,7 +71,7 @@ public final class Cli {
                 out.print(command.usage());
                 return OK;
             }
-            Args args = Args.parse(rest, Set.of("json", "help", "yes", "with-deletions", "dry-run"));
+            Args args = Args.parse(rest, Set.of("json", "help", "yes", "with-deletions", "dry-run", "same-probe"));
             return command.run(args, new CliContext(out, err, dataDir));
         } catch (UsageException e) {
             err.println("latent-ledger: " + e.getMessage());

@@ -76,7 +76,7 @@ final class LogJson {
         model.put("gamma", r.model().gamma());
         model.put("tauSeconds", r.model().tauS());
         model.put("nMaxPerHour", r.model().nMaxPerHour());
-        model.put("source", r.model().source());
+        model.put("source", r.model().source().key());
         model.put("fittedRests", r.fitRests());
         model.put("reference", "Henderson & Rengarajan 1996, ASHRAE Transactions 102(1) 266-274 (EnergyPlus form)");
         m.put("modelParameters", model);

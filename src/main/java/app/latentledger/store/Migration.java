@@ -26,6 +26,7 @@ record Migration(int version, String name, List<String> statements) {
             "V2__imported_logs.sql",
             "V3__results_snapshots_and_labels.sql",
             "V4__settings.sql",
+            "V5__airflow_basis_and_probes.sql",
             "V7__paperwork_and_recycle_bin.sql");
 
     static List<Migration> all() {

@@ -1,12 +1,19 @@
 package app.latentledger.core.cycles;
 
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.findings.Thresholds;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.psychro.InputLimits;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.psychro.Psychrometrics;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.units.Quantity;
 
+import app.latentledger.core.measure.FieldLimits;
 import java.util.ArrayList;
+import app.latentledger.core.measure.FieldLimits;
 import java.util.List;
 
 /**
@@ -14,9 +21,9 @@ import java.util.List;
  * and findings. Pure: the log arrives as a {@link LogSeries}, nothing is read or written here.
  */
 public final class RunCycleAnalysis {
-    /** Airflow accepted: 0.02–10 m³/s (≈ 42–21 000 cfm), residential and light-commercial air handlers. */
-    public static final double MIN_AIRFLOW_M3_PER_S = 0.02;
-    public static final double MAX_AIRFLOW_M3_PER_S = 10.0;
+    /** Airflow accepted: the one airflow range of {@link FieldLimits#AIRFLOW}. */
+    public static final double MIN_AIRFLOW_M3_PER_S = FieldLimits.AIRFLOW.minSi();
+    public static final double MAX_AIRFLOW_M3_PER_S = FieldLimits.AIRFLOW.maxSi();
     private static final double SENSOR_CHECK_MAX_SPLIT_K = 1.0;
     private static final int SENSOR_CHECK_MIN_SAMPLES = 5;
 

@@ -22,6 +22,8 @@ public enum FindingCode {
     LOW_LATENT_SHARE,
     INDOOR_HUMIDITY_HIGH,
     CONDENSATE_MISMATCH,
+    CAPACITY_BELOW_NAMEPLATE,
+    SUPPLY_NEAR_SATURATION,
 
     // Logged run cycles (core.cycles.CycleFindings).
     SHORT_CYCLING,

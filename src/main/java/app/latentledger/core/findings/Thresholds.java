@@ -31,11 +31,15 @@ public final class Thresholds {
             "sensible heat ratio above which the latent share is low", Quantity.DIMENSIONLESS, 0.80,
             "typical design SHR of residential equipment 0.75–0.80 (M. Holladay, Green Building Advisor, 2013);"
                     + " 0.80 as the limit is common practice, no source");
-    /** ASHRAE 62.1-2022 §5.12: indoor dew point at most 60 °F (15 °C). */
+    /**
+     * A benchmark for homes, not a limit: ASHRAE 62.1-2022 §5.12 caps the indoor dew point at 60 °F
+     * (15 °C) for mechanically cooled commercial buildings; no residential standard sets one.
+     */
     public static final Threshold INDOOR_DEW_POINT_MAX = new Threshold("indoorDewPointMax",
-            "highest indoor dew point", Quantity.TEMPERATURE,
+            "indoor dew-point benchmark for homes", Quantity.TEMPERATURE,
             Quantity.TEMPERATURE.fromDisplay(UnitSystem.IP, 60),
-            "ASHRAE Standard 62.1-2022 §5.12 (indoor dew point ≤ 60 °F / 15 °C)");
+            "ASHRAE Standard 62.1-2022 §5.12 (indoor dew point ≤ 60 °F / 15 °C in mechanically cooled"
+                    + " buildings), used for homes as a benchmark, not a limit");
     /** Keep indoor RH below 60 %. Settable: a home may aim lower. */
     public static final Threshold INDOOR_RH_TARGET = new Threshold("indoorRhTarget",
             "indoor relative humidity target", Quantity.RELATIVE_HUMIDITY, 60.0,
@@ -45,8 +49,42 @@ public final class Thresholds {
             "condensate vs air-side moisture removal: largest accepted difference", Quantity.FRACTION_PERCENT, 0.20,
             COMMON_PRACTICE);
 
+    /**
+     * The least a wet coil's surface is taken to run above the refrigerant's saturation temperature:
+     * 8 °F. Typical residential saturation 35–45 °F against an apparatus dew point of 48–54 °F at a
+     * 75 °F / 50 % return, i.e. 8–15 °F of fin and air-film resistance (common practice, no source).
+     */
+    public static final Threshold COIL_SATURATION_ALLOWANCE = new Threshold("coilSaturationAllowance",
+            "least the coil surface runs above the evaporator saturation temperature",
+            Quantity.TEMPERATURE_DIFFERENCE, 8 / 1.8,
+            COMMON_PRACTICE + " (typical saturation 35–45 °F against apparatus dew point 48–54 °F)");
+    /** Measured total below this share of the nameplate, beyond its uncertainty, is low capacity. */
+    public static final Threshold CAPACITY_BELOW_NAMEPLATE_FRACTION = new Threshold("capacityBelowNameplateFraction",
+            "share of the nameplate capacity below which a measured total counts as low",
+            Quantity.FRACTION_PERCENT, 0.75,
+            COMMON_PRACTICE + " (techs use 70–80 % of nominal near rating conditions; applied only with the"
+                    + " entering wet bulb near the 67 °F rating point of AHRI 210/240)");
+    /** Entering wet bulbs within this of the 67 °F rating point count as near rating conditions. */
+    public static final Threshold NEAR_RATING_WET_BULB_BAND = new Threshold("nearRatingWetBulbBand",
+            "entering wet-bulb distance from the 67 °F (19.4 °C) rating point still called near rating",
+            Quantity.TEMPERATURE_DIFFERENCE, 8 / 1.8,
+            "rating point 80 °F db / 67 °F wb from AHRI Standard 210/240; the ±8 °F band is " + COMMON_PRACTICE
+                    + " (capacity falls roughly 2–3 % per °F of entering wet bulb, so 75 % of nominal stays"
+                    + " below a healthy unit across it)");
+    /** A supply RH reading at or above this is likely a wetted or slow probe, not a measured state. */
+    public static final Threshold SUPPLY_NEAR_SATURATION_RH = new Threshold("supplyNearSaturationRh",
+            "supply relative humidity at which a wetted or slow probe is suspected", Quantity.RELATIVE_HUMIDITY,
+            97.0, COMMON_PRACTICE + " (capacitive RH sensors: ±3 % RH above 90 % RH, slow and unreliable near"
+                    + " saturation; a wetted sensor reads 100 %)");
+    /** A condensate catch this long or longer, on a coil that drains steadily, can stand in for the air-side latent. */
+    public static final Threshold CONDENSATE_STEADY_MIN_TIME = new Threshold("condensateSteadyMinTime",
+            "shortest condensate catch used for latent capacity", Quantity.DURATION_MINUTES, 5 * 60.0,
+            COMMON_PRACTICE + " (at ±5 s timing a 5-min catch is good to ±1.7 %)");
+
     private static final List<Threshold> COIL = List.of(COIL_HIGH_AIRFLOW_PER_TON, COIL_LOW_AIRFLOW_PER_TON,
-            COIL_HIGH_SHR, INDOOR_DEW_POINT_MAX, INDOOR_RH_TARGET, CONDENSATE_MISMATCH_FRACTION);
+            COIL_HIGH_SHR, INDOOR_DEW_POINT_MAX, INDOOR_RH_TARGET, CONDENSATE_MISMATCH_FRACTION,
+            COIL_SATURATION_ALLOWANCE, CAPACITY_BELOW_NAMEPLATE_FRACTION, NEAR_RATING_WET_BULB_BAND,
+            SUPPLY_NEAR_SATURATION_RH, CONDENSATE_STEADY_MIN_TIME);
 
     // --- logged run cycles ------------------------------------------------------------------
     // Used by app.latentledger.core.cycles. docs/methods.md §3.6 and §9.9 give the part-load latent

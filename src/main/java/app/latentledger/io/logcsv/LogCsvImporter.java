@@ -3,7 +3,7 @@ package app.latentledger.io.logcsv;
 import app.latentledger.core.cycles.Channel;
 import app.latentledger.core.cycles.LogSeries;
 import app.latentledger.core.cycles.TimeOrigin;
-import app.latentledger.core.psychro.InputLimits;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import org.apache.commons.csv.CSVFormat;
@@ -418,15 +418,16 @@ public final class LogCsvImporter {
                 }
                 if (ch.isTemperature()) {
                     si = Quantity.TEMPERATURE.fromDisplay(units, shown);
-                    if (si < InputLimits.MIN_TEMP_C || si > InputLimits.MAX_TEMP_C) {
+                    if (!FieldLimits.AIR_TEMPERATURE.accepts(si)) {
                         return String.format(Locale.ROOT, "%s %s outside %.0f to %.0f %s", quote(v),
                                 Quantity.TEMPERATURE.symbol(units),
-                                Quantity.TEMPERATURE.toDisplay(units, InputLimits.MIN_TEMP_C),
-                                Quantity.TEMPERATURE.toDisplay(units, InputLimits.MAX_TEMP_C),
+                                Quantity.TEMPERATURE.toDisplay(units, FieldLimits.AIR_TEMPERATURE.minSi()),
+                                Quantity.TEMPERATURE.toDisplay(units, FieldLimits.AIR_TEMPERATURE.maxSi()),
                                 Quantity.TEMPERATURE.symbol(units));
                     }
                 } else {
-                    if (shown < 0 || shown > 100 + RH_SATURATION_SLACK_PCT) {
+                    if (shown < FieldLimits.RELATIVE_HUMIDITY.minSi()
+                            || shown > FieldLimits.RELATIVE_HUMIDITY.maxSi() + RH_SATURATION_SLACK_PCT) {
                         return quote(v) + " % outside 0 to 100 %";
                     }
                     si = Math.min(100.0, shown);
