@@ -167,17 +167,17 @@ public final class BudgetModel implements Propagation.Model {
         double vent = kVent * (wo - wi);
         double leak = kLeak * (wa - wi);
         double gains = inf + vent + internal + leak;
-        double net = steady * rtf * lfNet;
-        double gross = net / (1 - share);
-        double removal = net + dehumidifier;
-
-        // equilibrium
+        // equilibrium: the removal line is anchored where the coil was measured (its entering air)
         final double wAttic = wa;
         final double fLeak = fb;
         final double rFactor = rtf * lfNet;
         final double anchorSteady = steady;
-        final double anchorW = wi + fLeak * (wAttic - wi);
+        final double anchorW = sys.enteringW();
         final double sl = slope;
+        double enteringNow = wi + fLeak * (wAttic - wi);
+        double net = rFactor * Math.max(0.0, anchorSteady + sl * (enteringNow - anchorW));
+        double gross = net / (1 - share);
+        double removal = net + dehumidifier;
         final double kO = kInf + kVent;
         java.util.function.DoubleUnaryOperator residual = wx -> {
             double entering = wx + fLeak * (wAttic - wx);

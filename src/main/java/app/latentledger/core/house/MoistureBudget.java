@@ -62,8 +62,24 @@ public final class MoistureBudget {
                 HouseFindings.of(in, found, fixes, rated), HouseFindings.cautions(fixes));
     }
 
-    /** The candidate fixes for this house, in the order they are shown. */
+    /**
+     * The candidate fixes for this house, in the order they are shown; a candidate that would not
+     * lower the house's net water gain (for example a balanced ERV replacing an exhaust fan in a leaky
+     * house, which adds its flow whole instead of in quadrature) is left out.
+     */
     static List<Scenario> candidates(HouseInputs in, WhatIfRequest ask, ScenarioResult found) {
+        double[] x = new BudgetModel(in, Scenario.AS_FOUND).nominal();
+        double before = new BudgetModel(in, Scenario.AS_FOUND).evaluate(x, false)[BudgetModel.Y_BALANCE];
+        List<Scenario> helpful = new ArrayList<>();
+        for (Scenario s : offered(in, ask, found)) {
+            if (new BudgetModel(in, s).evaluate(x, false)[BudgetModel.Y_BALANCE] <= before) {
+                helpful.add(s);
+            }
+        }
+        return helpful;
+    }
+
+    private static List<Scenario> offered(HouseInputs in, WhatIfRequest ask, ScenarioResult found) {
         List<Scenario> out = new ArrayList<>();
         SystemRemoval sys = in.system();
         HouseFacts f = in.facts();
