@@ -18,6 +18,7 @@ public final class Ledger implements AutoCloseable {
     private final LogRepository logs;
     private final SnapshotRepository snapshots;
     private final SettingsRepository settings;
+    private final HouseRepository houses;
 
     public Ledger(Database db) {
         this.db = db;
@@ -28,6 +29,7 @@ public final class Ledger implements AutoCloseable {
         this.logs = new LogRepository(db);
         this.snapshots = new SnapshotRepository(db);
         this.settings = new SettingsRepository(db);
+        this.houses = new HouseRepository(db);
     }
 
     /**
@@ -74,6 +76,11 @@ public final class Ledger implements AutoCloseable {
     }
 
     /** The tech's settings (units, tolerances, thresholds, theme, paper). */
+    /** House facts with each site and house readings with each visit. */
+    public HouseRepository houses() {
+        return houses;
+    }
+
     public SettingsRepository settings() {
         return settings;
     }

@@ -75,7 +75,7 @@ class MigrationsTest {
             Settings changed = Settings.DEFAULTS.withChoice("units", "si");
             ledger.settings().save(changed);
             assertEquals(changed, ledger.settings().load());
-            assertEquals(appliedSteps(ledger.database()), List.of(1, 2, 3, 4));
+            assertEquals(Migration.all().stream().map(Migration::version).toList(), appliedSteps(ledger.database()));
         }
     }
 
@@ -109,7 +109,7 @@ class MigrationsTest {
                         java.security.MessageDigest.getInstance("SHA-256").digest(in.readAllBytes())), e.getKey());
             }
         }
-        assertEquals(released.size(), Migration.FILES.size());
+        assertTrue(Migration.FILES.containsAll(released.keySet()));
     }
 
     @Test
