@@ -30,7 +30,8 @@ public final class Cli {
     /** All commands this build offers. */
     public static Cli standard() {
         return new Cli(List.of(new StateCommand(), new CoilCommand(), new LogCommand(), new VisitsCommand(),
-                new ReportCommand(), new DataCommand(), new SettingsCommand(), new ScreensCommand()));
+                new ReportCommand(), new DataCommand(), new SettingsCommand(), new ScreensCommand(),
+                new HouseCommand()));
     }
 
     public int run(List<String> words, PrintStream out, PrintStream err) {

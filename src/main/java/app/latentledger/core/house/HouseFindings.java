@@ -34,7 +34,8 @@ public final class HouseFindings {
     }
 
     static List<Finding> of(HouseInputs in, ScenarioResult found, List<ScenarioResult> fixes,
-                            DehumidifierRating.Rated rated) {
+                            DehumidifierRating.Rated rated, UnitSystem units) {
+        final Quantity day = Quantity.WATER_MASS_DAILY;
         List<Finding> out = new ArrayList<>();
         double gains = found.gains().valueSi();
         Estimate f = found.leakFraction();
@@ -43,8 +44,8 @@ public final class HouseFindings {
             out.add(new Finding(FindingCode.RETURN_LEAK, Severity.FIX,
                     "The return duct is drawing attic or crawlspace air into the system, and with it water.",
                     String.format(Locale.ROOT, "leak fraction f = %.3f ± %.3f (k = 2) from W_plenum, W_grille, W_space;"
-                                    + " threshold %.2f; brings %.1f lb/day", f.valueSi(), f.expandedSi(), fMax,
-                            lbPerDay(found.returnLeak().valueSi())),
+                                    + " threshold %.2f; brings %s", f.valueSi(), f.expandedSi(), fMax,
+                            shown(day, units, found.returnLeak())),
                     List.of(new Evidence("returnLeakFraction", "return leak fraction", Quantity.FRACTION_PERCENT,
                                     f.valueSi(), f.expandedSi()),
                             ev("returnLeakGain", "water from the return leak", found.returnLeak())),
@@ -52,13 +53,13 @@ public final class HouseFindings {
                             "Find the leak: inspect the return plenum, filter rack and duct joints with smoke",
                             "Seal with mastic or listed tape; repeat the three readings")));
         }
-        share(out, in, found.ventilation(), gains, Thresholds.VENTILATION_LOAD_SHARE,
+        share(out, in, units, found.ventilation(), gains, Thresholds.VENTILATION_LOAD_SHARE,
                 FindingCode.VENTILATION_MOISTURE_LOAD,
                 "Mechanical ventilation brings in a large share of the house's water on humid days.",
                 "ventilationGain", "water from ventilation",
                 List.of("Measure the ventilation airflow and compare it with the ASHRAE 62.2 rate",
                         "Consider an ERV or running ventilation through the air handler with dehumidification"));
-        share(out, in, found.infiltration(), gains, Thresholds.INFILTRATION_LOAD_SHARE,
+        share(out, in, units, found.infiltration(), gains, Thresholds.INFILTRATION_LOAD_SHARE,
                 FindingCode.INFILTRATION_MOISTURE_LOAD,
                 "Outdoor air leaking into the house brings in a large share of its water.",
                 "infiltrationGain", "water from air leakage",
@@ -68,13 +69,12 @@ public final class HouseFindings {
         Estimate deficit = found.deficitAtTarget();
         if (!found.hasEquilibrium() || deficit.valueSi() - nz(deficit.expandedSi()) > 0) {
             String tech = found.hasEquilibrium()
-                    ? String.format(Locale.ROOT, "equilibrium %.1f %% RH (dew point %.1f °C) above the %.0f %% target;"
-                            + " deficit at target %.1f ± %.1f lb/day", found.equilibriumRhPct().valueSi(),
-                    found.equilibriumDewPointC().valueSi(), target, lbPerDay(deficit.valueSi()),
-                    lbPerDay(nz(deficit.expandedSi())))
-                    : String.format(Locale.ROOT, "no equilibrium below saturation: gains %.1f lb/day exceed removal"
-                            + " %.1f lb/day at every indoor humidity", lbPerDay(gains),
-                    lbPerDay(found.removal().valueSi()));
+                    ? String.format(Locale.ROOT, "equilibrium %.1f %% RH (dew point %s) above the %.0f %% target;"
+                            + " gains minus removal at the target %s", found.equilibriumRhPct().valueSi(),
+                    shown(Quantity.TEMPERATURE, units, found.equilibriumDewPointC()), target,
+                    shown(day, units, deficit))
+                    : "no equilibrium below saturation: gains " + shown(day, units, found.gains())
+                    + " exceed removal " + shown(day, units, found.removal()) + " at every indoor humidity";
             out.add(new Finding(FindingCode.REMOVAL_BELOW_GAINS, found.hasEquilibrium() ? Severity.CHECK : Severity.FIX,
                     found.hasEquilibrium()
                             ? "The system removes less water than the house gains at the humidity you want."
@@ -95,10 +95,10 @@ public final class HouseFindings {
         if (needed.valueSi() - nz(needed.expandedSi()) > 0 && !anyFixHolds) {
             out.add(new Finding(FindingCode.DEHUMIDIFIER_ADVISED, Severity.CHECK,
                     "No single change to the system or house holds the humidity target; a dehumidifier would.",
-                    String.format(Locale.ROOT, "needed %.1f pints/day at the house condition; rated %.1f (DOE portable"
-                                    + " 65 °F/60 %%), %.1f (DOE whole-home 73 °F/60 %%), %.1f (80 °F/60 %%)",
-                            pints(rated.needed()), pints(rated.portable65F()), pints(rated.wholeHome73F()),
-                            pints(rated.rated80F())),
+                    "needed " + shown(Quantity.WATER_RATE_DAILY, units, new Estimate(rated.needed(), Double.NaN))
+                            + " at the house condition; rated " + pints(rated.portable65F(), units)
+                            + " (DOE portable 65 °F/60 %), " + pints(rated.wholeHome73F(), units)
+                            + " (DOE whole-home 73 °F/60 %), " + pints(rated.rated80F(), units) + " (80 °F/60 %)",
                     List.of(new Evidence("dehumidifierNeeded", "dehumidifier capacity needed",
                             Quantity.WATER_RATE_DAILY, needed.valueSi(), needed.expandedSi())),
                     List.of("Pick a unit by its rating basis (portable 65 °F or whole-home 73 °F) and round up",
@@ -124,29 +124,35 @@ public final class HouseFindings {
         return c;
     }
 
-    private static void share(List<Finding> out, HouseInputs in, Estimate term, double gains,
+    private static void share(List<Finding> out, HouseInputs in, UnitSystem units, Estimate term, double gains,
                               app.latentledger.core.findings.Threshold t, FindingCode code, String message, String key,
                               String label, List<String> next) {
         double min = in.thresholds().valueSi(t);
         if (gains > 0 && term.valueSi() > 0 && term.valueSi() >= min * gains) {
             out.add(new Finding(code, Severity.CHECK, message,
-                    String.format(Locale.ROOT, "%.1f ± %.1f lb/day of %.1f lb/day gains (%.0f %%; threshold %.0f %%)",
-                            lbPerDay(term.valueSi()), lbPerDay(nz(term.expandedSi())), lbPerDay(gains),
-                            100 * term.valueSi() / gains, 100 * min),
+                    shown(Quantity.WATER_MASS_DAILY, units, term) + " of " + shown(Quantity.WATER_MASS_DAILY, units,
+                            new Estimate(gains, Double.NaN)) + " gains (" + Math.round(100 * term.valueSi() / gains)
+                            + " %; threshold " + Math.round(100 * min) + " %)",
                     List.of(ev(key, label, term)), next));
         }
     }
 
+    /** A value with its k = 2 uncertainty in the tech's units, e.g. "52.2 ± 9.1 lb/day". */
+    static String shown(Quantity q, UnitSystem units, Estimate e) {
+        Quantity spread = q == Quantity.TEMPERATURE ? Quantity.TEMPERATURE_DIFFERENCE : q;
+        String v = String.format(Locale.ROOT, "%.1f", q.toDisplay(units, e.valueSi()));
+        if (Double.isFinite(e.expandedSi())) {
+            v += String.format(Locale.ROOT, " ± %.1f", spread.toDisplay(units, e.expandedSi()));
+        }
+        return v + " " + q.symbol(units);
+    }
+
+    private static String pints(double kgPerS, UnitSystem units) {
+        return String.format(Locale.ROOT, "%.1f", Quantity.WATER_RATE_DAILY.toDisplay(units, kgPerS));
+    }
+
     private static Evidence ev(String key, String label, Estimate e) {
         return new Evidence(key, label, Quantity.WATER_MASS_DAILY, e.valueSi(), e.expandedSi());
-    }
-
-    private static double lbPerDay(double kgPerS) {
-        return Quantity.WATER_MASS_DAILY.toDisplay(UnitSystem.IP, kgPerS);
-    }
-
-    private static double pints(double kgPerS) {
-        return Quantity.WATER_RATE_DAILY.toDisplay(UnitSystem.IP, kgPerS);
     }
 
     private static double nz(double v) {

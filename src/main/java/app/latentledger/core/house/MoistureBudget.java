@@ -44,7 +44,7 @@ public final class MoistureBudget {
     }
 
     /** The whole budget, the fixes and the findings. */
-    public static HouseBudget compute(HouseInputs in, WhatIfRequest ask) {
+    public static HouseBudget compute(HouseInputs in, WhatIfRequest ask, UnitSystem units) {
         ScenarioResult found = solve(in, Scenario.AS_FOUND);
         List<ScenarioResult> fixes = new ArrayList<>();
         for (Scenario s : candidates(in, ask, found)) {
@@ -59,7 +59,7 @@ public final class MoistureBudget {
                     + " L/day) at the house condition")));
         }
         return new HouseBudget(in, in.facts().infiltrationMethod(), found, fixes, rated,
-                HouseFindings.of(in, found, fixes, rated), HouseFindings.cautions(fixes));
+                HouseFindings.of(in, found, fixes, rated, units), HouseFindings.cautions(fixes));
     }
 
     /**
