@@ -40,14 +40,16 @@ public final class VisitReport {
                              Path output) {
         ReportData data = ReportData.load(ledger, visitId, compareVisitIdOrNull, units);
         OffsetDateTime now = OffsetDateTime.now(data.latest().visit().startedAt().getOffset());
-        return SafeFile.write(output, out -> ReportDocument.write(data, paper, now, out));
+        var house = HouseBudgets.of(ledger, data);
+        return SafeFile.write(output, out -> ReportDocument.write(data, house, paper, now, out));
     }
 
     /** As {@link #write}, into a stream (the caller owns it); for previews and tests. */
     public static void write(Ledger ledger, String visitId, String compareVisitIdOrNull, PaperSize paper, UnitSystem units,
                              OutputStream out) throws IOException {
         ReportData data = ReportData.load(ledger, visitId, compareVisitIdOrNull, units);
-        ReportDocument.write(data, paper, OffsetDateTime.now(data.latest().visit().startedAt().getOffset()), out);
+        ReportDocument.write(data, HouseBudgets.of(ledger, data), paper,
+                OffsetDateTime.now(data.latest().visit().startedAt().getOffset()), out);
     }
 
     /** Writes through a temporary file in the target folder, then moves it into place. */
