@@ -24,9 +24,9 @@ final class PlainHouseWords {
         }
         StringBuilder w = new StringBuilder();
         w.append("On a day like this visit's, the house takes in about ").append(pints(s.gains(), units))
-                .append(" of water a day, the largest part from ").append(names[largest]).append(" (")
+                .append(" of water, the largest part from ").append(names[largest]).append(" (")
                 .append(pints(terms[largest], units)).append("). The air conditioner removes about ")
-                .append(pints(s.removal(), units)).append(" a day at ")
+                .append(pints(s.removal(), units)).append(" at ")
                 .append(Numbers.fixed(100 * s.runtimeFraction().valueSi(), 0)).append(" % runtime. ");
         if (s.hasEquilibrium()) {
             boolean above = s.equilibriumRhPct().valueSi() > b.inputs().rhTargetPct();

@@ -50,7 +50,7 @@ public final class MoistureBudgetChart {
                 Quantity.TEMPERATURE_DIFFERENCE.toDisplay(units, s.equilibriumDewPointC().expandedSi()),
                 Quantity.TEMPERATURE.symbol(units), s.equilibriumRhPct().valueSi())
                 : "No equilibrium: the system cannot hold this house at any indoor humidity";
-        return new MoistureBudgetChart(bars, units, eq + "   * from memory (published presets not yet checked)");
+        return new MoistureBudgetChart(bars, units, eq + "\n* from memory (published presets not yet checked)");
     }
 
     public List<Bar> bars() {
@@ -64,7 +64,8 @@ public final class MoistureBudgetChart {
         double left = Math.min(width * 0.34, 12 * text);
         double right = width - 7 * text;
         double top = text * 2.2;
-        double bottom = height - text * 2.4;
+        String[] foot = footer.split("\n");
+        double bottom = height - text * (1.4 + 1.2 * foot.length);
         p.rect(0, 0, width, height, theme.background(), null);
         p.text(left, text * 1.3, "Water per day (" + q.symbol(units) + "; whiskers ± U, k = 2)",
                 TextStyle.of(theme.smallText(), theme.mutedText()));
@@ -110,6 +111,9 @@ public final class MoistureBudgetChart {
                 p.line(left * 0.2, yMid + rowH / 2, right, yMid + rowH / 2, Stroke.solid(theme.gridMajor(), 1));
             }
         }
-        p.text(left, height - text * 0.8, footer, TextStyle.of(theme.smallText(), theme.text()));
+        for (int i = 0; i < foot.length; i++) {
+            p.text(left * 0.2, height - text * (0.8 + 1.2 * (foot.length - 1 - i)), foot[i],
+                    TextStyle.of(theme.smallText(), i == 0 ? theme.text() : theme.mutedText()));
+        }
     }
 }
