@@ -126,9 +126,10 @@ public final class DxCoilWhatIf {
 
     /** The saturation temperature whose saturated enthalpy is {@code hJPerKg}, °C (bisection). */
     public static double saturationTemperatureC(double hJPerKg, double pressurePa) {
-        double lo = -40.0;
+        // 2⁻⁴⁰ of the 90 K bracket is below 10⁻¹⁰ K
+        double lo = -30.0;
         double hi = 60.0;
-        for (int i = 0; i < 60; i++) {
+        for (int i = 0; i < 40; i++) {
             double mid = 0.5 * (lo + hi);
             double h = SI.enthalpyJPerKg(mid, Psychrometrics.saturationHumidityRatio(mid, pressurePa));
             if (h < hJPerKg) {
