@@ -64,7 +64,8 @@ public final class HouseCommand implements Command {
                 + "            [--erv-latent-effectiveness PCT (50)]]\n"
                 + "  WEATHER  --outdoor-db T (--outdoor-rh PCT | --outdoor-dew-point T | --outdoor-wb T)\n"
                 + "           [--indoor-db T (--indoor-rh | --indoor-dew-point | --indoor-wb)] (default: the return)\n"
-                + "  RUNTIME  --runtime-fraction PCT | --log FILE [--map HEADER=field]... (read as 'log' reads it)\n"
+                + "  RUNTIME  --runtime-fraction PCT | --log FILE [--log-units ip|si] [--map HEADER=field]...\n"
+                + "           (read as 'log' reads it; --log-units: the file's temperatures, default --units)\n"
                 + "  LEAK     --grille-db --plenum-db --space-db, each with one of -rh/-dew-point/-wb:\n"
                 + "           return grille, return plenum, and the attic or crawlspace air around the duct\n"
                 + "  WHAT-IF  [--what-if-airflow CFM|L/S] [--what-if-ach50 N] [--what-if-ventilation CFM|L/S]\n"
@@ -110,6 +111,18 @@ public final class HouseCommand implements Command {
             AirReading plenum = HouseOptions.air(args, units, p, "plenum", settings.tolerances(), false);
             AirReading space = HouseOptions.air(args, units, p, "space", settings.tolerances(), false);
             String logFile = args.value("log");
+            UnitSystem logUnits = units;
+            String logUnitsText = args.value("log-units");
+            if (logUnitsText != null) {
+                try {
+                    logUnits = UnitSystem.parse(logUnitsText);
+                } catch (IllegalArgumentException e) {
+                    throw new UsageException("--log-units " + e.getMessage());
+                }
+                if (logFile == null) {
+                    throw new UsageException("--log-units needs --log FILE");
+                }
+            }
             Map<String, String> maps = LogCommand.maps(args.values("map"));
             args.rejectUnknown();
             if (logFile != null && Double.isFinite(typedRtf)) {
@@ -129,7 +142,7 @@ public final class HouseCommand implements Command {
                         + "); the budget needs a coil that removes water");
             }
             SystemRemoval system = logFile == null ? SystemRemoval.typed(coil, typedRtf)
-                    : SystemRemoval.logged(coil, analyseLog(Path.of(logFile), units, maps, p,
+                    : SystemRemoval.logged(coil, analyseLog(Path.of(logFile), logUnits, maps, p,
                     coilReadings.airflowM3PerS(), settings));
             AirReading ret = coilReadings.entering();
             AirReading house = indoor != null ? indoor : new AirReading("indoor", ret.dryBulbC(), ret.dryBulbTolK(),

@@ -11,6 +11,7 @@ import java.util.List;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
@@ -137,5 +138,30 @@ class HouseCommandTest {
         CoilCommandTest.Run table = run("house --visit " + DemoScenario.VISIT_COMPLAINT);
         assertEquals(0, table.code(), table.err());
         System.out.println(table.out());
+    }
+
+    @Test
+    void aKeptLogGivesRuntimeLatentFractionAndWhatTheBlowerPutsBack() {
+        String file = "field-data-samples/blower-left-on.csv";
+        JsonObject log = json("log " + file + " --units si --airflow 566");
+        double share = log.get("reevaporationShare").getAsDouble();
+        JsonObject j = json("house " + SYSTEM + HOUSE.replace(" --runtime-fraction 55", "") + " --log " + file
+                + " --log-units si");
+        assertEquals("log", j.get("runtimeSource").getAsString());
+        assertEquals("log", j.get("latentFractionSource").getAsString());
+        assertEquals(share, v(j, "reevaporated") / v(j, "removedDuringRuns"), 1e-9,
+                "the share the log command reports for the same file");
+        assertEquals(100 * log.get("runtimeFraction").getAsDouble(), v(j, "runtimeFraction"), 1e-6);
+        JsonObject auto = null;
+        for (var w : j.getAsJsonArray("whatIf")) {
+            if (w.getAsJsonObject().get("key").getAsString().equals("fan-auto")) {
+                auto = w.getAsJsonObject();
+            }
+        }
+        assertNotNull(auto, "blower-on rests put water back: fan AUTO is offered");
+        assertEquals(v(j, "removedDuringRuns"), v(auto, "removal"), 1e-9, "AUTO keeps what the runs removed");
+        CoilCommandTest.Run both = run("house " + SYSTEM + HOUSE + " --log " + file);
+        assertEquals(2, both.code());
+        assertTrue(both.err().contains("not both"), both.err());
     }
 }
