@@ -164,4 +164,14 @@ class HouseCommandTest {
         assertEquals(2, both.code());
         assertTrue(both.err().contains("not both"), both.err());
     }
+
+    @Test
+    void aVisitWithoutHouseFactsIsRefusedPlainly() {
+        CoilCommandTest.Run r = run("house --visit " + DemoScenario.VISIT_COMMISSIONING);
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("no house facts"), r.err());
+        CoilCommandTest.Run none = run("house --visit zzzzzz");
+        assertEquals(2, none.code());
+        assertTrue(none.err().contains("no visit"), none.err());
+    }
 }

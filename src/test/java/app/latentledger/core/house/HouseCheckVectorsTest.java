@@ -225,4 +225,39 @@ class HouseCheckVectorsTest {
         assertEquals(82.0, r.wholeHome73F(), 0.1);
         assertEquals(97.3, r.rated80F(), 0.1);
     }
+
+    /**
+     * The propagated uncertainty of f (first order over the readings, GUM §5.1.2) against the closed
+     * form u(f) = √(u_p² + (1−f)²u_g² + f²u_a²)/(W_a − W_g) with each u(W) from its own reading.
+     */
+    @Test
+    void leakUncertaintyMatchesItsClosedForm() {
+        HouseReadings r = new HouseReadings(rh("indoor", 75, 50), dp("outdoor", 85, 72), dp("grille", 75, 55.12),
+                dp("plenum", 78.25, 57.13), dp("space", 115, 74));
+        HouseInputs in = inputs(facts(), r, system(wAt(c(75), 50), 0));
+        ScenarioResult s = MoistureBudget.asFound(in);
+        double ug = uW(r.grille());
+        double up = uW(r.plenum());
+        double ua = uW(r.space());
+        double wg = w(r.grille());
+        double wa = w(r.space());
+        double f = s.leakFraction().valueSi();
+        double u = ReturnLeak.standardUncertainty(f, wg, wa, up, ug, ua);
+        assertEquals(2 * u, s.leakFraction().expandedSi(), 0.01 * 2 * u);
+    }
+
+    private static double w(app.latentledger.core.coil.AirReading a) {
+        return app.latentledger.core.coil.AirReading.humidityRatio(a.humidityKind(), P, a.dryBulbC(), a.humiditySi(),
+                false);
+    }
+
+    /** u(W) of a dew-point reading: dW/dT_dp × (half-width/√3), by a central difference. */
+    private static double uW(app.latentledger.core.coil.AirReading a) {
+        double h = 1e-4;
+        double up = app.latentledger.core.coil.AirReading.humidityRatio(a.humidityKind(), P, a.dryBulbC(),
+                a.humiditySi() + h, false);
+        double down = app.latentledger.core.coil.AirReading.humidityRatio(a.humidityKind(), P, a.dryBulbC(),
+                a.humiditySi() - h, false);
+        return (up - down) / (2 * h) * a.humidityTolSi() / Math.sqrt(3);
+    }
 }
