@@ -63,7 +63,8 @@ public final class HouseCommand implements Command {
                 + "           [--ventilation CFM|L/S --ventilation-type exhaust|supply|balanced|erv\n"
                 + "            [--erv-latent-effectiveness PCT (50)]]\n"
                 + "  WEATHER  --outdoor-db T (--outdoor-rh PCT | --outdoor-dew-point T | --outdoor-wb T)\n"
-                + "           [--indoor-db T (--indoor-rh | --indoor-dew-point | --indoor-wb)] (default: the return)\n"
+                + "           [--indoor-db T (--indoor-rh | --indoor-dew-point | --indoor-wb)]\n"
+                + "           (default: the return grille of the leak check, else the coil's return)\n"
                 + "  RUNTIME  --runtime-fraction PCT | --log FILE [--log-units ip|si] [--map HEADER=field]...\n"
                 + "           (read as 'log' reads it; --log-units: the file's temperatures, default --units)\n"
                 + "  LEAK     --grille-db --plenum-db --space-db, each with one of -rh/-dew-point/-wb:\n"
@@ -144,7 +145,8 @@ public final class HouseCommand implements Command {
             SystemRemoval system = logFile == null ? SystemRemoval.typed(coil, typedRtf)
                     : SystemRemoval.logged(coil, analyseLog(Path.of(logFile), logUnits, maps, p,
                     coilReadings.airflowM3PerS(), settings));
-            AirReading ret = coilReadings.entering();
+            // the house air: --indoor-*, else the return grille of the leak check, else the coil's return
+            AirReading ret = grille != null ? grille : coilReadings.entering();
             AirReading house = indoor != null ? indoor : new AirReading("indoor", ret.dryBulbC(), ret.dryBulbTolK(),
                     ret.humidityKind(), ret.humiditySi(), ret.humidityTolSi());
             in = new HouseInputs(facts, new HouseReadings(house, outdoor, grille, plenum, space), system, p,

@@ -16,7 +16,8 @@ import java.util.Optional;
  * A visit's house budget inputs from what is stored: the site's house facts, the visit's house
  * readings, the coil check of the visit's latest reading set labelled "after" (else its latest
  * checked set), and the runtime from the visit's first analysed log (else the typed runtime
- * fraction). The house air is the coil check's return reading.
+ * fraction). The house air is the return grille reading when there is one, else the coil check's
+ * return reading.
  *
  * @param inputs  the budget's inputs, or null when something is missing
  * @param refusal what is missing, in plain words, or "" with inputs
@@ -62,7 +63,9 @@ public record HouseEvidence(HouseInputs inputs, String refusal, String readingSe
             } else {
                 return refused("no runtime: keep a log on this visit or type the compressor runtime fraction");
             }
-            AirReading ret = coil.readings().entering();
+            // the house air: the return grille when the leak check has it (the coil's return reading may
+            // be taken in the plenum, after the leak), else the coil's return reading
+            AirReading ret = hr.grille() != null ? hr.grille() : coil.readings().entering();
             AirReading indoor = new AirReading("indoor", ret.dryBulbC(), ret.dryBulbTolK(), ret.humidityKind(),
                     ret.humiditySi(), ret.humidityTolSi());
             return new HouseEvidence(new HouseInputs(facts, hr.forBudget(indoor), system,
