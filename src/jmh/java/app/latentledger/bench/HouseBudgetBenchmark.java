@@ -51,7 +51,7 @@ public class HouseBudgetBenchmark {
     @Setup(Level.Trial)
     public void open() throws Exception {
         Path dir = Files.createTempDirectory("house-bench");
-        try (Ledger ledger = Ledger.open(dir)) {
+        try (Ledger ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO)) {
             VisitEvidence ev = VisitEvidence.load(ledger, DemoScenario.VISIT_COMPLAINT, UnitSystem.IP);
             base = HouseEvidence.of(ledger, ev, ThresholdSettings.DEFAULTS, Double.NaN).inputs();
         }

@@ -1,21 +1,17 @@
 package app.latentledger.cli;
 
+import app.latentledger.core.units.DisplayNumber;
+
 import java.util.Locale;
 
-/** Number formatting for readable tables: fixed decimals, the same on every locale. */
+/** Readable tables: numbers as the app and the report print them, labels padded, units after. */
 final class Format {
     private Format() {
     }
 
+    /** A number in display units, printed as everywhere else ({@link DisplayNumber#number}). */
     static String fixed(double v, int decimals) {
-        if (Double.isNaN(v)) {
-            return "—";
-        }
-        if (Double.isInfinite(v)) {
-            return v > 0 ? "∞" : "−∞";
-        }
-        String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
-        return s.matches("-0\\.?0*") ? s.substring(1) : s;
+        return DisplayNumber.number(v, decimals);
     }
 
     /** A table row: label padded, value right-aligned, then the unit. */

@@ -86,7 +86,7 @@ public final class HouseCommand implements Command {
         if (visitId != null) {
             args.rejectUnknown();
             DataLocation location = DataLocation.resolve(context.dataDir());
-            try (Ledger ledger = Ledger.open(location.folder())) {
+            try (Ledger ledger = Ledger.open(location.folder(), Ledger.FirstRun.SEED_DEMO)) {
                 VisitEvidence ev;
                 try {
                     ev = VisitEvidence.load(ledger, Visits.find(ledger, visitId).id(), units);

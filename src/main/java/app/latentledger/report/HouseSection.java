@@ -6,6 +6,7 @@ import app.latentledger.core.coil.Estimate;
 import app.latentledger.core.house.HouseBudget;
 import app.latentledger.core.house.InternalMoisture;
 import app.latentledger.core.house.ScenarioResult;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.report.pdf.Ink;
@@ -48,9 +49,9 @@ final class HouseSection {
             t.subheading("Fixes compared (the same budget re-solved for each)", 60);
             Table tb = new Table(new String[] {"Change", "Water gained per day (± U)", "Indoor dew point it settles at",
                     "Coil SHR"}, new double[] {2.6, 1.5, 1.5, 0.6}, new boolean[] {false, true, true, true});
-            tb.row("As found", water(s.balance()), dewPoint(s), Numbers.fixed(s.shr().valueSi(), 3));
+            tb.row("As found", water(s.balance()), dewPoint(s), DisplayNumber.number(s.shr().valueSi(), 3));
             for (ScenarioResult w : budget.whatIfs()) {
-                tb.row(w.scenario().change(), water(w.balance()), dewPoint(w), Numbers.fixed(w.shr().valueSi(), 3));
+                tb.row(w.scenario().change(), water(w.balance()), dewPoint(w), DisplayNumber.number(w.shr().valueSi(), 3));
             }
             tb.draw(t);
             t.paragraph("Water gained per day is gains minus removal at the house's present humidity (negative: the"

@@ -3,6 +3,7 @@ package app.latentledger.report;
 import app.latentledger.core.coil.Estimate;
 import app.latentledger.core.house.HouseBudget;
 import app.latentledger.core.house.ScenarioResult;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 
@@ -27,14 +28,14 @@ final class PlainHouseWords {
                 .append(" of water, the largest part from ").append(names[largest]).append(" (")
                 .append(pints(terms[largest], units)).append("). The air conditioner removes about ")
                 .append(pints(s.removal(), units)).append(" at ")
-                .append(Numbers.fixed(100 * s.runtimeFraction().valueSi(), 0)).append(" % runtime. ");
+                .append(DisplayNumber.number(100 * s.runtimeFraction().valueSi(), 0)).append(" % runtime. ");
         if (s.hasEquilibrium()) {
             boolean above = s.equilibriumRhPct().valueSi() > b.inputs().rhTargetPct();
             w.append("Left as it is, the indoor air settles where the two balance: a dew point of ")
                     .append(Numbers.estimate(Quantity.TEMPERATURE, units, s.equilibriumDewPointC())).append(", ")
-                    .append(Numbers.fixed(s.equilibriumRhPct().valueSi(), 0)).append(" % relative humidity — ")
+                    .append(DisplayNumber.number(s.equilibriumRhPct().valueSi(), 0)).append(" % relative humidity — ")
                     .append(above ? "above" : "within").append(" the ")
-                    .append(Numbers.fixed(b.inputs().rhTargetPct(), 0)).append(" % target.");
+                    .append(DisplayNumber.number(b.inputs().rhTargetPct(), 0)).append(" % target.");
         } else {
             w.append("The system cannot keep up: the indoor humidity keeps rising on days like this.");
         }
@@ -46,8 +47,8 @@ final class PlainHouseWords {
             return "Return-duct leak: not checked (needs readings at the return grille, the return plenum and the"
                     + " attic or crawlspace air around the duct).";
         }
-        return "Return-duct leak: about " + Numbers.fixed(100 * s.leakFraction().valueSi(), 0) + " ± "
-                + Numbers.fixed(100 * s.leakFraction().expandedSi(), 0) + " % of the air reaching the system comes"
+        return "Return-duct leak: about " + DisplayNumber.number(100 * s.leakFraction().valueSi(), 0) + " ± "
+                + DisplayNumber.number(100 * s.leakFraction().expandedSi(), 0) + " % of the air reaching the system comes"
                 + " from the attic or crawlspace (from the water content at the grille, in the return plenum and"
                 + " around the duct).";
     }
@@ -59,10 +60,10 @@ final class PlainHouseWords {
         }
         Quantity q = Quantity.WATER_RATE_DAILY;
         return "To hold the target without other changes a dehumidifier would remove "
-                + Numbers.withUnit(q, units, d.needed()) + " at the house's condition; shop by rating: "
-                + Numbers.withUnit(q, units, d.portable65F()) + " for a portable unit (US DOE, 65 °F / 60 %), "
-                + Numbers.withUnit(q, units, d.wholeHome73F()) + " for a whole-home unit (73 °F / 60 %), or "
-                + Numbers.withUnit(q, units, d.rated80F()) + " on the older 80 °F / 60 % rating"
+                + DisplayNumber.withUnit(q, units, d.needed()) + " at the house's condition; shop by rating: "
+                + DisplayNumber.withUnit(q, units, d.portable65F()) + " for a portable unit (US DOE, 65 °F / 60 %), "
+                + DisplayNumber.withUnit(q, units, d.wholeHome73F()) + " for a whole-home unit (73 °F / 60 %), or "
+                + DisplayNumber.withUnit(q, units, d.rated80F()) + " on the older 80 °F / 60 % rating"
                 + (d.extrapolated() ? " (the conversion is an extrapolation at this indoor temperature)" : "") + ".";
     }
 

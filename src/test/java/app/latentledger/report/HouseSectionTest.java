@@ -26,7 +26,7 @@ class HouseSectionTest {
     @Test
     void demoReportShowsTheHouseBudget() throws Exception {
         Path out = dir.resolve("house.pdf");
-        try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
+        try (Ledger ledger = Ledger.open(dir.resolve("data"), Ledger.FirstRun.SEED_DEMO)) {
             VisitReport.write(ledger, DemoScenario.VISIT_COMPLAINT, null, PaperSize.LETTER, UnitSystem.IP, out);
             HouseBudget b = HouseBudgets.of(ledger, ReportData.load(ledger, DemoScenario.VISIT_COMPLAINT, null,
                     UnitSystem.IP));
