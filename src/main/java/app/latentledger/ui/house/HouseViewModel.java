@@ -62,6 +62,11 @@ public final class HouseViewModel {
         recompute();
     }
 
+    /** The units the screen shows. */
+    public app.latentledger.core.units.UnitSystem units() {
+        return session.units();
+    }
+
     /** The open visit's stored house readings. */
     public HouseVisitReadings readings() {
         return session.visit() == null ? HouseVisitReadings.EMPTY : session.ledger().houses().readings(session.visit().id());
