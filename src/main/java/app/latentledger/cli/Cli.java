@@ -35,7 +35,9 @@ public final class Cli {
                 new ReportCommand(), new DataCommand(), new SettingsCommand(),
                 // recording from the command line
                 new SitesCommand(), new SystemsCommand(), new ReadingsCommand(), DeleteCommand.delete(),
-                DeleteCommand.restore(), new RecycleBinCommand());
+                DeleteCommand.restore(), new RecycleBinCommand(),
+                // the house around the system
+                new HouseCommand());
     }
 
     /** The display-free commands alone (tests and tools that never draw). */

@@ -107,6 +107,7 @@ public final class DemoScenario {
                     cfm(900, 0.05, "flow hood at the return grille"), null,
                     new Condensate(new Measurement(480e-6, 15e-6), new Measurement(15 * 60, 5)),
                     "Full capacity held for the test."));
+            DemoHouse.seed(ledger);
         });
     }
 

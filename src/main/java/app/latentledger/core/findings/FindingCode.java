@@ -33,7 +33,11 @@ public enum FindingCode {
     SENSOR_OFFSET,
 
     // The house's moisture budget (core.house).
-    ;
+    RETURN_LEAK,
+    VENTILATION_MOISTURE_LOAD,
+    INFILTRATION_MOISTURE_LOAD,
+    REMOVAL_BELOW_GAINS,
+    DEHUMIDIFIER_ADVISED;
 
     private final String key = name().toLowerCase(Locale.ROOT).replace('_', '-');
 

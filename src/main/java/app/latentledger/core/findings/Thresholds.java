@@ -165,9 +165,28 @@ public final class Thresholds {
     }
 
     /** All thresholds, for settings screens and the methods document. */
+    // --- the house's moisture budget (core.house) ----------------------------------------------
+
+    /** A return leak fraction above this, beyond its uncertainty, is worth sealing. */
+    public static final Threshold RETURN_LEAK_FRACTION = new Threshold("returnLeakFraction",
+            "return-duct leak fraction above which the leak is called", Quantity.FRACTION_PERCENT, 0.05,
+            COMMON_PRACTICE + " (a tight return leaks a few per cent at most)");
+    /** Ventilation bringing at least this share of the house's water gains is called out. */
+    public static final Threshold VENTILATION_LOAD_SHARE = new Threshold("ventilationLoadShare",
+            "share of the water gains from mechanical ventilation before it is called", Quantity.FRACTION_PERCENT,
+            0.25, COMMON_PRACTICE);
+    /** Infiltration bringing at least this share of the house's water gains is called out. */
+    public static final Threshold INFILTRATION_LOAD_SHARE = new Threshold("infiltrationLoadShare",
+            "share of the water gains from air leakage before it is called", Quantity.FRACTION_PERCENT, 0.25,
+            COMMON_PRACTICE);
+
+    private static final List<Threshold> HOUSE = List.of(RETURN_LEAK_FRACTION, VENTILATION_LOAD_SHARE,
+            INFILTRATION_LOAD_SHARE);
+
     public static List<Threshold> all() {
         List<Threshold> all = new ArrayList<>(COIL);
         all.addAll(LOGGED_RUN_CYCLES);
+        all.addAll(HOUSE);
         return List.copyOf(all);
     }
 }
