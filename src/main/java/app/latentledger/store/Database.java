@@ -110,7 +110,7 @@ public final class Database implements AutoCloseable {
                     + "; this build knows up to " + Migration.latestVersion() + "); update the app");
         }
         List<Migration> all = Migration.all();
-        for (Migration m : all.subList(current, Math.min(target, all.size()))) {
+        for (Migration m : all.stream().filter(x -> x.version() > current && x.version() <= target).toList()) {
             // one transaction per step: a kill mid-step leaves the previous version intact
             write(c -> {
                 try (Statement s = c.createStatement()) {

@@ -33,7 +33,7 @@ class MigrationsTest {
     Path dir;
 
     @ParameterizedTest(name = "database made at schema version {0}")
-    @ValueSource(ints = {1, 2, 3})
+    @ValueSource(ints = {1, 2, 3, 4})
     void opensADatabaseMadeByAnEarlierVersion(int version) throws Exception {
         assertTrue(version < Migration.latestVersion(), "list every earlier version here");
         Path file = dir.resolve("v" + version + ".db");
@@ -75,7 +75,10 @@ class MigrationsTest {
             Settings changed = Settings.DEFAULTS.withChoice("units", "si");
             ledger.settings().save(changed);
             assertEquals(changed, ledger.settings().load());
-            assertEquals(appliedSteps(ledger.database()), List.of(1, 2, 3, 4));
+            assertEquals(appliedSteps(ledger.database()), List.of(1, 2, 3, 4, 6));
+            if (version >= 2) {
+                assertEquals(null, ledger.logs().find("l").orElseThrow().kept(), "a log kept before V6 has no stored conditions");
+            }
         }
     }
 
@@ -102,7 +105,8 @@ class MigrationsTest {
                 "V1__sites_systems_visits_readings.sql", "00151f48aced556301847e1d4762c55fb5ac52b1b73e719d3a10623eeb57d518",
                 "V2__imported_logs.sql", "b83fdf6d6fc0db62404a6563f87aed961f82e97128605ea6d566277fce83894c",
                 "V3__results_snapshots_and_labels.sql", "22ac719e9e4eac5cc2007254d923acba9f96424c710d782779efe17e1cd33e68",
-                "V4__settings.sql", "bb110aba1a9644e2a20a56beda68be0079e63521b3164734bcf3e049cb8142d5");
+                "V4__settings.sql", "bb110aba1a9644e2a20a56beda68be0079e63521b3164734bcf3e049cb8142d5",
+                "V6__log_conditions.sql", "1696abc12866c2c22da55c21732391e8bcaa5e62f4b6ccafa998893a8ba11194");
         for (Map.Entry<String, String> e : released.entrySet()) {
             try (InputStream in = Migration.class.getResourceAsStream("migrations/" + e.getKey())) {
                 assertEquals(e.getValue(), java.util.HexFormat.of().formatHex(
