@@ -26,6 +26,13 @@ final class BlowerInference {
     static final double ACQUIRE_S = 180.0;
     static final double HOLD_S = 60.0;
     static final double TOLERATE_S = 60.0;
+    static final double SMOOTH_S = 30.0;
+    /** The plateau followed over this past window, ending {@link #FOLLOW_LAG_S} before the sample judged. */
+    static final double FOLLOW_S = 300.0;
+    static final double FOLLOW_LAG_S = 90.0;
+    static final double END_GRACE_S = 120.0;
+    /** Departure from the plateau, as a share of the band, that ends it (the mean is steadier than one sample). */
+    static final double DEPART = 0.5;
 
     private BlowerInference() {
     }
@@ -39,6 +46,9 @@ final class BlowerInference {
         if (!air.humidity || to <= from) {
             return -1;
         }
+        double[] d = smoothed(log, air, from, to);
+        // a coarse log needs a few samples before one stray reading can end the plateau
+        double tolerate = Math.max(TOLERATE_S, 3 * log.nominalIntervalS());
         double t0 = log.timeS(from);
         int start = -1;
         double ref = Double.NaN;
@@ -46,8 +56,8 @@ final class BlowerInference {
             if (i > from && log.timeS(i) - log.timeS(i - 1) > gapS) {
                 break;
             }
-            double x = d(air, i);
-            if (!Double.isNaN(x) && Math.abs(x) <= 2 * band && holds(log, air, i, to, x, 0.5 * band, gapS)) {
+            double x = d[i - from];
+            if (!Double.isNaN(x) && Math.abs(x) <= 2 * band && holds(log, d, from, i, to, x, 0.5 * band, gapS)) {
                 start = i;
                 ref = x;
                 break;
@@ -56,25 +66,44 @@ final class BlowerInference {
         if (start < 0) {
             return from;
         }
+        // the plateau may drift slowly (the coil drying, the house warming): follow it over the last
+        // minutes, so only a change as quick as a blower stopping ends it
+        double[] prefix = new double[d.length + 1];
+        int[] counts = new int[d.length + 1];
+        for (int k = 0; k < d.length; k++) {
+            prefix[k + 1] = prefix[k] + (Double.isNaN(d[k]) ? 0 : d[k]);
+            counts[k + 1] = counts[k] + (Double.isNaN(d[k]) ? 0 : 1);
+        }
         int lastIn = start;
         int i = start;
+        int lo = start;
+        int hi = start;
         for (; i < to; i++) {
             if (i > start && log.timeS(i) - log.timeS(i - 1) > gapS) {
                 break;
             }
-            double x = d(air, i);
-            if (!Double.isNaN(x) && Math.abs(x - ref) <= band) {
+            while (hi < i && log.timeS(i) - log.timeS(hi) > FOLLOW_LAG_S) {
+                hi++;
+            }
+            while (lo < hi && log.timeS(i) - log.timeS(lo) > FOLLOW_S) {
+                lo++;
+            }
+            int k = counts[hi - from] - counts[lo - from];
+            double following = k >= 3 ? (prefix[hi - from] - prefix[lo - from]) / k : ref;
+            double x = d[i - from];
+            if (!Double.isNaN(x) && Math.abs(x - following) <= DEPART * band) {
                 lastIn = i;
-            } else if (!Double.isNaN(x) && log.timeS(i) - log.timeS(lastIn) > TOLERATE_S) {
+            } else if (!Double.isNaN(x) && log.timeS(i) - log.timeS(lastIn) > tolerate) {
                 break;
             }
         }
-        if (i >= to) {
+        // a departure in the last minutes of the rest is the next run starting under a lagging probe
+        if (i >= to || log.timeS(to - 1) - log.timeS(i) <= END_GRACE_S) {
             return to;
         }
-        double plateau = plateau(air, start, lastIn);
+        double plateau = plateau(d, start - from, lastIn - from);
         int end = lastIn;
-        while (end > start && (Double.isNaN(d(air, end)) || Math.abs(d(air, end) - plateau) > 0.25 * band)) {
+        while (end > start && (Double.isNaN(d[end - from]) || Math.abs(d[end - from] - plateau) > 0.25 * band)) {
             end--;
         }
         return end + 1;
@@ -85,7 +114,8 @@ final class BlowerInference {
     }
 
     /** Within {@code tol} of {@code ref} from i for HOLD_S, with at least two samples: a plateau, not a drift. */
-    private static boolean holds(LogSeries log, AirSeries air, int i, int to, double ref, double tol, double gapS) {
+    private static boolean holds(LogSeries log, double[] d, int from, int i, int to, double ref, double tol,
+                                 double gapS) {
         double t = log.timeS(i);
         int seen = 0;
         for (int j = i; j < to; j++) {
@@ -95,7 +125,7 @@ final class BlowerInference {
             if (log.timeS(j) - t > HOLD_S) {
                 return seen >= 2;
             }
-            double x = d(air, j);
+            double x = d[j - from];
             if (Double.isNaN(x)) {
                 continue;
             }
@@ -107,15 +137,45 @@ final class BlowerInference {
         return false;
     }
 
-    private static double plateau(AirSeries air, int from, int to) {
+    private static double plateau(double[] d, int from, int to) {
         double[] v = new double[to - from + 1];
         int m = 0;
         for (int i = from; i <= to; i++) {
-            double x = d(air, i);
-            if (!Double.isNaN(x)) {
-                v[m++] = x;
+            if (!Double.isNaN(d[i])) {
+                v[m++] = d[i];
             }
         }
         return Stats.median(v, m);
+    }
+
+    /**
+     * Supply-minus-return enthalpy over [from, to), as a running mean over ±{@link #SMOOTH_S} (probe
+     * noise and a sharpened humidity reading would otherwise cross the band by chance).
+     */
+    private static double[] smoothed(LogSeries log, AirSeries air, int from, int to) {
+        int n = to - from;
+        double[] out = new double[n];
+        double sum = 0;
+        int count = 0;
+        int a = from;
+        int b = from;
+        for (int i = from; i < to; i++) {
+            while (b < to && log.timeS(b) - log.timeS(i) <= SMOOTH_S) {
+                double x = d(air, b++);
+                if (!Double.isNaN(x)) {
+                    sum += x;
+                    count++;
+                }
+            }
+            while (log.timeS(i) - log.timeS(a) > SMOOTH_S) {
+                double x = d(air, a++);
+                if (!Double.isNaN(x)) {
+                    sum -= x;
+                    count--;
+                }
+            }
+            out[i - from] = Double.isNaN(d(air, i)) || count == 0 ? Double.NaN : sum / count;
+        }
+        return out;
     }
 }

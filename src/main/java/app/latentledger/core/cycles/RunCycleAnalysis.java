@@ -74,6 +74,13 @@ public final class RunCycleAnalysis {
             found = detector.detect(log, air);
             cycles = found.cycles();
         }
+        // a supply humidity probe slower than its thermistor: take its extra lag out, then look again
+        double humidityLagS = HumidityLag.estimate(log, air, cycles, found.blower());
+        if (humidityLagS > 0) {
+            air.sharpenSupplyHumidity(log, humidityLagS, gapS);
+            found = detector.detect(log, air);
+            cycles = found.cycles();
+        }
         byte[] blower = found.blower();
         // fan-only airflow ÷ run airflow: evaporation in rests scales with the air moved then
         double restFlow = Double.isNaN(fanAirflowM3PerS) ? airflowM3PerS : fanAirflowM3PerS;
@@ -167,7 +174,8 @@ public final class RunCycleAnalysis {
                 model, (int) fit[2], share, blowerOnRests,
                 sensor[0], (int) sensor[1], corrected ? sensor[0] : 0.0, List.of(),
                 masses ? restFlow : Double.NaN, Stats.median(delays, delayed), delayed, inferred,
-                sensor[2], sensor[3], house, load, new CycleSeries(air, found.compressor(), blower, inferred));
+                sensor[2], sensor[3], house, load, new CycleSeries(air, found.compressor(), blower, inferred),
+                humidityLagS);
         return draft.withFindings(new CycleFindings(settings).find(draft));
     }
 

@@ -45,6 +45,8 @@ import java.util.List;
  * @param house                   the house's humidity over the log (null without return humidity)
  * @param loadLine                runtime against outdoor temperature (null without outdoor column or hours)
  * @param series                  the per-sample series the analysis used
+ * @param supplyHumidityLagS      the supply humidity probe's lag behind its thermistor found and taken
+ *                                out, s (0 when none was found or it could not be told)
  */
 public record RunCycleReport(int samples, double durationS, boolean compressorFromStatus, List<CycleResult> cycles,
                              double cyclesPerHour, double medianOnS, double runtimeFraction, double airflowM3PerS,
@@ -55,7 +57,7 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
                              int sensorCheckSamples, double supplyCorrectionRhPct, List<Finding> findings,
                              double fanAirflowM3PerS, double fanOffDelayMedianS, int fanOffDelayRests,
                              boolean blowerInferred, double sensorOffsetDewPointK, double sensorCheckSeconds,
-                             HouseHumidity house, LoadLine loadLine, CycleSeries series) {
+                             HouseHumidity house, LoadLine loadLine, CycleSeries series, double supplyHumidityLagS) {
     /** Why a share of returned water cannot be given. */
     public static final String NOTHING_REMOVED = "no moisture measurably removed during the runs";
     /** Why a latent fraction cannot be given. */
@@ -78,7 +80,7 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
                 steadyRemovalKgPerS, latentFractionMeasured, latentFractionPredicted, model, fitRests,
                 reevaporationShare, blowerOnRests, sensorOffsetRhPct, sensorCheckSamples, supplyCorrectionRhPct, f,
                 fanAirflowM3PerS, fanOffDelayMedianS, fanOffDelayRests, blowerInferred, sensorOffsetDewPointK,
-                sensorCheckSeconds, house, loadLine, series);
+                sensorCheckSeconds, house, loadLine, series, supplyHumidityLagS);
     }
 
     /** Returned ÷ removed, or not measurable with the reason. */
