@@ -62,6 +62,8 @@ final class IndependentLog {
         /** Air plus the moisture buffering of furnishings, as an equivalent air mass, kg. */
         double houseAirKg = 40_000;
         double returnSwingK = 0.8;
+        /** Outdoor air leaking in (and house air out), kg/s: brings the outdoor humidity ratio. */
+        double infiltrationKgPerS = 0.05;
         /** Probe lags, s. */
         double supplyTempLagS = 20;
         double supplyRhLagS = 45;
@@ -232,7 +234,8 @@ final class IndependentLog {
                 runS += 1;
                 double approach = 1 - Math.exp(-runS / c.coilTauS);
                 double targetT = tr - c.coilDropK;
-                double targetW = wr - c.coilDropW;
+                // the air leaves the coil no drier than about 95 % RH at its leaving temperature
+                double targetW = Math.min(wr, Math.max(wr - c.coilDropW, 0.95 * w(pws(targetT), p)));
                 tsTrue = tr + (targetT - tr) * approach + c.blowerHeatK;
                 wsTrue = wr + (targetW - wr) * approach;
                 double took = mdot * (wr - wsTrue);
@@ -281,7 +284,8 @@ final class IndependentLog {
             // house: moisture gain, coil removal or return when the blower moves air; slow temperature swing
             double wSupplyToHouse = fan[i] ? wsTrue : wr;
             double mflow = fan[i] ? mdot : 0;
-            double dwr = (c.moistureGainKgPerS - mflow * (wr - wSupplyToHouse)) / c.houseAirKg;
+            double dwr = (c.moistureGainKgPerS + c.infiltrationKgPerS * (c.outdoorW - wr)
+                    - mflow * (wr - wSupplyToHouse)) / c.houseAirKg;
             if (!comp[i] && !fan[i]) {
                 offGainSum += dwr;
                 offGainN++;

@@ -26,7 +26,7 @@ final class BlowerInference {
     static final double ACQUIRE_S = 180.0;
     static final double HOLD_S = 60.0;
     static final double TOLERATE_S = 60.0;
-    static final double SMOOTH_S = 30.0;
+    static final double SMOOTH_S = 20.0;
     /** The plateau followed over this past window, ending {@link #FOLLOW_LAG_S} before the sample judged. */
     static final double FOLLOW_S = 300.0;
     static final double FOLLOW_LAG_S = 90.0;
