@@ -111,7 +111,7 @@ final class LogJson {
         m.put("blowerFrom", r.blowerInferred() ? "inferred from the air" : "status column");
         m.put("fanOffDelaySeconds", finite(r.fanOffDelayMedianS()));
         m.put("fanOffDelayRests", r.fanOffDelayRests());
-        m.put("reevaporationShareText", r.reevaporation().percent("more put back than removed"));
+        m.put("reevaporationShareText", r.reevaporation().percent(RunCycleReport.NONE_RETURNED));
         m.put("latentFractionMeasuredText", r.latentMeasured().number(2, "more put back than removed"));
         m.put("sensorOffsetDewPoint", finite(Quantity.TEMPERATURE_DIFFERENCE.toDisplay(units, r.sensorOffsetDewPointK())));
         m.put("sensorCheckMinutes", r.sensorCheckSeconds() / 60.0);

@@ -87,7 +87,7 @@ final class LogTable {
                 + (Double.isNaN(r.fanAirflowM3PerS()) || r.fanAirflowM3PerS() == r.airflowM3PerS() ? ""
                 : "  (at the fan-only airflow " + Format.fixed(Quantity.AIRFLOW.toDisplay(units, r.fanAirflowM3PerS()), 0)
                 + " " + Quantity.AIRFLOW.symbol(units) + ")")));
-        b.append(Format.row("returned share", r.reevaporation().percent("more put back than removed"), ""));
+        b.append(Format.row("returned share", r.reevaporation().percent(RunCycleReport.NONE_RETURNED), ""));
         b.append(Format.row("fan-off delay", Double.isNaN(r.fanOffDelayMedianS()) ? "none found"
                 : Format.fixed(r.fanOffDelayMedianS(), 0) + " s median in " + r.fanOffDelayRests() + " rests", ""));
         b.append(Format.row("net removed per hour", Format.fixed(Quantity.WATER_RATE.toDisplay(units, r.netRemovalKgPerS()), 3),

@@ -122,7 +122,7 @@ final class TechnicalSection {
         tb.row("Steady-state removal rate", Numbers.withUnit(Quantity.WATER_RATE, units, r.steadyRemovalKgPerS()));
         tb.row("Latent fraction delivered, measured", r.latentMeasured().percent(MORE_RETURNED));
         tb.row("Latent fraction, part-load model", r.latentPredicted().percent(MORE_RETURNED));
-        tb.row("Re-evaporated share", r.reevaporation().percent(MORE_RETURNED));
+        tb.row("Re-evaporated share", r.reevaporation().percent(RunCycleReport.NONE_RETURNED));
         if (r.house() != null) {
             tb.row("House dew point, median / 95th percentile", Numbers.withUnit(Quantity.TEMPERATURE, units,
                     r.house().dewPointMedianC()) + " / " + Numbers.withUnit(Quantity.TEMPERATURE, units,

@@ -27,6 +27,8 @@ final class BlowerInference {
     static final double HOLD_S = 60.0;
     static final double TOLERATE_S = 60.0;
     static final double SMOOTH_S = 20.0;
+    /** Supply drier than the return by more than this is still air by a cold coil, not evaporation, kg/kg. */
+    static final double STILL_AIR_DRYING = 0.0008;
     /** The plateau followed over this past window, ending {@link #FOLLOW_LAG_S} before the sample judged. */
     static final double FOLLOW_S = 300.0;
     static final double FOLLOW_LAG_S = 90.0;
@@ -49,6 +51,7 @@ final class BlowerInference {
         double[] d = smoothed(log, air, from, to);
         // a coarse log needs a few samples before one stray reading can end the plateau
         double tolerate = Math.max(TOLERATE_S, 3 * log.nominalIntervalS());
+        double hold = Math.max(HOLD_S, 3 * log.nominalIntervalS());
         double t0 = log.timeS(from);
         int start = -1;
         double ref = Double.NaN;
@@ -57,7 +60,11 @@ final class BlowerInference {
                 break;
             }
             double x = d[i - from];
-            if (!Double.isNaN(x) && Math.abs(x) <= 2 * band && holds(log, d, from, i, to, x, 0.5 * band, gapS)) {
+            // moving air over the stopped coil gains water (or matches the return over a dry coil);
+            // still air next to a cold coil loses it
+            boolean gaining = air.supplyW[i] - air.returnW[i] >= -STILL_AIR_DRYING;
+            if (!Double.isNaN(x) && gaining && Math.abs(x) <= 2 * band
+                    && holds(log, d, from, i, to, x, 0.5 * band, gapS, hold)) {
                 start = i;
                 ref = x;
                 break;
@@ -115,15 +122,15 @@ final class BlowerInference {
 
     /** Within {@code tol} of {@code ref} from i for HOLD_S, with at least two samples: a plateau, not a drift. */
     private static boolean holds(LogSeries log, double[] d, int from, int i, int to, double ref, double tol,
-                                 double gapS) {
+                                 double gapS, double holdS) {
         double t = log.timeS(i);
         int seen = 0;
         for (int j = i; j < to; j++) {
             if (j > i && log.timeS(j) - log.timeS(j - 1) > gapS) {
                 return false;
             }
-            if (log.timeS(j) - t > HOLD_S) {
-                return seen >= 2;
+            if (log.timeS(j) - t > holdS) {
+                return seen >= 3;
             }
             double x = d[j - from];
             if (Double.isNaN(x)) {

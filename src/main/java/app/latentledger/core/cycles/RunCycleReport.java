@@ -60,6 +60,8 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
                              HouseHumidity house, LoadLine loadLine, CycleSeries series, double supplyHumidityLagS) {
     /** Why a share of returned water cannot be given. */
     public static final String NOTHING_REMOVED = "no moisture measurably removed during the runs";
+    /** Said of a returned share below zero: the rests took water out rather than putting it back. */
+    public static final String NONE_RETURNED = "the air left the coil drier in the rests";
     /** Why a latent fraction cannot be given. */
     public static final String NO_STEADY_RUN = "no run long and wet enough to give the steady removal rate";
 

@@ -89,7 +89,7 @@ public final class CycleLogAnalysis implements LogAnalysisService {
                 mass));
         rows.add(new Row("net-per-hour", "Net removed", Shown.of(Quantity.WATER_RATE, u, r.netRemovalKgPerS(), 3),
                 Quantity.WATER_RATE.symbol(u)));
-        rows.add(new Row("returned-share", "Share returned", r.reevaporation().percent(MORE_RETURNED), ""));
+        rows.add(new Row("returned-share", "Share returned", r.reevaporation().percent(RunCycleReport.NONE_RETURNED), ""));
         rows.add(new Row("blower-from", "Blower state from", r.blowerInferred() ? "the air (inferred)"
                 : "blower column", ""));
         rows.add(new Row("fan-off-delay", "Fan-off delay", Double.isNaN(r.fanOffDelayMedianS()) ? "none found"
