@@ -3,6 +3,7 @@ package app.latentledger.report;
 import app.latentledger.core.cycles.RunCycleReport;
 import app.latentledger.core.findings.Evidence;
 import app.latentledger.core.findings.Finding;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.report.pdf.Ink;
@@ -97,45 +98,45 @@ final class TechnicalSection {
     private Table figures(AnalysedLog l) {
         RunCycleReport r = l.report();
         Table tb = new Table(new String[] {"Logged figure", "Value"}, new double[] {1.6, 2.4}, new boolean[] {false, false});
-        tb.row("Samples", r.samples() + " over " + Numbers.fixed(r.durationS() / 3600.0, 1) + " h, every "
-                + Numbers.fixed(l.series().nominalIntervalS(), 0) + " s (median)");
+        tb.row("Samples", r.samples() + " over " + DisplayNumber.number(r.durationS() / 3600.0, 1) + " h, every "
+                + DisplayNumber.number(l.series().nominalIntervalS(), 0) + " s (median)");
         tb.row("Runs found", r.cycles().size() + (r.compressorFromStatus() ? " (timed from the compressor column)"
                 : " (inferred from the supply temperature)"));
-        tb.row("Cycles per hour", Numbers.fixed(r.cyclesPerHour(), 2));
-        tb.row("Median run time", Numbers.withUnit(Quantity.DURATION_MINUTES, units, r.medianOnS()));
-        tb.row("Run-time fraction", Numbers.withUnit(Quantity.FRACTION_PERCENT, units, r.runtimeFraction()));
+        tb.row("Cycles per hour", DisplayNumber.number(r.cyclesPerHour(), 2));
+        tb.row("Median run time", DisplayNumber.withUnit(Quantity.DURATION_MINUTES, units, r.medianOnS()));
+        tb.row("Run-time fraction", DisplayNumber.withUnit(Quantity.FRACTION_PERCENT, units, r.runtimeFraction()));
         tb.row("Airflow used for masses", Double.isFinite(r.airflowM3PerS())
-                ? Numbers.withUnit(Quantity.AIRFLOW, units, r.airflowM3PerS()) + " (" + l.airflowFrom() + ")"
+                ? DisplayNumber.withUnit(Quantity.AIRFLOW, units, r.airflowM3PerS()) + " (" + l.airflowFrom() + ")"
                 : "none: masses not worked out");
         if (Double.isFinite(r.fanAirflowM3PerS()) && r.fanAirflowM3PerS() != r.airflowM3PerS()) {
-            tb.row("Fan-only airflow used in rests", Numbers.withUnit(Quantity.AIRFLOW, units, r.fanAirflowM3PerS()));
+            tb.row("Fan-only airflow used in rests", DisplayNumber.withUnit(Quantity.AIRFLOW, units, r.fanAirflowM3PerS()));
         }
         if (!l.note().isEmpty()) {
             tb.row("Note", l.note());
         }
         tb.row("Blower state in rests", r.blowerInferred() ? "inferred from the air" : "from the blower column");
         tb.row("Fan-off delay", Double.isNaN(r.fanOffDelayMedianS()) ? "none found"
-                : Numbers.withUnit(Quantity.DURATION_MINUTES, units, r.fanOffDelayMedianS()) + " median");
-        tb.row("Water removed during runs", Numbers.withUnit(Quantity.WATER_MASS, units, r.removedKg()));
-        tb.row("Water returned in blower-on rests", Numbers.withUnit(Quantity.WATER_MASS, units, r.returnedKg()));
-        tb.row("Net removal rate over the log", Numbers.withUnit(Quantity.WATER_RATE, units, r.netRemovalKgPerS()));
-        tb.row("Steady-state removal rate", Numbers.withUnit(Quantity.WATER_RATE, units, r.steadyRemovalKgPerS()));
+                : DisplayNumber.withUnit(Quantity.DURATION_MINUTES, units, r.fanOffDelayMedianS()) + " median");
+        tb.row("Water removed during runs", DisplayNumber.withUnit(Quantity.WATER_MASS, units, r.removedKg()));
+        tb.row("Water returned in blower-on rests", DisplayNumber.withUnit(Quantity.WATER_MASS, units, r.returnedKg()));
+        tb.row("Net removal rate over the log", DisplayNumber.withUnit(Quantity.WATER_RATE, units, r.netRemovalKgPerS()));
+        tb.row("Steady-state removal rate", DisplayNumber.withUnit(Quantity.WATER_RATE, units, r.steadyRemovalKgPerS()));
         tb.row("Latent fraction delivered, measured", r.latentMeasured().percent(MORE_RETURNED));
         tb.row("Latent fraction, part-load model", r.latentPredicted().percent(MORE_RETURNED));
         tb.row("Re-evaporated share", r.reevaporation().percent(RunCycleReport.NONE_RETURNED));
         if (r.house() != null) {
-            tb.row("House dew point, median / 95th percentile", Numbers.withUnit(Quantity.TEMPERATURE, units,
-                    r.house().dewPointMedianC()) + " / " + Numbers.withUnit(Quantity.TEMPERATURE, units,
+            tb.row("House dew point, median / 95th percentile", DisplayNumber.withUnit(Quantity.TEMPERATURE, units,
+                    r.house().dewPointMedianC()) + " / " + DisplayNumber.withUnit(Quantity.TEMPERATURE, units,
                     r.house().dewPointP95C()));
-            tb.row("House RH, median / 95th percentile", Numbers.fixed(r.house().rhMedianPct(), 0) + " / "
-                    + Numbers.fixed(r.house().rhP95Pct(), 0) + " %");
+            tb.row("House RH, median / 95th percentile", DisplayNumber.number(r.house().rhMedianPct(), 0) + " / "
+                    + DisplayNumber.number(r.house().rhP95Pct(), 0) + " %");
         }
         if (r.loadLine() != null) {
-            tb.row("Runtime in the hottest logged hours", Numbers.fixed(100 * r.loadLine().hotRuntimeFraction(), 0)
-                    + " ± " + Numbers.fixed(100 * r.loadLine().hotRuntimeU(), 0) + " % over "
+            tb.row("Runtime in the hottest logged hours", DisplayNumber.number(100 * r.loadLine().hotRuntimeFraction(), 0)
+                    + " ± " + DisplayNumber.number(100 * r.loadLine().hotRuntimeU(), 0) + " % over "
                     + r.loadLine().hotHours() + " h");
         }
-        tb.row("Pressure used", Numbers.withUnit(Quantity.PRESSURE, units, l.pressurePa()));
+        tb.row("Pressure used", DisplayNumber.withUnit(Quantity.PRESSURE, units, l.pressurePa()));
         return tb;
     }
 }

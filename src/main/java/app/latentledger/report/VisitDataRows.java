@@ -11,6 +11,7 @@ import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.Timestamps;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 
@@ -190,7 +191,7 @@ final class VisitDataRows {
     private void add(String source, String id, String label, String record, String key, String name, Quantity q,
                      double si, double spreadSi, String spreadKind, String findingCode, String text) {
         double value = q == null || !Double.isFinite(si) ? Double.NaN : q.toDisplay(units, si);
-        double spread = q == null || !Double.isFinite(spreadSi) ? Double.NaN : Numbers.spread(q).toDisplay(units, spreadSi);
+        double spread = q == null || !Double.isFinite(spreadSi) ? Double.NaN : DisplayNumber.spreadQuantity(q).toDisplay(units, spreadSi);
         rows.add(new DataRow(v.visit().id(), source, id, label, record, key, name, value,
                 q == null ? "" : q.symbol(units), spread, Double.isNaN(spread) ? "" : spreadKind, findingCode, text));
     }

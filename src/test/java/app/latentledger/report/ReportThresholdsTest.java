@@ -22,7 +22,7 @@ class ReportThresholdsTest {
 
     @Test
     void storedAirflowLimitReachesTheReport(@TempDir Path dir) {
-        try (Ledger ledger = Ledger.open(dir)) {
+        try (Ledger ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO)) {
             assertFalse(afterHasHighAirflow(ledger), "default 450 cfm/ton: quiet");
             ledger.settings().save(ledger.settings().load().withTyped(Thresholds.COIL_HIGH_AIRFLOW_PER_TON.key(), 350,
                     UnitSystem.IP));

@@ -57,7 +57,7 @@ class VisitDataExportTest {
     @Test
     void csvRoundTripGivesTheCoilCheckNumbers() throws Exception {
         Path out = dir.resolve("v.csv");
-        try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
+        try (Ledger ledger = Ledger.open(dir.resolve("data"), Ledger.FirstRun.SEED_DEMO)) {
             VisitDataExport.write(ledger, DemoScenario.VISIT_COMPLAINT, VisitDataExport.Format.CSV, UnitSystem.IP, out);
             List<CSVRecord> rows = parse(Files.readString(out, StandardCharsets.UTF_8));
             var visit = ledger.visits().find(DemoScenario.VISIT_COMPLAINT).orElseThrow();
@@ -104,7 +104,7 @@ class VisitDataExportTest {
     @Test
     void jsonRoundTripGroupsTheSameRows() throws Exception {
         Path out = dir.resolve("v.json");
-        try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
+        try (Ledger ledger = Ledger.open(dir.resolve("data"), Ledger.FirstRun.SEED_DEMO)) {
             VisitDataExport.write(ledger, DemoScenario.VISIT_COMMISSIONING, VisitDataExport.Format.JSON, UnitSystem.SI, out);
             JsonObject root = JsonParser.parseString(Files.readString(out, StandardCharsets.UTF_8)).getAsJsonObject();
             assertEquals(VisitDataExport.JSON_FORMAT, root.get("format").getAsString());

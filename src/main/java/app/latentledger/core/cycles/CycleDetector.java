@@ -18,7 +18,7 @@ import java.util.List;
  * split at several kelvin after the compressor stops (evaporative cooling). Each edge is dated back
  * to where the supply began to move (within {@link Thresholds#EDGE_TOLERANCE} of its high or low),
  * and runs or rests shorter than {@link Thresholds#MIN_RUN_TIME} are merged away. Signatures after
- * latent-degradation.md §5.2 (common practice).
+ * docs/methods.md §9.9 (common practice).
  *
  * <p>Blower in the rest: from the {@code fan} column when logged; otherwise sample by sample from
  * the air, by {@link BlowerInference}: running while the supply stays on the return's enthalpy

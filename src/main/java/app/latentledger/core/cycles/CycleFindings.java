@@ -231,7 +231,7 @@ final class CycleFindings {
                 "During every run the air leaving the coil was no drier than the air entering it, so the system"
                         + " removed no moisture.",
                 String.format(Locale.ROOT, "no run kept W_return − W_supply above %.4f kg/kg for two samples;"
-                                + " %d runs, longest %.1f min; floor common practice (latent-degradation.md §5.4)",
+                                + " %d runs, longest %.1f min; floor common practice (docs/methods.md §9.9)",
                         floor, r.cycles().size(), longest / 60.0),
                 List.of(Evidence.of("longestOnTime", "longest compressor on-time", Quantity.DURATION_MINUTES, longest),
                         Evidence.of("moistureRemovalFloor", "humidity-ratio drop counted as removal",

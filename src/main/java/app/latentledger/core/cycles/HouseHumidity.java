@@ -61,20 +61,23 @@ public record HouseHumidity(double dewPointMedianC, double dewPointP95C, double 
             return null;
         }
         int n = log.size();
-        double[] dp = new double[n];
+        // dew point rises with the humidity ratio at a fixed pressure: percentiles of W are the dew
+        // point's, so the (iterative) dew point is worked out three times, not once per sample
+        double[] ws = new double[n];
         double[] rh = new double[n];
         int m = 0;
         double aboveRh = 0;
         double aboveDp = 0;
+        double wBenchmark = Psychrometrics.humidityRatio(
+                app.latentledger.core.psychro.SaturationPressure.pascals(dewPointBenchmarkC), pressurePa);
         for (int i = 0; i < n; i++) {
             double w = air.returnW[i];
             double t = air.returnDbC[i];
             if (Double.isNaN(w) || Double.isNaN(t)) {
                 continue;
             }
-            double d = Psychrometrics.dewPointC(w, pressurePa);
             double r = Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(w, pressurePa), t);
-            dp[m] = d;
+            ws[m] = w;
             rh[m++] = r;
             double dt = i + 1 < n ? log.timeS(i + 1) - log.timeS(i) : 0;
             if (dt > gapS) {
@@ -83,17 +86,20 @@ public record HouseHumidity(double dewPointMedianC, double dewPointP95C, double 
             if (r > rhTargetPct) {
                 aboveRh += dt;
             }
-            if (d > dewPointBenchmarkC) {
+            if (w > wBenchmark) {
                 aboveDp += dt;
             }
         }
         if (m == 0) {
             return null;
         }
-        double[] dps = Arrays.copyOf(dp, m);
+        double[] wSorted = Arrays.copyOf(ws, m);
         double[] rhs = Arrays.copyOf(rh, m);
-        Arrays.sort(dps);
+        Arrays.sort(wSorted);
         Arrays.sort(rhs);
+        double[] dps = {Psychrometrics.dewPointC(Stats.median(wSorted, m), pressurePa),
+            Psychrometrics.dewPointC(percentile(wSorted, 0.95), pressurePa),
+            Psychrometrics.dewPointC(wSorted[m - 1], pressurePa)};
         List<Double> slopes = new ArrayList<>();
         double offS = 0;
         int i = 0;
@@ -118,7 +124,7 @@ public record HouseHumidity(double dewPointMedianC, double dewPointP95C, double 
         }
         double[] sl = slopes.stream().mapToDouble(Double::doubleValue).toArray();
         double outdoor = outdoorDewPoint(log, pressurePa);
-        return new HouseHumidity(Stats.median(dps, m), percentile(dps, 0.95), dps[m - 1], Stats.median(rhs, m),
+        return new HouseHumidity(dps[0], dps[1], dps[2], Stats.median(rhs, m),
                 percentile(rhs, 0.95), rhs[m - 1], aboveRh / 3600.0, aboveDp / 3600.0, Stats.median(sl, sl.length),
                 sl.length, offS / 3600.0, outdoor);
     }

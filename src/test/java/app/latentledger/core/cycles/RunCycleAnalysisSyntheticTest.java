@@ -87,7 +87,7 @@ class RunCycleAnalysisSyntheticTest {
 
     @ParameterizedTest(name = "continuous blower, 20 min on / 10 min off, status columns: {0}")
     @ValueSource(booleans = {true, false})
-    @DisplayName("S4 timing (note §6.4): counts, times, and moisture integrals against the analytic integrals")
+    @DisplayName("S4 timing (reference vectors, LatentVectors.java): counts, times, and moisture integrals against the analytic integrals")
     void continuousBlowerS4(boolean status) {
         Rows rows = SyntheticLog.generate(repeated(base(Blower.CONTINUOUS, 1200, 600), 6));
         assertEquals(0, rows.cappedSamples, "generator kept the model's humidity ratio everywhere");
@@ -105,7 +105,7 @@ class RunCycleAnalysisSyntheticTest {
             // onset: ΔW_ss(1 − e^(−t/τ)) = ΔW_ss/2 at t = τ ln 2 = 31.2 s
             assertEquals(45 * Math.log(2), c.moisture().onsetS(), 1.0, "onset");
         }
-        // note §6.4 S4_2CPH_20ON_10OFF, P1: net/(ss × t_on) = 0.381, from H&R 1996 with the EnergyPlus-suggested values
+        // the reference vectors (LatentVectors.java) S4_2CPH_20ON_10OFF, P1: net/(ss × t_on) = 0.381, from H&R 1996 with the EnergyPlus-suggested values
         assertEquals(0.381, r.latentFractionMeasured(), 0.005);
         assertEquals(0.381, r.latentFractionPredicted(), 0.001);
         assertEquals("default", r.model().source());
@@ -136,7 +136,7 @@ class RunCycleAnalysisSyntheticTest {
     }
 
     @Test
-    @DisplayName("90 s fan-off delay from the fan column: returned = E(90 s) = 130.4 s of steady removal (note §6.6)")
+    @DisplayName("90 s fan-off delay from the fan column: returned = E(90 s) = 130.4 s of steady removal (reference vectors, LatentVectors.java)")
     void fanDelay() {
         Scenario s = repeated(base(Blower.DELAY, 1500, 900), 4);
         s.fanDelayS = 90;
@@ -153,7 +153,7 @@ class RunCycleAnalysisSyntheticTest {
     }
 
     @Test
-    @DisplayName("short cycling, 5 min on / 5 min off with continuous blower: note §6.4 S1 predicts no net removal")
+    @DisplayName("short cycling, 5 min on / 5 min off with continuous blower: the reference vectors (LatentVectors.java) S1 predicts no net removal")
     void shortCyclingContinuous() {
         Rows rows = SyntheticLog.generate(repeated(base(Blower.CONTINUOUS, 300, 300), 12));
         RunCycleReport r = ANALYSIS.analyse(rows.series(true), 101_325, AIRFLOW);
@@ -166,7 +166,7 @@ class RunCycleAnalysisSyntheticTest {
     }
 
     @Test
-    @DisplayName("fit recovers t_wet 1200 s and γ 1.2 from long blower-on rests that dry the coil (note §5.7)")
+    @DisplayName("fit recovers t_wet 1200 s and γ 1.2 from long blower-on rests that dry the coil (docs/methods.md §9.9)")
     void fitsModelToLongRests() {
         Scenario s = repeated(base(Blower.CONTINUOUS, 1800, 2700), 4);
         s.twetS = 1200;
