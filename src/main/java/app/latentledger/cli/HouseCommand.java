@@ -6,8 +6,6 @@ import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilReadings;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.Estimate;
-import app.latentledger.core.cycles.LogNotAnalysableException;
-import app.latentledger.core.cycles.RunCycleAnalysis;
 import app.latentledger.core.cycles.RunCycleReport;
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.house.HouseBudget;
@@ -23,17 +21,22 @@ import app.latentledger.core.psychro.SitePressure;
 import app.latentledger.core.settings.Settings;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
-import app.latentledger.io.logcsv.LogCsvImporter;
-import app.latentledger.io.logcsv.LogRefusedException;
+import app.latentledger.core.visit.LogConditions;
+import app.latentledger.io.logcsv.DateOrder;
+import app.latentledger.io.logcsv.HeaderMap;
+import app.latentledger.io.logcsv.LogImport;
 import app.latentledger.report.HouseEvidence;
 import app.latentledger.report.ReportRefusedException;
 import app.latentledger.report.VisitEvidence;
 import app.latentledger.store.DataLocation;
 import app.latentledger.store.Ledger;
+import app.latentledger.visit.LogProblem;
+import app.latentledger.visit.VisitLog;
+import app.latentledger.visit.VisitLogs;
 
 import java.io.IOException;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
@@ -124,7 +127,12 @@ public final class HouseCommand implements Command {
                     throw new UsageException("--log-units needs --log FILE");
                 }
             }
-            Map<String, String> maps = LogCommand.maps(args.values("map"));
+            Map<String, String> maps;
+            try {
+                maps = HeaderMap.parse(args.values("map"));
+            } catch (IllegalArgumentException e) {
+                throw new UsageException(e.getMessage());
+            }
             args.rejectUnknown();
             if (logFile != null && Double.isFinite(typedRtf)) {
                 throw new UsageException("give --runtime-fraction or --log, not both");
@@ -167,20 +175,30 @@ public final class HouseCommand implements Command {
      * The kept log's analysis, by the same import and analysis path (and defaults) as {@code log}.
      * One adapter, so a change to how logs are read stays here.
      */
+    /** The log read and analysed exactly as {@code log} reads it (one service: {@link VisitLogs}). */
     static RunCycleReport analyseLog(Path file, UnitSystem units, Map<String, String> maps, double pressurePa,
                                      double airflowM3PerS, Settings settings) {
+        LogImport imported;
         try {
-            var imported = new LogCsvImporter(units, maps, null).read(file);
-            return new RunCycleAnalysis(settings.thresholds()).analyse(imported.series(), pressurePa, airflowM3PerS);
-        } catch (NoSuchFileException e) {
-            throw new UsageException("no such file: " + file);
-        } catch (IOException e) {
-            throw new UsageException("cannot read " + file + ": " + e.getMessage());
-        } catch (LogRefusedException e) {
-            throw new UsageException(file + " refused: " + e.getMessage());
-        } catch (LogNotAnalysableException e) {
-            throw new UsageException(file + ": " + e.getMessage());
+            imported = VisitLogs.read(file, new VisitLogs.ReadOptions(units, maps, DateOrder.AUTO, null), null);
+        } catch (LogProblem e) {
+            throw new UsageException(e.getMessage());
         }
+        LogConditions conditions;
+        try {
+            conditions = LogConditions.checked(pressurePa, "", airflowM3PerS, "--airflow", Double.NaN);
+        } catch (InvalidInputException e) {
+            throw UnitOptions.refused(e, units, "--airflow");
+        }
+        if (conditions.refused()) {
+            throw UnitOptions.refused(conditions.refusal(), units, "--airflow");
+        }
+        VisitLog analysed = VisitLogs.analyse("", file.getFileName().toString(), imported.series(), conditions,
+                settings.thresholds(), units, imported, List.of(), "");
+        if (!analysed.analysed()) {
+            throw new UsageException(file + ": " + analysed.refusal());
+        }
+        return analysed.report();
     }
 
     static String table(HouseBudget b, UnitSystem units, String source) {

@@ -87,6 +87,9 @@ class MigrationsTest {
             ledger.recycleBin().delete(app.latentledger.core.records.RecordKind.VISIT, "v");
             ledger.recycleBin().restore(app.latentledger.core.records.RecordKind.VISIT, "v");
             assertEquals("ok", ledger.database().integrityCheck());
+            if (version >= 2) {
+                assertEquals(null, ledger.logs().find("l").orElseThrow().kept(), "a log kept before V6 has no stored conditions");
+            }
         }
     }
 
@@ -114,7 +117,11 @@ class MigrationsTest {
                 "V2__imported_logs.sql", "b83fdf6d6fc0db62404a6563f87aed961f82e97128605ea6d566277fce83894c",
                 "V3__results_snapshots_and_labels.sql", "22ac719e9e4eac5cc2007254d923acba9f96424c710d782779efe17e1cd33e68",
                 "V4__settings.sql", "bb110aba1a9644e2a20a56beda68be0079e63521b3164734bcf3e049cb8142d5",
-                "V5__airflow_basis_and_probes.sql", "4260386c78970defa1e3922918850cdec89999f0a42426b7280088ef47d8c257");
+                "V5__airflow_basis_and_probes.sql", "4260386c78970defa1e3922918850cdec89999f0a42426b7280088ef47d8c257",
+                "V6__log_conditions.sql", "1696abc12866c2c22da55c21732391e8bcaa5e62f4b6ccafa998893a8ba11194",
+                "V7__paperwork_and_recycle_bin.sql", "315109d0f711683fafeafb5c713728291c54a68b24972d8bbf7307d4102f5c4e",
+                "V9__house_facts.sql", "b265b23ce40679f4a3c3c62f270a85fb5f3c2fb6ae6b152ca5691c521b204874");
+
         for (Map.Entry<String, String> e : released.entrySet()) {
             try (InputStream in = Migration.class.getResourceAsStream("migrations/" + e.getKey())) {
                 assertEquals(e.getValue(), java.util.HexFormat.of().formatHex(

@@ -31,6 +31,9 @@ public enum FindingCode {
     OFF_CYCLE_REEVAPORATION,
     COIL_NEVER_WET,
     SENSOR_OFFSET,
+    FAN_OFF_DELAY_REEVAPORATION,
+    HUMID_WHILE_OFF,
+    OVERSIZED_FOR_LOAD,
 
     // The house's moisture budget (core.house).
     RETURN_LEAK,

@@ -156,10 +156,34 @@ public final class Thresholds {
             "sample interval, as a multiple of the log's usual interval, that counts as a gap",
             Quantity.DIMENSIONLESS, 3.0, COMMON_PRACTICE);
 
+    /** Blower-on time over a dry coil needed before the probe pair is checked (and corrected). */
+    public static final Threshold SENSOR_CHECK_MIN_TIME = new Threshold("sensorCheckMinTime",
+            "blower-on time over a dry coil needed before the humidity probes are compared",
+            Quantity.DURATION_MINUTES, 10 * 60.0, COMMON_PRACTICE + " (several probe time constants, and enough"
+                    + " samples that one gust does not decide)");
+    /** An off period at least this long shows how the house gains moisture on its own. */
+    public static final Threshold LONG_OFF_PERIOD = new Threshold("longOffPeriod",
+            "shortest compressor-off stretch used for the house's humidity trend", Quantity.DURATION_MINUTES,
+            30 * 60.0, COMMON_PRACTICE);
+    /** The house gains moisture while the unit is off when its humidity ratio rises faster than this per hour. */
+    public static final Threshold OFF_MOISTURE_GAIN = new Threshold("offMoistureGain",
+            "rise of the house's humidity ratio per hour while the unit is off that counts as gaining moisture",
+            Quantity.HUMIDITY_RATIO_FINE, 0.0002, COMMON_PRACTICE + " (0.2 g/kg, about 1.4 gr/lb, per hour: above"
+                    + " the drift of a capacitive RH probe over an hour)");
+    /** Hottest logged hours at least this warm outdoors say something about sizing. */
+    public static final Threshold HOT_OUTDOOR_MIN = new Threshold("hotOutdoorMin",
+            "outdoor temperature of the hottest logged hours needed before runtime judges the unit's size",
+            Quantity.TEMPERATURE, Quantity.TEMPERATURE.fromDisplay(UnitSystem.IP, 85), COMMON_PRACTICE);
+    /** Runtime over the hottest hours below this (beyond its uncertainty) is oversized for the house's load. */
+    public static final Threshold HOT_RUNTIME_MIN = new Threshold("hotRuntimeMin",
+            "lowest runtime fraction over the hottest logged hours for a unit sized to the house's load",
+            Quantity.FRACTION_PERCENT, 0.6, COMMON_PRACTICE + " (a unit sized to the load, e.g. within ACCA"
+                    + " Manual S's 115 % of the design cooling load, runs most of an hour near design weather)");
+
     private static final List<Threshold> LOGGED_RUN_CYCLES = List.of(CYCLES_PER_HOUR_MAX, MEDIAN_ON_TIME_MIN,
             LATENT_FRACTION_MIN, REEVAPORATION_SHARE, MOISTURE_REMOVAL_FLOOR, SENSOR_OFFSET_RH, SENSOR_CHECK_AFTER,
             LONG_CYCLE_ON_TIME, SPLIT_ON, SPLIT_OFF, SUPPLY_EDGE, EDGE_TOLERANCE, MIN_RUN_TIME, BLOWER_ENTHALPY_BAND,
-            GAP_FACTOR);
+            GAP_FACTOR, SENSOR_CHECK_MIN_TIME, LONG_OFF_PERIOD, OFF_MOISTURE_GAIN, HOT_OUTDOOR_MIN, HOT_RUNTIME_MIN);
 
     private Thresholds() {
     }
