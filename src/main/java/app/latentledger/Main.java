@@ -21,8 +21,20 @@ public final class Main {
     public static void main(String[] argv) {
         List<String> words = Arrays.asList(argv);
         if (!hasCommand(words)) {
-            LedgerApp.launchWith(argv);
+            requireDisplay("the app");
+            try {
+                LedgerApp.launchWith(argv);
+            } catch (RuntimeException e) {
+                if (!DisplayCheck.isNoDisplayFailure(e)) {
+                    throw e;
+                }
+                System.err.println(DisplayCheck.message("the app", e.getMessage()));
+                System.exit(DisplayCheck.NO_DISPLAY);
+            }
             return;
+        }
+        if ("screens".equals(commandWord(words)) && !words.contains("--help")) {
+            requireDisplay("screens");
         }
         int code = commandLine().run(words, System.out, System.err);
         System.out.flush();
@@ -36,16 +48,30 @@ public final class Main {
         return new Cli(all);
     }
 
+    /** Ends the process with one plain line when nothing can be shown here (see {@link DisplayCheck}). */
+    private static void requireDisplay(String what) {
+        DisplayCheck.missing(what, System.getProperty("os.name"), System.getenv(), System.getProperty("glass.platform"))
+                .ifPresent(line -> {
+                    System.err.println(line);
+                    System.exit(DisplayCheck.NO_DISPLAY);
+                });
+    }
+
     /** True when a command word follows the global options. */
     static boolean hasCommand(List<String> words) {
+        return commandWord(words) != null;
+    }
+
+    /** The first word after the global options (the command's name), or null. */
+    static String commandWord(List<String> words) {
         for (int i = 0; i < words.size(); i++) {
             String w = words.get(i);
             if (w.equals("--data-dir")) {
                 i++;
             } else if (!w.startsWith("--data-dir=")) {
-                return true;
+                return w;
             }
         }
-        return false;
+        return null;
     }
 }

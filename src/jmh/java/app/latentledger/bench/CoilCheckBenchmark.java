@@ -1,15 +1,16 @@
 package app.latentledger.bench;
 
 import app.latentledger.core.coil.AirReading;
-import app.latentledger.core.coil.AirflowLocation;
 import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilModel;
 import app.latentledger.core.coil.CoilReadings;
 import app.latentledger.core.coil.CoilResult;
-import app.latentledger.core.coil.HumidityKind;
 import app.latentledger.core.coil.OutdoorAir;
 import app.latentledger.core.coil.Propagation;
 import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.psychro.HandbookEdition;
 import app.latentledger.core.psychro.MoistAirState;
 import app.latentledger.core.units.UnitSystem;
@@ -35,8 +36,8 @@ public class CoilCheckBenchmark {
     private final CoilReadings readings = new CoilReadings(101_325,
             new AirReading("return", 23.8889, 0.2778, HumidityKind.RELATIVE_HUMIDITY, 50, 2),
             new AirReading("supply", 12.7778, 0.2778, HumidityKind.RELATIVE_HUMIDITY, 90, 2),
-            0.5663, 0.10, AirflowLocation.ENTERING, 7.2, 0.5556,
-            app.latentledger.core.coil.CoilTemperatureKind.COIL_SURFACE, 10_550, null);
+            0.5663, 0.10, AirflowPoint.ENTERING, 7.2, 0.5556,
+            app.latentledger.core.measure.CoilTemperatureKind.COIL_SURFACE, 10_550, null);
     /** The same readings with 20 % outdoor air at 92 °F db / 77 °F wb: 11 inputs, 23 evaluations plus the mix. */
     private final CoilReadings mixedReadings = readings.withOutdoor(new OutdoorAir(
             new AirReading("outdoor", 33.3333, 0.2778, HumidityKind.WET_BULB, 25.0, 0.2778), 0.20, 0.05));

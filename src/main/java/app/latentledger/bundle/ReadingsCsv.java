@@ -1,15 +1,17 @@
 package app.latentledger.bundle;
 
-import app.latentledger.core.records.Timestamps;
+import app.latentledger.core.measure.AirflowBasis;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
+import app.latentledger.core.measure.ProbeMatch;
 import app.latentledger.core.records.Airflow;
-import app.latentledger.core.records.AirflowPoint;
 import app.latentledger.core.records.CoilTemperature;
-import app.latentledger.core.records.CoilTemperatureKind;
 import app.latentledger.core.records.Condensate;
-import app.latentledger.core.records.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
+import app.latentledger.core.records.Timestamps;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
@@ -39,13 +41,15 @@ final class ReadingsCsv {
             "airflow_m3_per_s", "airflow_tol_m3_per_s", "airflow_point", "airflow_method",
             "station_pressure_pa", "station_pressure_tol_pa",
             "condensate_m3", "condensate_tol_m3", "condensate_s", "condensate_tol_s", "notes");
+    /** Written since schema V5; a bundle without them reads as actual airflow and independent probes. */
+    static final List<String> OPTIONAL = List.of("airflow_basis", "same_probe", "supply_dew_point_offset_k");
 
     private ReadingsCsv() {
     }
 
     static String write(List<ReadingSet> readings) throws IOException {
         StringWriter w = new StringWriter();
-        try (CSVPrinter p = new CSVPrinter(w, CSVFormat.RFC4180.builder().setHeader(HEADER.toArray(String[]::new)).get())) {
+        try (CSVPrinter p = new CSVPrinter(w, CSVFormat.RFC4180.builder().setHeader(java.util.stream.Stream.concat(HEADER.stream(), OPTIONAL.stream()).toArray(String[]::new)).get())) {
             for (ReadingSet r : readings) {
                 List<String> row = new ArrayList<>();
                 row.add(r.id());
@@ -71,6 +75,9 @@ final class ReadingsCsv {
                 measurement(row, k == null ? null : k.volume());
                 measurement(row, k == null ? null : k.seconds());
                 row.add(r.notes());
+                row.add(a == null ? AirflowBasis.ACTUAL.key() : a.basis().key());
+                row.add(r.probes().sameInstrument() ? "1" : "0");
+                row.add(Double.toString(r.probes().supplyDewPointOffsetK()));
                 p.printRecord(row);
             }
         }
@@ -116,7 +123,12 @@ final class ReadingsCsv {
                 CoilTemperatureKind.parse("coil temperature kind", coilKind), measurement(r, "coil_c", "coil_tol_k", where));
         Measurement flow = measurement(r, "airflow_m3_per_s", "airflow_tol_m3_per_s", where);
         Airflow airflow = flow == null ? null
-                : new Airflow(flow, AirflowPoint.parse("airflow point", r.get("airflow_point")), r.get("airflow_method"));
+                : new Airflow(flow, AirflowPoint.parse("airflow point", r.get("airflow_point")), r.get("airflow_method"),
+                optional(r, "airflow_basis").isEmpty() ? AirflowBasis.ACTUAL
+                        : AirflowBasis.parse("airflow basis", optional(r, "airflow_basis")));
+        String offset = optional(r, "supply_dew_point_offset_k");
+        ProbeMatch probes = new ProbeMatch("1".equals(optional(r, "same_probe")),
+                offset.isEmpty() ? 0 : number(offset, "supply_dew_point_offset_k", where));
         Measurement volume = measurement(r, "condensate_m3", "condensate_tol_m3", where);
         Measurement seconds = measurement(r, "condensate_s", "condensate_tol_s", where);
         Condensate condensate = volume == null && seconds == null ? null : new Condensate(volume, seconds);
@@ -126,7 +138,11 @@ final class ReadingsCsv {
                 measurement(r, "supply_db_c", "supply_db_tol_k", where), humidity(r, "supply", where),
                 measurement(r, "outdoor_db_c", "outdoor_db_tol_k", where), humidity(r, "outdoor", where),
                 coil, airflow, measurement(r, "station_pressure_pa", "station_pressure_tol_pa", where),
-                condensate, r.get("notes"));
+                condensate, r.get("notes"), probes);
+    }
+
+    private static String optional(CSVRecord r, String column) {
+        return r.isMapped(column) ? r.get(column) : "";
     }
 
     private static HumidityReading humidity(CSVRecord r, String prefix, String where) throws BundleException {

@@ -16,9 +16,35 @@ import java.util.Set;
 public final class Args {
     private final Map<String, List<String>> options = new LinkedHashMap<>();
     private final List<String> positionals = new ArrayList<>();
-    private final Set<String> read = new LinkedHashSet<>();
+    private final Set<String> read;
 
     private Args() {
+        read = new LinkedHashSet<>();
+    }
+
+    private Args(Set<String> sharedRead) {
+        read = sharedRead;
+    }
+
+    /**
+     * These options without the ones whose names start with any of {@code prefixes}, for a reader
+     * that must not see them (e.g. {@code house} keeps its weather {@code --outdoor-*} away from the
+     * coil options, where outdoor air means air mixed into the coil). Reading through the view counts
+     * as reading here, so {@link #rejectUnknown()} stays exact.
+     */
+    Args without(String... prefixes) {
+        Args view = new Args(read);
+        for (Map.Entry<String, List<String>> e : options.entrySet()) {
+            boolean hidden = false;
+            for (String p : prefixes) {
+                hidden |= e.getKey().startsWith(p);
+            }
+            if (!hidden) {
+                view.options.put(e.getKey(), e.getValue());
+            }
+        }
+        view.positionals.addAll(positionals);
+        return view;
     }
 
     /**

@@ -35,7 +35,9 @@ public final class Cli {
                 new ReportCommand(), new DataCommand(), new SettingsCommand(),
                 // recording from the command line
                 new SitesCommand(), new SystemsCommand(), new ReadingsCommand(), DeleteCommand.delete(),
-                DeleteCommand.restore(), new RecycleBinCommand());
+                DeleteCommand.restore(), new RecycleBinCommand(),
+                // the house around the system
+                new HouseCommand());
     }
 
     /** The display-free commands alone (tests and tools that never draw). */
@@ -71,7 +73,7 @@ public final class Cli {
                 out.print(command.usage());
                 return OK;
             }
-            Args args = Args.parse(rest, Set.of("json", "help", "yes", "with-deletions", "dry-run"));
+            Args args = Args.parse(rest, Set.of("json", "help", "yes", "with-deletions", "dry-run", "same-probe"));
             return command.run(args, new CliContext(out, err, dataDir));
         } catch (UsageException e) {
             err.println("latent-ledger: " + e.getMessage());

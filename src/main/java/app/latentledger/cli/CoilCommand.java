@@ -1,7 +1,6 @@
 package app.latentledger.cli;
 
 import app.latentledger.core.InvalidInputException;
-import app.latentledger.core.coil.AirflowLocation;
 import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilProcess;
 import app.latentledger.core.coil.CoilReadings;
@@ -13,10 +12,12 @@ import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.core.findings.Thresholds;
+import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.psychro.MoistAirState;
 import app.latentledger.core.psychro.SitePressure;
 import app.latentledger.core.settings.Settings;
 import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.Ratio;
 import app.latentledger.core.units.UnitSystem;
 
 import java.util.HashMap;
@@ -38,7 +39,9 @@ public final class CoilCommand implements Command {
     public String usage() {
         return "usage: latent-ledger coil --return-db T (--return-wb T | --return-rh PCT | --return-dew-point T)\n"
                 + "         --supply-db T (--supply-wb T | --supply-rh PCT | --supply-dew-point T) --airflow CFM|L/S\n"
-                + "         [--airflow-at return|supply] [--coil-temp T [--coil-temp-kind coil-surface|evaporator-saturation]]\n"
+                + "         [--airflow-at return|supply] [--airflow-basis actual|standard]\n"
+                + "         [--coil-temp T [--coil-temp-kind coil-surface|evaporator-saturation]]\n"
+                + "         [--same-probe] [--supply-dew-point-offset D]\n"
                 + "         [--nominal-tons TONS | --nominal-kw KW] [--condensate ML | --condensate-floz FLOZ]\n"
                 + "         [--condensate-minutes MIN] [--rh-target PCT] [--units ip|si] [--elevation FT|M | --pressure PSIA|KPA]\n"
                 + "         [--tol-db D] [--tol-rh PCT] [--tol-wb D] [--tol-dew-point D] [--tol-coil D]\n"
@@ -53,6 +56,12 @@ public final class CoilCommand implements Command {
                 + "  ±0.5 °F db and wb, ±2 %RH, ±1 °F dew point and coil, ±10 % airflow, ±2 % condensate volume)\n"
                 + "  --airflow-at: where the airflow was measured (default return; with outdoor air it is the coil's\n"
                 + "  whole airflow, read downstream of the outdoor-air intake: return|mixed = entering air, or supply);\n"
+                + "  --airflow-basis: actual (volume at the air's own state, default) or standard (cfm at 0.075 lb/ft³;\n"
+                + "  most flow hoods, flow grids and fan flowmeters report this); at 5000 ft the two differ by ~18 %\n"
+                + "  --coil-temp-kind: a suction-line temperature is refused (it includes the superheat)\n"
+                + "  --same-probe: return and supply read with one instrument, or probes compared side by side\n"
+                + "  (their offsets cancel in the humidity-ratio drop); --supply-dew-point-offset D: the supply probe's\n"
+                + "  dew point minus the return probe's in the same air (°F or K), taken off the supply reading\n"
                 + "  --condensate is in mL in both unit systems\n"
                 + "  --rh-target: indoor RH target for findings (default: the stored setting, 60 % out of the box)\n"
                 + "  --units, the elevation and every finding threshold default to the stored settings\n"
@@ -111,8 +120,9 @@ public final class CoilCommand implements Command {
                     r.leaving().humidityRatio(), units == UnitSystem.IP ? 1 : 2, units));
         }
         b.append(Format.row("airflow", Format.fixed(Quantity.AIRFLOW.toDisplay(units, r.readings().airflowM3PerS()), 0),
-                Quantity.AIRFLOW.symbol(units) + " measured at " + r.readings().airflowAt().key()
-                        + (r.mixed() && r.readings().airflowAt() == AirflowLocation.ENTERING ? " (mixed)" : "") + " air"));
+                r.readings().airflowBasis().label() + " " + Quantity.AIRFLOW.symbol(units) + " measured at "
+                        + r.readings().airflowAt().key()
+                        + (r.mixed() && r.readings().airflowAt() == AirflowPoint.ENTERING ? " (mixed)" : "") + " air"));
         b.append(Format.row("dry-air mass flow", Format.fixed(Quantity.WATER_RATE.toDisplay(units, q.massFlowKgPerS()),
                 units == UnitSystem.IP ? 0 : 1), Quantity.WATER_RATE.symbol(units)));
         b.append("Capacity\n");
@@ -122,18 +132,23 @@ public final class CoilCommand implements Command {
         b.append(Format.row("", Format.fixed(Quantity.POWER_LARGE.toDisplay(units, q.totalW()), 2),
                 Quantity.POWER_LARGE.symbol(units)));
         b.append(est("sensible heat ratio", Measurand.SHR, r, units, 3));
+        if (r.condensate() != null && r.condensate().usable()) {
+            b.append(est("latent from condensate", Measurand.LATENT_FROM_CONDENSATE, r, units, 0));
+            b.append(est("SHR from condensate", Measurand.SHR_FROM_CONDENSATE, r, units, 3));
+        }
         b.append(est("moisture removal", Measurand.MOISTURE_REMOVAL, r, units, 2));
         b.append(Format.row("", Format.fixed(Quantity.WATER_RATE_DAILY.toDisplay(units, q.moistureRemovalKgPerS()), 1),
                 Quantity.WATER_RATE_DAILY.symbol(units)));
         b.append(est("humidity-ratio drop", Measurand.HUMIDITY_RATIO_DROP, r, units, units == UnitSystem.IP ? 1 : 2));
         b.append(est("latent per airflow", Measurand.LATENT_PER_AIRFLOW, r, units, 2));
-        b.append(est("airflow per ton", Measurand.AIRFLOW_PER_CAPACITY, r, units, 0));
         if (r.readings().hasNominalCapacity()) {
-            b.append(Format.row("  of nominal", Format.fixed(
-                    Quantity.AIRFLOW_PER_CAPACITY.toDisplay(units, r.airflowPerNominalCapacity()), 0),
-                    Quantity.AIRFLOW_PER_CAPACITY.symbol(units)));
+            b.append(est("airflow per nominal ton", Measurand.AIRFLOW_PER_NOMINAL_CAPACITY, r, units, 0));
+        } else {
+            b.append("  airflow per nominal ton: " + Ratio.notMeasurable("no nameplate size given; add --nominal-tons")
+                    + "\n");
         }
-        ShortcutFigures s = ShortcutFigures.of(units, r.readings().pressurePa(), r.readings().airflowM3PerS(), q);
+        ShortcutFigures s = ShortcutFigures.of(units, r.readings().pressurePa(), r.readings().airflowM3PerS(), q,
+                r.readings().airflowBasis());
         double[] c = s.scaledConstants();
         b.append("Standard-air shortcuts (cross-check only; constants × p/p0 = ")
                 .append(Format.fixed(s.pressureRatio(), 4)).append(")\n");
@@ -155,9 +170,11 @@ public final class CoilCommand implements Command {
             b.append(est("outdoor dew point", Measurand.OUTDOOR_DEW_POINT, r, units, 1));
         }
         b.append(est(r.mixed() ? "entering (mixed) dp" : "entering dew point", Measurand.ENTERING_DEW_POINT, r, units, 1));
-        String source = CoilResult.SOURCE_MEASURED.equals(r.coilTemperatureSource())
-                ? "measured " + r.readings().coilKind().label()
-                : CoilResult.SOURCE_ADP.equals(r.coilTemperatureSource()) ? "apparatus dew point stands in" : "none";
+        String source = switch (r.coilTemperatureSource()) {
+            case MEASURED -> "measured " + r.readings().coilKind().label();
+            case APPARATUS_DEW_POINT -> "apparatus dew point, from the same two readings as the drop";
+            case NONE -> "none";
+        };
         if (Double.isFinite(r.coilTemperatureC())) {
             b.append(est("coil temperature", Measurand.COIL_TEMPERATURE, r, units, 1).replaceAll("\n$", "")
                     .concat("  (" + source + ")\n"));
@@ -220,6 +237,9 @@ public final class CoilCommand implements Command {
 
     private static String est(String label, Measurand m, CoilResult r, UnitSystem units, int decimals) {
         Estimate e = r.estimate(m);
+        if (!e.exists()) {
+            return "  " + label + ": " + Ratio.NOT_MEASURABLE + "\n";
+        }
         String u = Double.isFinite(e.expandedSi())
                 ? "± " + Format.fixed(m.uncertaintyQuantity().toDisplay(units, e.expandedSi()), decimals) : "";
         return Format.row(label, Format.fixed(m.quantity().toDisplay(units, e.valueSi()), decimals),

@@ -11,6 +11,7 @@ import app.latentledger.core.coil.UncertainInput;
 import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.findings.Evidence;
 import app.latentledger.core.findings.Finding;
+import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 
@@ -32,7 +33,7 @@ final class CoilJson {
         m.put("pressure", Quantity.PRESSURE.toDisplay(units, in.pressurePa()));
         m.put("entering", StateJson.of(r.entering(), units));
         m.put("leaving", StateJson.of(r.leaving(), units));
-        m.put("enteringSource", r.enteringSource());
+        m.put("enteringSource", r.enteringSource().key());
         m.put("return", StateJson.of(r.returnAir(), units));
         m.put("outdoor", r.mixed() ? StateJson.of(r.outdoorAir(), units) : null);
         m.put("outdoorAirFraction", r.mixed()
@@ -41,32 +42,44 @@ final class CoilJson {
                 ? Quantity.FRACTION_PERCENT.toDisplay(units, r.mix().secondMassFraction()) : null);
         m.put("airflow", Quantity.AIRFLOW.toDisplay(units, in.airflowM3PerS()));
         m.put("airflowMeasuredAt", in.airflowAt().key());
+        m.put("airflowBasis", in.airflowBasis().key());
+        m.put("sameProbe", in.probes().sameInstrument());
+        m.put("supplyDewPointOffset", Quantity.TEMPERATURE_DIFFERENCE.toDisplay(units, in.probes().supplyDewPointOffsetK()));
         m.put("massFlowDryAir", Quantity.WATER_RATE.toDisplay(units, q.massFlowKgPerS()));
         m.put("sensible", Quantity.POWER.toDisplay(units, q.sensibleW()));
         m.put("latent", Quantity.POWER.toDisplay(units, q.latentW()));
         m.put("total", Quantity.POWER.toDisplay(units, q.totalW()));
         m.put(units == UnitSystem.IP ? "totalTons" : "totalKw", Quantity.POWER_LARGE.toDisplay(units, q.totalW()));
-        m.put("shr", StateJson.finiteOrNull(q.sensibleHeatRatio()));
+        m.put("shr", StateJson.finiteOrNull(r.estimate(Measurand.SHR).valueSi()));
         m.put("moistureRemoval", Quantity.WATER_RATE.toDisplay(units, q.moistureRemovalKgPerS()));
         m.put("moistureRemovalDaily", Quantity.WATER_RATE_DAILY.toDisplay(units, q.moistureRemovalKgPerS()));
         m.put("humidityRatioDrop", Quantity.HUMIDITY_RATIO_FINE.toDisplay(units, q.humidityRatioDrop()));
         m.put("latentPerAirflow", Quantity.POWER_PER_AIRFLOW.toDisplay(units, q.latentPerAirflow()));
-        m.put("airflowPerTon", shown(Quantity.AIRFLOW_PER_CAPACITY, units, q.airflowPerCapacity()));
-        m.put("airflowPerNominalTon", shown(Quantity.AIRFLOW_PER_CAPACITY, units, r.airflowPerNominalCapacity()));
-        m.put("shortcuts", shortcuts(ShortcutFigures.of(units, in.pressurePa(), in.airflowM3PerS(), q), units));
+        // per NOMINAL ton (null without a nameplate); per measured ton kept under its own name for reference
+        m.put("airflowPerTon", shown(Quantity.AIRFLOW_PER_CAPACITY, units,
+                r.estimate(Measurand.AIRFLOW_PER_NOMINAL_CAPACITY).valueSi()));
+        m.put("airflowPerMeasuredTon", shown(Quantity.AIRFLOW_PER_CAPACITY, units,
+                r.estimate(Measurand.AIRFLOW_PER_CAPACITY).valueSi()));
+        m.put("shortcuts", shortcuts(ShortcutFigures.of(units, in.pressurePa(), in.airflowM3PerS(), q,
+                in.airflowBasis()), units, in.airflowBasis() == AirflowBasis.STANDARD));
         m.put("apparatusDewPoint", shown(Quantity.TEMPERATURE, units, r.adp().temperatureC()));
         m.put("apparatusDewPointStatus", r.adp().status().key());
-        m.put("bypassFactor", StateJson.finiteOrNull(r.adp().bypassFactor()));
+        m.put("bypassFactor", StateJson.finiteOrNull(r.estimate(Measurand.BYPASS_FACTOR).valueSi()));
         m.put("enteringDewPoint", shown(Quantity.TEMPERATURE, units, r.estimate(Measurand.ENTERING_DEW_POINT).valueSi()));
         m.put("leavingDewPoint", shown(Quantity.TEMPERATURE, units, r.estimate(Measurand.LEAVING_DEW_POINT).valueSi()));
         m.put("coilTemperature", shown(Quantity.TEMPERATURE, units, r.coilTemperatureC()));
-        m.put("coilTemperatureSource", r.coilTemperatureSource());
+        m.put("coilTemperatureSource", r.coilTemperatureSource().key());
         m.put("coilTemperatureKind", in.hasCoilTemperature() ? in.coilKind().key() : null);
         m.put("dewPointMargin", shown(Quantity.TEMPERATURE_DIFFERENCE, units,
                 r.estimate(Measurand.DEW_POINT_MARGIN).valueSi()));
         m.put("verdict", r.verdict().key());
         m.put("uncertainty", uncertainty(r, units));
         m.put("condensate", condensate(r.condensate(), units));
+        boolean fromCatch = r.condensate() != null && r.condensate().usable();
+        m.put("latentFromCondensate", fromCatch
+                ? shown(Quantity.POWER, units, r.estimate(Measurand.LATENT_FROM_CONDENSATE).valueSi()) : null);
+        m.put("shrFromCondensate", fromCatch
+                ? StateJson.finiteOrNull(r.estimate(Measurand.SHR_FROM_CONDENSATE).valueSi()) : null);
         List<Object> findings = new ArrayList<>();
         for (Finding f : r.findings()) {
             findings.add(finding(f, units));
@@ -76,12 +89,13 @@ final class CoilJson {
         return m;
     }
 
-    private static Map<String, Object> shortcuts(ShortcutFigures s, UnitSystem units) {
+    private static Map<String, Object> shortcuts(ShortcutFigures s, UnitSystem units, boolean standard) {
         Map<String, Object> m = new LinkedHashMap<>();
         double[] c = s.scaledConstants();
-        m.put("basis", units == UnitSystem.IP
+        m.put("basis", (units == UnitSystem.IP
                 ? "1.08 × cfm × Δt, 0.68 × cfm × Δgr, 4.5 × cfm × Δh, each × p/p0"
-                : "1.23 × L/s × Δt, 3010 × L/s × ΔW, 1.2 × L/s × Δh, each × p/p0");
+                : "1.23 × L/s × Δt, 3010 × L/s × ΔW, 1.2 × L/s × Δh, each × p/p0")
+                + (standard ? " (p/p0 taken as 1: standard airflow already stands for standard air)" : ""));
         m.put("pressureRatio", s.pressureRatio());
         m.put("sensibleConstant", c[0]);
         m.put("latentConstant", c[1]);
@@ -96,7 +110,9 @@ final class CoilJson {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("coverageFactor", 2);
         m.put("method", "first-order GUM (JCGM 100:2008), numerical sensitivity coefficients,"
-                + " rectangular instrument tolerances, independent probes");
+                + " rectangular instrument tolerances, "
+                + (r.readings().probes().sameInstrument() ? "return and supply probes correlated (one instrument)"
+                        : "independent probes"));
         for (Measurand x : Measurand.values()) {
             Estimate e = r.estimate(x);
             if (e.exists()) {
@@ -125,6 +141,8 @@ final class CoilJson {
         m.put("difference", Quantity.WATER_RATE.toDisplay(units, c.difference().valueSi()));
         m.put("differenceUncertainty", shown(Quantity.WATER_RATE, units, c.difference().expandedSi()));
         m.put("relativeDifference", StateJson.finiteOrNull(c.relativeDifference()));
+        m.put("steady", c.steady());
+        m.put("moreCertainThanAirside", c.moreCertain());
         return m;
     }
 

@@ -2,13 +2,16 @@ package app.latentledger.cli;
 
 import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.coil.AirReading;
-import app.latentledger.core.coil.AirflowLocation;
 import app.latentledger.core.coil.CoilReadings;
-import app.latentledger.core.coil.CoilTemperatureKind;
 import app.latentledger.core.coil.Condensate;
-import app.latentledger.core.coil.HumidityKind;
 import app.latentledger.core.coil.OutdoorAir;
 import app.latentledger.core.coil.Tolerances;
+import app.latentledger.core.measure.AirflowBasis;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
+import app.latentledger.core.measure.InvalidChoiceException;
+import app.latentledger.core.measure.ProbeMatch;
 import app.latentledger.core.psychro.HandbookEdition;
 import app.latentledger.core.psychro.SitePressure;
 import app.latentledger.core.settings.InstrumentTolerances;
@@ -65,27 +68,37 @@ final class CoilOptions {
         }
         double airflowTol = tolerance(args, "tol-airflow-pct", Quantity.RELATIVE_HUMIDITY, units,
                 defaults.airflowFraction() * 100) / 100.0;
-        AirflowLocation at = airflowAt(args.value("airflow-at"));
+        AirflowPoint at = airflowAt(args.value("airflow-at"));
+        AirflowBasis basis;
+        try {
+            String basisText = args.value("airflow-basis");
+            basis = basisText == null ? AirflowBasis.ACTUAL : AirflowBasis.parse("--airflow-basis", basisText);
+        } catch (InvalidChoiceException e) {
+            throw new UsageException(e.getMessage());
+        }
+        ProbeMatch probes = probes(args, units);
 
         Double coil = UnitOptions.si(args, "coil-temp", Quantity.TEMPERATURE, units);
-        double coilTol = tolerance(args, "tol-coil", Quantity.TEMPERATURE_DIFFERENCE, units, defaults.coilK());
         String kindText = args.value("coil-temp-kind");
         CoilTemperatureKind coilKind = null;
         if (coil != null) {
             try {
-                coilKind = kindText == null ? CoilTemperatureKind.COIL_SURFACE : CoilTemperatureKind.parse(kindText);
-            } catch (IllegalArgumentException e) {
-                throw new UsageException("--coil-temp-kind: " + e.getMessage());
+                coilKind = kindText == null ? CoilTemperatureKind.COIL_SURFACE
+                        : CoilTemperatureKind.parse("--coil-temp-kind", kindText);
+            } catch (InvalidChoiceException e) {
+                throw new UsageException(e.getMessage());
             }
         } else if (kindText != null) {
             throw new UsageException("--coil-temp-kind needs --coil-temp");
         }
+        double coilTol = tolerance(args, "tol-coil", Quantity.TEMPERATURE_DIFFERENCE, units,
+                coilKind == null ? defaults.coilK() : Tolerances.coil(coilKind, defaults.coilK()));
 
         double nominal = nominalW(args);
         Condensate condensate = condensate(args, units, defaults.condensateFraction());
         try {
             return new CoilReadings(p, entering, leaving, airflow, airflowTol, at,
-                    coil == null ? Double.NaN : coil, coilTol, coilKind, nominal, condensate, outdoor);
+                    coil == null ? Double.NaN : coil, coilTol, coilKind, nominal, condensate, outdoor, basis, probes);
         } catch (InvalidInputException e) {
             String option = optionFor(e.field());
             if ("--nominal-tons".equals(option) && args.has("nominal-kw")) {
@@ -116,8 +129,12 @@ final class CoilOptions {
         HumidityKind kind = HUMIDITY.get(given.get(0));
         double value = kind == HumidityKind.RELATIVE_HUMIDITY ? args.number(option)
                 : UnitOptions.si(args, option, Quantity.TEMPERATURE, units);
+        double tol = tolHumidity.get(kind);
+        if (kind == HumidityKind.RELATIVE_HUMIDITY && !args.has("tol-rh")) {
+            tol = Tolerances.relativeHumidityPct(value, tol); // ±3 % RH outside 10–90 % RH
+        }
         try {
-            AirReading r = new AirReading(where, db, tolDb, kind, value, tolHumidity.get(kind));
+            AirReading r = new AirReading(where, db, tolDb, kind, value, tol);
             r.state(p, HandbookEdition.SI); // refuse an impossible reading here, naming its option
             return r;
         } catch (InvalidInputException e) {
@@ -163,6 +180,18 @@ final class CoilOptions {
         }
     }
 
+    /** {@code --same-probe} and {@code --supply-dew-point-offset D} (°F or K, supply minus return). */
+    private static ProbeMatch probes(Args args, UnitSystem units) {
+        boolean same = args.flag("same-probe");
+        Double offset = args.number("supply-dew-point-offset");
+        double offsetSi = offset == null ? 0 : Quantity.TEMPERATURE_DIFFERENCE.fromDisplay(units, offset);
+        try {
+            return new ProbeMatch(same, offsetSi);
+        } catch (InvalidInputException e) {
+            throw UnitOptions.refused(e, units, "--supply-dew-point-offset");
+        }
+    }
+
     private static double tolerance(Args args, String option, Quantity q, UnitSystem units, double defaultSi) {
         Double v = args.number(option);
         if (v == null) {
@@ -174,13 +203,13 @@ final class CoilOptions {
         return q.fromDisplay(units, v);
     }
 
-    private static AirflowLocation airflowAt(String text) {
+    private static AirflowPoint airflowAt(String text) {
         if (text == null || text.equalsIgnoreCase("return") || text.equalsIgnoreCase("entering")
                 || text.equalsIgnoreCase("mixed")) {
-            return AirflowLocation.ENTERING;
+            return AirflowPoint.ENTERING;
         }
         if (text.equalsIgnoreCase("supply") || text.equalsIgnoreCase("leaving")) {
-            return AirflowLocation.LEAVING;
+            return AirflowPoint.LEAVING;
         }
         throw new UsageException("--airflow-at '" + text + "' not understood; accepted: return (or mixed), supply");
     }

@@ -3,9 +3,13 @@ package app.latentledger.cli;
 import app.latentledger.core.units.DisplayNumber;
 
 import java.util.Locale;
+import java.util.regex.Pattern;
 
 /** Readable tables: numbers as the app and the report print them, labels padded, units after. */
 final class Format {
+    /** Spaces left at the end of a row whose unit is empty. */
+    private static final Pattern TRAILING_SPACES = Pattern.compile(" +\n$");
+
     private Format() {
     }
 
@@ -16,6 +20,7 @@ final class Format {
 
     /** A table row: label padded, value right-aligned, then the unit. */
     static String row(String label, String value, String unit) {
-        return String.format(Locale.ROOT, "  %-22s %12s %s%n", label, value, unit).replaceAll(" +\n$", "\n");
+        String row = String.format(Locale.ROOT, "  %-22s %12s %s%n", label, value, unit);
+        return TRAILING_SPACES.matcher(row).replaceAll("\n");
     }
 }

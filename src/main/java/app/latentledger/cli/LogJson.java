@@ -76,7 +76,7 @@ final class LogJson {
         model.put("gamma", r.model().gamma());
         model.put("tauSeconds", r.model().tauS());
         model.put("nMaxPerHour", r.model().nMaxPerHour());
-        model.put("source", r.model().source());
+        model.put("source", r.model().source().key());
         model.put("fittedRests", r.fitRests());
         model.put("reference", "Henderson & Rengarajan 1996, ASHRAE Transactions 102(1) 266-274 (EnergyPlus form)");
         m.put("modelParameters", model);
@@ -101,7 +101,22 @@ final class LogJson {
         imp.put("gaps", rep.gaps());
         imp.put("longestGapSeconds", rep.longestGapS());
         imp.put("irregularIntervals", rep.irregularIntervals());
+        imp.put("temperatureUnit", Quantity.TEMPERATURE.symbol(rep.temperatureUnit()));
+        imp.put("temperatureUnitFrom", rep.unitFromHeader() ? "header" : "settings");
+        imp.put("dateOrder", rep.dateOrder() == null ? null : rep.dateOrder().key());
+        imp.put("timeZone", rep.timeZone().isEmpty() ? null : rep.timeZone());
         m.put("import", imp);
+        // added with blower-state inference, fan-only airflow, the house's humidity and the load line
+        m.put("fanAirflow", finite(Quantity.AIRFLOW.toDisplay(units, r.fanAirflowM3PerS())));
+        m.put("blowerFrom", r.blowerInferred() ? "inferred from the air" : "status column");
+        m.put("fanOffDelaySeconds", finite(r.fanOffDelayMedianS()));
+        m.put("fanOffDelayRests", r.fanOffDelayRests());
+        m.put("reevaporationShareText", r.reevaporation().percent(RunCycleReport.NONE_RETURNED));
+        m.put("latentFractionMeasuredText", r.latentMeasured().number(2, "more put back than removed"));
+        m.put("sensorOffsetDewPoint", finite(Quantity.TEMPERATURE_DIFFERENCE.toDisplay(units, r.sensorOffsetDewPointK())));
+        m.put("sensorCheckMinutes", r.sensorCheckSeconds() / 60.0);
+        m.put("house", house(r.house(), units));
+        m.put("loadLine", load(r.loadLine(), units));
         m.put("findings", findings(r.findings(), units));
         m.put("safety", Cautions.SAFETY_LINE);
         return m;
@@ -131,6 +146,61 @@ final class LogJson {
             out.add(x);
         }
         return out;
+    }
+
+    private static Map<String, Object> house(app.latentledger.core.cycles.HouseHumidity h, UnitSystem units) {
+        if (h == null) {
+            return null;
+        }
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("dewPointMedian", temp(h.dewPointMedianC(), units));
+        m.put("dewPointP95", temp(h.dewPointP95C(), units));
+        m.put("dewPointMax", temp(h.dewPointMaxC(), units));
+        m.put("rhMedian", finite(h.rhMedianPct()));
+        m.put("rhP95", finite(h.rhP95Pct()));
+        m.put("rhMax", finite(h.rhMaxPct()));
+        m.put("hoursAboveRhTarget", h.hoursAboveRhTarget());
+        m.put("hoursAboveDewPointBenchmark", h.hoursAboveDewPoint());
+        m.put("offTrendPerHour", finite(Quantity.HUMIDITY_RATIO_FINE.toDisplay(units, h.offTrendPerHour())));
+        m.put("offTrendUnit", Quantity.HUMIDITY_RATIO_FINE.symbol(units) + " per hour");
+        m.put("longOffPeriods", h.longOffPeriods());
+        m.put("longOffHours", h.longOffHours());
+        m.put("outdoorDewPointMedian", temp(h.outdoorDewPointMedianC(), units));
+        m.put("indoorMinusOutdoorDewPoint", finite(Quantity.TEMPERATURE_DIFFERENCE.toDisplay(units,
+                h.indoorMinusOutdoorDewPointK())));
+        m.put("temperatureUnit", Quantity.TEMPERATURE.symbol(units));
+        return m;
+    }
+
+    private static Map<String, Object> load(app.latentledger.core.cycles.LoadLine l, UnitSystem units) {
+        if (l == null) {
+            return null;
+        }
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("hours", l.hours());
+        List<Map<String, Object>> bins = new ArrayList<>();
+        for (app.latentledger.core.cycles.LoadLine.Bin b : l.bins()) {
+            Map<String, Object> x = new LinkedHashMap<>();
+            x.put("from", temp(b.fromC(), units));
+            x.put("to", temp(b.toC(), units));
+            x.put("hours", b.hours());
+            x.put("runtimeFraction", b.runtimeFraction());
+            bins.add(x);
+        }
+        m.put("bins", bins);
+        m.put("runtimeFractionPerDegree", finite(l.slopePerK() / Quantity.TEMPERATURE_DIFFERENCE.toDisplay(units, 1.0)));
+        m.put("balanceTemperature", temp(l.balanceC(), units));
+        m.put("continuousRunTemperature", temp(l.continuousC(), units));
+        m.put("hottestHoursOutdoor", temp(l.hotOutdoorC(), units));
+        m.put("hottestHoursRuntimeFraction", finite(l.hotRuntimeFraction()));
+        m.put("hottestHoursRuntimeUncertainty", finite(l.hotRuntimeU()));
+        m.put("hottestHours", l.hotHours());
+        m.put("temperatureUnit", Quantity.TEMPERATURE.symbol(units));
+        return m;
+    }
+
+    private static Double temp(double c, UnitSystem units) {
+        return finite(Quantity.TEMPERATURE.toDisplay(units, c));
     }
 
     private static Double mass(double kg, UnitSystem units) {

@@ -32,6 +32,15 @@ final class LogTable {
         b.append(Format.row("duration", Format.fixed(r.durationS() / 3600.0, 2), "h"));
         b.append(Format.row("sample interval", Format.fixed(rep.medianIntervalS(), 0), "s"));
         b.append("  compressor timed from  ").append(r.compressorFromStatus() ? "its status column" : "supply and return temperatures").append('\n');
+        b.append("  blower state from      ").append(r.blowerInferred() ? "the air (end of the constant-enthalpy"
+                + " signature after each run)" : "its status column").append('\n');
+        b.append("  temperatures read in   ").append(rep.temperatureUnitText()).append('\n');
+        if (rep.dateOrder() != null) {
+            b.append("  dates read as          ").append(rep.dateOrder().key()).append('\n');
+        }
+        if (!rep.timeZone().isEmpty()) {
+            b.append("  clock times in zone    ").append(rep.timeZone()).append('\n');
+        }
         if (rep.rejectedCount() > 0) {
             b.append("  rejected rows: ").append(rep.rejectedCount()).append('\n');
             for (String s : rep.rejected()) {
@@ -74,7 +83,13 @@ final class LogTable {
         b.append(Format.row("runtime fraction", Format.fixed(100 * r.runtimeFraction(), 0), "%"));
         b.append(Format.row("moisture removed", Format.fixed(Quantity.WATER_MASS.toDisplay(units, r.removedKg()), 2), mass
                 + (Double.isNaN(r.airflowM3PerS()) ? "  (give --airflow for masses)" : "")));
-        b.append(Format.row("moisture returned", Format.fixed(Quantity.WATER_MASS.toDisplay(units, r.returnedKg()), 2), mass));
+        b.append(Format.row("moisture returned", Format.fixed(Quantity.WATER_MASS.toDisplay(units, r.returnedKg()), 2), mass
+                + (Double.isNaN(r.fanAirflowM3PerS()) || r.fanAirflowM3PerS() == r.airflowM3PerS() ? ""
+                : "  (at the fan-only airflow " + Format.fixed(Quantity.AIRFLOW.toDisplay(units, r.fanAirflowM3PerS()), 0)
+                + " " + Quantity.AIRFLOW.symbol(units) + ")")));
+        b.append(Format.row("returned share", r.reevaporation().percent(RunCycleReport.NONE_RETURNED), ""));
+        b.append(Format.row("fan-off delay", Double.isNaN(r.fanOffDelayMedianS()) ? "none found"
+                : Format.fixed(r.fanOffDelayMedianS(), 0) + " s median in " + r.fanOffDelayRests() + " rests", ""));
         b.append(Format.row("net removed per hour", Format.fixed(Quantity.WATER_RATE.toDisplay(units, r.netRemovalKgPerS()), 3),
                 Quantity.WATER_RATE.symbol(units)));
         b.append(Format.row("steady latent rate", Double.isNaN(r.steadyDryingW()) ? "unknown"
@@ -87,6 +102,8 @@ final class LogTable {
         b.append(String.format(Locale.ROOT, "  model: Henderson & Rengarajan 1996, t_wet %.0f s, gamma %.2f, tau %.0f s"
                         + " (%s%s)%n", r.model().twetS(), r.model().gamma(), r.model().tauS(), r.model().source(),
                 r.fitRests() > 0 ? " from " + r.fitRests() + " rests" : ", EnergyPlus-suggested values"));
+        house(b, r, units);
+        load(b, r, units);
         b.append("\nFindings\n");
         if (r.findings().isEmpty()) {
             b.append("  none: cycling and off-cycle moisture are within the limits checked\n");
@@ -104,6 +121,49 @@ final class LogTable {
     }
 
     private static String fraction(double v) {
-        return Double.isNaN(v) ? "unknown" : Format.fixed(v, 2);
+        return app.latentledger.core.units.Ratio.known(v, "not worked out").number(2, "more put back than removed");
+    }
+
+    private static void house(StringBuilder b, RunCycleReport r, UnitSystem units) {
+        app.latentledger.core.cycles.HouseHumidity h = r.house();
+        if (h == null) {
+            return;
+        }
+        String t = Quantity.TEMPERATURE.symbol(units);
+        b.append("\nThe house's humidity (return air)\n");
+        b.append(Format.row("dew point median/p95/max", Format.fixed(Quantity.TEMPERATURE.toDisplay(units,
+                h.dewPointMedianC()), 1) + " / " + Format.fixed(Quantity.TEMPERATURE.toDisplay(units, h.dewPointP95C()), 1)
+                + " / " + Format.fixed(Quantity.TEMPERATURE.toDisplay(units, h.dewPointMaxC()), 1), t));
+        b.append(Format.row("RH median/p95/max", Format.fixed(h.rhMedianPct(), 0) + " / " + Format.fixed(h.rhP95Pct(), 0)
+                + " / " + Format.fixed(h.rhMaxPct(), 0), "%"));
+        b.append(Format.row("hours above RH target", Format.fixed(h.hoursAboveRhTarget(), 1), "h"));
+        b.append(Format.row("hours above dew-point benchmark", Format.fixed(h.hoursAboveDewPoint(), 1), "h"));
+        b.append(Format.row("rise while off", h.longOffPeriods() == 0 ? "not measurable (no off period of 30 min or more)"
+                : Format.fixed(Quantity.HUMIDITY_RATIO_FINE.toDisplay(units, h.offTrendPerHour()), 2), h.longOffPeriods() == 0
+                ? "" : Quantity.HUMIDITY_RATIO_FINE.symbol(units) + " per hour over " + h.longOffPeriods() + " off periods"));
+        if (!Double.isNaN(h.outdoorDewPointMedianC())) {
+            b.append(Format.row("outdoor dew point median", Format.fixed(Quantity.TEMPERATURE.toDisplay(units,
+                    h.outdoorDewPointMedianC()), 1), t));
+        }
+    }
+
+    private static void load(StringBuilder b, RunCycleReport r, UnitSystem units) {
+        app.latentledger.core.cycles.LoadLine l = r.loadLine();
+        if (l == null) {
+            return;
+        }
+        String t = Quantity.TEMPERATURE.symbol(units);
+        b.append("\nLoad line (runtime against outdoor temperature, ").append(l.hours()).append(" hours)\n");
+        for (app.latentledger.core.cycles.LoadLine.Bin bin : l.bins()) {
+            b.append(String.format(Locale.ROOT, "  %6.1f to %6.1f %s  %3d h  runtime %3.0f %%%n",
+                    Quantity.TEMPERATURE.toDisplay(units, bin.fromC()), Quantity.TEMPERATURE.toDisplay(units, bin.toC()),
+                    t, bin.hours(), 100 * bin.runtimeFraction()));
+        }
+        b.append(Format.row("would run continuously at", Double.isNaN(l.continuousC()) ? "not measurable (no line fitted)"
+                : Format.fixed(Quantity.TEMPERATURE.toDisplay(units, l.continuousC()), 1), Double.isNaN(l.continuousC()) ? ""
+                : t + " outdoors"));
+        b.append(Format.row("hottest hours runtime", Format.fixed(100 * l.hotRuntimeFraction(), 0) + " ± "
+                + Format.fixed(100 * l.hotRuntimeU(), 0), "% over " + l.hotHours() + " h at "
+                + Format.fixed(Quantity.TEMPERATURE.toDisplay(units, l.hotOutdoorC()), 1) + " " + t));
     }
 }

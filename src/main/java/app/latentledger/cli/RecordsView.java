@@ -1,15 +1,15 @@
 package app.latentledger.cli;
 
-import app.latentledger.core.records.Timestamps;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.Airflow;
 import app.latentledger.core.records.CoilTemperature;
 import app.latentledger.core.records.Condensate;
-import app.latentledger.core.records.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.Site;
+import app.latentledger.core.records.Timestamps;
 import app.latentledger.core.records.Visit;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
@@ -73,6 +73,7 @@ final class RecordsView {
         } else {
             Map<String, Object> f = value(a.volume(), Quantity.AIRFLOW, Quantity.AIRFLOW, units);
             f.put("point", a.point().key());
+            f.put("basis", a.basis().key());
             f.put("method", a.method());
             m.put("airflow", f);
         }
@@ -99,7 +100,7 @@ final class RecordsView {
         if (h == null) {
             return null;
         }
-        Map<String, Object> m = h.kind() == HumidityKind.RH
+        Map<String, Object> m = h.kind() == HumidityKind.RELATIVE_HUMIDITY
                 ? value(h.value(), Quantity.RELATIVE_HUMIDITY, Quantity.RELATIVE_HUMIDITY, units)
                 : value(h.value(), Quantity.TEMPERATURE, Quantity.TEMPERATURE_DIFFERENCE, units);
         m.put("kind", h.kind().key());
@@ -133,7 +134,7 @@ final class RecordsView {
             double perCapacity = a.volume().valueSi() / system.nominalCapacityW();
             b.append(line("airflow", Format.fixed(Quantity.AIRFLOW.toDisplay(units, a.volume().valueSi()), 0) + " ± "
                     + Format.fixed(Quantity.AIRFLOW.toDisplay(units, a.volume().toleranceSi()), 0) + " "
-                    + Quantity.AIRFLOW.symbol(units) + " " + a.point().key() + " ("
+                    + a.basis().label() + " " + Quantity.AIRFLOW.symbol(units) + " " + a.point().key() + " ("
                     + Format.fixed(Quantity.AIRFLOW_PER_CAPACITY.toDisplay(units, perCapacity), 0) + " "
                     + Quantity.AIRFLOW_PER_CAPACITY.symbol(units) + " of nominal)"
                     + (a.method().isEmpty() ? "" : "; " + a.method())));
@@ -160,7 +161,7 @@ final class RecordsView {
     private static String air(String label, Measurement db, HumidityReading h, UnitSystem units) {
         String text = temperatureText(db, units) + " db";
         if (h != null) {
-            text += ", " + (h.kind() == HumidityKind.RH
+            text += ", " + (h.kind() == HumidityKind.RELATIVE_HUMIDITY
                     ? Format.fixed(h.value().valueSi(), 1) + " ± " + Format.fixed(h.value().toleranceSi(), 1) + " %RH"
                     : temperatureText(h.value(), units) + (h.kind() == HumidityKind.WET_BULB ? " wb" : " dew point"));
         }

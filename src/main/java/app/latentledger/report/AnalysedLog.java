@@ -16,10 +16,12 @@ import java.util.List;
  * @param ignored       stored channels the analysis does not read
  * @param pressurePa    pressure the analysis used
  * @param airflowM3PerS airflow used for the masses, NaN when the visit has none
- * @param airflowFrom   which reading set the airflow came from ("" when none)
+ * @param airflowFrom   where the airflow came from ("reading set Before", "given at import"; "" when none)
+ * @param note          what the tech should know about the conditions used ("" when nothing)
  */
 public record AnalysedLog(ImportedLog log, LogSeries series, RunCycleReport report, String refusal,
-                          List<String> ignored, double pressurePa, double airflowM3PerS, String airflowFrom) {
+                          List<String> ignored, double pressurePa, double airflowM3PerS, String airflowFrom,
+                          String note) {
     public AnalysedLog {
         ignored = List.copyOf(ignored);
     }

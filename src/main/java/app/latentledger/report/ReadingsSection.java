@@ -1,10 +1,12 @@
 package app.latentledger.report;
 
 import app.latentledger.core.coil.CoilResult;
+import app.latentledger.core.coil.CoilTemperatureSource;
 import app.latentledger.core.coil.Estimate;
 import app.latentledger.core.coil.Measurand;
+import app.latentledger.core.measure.AirflowBasis;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.Airflow;
-import app.latentledger.core.records.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
@@ -161,7 +163,7 @@ final class ReadingsSection {
                 ? Numbers.estimate(Quantity.DIMENSIONLESS, units, r.estimate(Measurand.BYPASS_FACTOR)) : "—");
         rowResult(tb, sets, "Coil temperature compared", r -> Double.isFinite(r.coilTemperatureC())
                 ? Numbers.estimate(Quantity.TEMPERATURE, units, r.estimate(Measurand.COIL_TEMPERATURE)) + " ("
-                + (CoilResult.SOURCE_MEASURED.equals(r.coilTemperatureSource()) ? "measured" : "apparatus dew point")
+                + (r.coilTemperatureSource() == CoilTemperatureSource.MEASURED ? "measured" : "apparatus dew point")
                 + ")" : "none");
         est(tb, sets, Measurand.DEW_POINT_MARGIN, "Entering dew point minus coil temperature");
         if (sets.stream().anyMatch(c -> c.checked() && c.result().condensate() != null)) {
@@ -209,7 +211,7 @@ final class ReadingsSection {
         if (h == null) {
             return "not measured";
         }
-        if (h.kind() == HumidityKind.RH) {
+        if (h.kind() == HumidityKind.RELATIVE_HUMIDITY) {
             return DisplayNumber.withSpread(Quantity.RELATIVE_HUMIDITY, units, h.value().valueSi(), h.value().toleranceSi())
                     + " RH";
         }
@@ -222,7 +224,8 @@ final class ReadingsSection {
             return "not measured";
         }
         return DisplayNumber.withSpread(Quantity.AIRFLOW, units, a.volume().valueSi(), a.volume().toleranceSi())
-                + " at the " + (a.point().key().equals("entering") ? "return (entering)" : "supply (leaving)") + " side"
+                + (a.basis() == AirflowBasis.STANDARD ? " (standard air)" : "") + " at the "
+                + (a.point().key().equals("entering") ? "return (entering)" : "supply (leaving)") + " side"
                 + (a.method().isEmpty() ? "" : "; " + a.method());
     }
 

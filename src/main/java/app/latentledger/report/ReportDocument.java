@@ -28,6 +28,12 @@ final class ReportDocument {
     }
 
     static void write(ReportData data, PaperSize paper, OffsetDateTime generated, OutputStream out) throws IOException {
+        write(data, null, paper, generated, out);
+    }
+
+    /** @param house the visit's house budget, or null when the visit has none */
+    static void write(ReportData data, app.latentledger.core.house.HouseBudget house, PaperSize paper,
+                      OffsetDateTime generated, OutputStream out) throws IOException {
         try (PDDocument doc = new PDDocument()) {
             ReportFonts fonts = ReportFonts.load(doc);
             try (PageFlow flow = new PageFlow(doc, fonts, paper.widthPt(), paper.heightPt(), MARGIN_PT)) {
@@ -44,6 +50,9 @@ final class ReportDocument {
                 TechnicalSection technical = new TechnicalSection(data, charts);
                 technical.findings(t);
                 technical.logs(t);
+                if (house != null) {
+                    new HouseSection(house, data.units()).write(t);
+                }
                 new ClosingSection(data).write(t);
                 VisitEvidence v = data.latest();
                 flow.finish(v.site().name() + " · " + PlainWords.date(v.visit().startedAt()), Ink.SMALL, Ink.RULE);

@@ -93,6 +93,8 @@ final class TechnicalSection {
         }
     }
 
+    private static final String MORE_RETURNED = "more put back than removed";
+
     private Table figures(AnalysedLog l) {
         RunCycleReport r = l.report();
         Table tb = new Table(new String[] {"Logged figure", "Value"}, new double[] {1.6, 2.4}, new boolean[] {false, false});
@@ -104,17 +106,36 @@ final class TechnicalSection {
         tb.row("Median run time", DisplayNumber.withUnit(Quantity.DURATION_MINUTES, units, r.medianOnS()));
         tb.row("Run-time fraction", DisplayNumber.withUnit(Quantity.FRACTION_PERCENT, units, r.runtimeFraction()));
         tb.row("Airflow used for masses", Double.isFinite(r.airflowM3PerS())
-                ? DisplayNumber.withUnit(Quantity.AIRFLOW, units, r.airflowM3PerS()) + " (from reading set " + l.airflowFrom() + ")"
+                ? DisplayNumber.withUnit(Quantity.AIRFLOW, units, r.airflowM3PerS()) + " (" + l.airflowFrom() + ")"
                 : "none: masses not worked out");
+        if (Double.isFinite(r.fanAirflowM3PerS()) && r.fanAirflowM3PerS() != r.airflowM3PerS()) {
+            tb.row("Fan-only airflow used in rests", DisplayNumber.withUnit(Quantity.AIRFLOW, units, r.fanAirflowM3PerS()));
+        }
+        if (!l.note().isEmpty()) {
+            tb.row("Note", l.note());
+        }
+        tb.row("Blower state in rests", r.blowerInferred() ? "inferred from the air" : "from the blower column");
+        tb.row("Fan-off delay", Double.isNaN(r.fanOffDelayMedianS()) ? "none found"
+                : DisplayNumber.withUnit(Quantity.DURATION_MINUTES, units, r.fanOffDelayMedianS()) + " median");
         tb.row("Water removed during runs", DisplayNumber.withUnit(Quantity.WATER_MASS, units, r.removedKg()));
         tb.row("Water returned in blower-on rests", DisplayNumber.withUnit(Quantity.WATER_MASS, units, r.returnedKg()));
         tb.row("Net removal rate over the log", DisplayNumber.withUnit(Quantity.WATER_RATE, units, r.netRemovalKgPerS()));
         tb.row("Steady-state removal rate", DisplayNumber.withUnit(Quantity.WATER_RATE, units, r.steadyRemovalKgPerS()));
-        tb.row("Latent fraction delivered, measured", DisplayNumber.withUnit(Quantity.FRACTION_PERCENT, units,
-                r.latentFractionMeasured()));
-        tb.row("Latent fraction, part-load model", DisplayNumber.withUnit(Quantity.FRACTION_PERCENT, units,
-                r.latentFractionPredicted()));
-        tb.row("Re-evaporated share", DisplayNumber.withUnit(Quantity.FRACTION_PERCENT, units, r.reevaporationShare()));
+        tb.row("Latent fraction delivered, measured", r.latentMeasured().percent(MORE_RETURNED));
+        tb.row("Latent fraction, part-load model", r.latentPredicted().percent(MORE_RETURNED));
+        tb.row("Re-evaporated share", r.reevaporation().percent(RunCycleReport.NONE_RETURNED));
+        if (r.house() != null) {
+            tb.row("House dew point, median / 95th percentile", DisplayNumber.withUnit(Quantity.TEMPERATURE, units,
+                    r.house().dewPointMedianC()) + " / " + DisplayNumber.withUnit(Quantity.TEMPERATURE, units,
+                    r.house().dewPointP95C()));
+            tb.row("House RH, median / 95th percentile", DisplayNumber.number(r.house().rhMedianPct(), 0) + " / "
+                    + DisplayNumber.number(r.house().rhP95Pct(), 0) + " %");
+        }
+        if (r.loadLine() != null) {
+            tb.row("Runtime in the hottest logged hours", DisplayNumber.number(100 * r.loadLine().hotRuntimeFraction(), 0)
+                    + " ± " + DisplayNumber.number(100 * r.loadLine().hotRuntimeU(), 0) + " % over "
+                    + r.loadLine().hotHours() + " h");
+        }
         tb.row("Pressure used", DisplayNumber.withUnit(Quantity.PRESSURE, units, l.pressurePa()));
         return tb;
     }

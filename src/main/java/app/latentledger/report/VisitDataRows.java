@@ -6,7 +6,7 @@ import app.latentledger.core.coil.Measurand;
 import app.latentledger.core.cycles.RunCycleReport;
 import app.latentledger.core.findings.Evidence;
 import app.latentledger.core.findings.Finding;
-import app.latentledger.core.records.HumidityKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
@@ -78,7 +78,8 @@ final class VisitDataRows {
         }
         if (s.airflow() != null) {
             reading(id, label, "airflow", "airflow", Quantity.AIRFLOW, s.airflow().volume(),
-                    s.airflow().point().key() + (s.airflow().method().isEmpty() ? "" : "; " + s.airflow().method()));
+                    s.airflow().point().key() + "; " + s.airflow().basis().key()
+                            + (s.airflow().method().isEmpty() ? "" : "; " + s.airflow().method()));
         }
         if (s.stationPressurePa() != null) {
             reading(id, label, "stationPressure", "station pressure", Quantity.PRESSURE, s.stationPressurePa(), "measured");
@@ -167,7 +168,7 @@ final class VisitDataRows {
 
     private void humidity(String id, String label, String key, String name, HumidityReading h) {
         if (h != null) {
-            reading(id, label, key, name, h.kind() == HumidityKind.RH ? Quantity.RELATIVE_HUMIDITY : Quantity.TEMPERATURE,
+            reading(id, label, key, name, h.kind() == HumidityKind.RELATIVE_HUMIDITY ? Quantity.RELATIVE_HUMIDITY : Quantity.TEMPERATURE,
                     h.value(), h.kind().key());
         }
     }

@@ -1,11 +1,7 @@
 package app.latentledger.report;
 
 import app.latentledger.core.InvalidInputException;
-import app.latentledger.core.cycles.LogNotAnalysableException;
-import app.latentledger.core.cycles.RunCycleAnalysis;
-import app.latentledger.core.cycles.RunCycleReport;
 import app.latentledger.core.findings.ThresholdSettings;
-import app.latentledger.core.psychro.StandardAtmosphere;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.ReadingSet;
@@ -13,8 +9,9 @@ import app.latentledger.core.records.Site;
 import app.latentledger.core.records.Visit;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.core.visit.ReadingSetCheck;
-import app.latentledger.core.visit.StoredLogSeries;
 import app.latentledger.store.Ledger;
+import app.latentledger.visit.VisitLog;
+import app.latentledger.visit.VisitLogs;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -57,47 +54,21 @@ public record VisitEvidence(Visit visit, Site site, HvacSystem system, List<Chec
         }
         List<AnalysedLog> logs = new ArrayList<>();
         for (ImportedLog l : ledger.logs().forVisit(v.id())) {
-            logs.add(analyse(l, v, site, checked, thresholds));
+            logs.add(analyse(ledger, l, thresholds, units));
         }
         return new VisitEvidence(v, site, system, checked, logs);
     }
 
     /**
-     * The log at the pressure of the visit's first measured station pressure, else the standard
-     * atmosphere at the site (ASHRAE HoF 2017 ch. 1, eq. 3), with the airflow of the visit's last
-     * complete reading set: the state the system was left running in while the logger ran.
+     * The log as every face analyses it ({@link VisitLogs#analyseKept}): at the visit's pressure rule
+     * and with the airflows it was kept with (a log kept before those were stored uses the visit's
+     * latest airflow, and says so). An airflow out of range is refused the same way everywhere: the
+     * log is analysed without masses and the reason is given.
      */
-    static AnalysedLog analyse(ImportedLog l, Visit v, Site site, List<CheckedReadings> checked,
-                               ThresholdSettings thresholds) {
-        double pressurePa = StandardAtmosphere.pressurePa(site.elevationM());
-        for (CheckedReadings c : checked) {
-            if (c.set().stationPressurePa() != null) {
-                pressurePa = c.set().stationPressurePa().valueSi();
-                break;
-            }
-        }
-        double airflow = Double.NaN;
-        String from = "";
-        for (CheckedReadings c : checked) {
-            if (c.set().airflow() != null) {
-                airflow = c.set().airflow().volume().valueSi();
-                from = c.name();
-            }
-        }
-        StoredLogSeries stored;
-        try {
-            stored = StoredLogSeries.of(l.samples(), v.startedAt().getOffset());
-        } catch (IllegalArgumentException e) {
-            return new AnalysedLog(l, null, null, e.getMessage(), List.of(), pressurePa, airflow, from);
-        }
-        try {
-            RunCycleReport r = new RunCycleAnalysis(thresholds).analyse(stored.series(), pressurePa,
-                    airflow >= RunCycleAnalysis.MIN_AIRFLOW_M3_PER_S && airflow <= RunCycleAnalysis.MAX_AIRFLOW_M3_PER_S
-                            ? airflow : Double.NaN);
-            return new AnalysedLog(l, stored.series(), r, "", stored.ignored(), pressurePa, airflow, from);
-        } catch (LogNotAnalysableException | InvalidInputException e) {
-            return new AnalysedLog(l, stored.series(), null, e.getMessage(), stored.ignored(), pressurePa, airflow, from);
-        }
+    static AnalysedLog analyse(Ledger ledger, ImportedLog l, ThresholdSettings thresholds, UnitSystem units) {
+        VisitLog a = VisitLogs.analyseKept(ledger, l, thresholds, units);
+        return new AnalysedLog(l, a.series(), a.report(), a.refusal(), a.ignored(), a.conditions().pressurePa(),
+                a.conditions().airflowM3PerS(), a.conditions().airflowFrom(), a.note());
     }
 
     /** The complete reading sets, in the order taken. */

@@ -43,7 +43,8 @@ public final class VisitReport {
                              Path output) {
         ReportData data = ReportData.load(ledger, visitId, compareVisitIdOrNull, units);
         OffsetDateTime now = OffsetDateTime.now(data.latest().visit().startedAt().getOffset());
-        Path written = SafeFile.write(output, out -> ReportDocument.write(data, paper, now, out));
+        var house = HouseBudgets.of(ledger, data);
+        Path written = SafeFile.write(output, out -> ReportDocument.write(data, house, paper, now, out));
         // what the customer was given is kept with the readings, whatever a later version computes
         ReportSnapshots.keep(ledger, data, now);
         return written;
@@ -53,7 +54,8 @@ public final class VisitReport {
     public static void write(Ledger ledger, String visitId, String compareVisitIdOrNull, PaperSize paper, UnitSystem units,
                              OutputStream out) throws IOException {
         ReportData data = ReportData.load(ledger, visitId, compareVisitIdOrNull, units);
-        ReportDocument.write(data, paper, OffsetDateTime.now(data.latest().visit().startedAt().getOffset()), out);
+        ReportDocument.write(data, HouseBudgets.of(ledger, data), paper,
+                OffsetDateTime.now(data.latest().visit().startedAt().getOffset()), out);
     }
 
     /** Refuses a target the tech cannot have meant, then writes through {@link SafeFiles}. */

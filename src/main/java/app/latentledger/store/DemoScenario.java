@@ -1,11 +1,11 @@
 package app.latentledger.store;
 
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.Airflow;
-import app.latentledger.core.records.AirflowPoint;
 import app.latentledger.core.records.CoilTemperature;
-import app.latentledger.core.records.CoilTemperatureKind;
 import app.latentledger.core.records.Condensate;
-import app.latentledger.core.records.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Measurement;
@@ -101,12 +101,13 @@ public final class DemoScenario {
                     "Blower on medium-low. Condensate caught at the drain outlet, trap full."));
             ledger.readings().save(new ReadingSet(READINGS_COMMISSIONING, VISIT_COMMISSIONING,
                     OffsetDateTime.parse("2024-08-02T14:35:00-04:00"), "commissioning", KIT,
-                    f(74), new HumidityReading(HumidityKind.RH, new Measurement(50, 2)), f(54), wetBulb(52),
+                    f(74), new HumidityReading(HumidityKind.RELATIVE_HUMIDITY, new Measurement(50, 2)), f(54), wetBulb(52),
                     f(89), wetBulb(77),
                     new CoilTemperature(CoilTemperatureKind.COIL_SURFACE, new Measurement(c(47), k(1))),
                     cfm(900, 0.05, "flow hood at the return grille"), null,
                     new Condensate(new Measurement(480e-6, 15e-6), new Measurement(15 * 60, 5)),
                     "Full capacity held for the test."));
+            DemoHouse.seed(ledger);
         });
     }
 

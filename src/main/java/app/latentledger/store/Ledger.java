@@ -21,6 +21,7 @@ public final class Ledger implements AutoCloseable {
     private final InstrumentRepository instruments;
     private final PaperworkRepository paperwork;
     private final RecycleBin recycleBin;
+    private final HouseRepository houses;
 
     public Ledger(Database db) {
         this.db = db;
@@ -34,6 +35,7 @@ public final class Ledger implements AutoCloseable {
         this.instruments = new InstrumentRepository(db);
         this.paperwork = new PaperworkRepository(db);
         this.recycleBin = new RecycleBin(db);
+        this.houses = new HouseRepository(db);
     }
 
     /** What a ledger that holds no site yet (its first run) is given. */
@@ -97,6 +99,11 @@ public final class Ledger implements AutoCloseable {
     }
 
     /** The tech's settings (units, tolerances, thresholds, theme, paper). */
+    /** House facts with each site and house readings with each visit. */
+    public HouseRepository houses() {
+        return houses;
+    }
+
     public SettingsRepository settings() {
         return settings;
     }

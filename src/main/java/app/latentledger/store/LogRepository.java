@@ -36,11 +36,16 @@ public final class LogRepository {
             }
             LogSamples s = log.samples();
             try (PreparedStatement p = c.prepareStatement("INSERT INTO imported_log (id, visit_id, source_file_name,"
-                    + " column_mapping, imported_at, imported_epoch_s, time_base, sample_count)"
-                    + " VALUES (?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO UPDATE SET visit_id = excluded.visit_id,"
+                    + " column_mapping, imported_at, imported_epoch_s, time_base, sample_count, conditions_stored,"
+                    + " airflow_m3_per_s, airflow_from, fan_airflow_m3_per_s, time_zone)"
+                    + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO UPDATE SET"
+                    + " visit_id = excluded.visit_id,"
                     + " source_file_name = excluded.source_file_name, column_mapping = excluded.column_mapping,"
                     + " imported_at = excluded.imported_at, imported_epoch_s = excluded.imported_epoch_s,"
-                    + " time_base = excluded.time_base, sample_count = excluded.sample_count")) {
+                    + " time_base = excluded.time_base, sample_count = excluded.sample_count,"
+                    + " conditions_stored = excluded.conditions_stored, airflow_m3_per_s = excluded.airflow_m3_per_s,"
+                    + " airflow_from = excluded.airflow_from, fan_airflow_m3_per_s = excluded.fan_airflow_m3_per_s,"
+                    + " time_zone = excluded.time_zone")) {
                 p.setString(1, log.id());
                 p.setString(2, log.visitId());
                 p.setString(3, log.sourceFileName());
@@ -49,6 +54,12 @@ public final class LogRepository {
                 p.setLong(6, log.importedAt().toEpochSecond());
                 p.setString(7, s.timeBase().key());
                 p.setInt(8, s.size());
+                ImportedLog.KeptConditions k = log.kept();
+                p.setInt(9, k == null ? 0 : 1);
+                setReal(p, 10, k == null ? Double.NaN : k.airflowM3PerS());
+                p.setString(11, k == null ? "" : k.airflowFrom());
+                setReal(p, 12, k == null ? Double.NaN : k.fanAirflowM3PerS());
+                p.setString(13, k == null ? "" : k.timeZone());
                 p.executeUpdate();
             }
             List<LogChannel> channels = s.channels();
@@ -94,12 +105,28 @@ public final class LogRepository {
                 if (!r.next()) {
                     return Optional.empty();
                 }
+                ImportedLog.KeptConditions kept = r.getInt("conditions_stored") == 0 ? null
+                        : new ImportedLog.KeptConditions(real(r, "airflow_m3_per_s"), r.getString("airflow_from"),
+                        real(r, "fan_airflow_m3_per_s"), r.getString("time_zone"));
                 return Optional.of(new ImportedLog(r.getString("id"), r.getString("visit_id"),
                         r.getString("source_file_name"), r.getString("column_mapping"),
                         Sql.time(r, "imported_at"), samples(c, id,
-                        TimeBase.parse("log time base", r.getString("time_base")), r.getInt("sample_count"))));
+                        TimeBase.parse("log time base", r.getString("time_base")), r.getInt("sample_count")), kept));
             }
         }
+    }
+
+    private static void setReal(PreparedStatement p, int i, double v) throws SQLException {
+        if (Double.isNaN(v)) {
+            p.setNull(i, java.sql.Types.REAL);
+        } else {
+            p.setDouble(i, v);
+        }
+    }
+
+    private static double real(ResultSet r, String column) throws SQLException {
+        double v = r.getDouble(column);
+        return r.wasNull() ? Double.NaN : v;
     }
 
     private static LogSamples samples(Connection c, String id, TimeBase base, int size) throws SQLException {

@@ -26,7 +26,10 @@ record Migration(int version, String name, List<String> statements) {
             "V2__imported_logs.sql",
             "V3__results_snapshots_and_labels.sql",
             "V4__settings.sql",
-            "V7__paperwork_and_recycle_bin.sql");
+            "V5__airflow_basis_and_probes.sql",
+            "V6__log_conditions.sql",
+            "V7__paperwork_and_recycle_bin.sql",
+            "V9__house_facts.sql");
 
     static List<Migration> all() {
         List<Migration> all = new ArrayList<>();

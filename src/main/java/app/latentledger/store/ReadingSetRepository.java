@@ -1,11 +1,13 @@
 package app.latentledger.store;
 
+import app.latentledger.core.measure.AirflowBasis;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
+import app.latentledger.core.measure.ProbeMatch;
 import app.latentledger.core.records.Airflow;
-import app.latentledger.core.records.AirflowPoint;
-import app.latentledger.core.records.Condensate;
 import app.latentledger.core.records.CoilTemperature;
-import app.latentledger.core.records.CoilTemperatureKind;
-import app.latentledger.core.records.HumidityKind;
+import app.latentledger.core.records.Condensate;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.InvalidRecordException;
 import app.latentledger.core.records.Measurement;
@@ -30,6 +32,7 @@ public final class ReadingSetRepository {
         "airflow_m3_per_s", "airflow_tol_m3_per_s", "airflow_point", "airflow_method",
         "station_pressure_pa", "station_pressure_tol_pa",
         "condensate_m3", "condensate_tol_m3", "condensate_s", "condensate_tol_s", "notes",
+        "airflow_basis", "same_probe", "supply_dew_point_offset_k",
     };
     private static final String UPSERT = upsert();
 
@@ -87,7 +90,10 @@ public final class ReadingSetRepository {
                 i += 2;
                 Sql.setMeasurement(p, i, k == null ? null : k.seconds());
                 i += 2;
-                p.setString(i, s.notes());
+                p.setString(i++, s.notes());
+                p.setString(i++, a == null ? AirflowBasis.ACTUAL.key() : a.basis().key());
+                p.setInt(i++, s.probes().sameInstrument() ? 1 : 0);
+                p.setDouble(i, s.probes().supplyDewPointOffsetK());
                 p.executeUpdate();
             }
             return null;
@@ -156,7 +162,8 @@ public final class ReadingSetRepository {
                 CoilTemperatureKind.parse("coil temperature kind", coilKind), Sql.measurement(r, "coil_c", "coil_tol_k"));
         Measurement flow = Sql.measurement(r, "airflow_m3_per_s", "airflow_tol_m3_per_s");
         Airflow airflow = flow == null ? null : new Airflow(flow,
-                AirflowPoint.parse("airflow point", r.getString("airflow_point")), r.getString("airflow_method"));
+                AirflowPoint.parse("airflow point", r.getString("airflow_point")), r.getString("airflow_method"),
+                AirflowBasis.parse("airflow basis", r.getString("airflow_basis")));
         Measurement volume = Sql.measurement(r, "condensate_m3", "condensate_tol_m3");
         Condensate condensate = volume == null ? null
                 : new Condensate(volume, Sql.measurement(r, "condensate_s", "condensate_tol_s"));
@@ -166,6 +173,7 @@ public final class ReadingSetRepository {
                 Sql.measurement(r, "supply_db_c", "supply_db_tol_k"), humidity(r, "supply"),
                 Sql.measurement(r, "outdoor_db_c", "outdoor_db_tol_k"), humidity(r, "outdoor"),
                 coil, airflow, Sql.measurement(r, "station_pressure_pa", "station_pressure_tol_pa"),
-                condensate, r.getString("notes"));
+                condensate, r.getString("notes"),
+                new ProbeMatch(r.getInt("same_probe") == 1, r.getDouble("supply_dew_point_offset_k")));
     }
 }

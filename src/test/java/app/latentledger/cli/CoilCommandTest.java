@@ -99,7 +99,7 @@ class CoilCommandTest {
     @CsvSource(delimiter = '|', value = {
             "coil --return-db 78 --return-rh 55 --supply-db 57 --supply-rh 92 --airflow 1100 --nominal-tons 3 --coil-temp 47 | dehumidifying",
             "coil --return-db 75 --return-rh 50 --supply-db 62 --supply-rh 78 --airflow 1450 --nominal-tons 3 --coil-temp 59 | not-dehumidifying",
-            "coil --return-db 76 --return-rh 58 --supply-db 59 --supply-rh 90 --airflow 1200 --nominal-tons 3 --coil-temp 59 | cant-tell"})
+            "coil --return-db 75 --return-rh 50 --supply-db 73 --supply-rh 53 --airflow 1200 --nominal-tons 3 --coil-temp 55 | cant-tell"})
     void threeVerdicts(String line, String verdict) {
         assertEquals(verdict, json(line).get("verdict").getAsString());
     }

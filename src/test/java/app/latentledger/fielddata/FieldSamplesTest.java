@@ -32,7 +32,7 @@ class FieldSamplesTest {
     /** Findings documented in field-data-samples/README.md. */
     private static final Map<String, Set<String>> DOCUMENTED = Map.of(
             "healthy-long-cycling.csv", Set.of(),
-            "oversized-short-cycling.csv", Set.of("short-cycling", "short-cycling-limits-latent", "off-cycle-reevaporation"),
+            "oversized-short-cycling.csv", Set.of("short-cycling", "short-cycling-limits-latent", "fan-off-delay-reevaporation"),
             "blower-left-on.csv", Set.of("off-cycle-reevaporation"),
             "other-logger-export.csv", Set.of("off-cycle-reevaporation", "sensor-offset"));
 

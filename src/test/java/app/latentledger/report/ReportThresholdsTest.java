@@ -15,8 +15,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The report finds what the app showed: it uses the tech's stored thresholds. The demo "after"
- * set runs at 360 cfm/ton, under the default 450 cfm/ton limit (FSEC-PF-321-97) but over a stored
- * 350 cfm/ton limit.
+ * set runs at 360 cfm/ton, under the default 450 cfm/ton limit (FSEC-PF-321-97) but, with its
+ * airflow uncertainty, clearly over a stored 310 cfm/ton limit.
  */
 class ReportThresholdsTest {
 
@@ -24,9 +24,9 @@ class ReportThresholdsTest {
     void storedAirflowLimitReachesTheReport(@TempDir Path dir) {
         try (Ledger ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO)) {
             assertFalse(afterHasHighAirflow(ledger), "default 450 cfm/ton: quiet");
-            ledger.settings().save(ledger.settings().load().withTyped(Thresholds.COIL_HIGH_AIRFLOW_PER_TON.key(), 350,
+            ledger.settings().save(ledger.settings().load().withTyped(Thresholds.COIL_HIGH_AIRFLOW_PER_TON.key(), 310,
                     UnitSystem.IP));
-            assertTrue(afterHasHighAirflow(ledger), "stored 350 cfm/ton: fires");
+            assertTrue(afterHasHighAirflow(ledger), "stored 310 cfm/ton: fires");
         }
     }
 

@@ -129,7 +129,7 @@ class VisitDataExportTest {
             for (JsonElement e : set.getAsJsonArray("findings")) {
                 JsonObject f = e.getAsJsonObject();
                 codes.add(f.get("code").getAsString());
-                Finding expected = r.findings().stream().filter(x -> x.code().equals(f.get("code").getAsString()))
+                Finding expected = r.findings().stream().filter(x -> x.code().key().equals(f.get("code").getAsString()))
                         .findFirst().orElseThrow();
                 assertEquals(expected.technical(), f.get("technical").getAsString());
                 assertEquals(expected.evidence().size(), f.getAsJsonArray("evidence").size());
@@ -139,7 +139,7 @@ class VisitDataExportTest {
                 }
                 assertEquals(expected.nextChecks().size(), f.getAsJsonArray("nextChecks").size());
             }
-            assertEquals(r.findings().stream().map(Finding::code).toList(), codes);
+            assertEquals(r.findings().stream().map(f -> f.code().key()).toList(), codes);
             assertNotNull(root.get("safety"));
             assertTrue(root.getAsJsonObject("visit").get("technician").getAsString().contains("Brandtner"));
         }

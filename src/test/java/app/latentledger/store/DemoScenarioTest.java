@@ -106,7 +106,7 @@ class DemoScenarioTest {
     private static MoistAirState state(double p, Measurement db, HumidityReading h) {
         return switch (h.kind()) {
             case WET_BULB -> MoistAirState.fromWetBulb(p, db.valueSi(), h.value().valueSi(), HandbookEdition.IP);
-            case RH -> MoistAirState.fromRelativeHumidity(p, db.valueSi(), h.value().valueSi(), HandbookEdition.IP);
+            case RELATIVE_HUMIDITY -> MoistAirState.fromRelativeHumidity(p, db.valueSi(), h.value().valueSi(), HandbookEdition.IP);
             case DEW_POINT -> MoistAirState.fromDewPoint(p, db.valueSi(), h.value().valueSi(), HandbookEdition.IP);
         };
     }

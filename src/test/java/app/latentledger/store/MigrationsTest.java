@@ -1,5 +1,7 @@
 package app.latentledger.store;
 
+import app.latentledger.core.measure.AirflowBasis;
+import app.latentledger.core.measure.ProbeMatch;
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.SnapshotSubject;
@@ -60,6 +62,8 @@ class MigrationsTest {
             assertEquals(version >= 3 ? "before" : "", r.label(), "label added in V3 defaults to empty");
             assertEquals(24.4, r.returnDryBulb().valueSi());
             assertEquals(0.6655, r.airflow().volume().valueSi());
+            assertEquals(AirflowBasis.ACTUAL, r.airflow().basis(), "sets stored before V5 were worked out as actual cfm");
+            assertEquals(ProbeMatch.INDEPENDENT, r.probes(), "and with independent probes");
             if (version >= 2) {
                 ImportedLog log = ledger.logs().find("l").orElseThrow();
                 assertEquals(3, log.samples().size());
@@ -83,6 +87,9 @@ class MigrationsTest {
             ledger.recycleBin().delete(app.latentledger.core.records.RecordKind.VISIT, "v");
             ledger.recycleBin().restore(app.latentledger.core.records.RecordKind.VISIT, "v");
             assertEquals("ok", ledger.database().integrityCheck());
+            if (version >= 2) {
+                assertEquals(null, ledger.logs().find("l").orElseThrow().kept(), "a log kept before V6 has no stored conditions");
+            }
         }
     }
 
@@ -109,7 +116,12 @@ class MigrationsTest {
                 "V1__sites_systems_visits_readings.sql", "00151f48aced556301847e1d4762c55fb5ac52b1b73e719d3a10623eeb57d518",
                 "V2__imported_logs.sql", "b83fdf6d6fc0db62404a6563f87aed961f82e97128605ea6d566277fce83894c",
                 "V3__results_snapshots_and_labels.sql", "22ac719e9e4eac5cc2007254d923acba9f96424c710d782779efe17e1cd33e68",
-                "V4__settings.sql", "bb110aba1a9644e2a20a56beda68be0079e63521b3164734bcf3e049cb8142d5");
+                "V4__settings.sql", "bb110aba1a9644e2a20a56beda68be0079e63521b3164734bcf3e049cb8142d5",
+                "V5__airflow_basis_and_probes.sql", "4260386c78970defa1e3922918850cdec89999f0a42426b7280088ef47d8c257",
+                "V6__log_conditions.sql", "1696abc12866c2c22da55c21732391e8bcaa5e62f4b6ccafa998893a8ba11194",
+                "V7__paperwork_and_recycle_bin.sql", "315109d0f711683fafeafb5c713728291c54a68b24972d8bbf7307d4102f5c4e",
+                "V9__house_facts.sql", "b265b23ce40679f4a3c3c62f270a85fb5f3c2fb6ae6b152ca5691c521b204874");
+
         for (Map.Entry<String, String> e : released.entrySet()) {
             try (InputStream in = Migration.class.getResourceAsStream("migrations/" + e.getKey())) {
                 assertEquals(e.getValue(), java.util.HexFormat.of().formatHex(

@@ -1,11 +1,13 @@
 package app.latentledger.store;
 
+import app.latentledger.core.measure.AirflowBasis;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
+import app.latentledger.core.measure.ProbeMatch;
 import app.latentledger.core.records.Airflow;
-import app.latentledger.core.records.AirflowPoint;
 import app.latentledger.core.records.CoilTemperature;
-import app.latentledger.core.records.CoilTemperatureKind;
 import app.latentledger.core.records.Condensate;
-import app.latentledger.core.records.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.ImportedLog;
@@ -45,20 +47,20 @@ public final class TestRecords {
     public static ReadingSet fullReadingSet(String id, String visitId, int n) {
         return new ReadingSet(id, visitId, T0.plusMinutes(n), "set " + n, "probe A; psychrometer B",
                 new Measurement(24.1 + n * 1e-3, 0.3), new HumidityReading(HumidityKind.WET_BULB, new Measurement(18.2, 0.3)),
-                new Measurement(13.3, 0.3), new HumidityReading(HumidityKind.RH, new Measurement(91.5, 2)),
+                new Measurement(13.3, 0.3), new HumidityReading(HumidityKind.RELATIVE_HUMIDITY, new Measurement(91.5, 2)),
                 new Measurement(31.0, 0.3), new HumidityReading(HumidityKind.DEW_POINT, new Measurement(23.9, 0.5)),
                 new CoilTemperature(CoilTemperatureKind.COIL_SURFACE, new Measurement(8.4, 0.6)),
-                new Airflow(new Measurement(0.5664, 0.0566), AirflowPoint.LEAVING, "traverse"),
+                new Airflow(new Measurement(0.5664, 0.0566), AirflowPoint.LEAVING, "traverse", AirflowBasis.STANDARD),
                 new Measurement(101_200, 300),
                 new Condensate(new Measurement(850e-6, 17e-6), new Measurement(900, 5)),
-                "notes, with a comma and \"quotes\"\nand a second line");
+                "notes, with a comma and \"quotes\"\nand a second line", new ProbeMatch(true, 0.25));
     }
 
     /** Only what is required. */
     public static ReadingSet minimalReadingSet(String id, String visitId) {
         return new ReadingSet(id, visitId, T0, "", "",
-                new Measurement(24, 0.3), new HumidityReading(HumidityKind.RH, new Measurement(55, 2)),
-                new Measurement(13, 0.3), new HumidityReading(HumidityKind.RH, new Measurement(90, 2)),
+                new Measurement(24, 0.3), new HumidityReading(HumidityKind.RELATIVE_HUMIDITY, new Measurement(55, 2)),
+                new Measurement(13, 0.3), new HumidityReading(HumidityKind.RELATIVE_HUMIDITY, new Measurement(90, 2)),
                 null, null, null, null, null, null, "");
     }
 

@@ -3,6 +3,7 @@ package app.latentledger.chart.source;
 import app.latentledger.chart.psychro.ChartPoint;
 import app.latentledger.chart.psychro.CoilProcessOverlay;
 import app.latentledger.core.coil.CoilResult;
+import app.latentledger.core.coil.CoilTemperatureSource;
 
 /**
  * A coil check as the psychrometric chart draws it. The one place the chart learns from a coil
@@ -21,7 +22,7 @@ public final class CoilChartSource {
         ChartPoint leaving = new ChartPoint(name + " supply", r.leaving().dryBulbC(), r.leaving().humidityRatio());
         double adp = r.adp().found() ? r.adp().temperatureC() : Double.NaN;
         // the ADP is drawn on its own; mark a coil temperature only when one was measured
-        double coil = CoilResult.SOURCE_MEASURED.equals(r.coilTemperatureSource()) ? r.coilTemperatureC() : Double.NaN;
+        double coil = r.coilTemperatureSource() == CoilTemperatureSource.MEASURED ? r.coilTemperatureC() : Double.NaN;
         return new CoilProcessOverlay(name, entering, leaving, adp, coil, r.entering().dewPointC());
     }
 

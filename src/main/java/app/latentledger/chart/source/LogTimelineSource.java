@@ -3,8 +3,8 @@ package app.latentledger.chart.source;
 import app.latentledger.chart.timeline.CycleMark;
 import app.latentledger.chart.timeline.TimelineData;
 import app.latentledger.core.cycles.AirSeries;
-import app.latentledger.core.cycles.BlowerState;
 import app.latentledger.core.cycles.Channel;
+import app.latentledger.core.cycles.CycleSeries;
 import app.latentledger.core.cycles.Cycle;
 import app.latentledger.core.cycles.CycleResult;
 import app.latentledger.core.cycles.LogSeries;
@@ -20,13 +20,17 @@ import java.util.List;
 
 /**
  * A logged series and its cycle analysis as the timeline draws them: the one place the timeline
- * learns from the analysis. Relay bands come from the log's status columns when it has them, and
- * otherwise from the cycles the analysis found (so an inferred run shows as inferred timing).
+ * learns from the analysis. The humidity lines are the series the analysis used (after any probe
+ * correction); relay bands are the compressor and blower state per sample as the analysis took them
+ * (status columns when logged, else the runs and blower stops it inferred).
  */
 public final class LogTimelineSource {
     private LogTimelineSource() {
     }
 
+    /**
+     * @param pressurePa kept for callers; the per-sample air comes from the report, as analysed
+     */
     public static TimelineData timeline(LogSeries log, RunCycleReport report, double pressurePa, UnitSystem units,
                                         String title) {
         int n = log.size();
@@ -34,32 +38,21 @@ public final class LogTimelineSource {
         for (int i = 0; i < n; i++) {
             time[i] = log.timeS(i);
         }
-        AirSeries air = AirSeries.of(log, pressurePa);
+        // the series the analysis used (after any probe correction), never worked out a second time
+        CycleSeries used = report.series();
+        AirSeries air = used.air();
         double[] returnW = orNaN(air.returnHumidityRatio(), n);
         double[] supplyW = orNaN(air.supplyHumidityRatio(), n);
         boolean[] compressor = new boolean[n];
         boolean[] blower = new boolean[n];
         boolean compressorColumn = log.has(Channel.COMPRESSOR);
-        boolean fanColumn = log.has(Channel.FAN);
         for (int i = 0; i < n; i++) {
-            compressor[i] = compressorColumn && log.status(Channel.COMPRESSOR, i) == 1;
-            blower[i] = fanColumn && log.status(Channel.FAN, i) == 1;
+            compressor[i] = compressorColumn ? log.status(Channel.COMPRESSOR, i) == 1 : used.compressorOn(i);
+            blower[i] = used.blowerOn(i);
         }
         List<CycleMark> marks = new ArrayList<>();
         for (CycleResult c : report.cycles()) {
             Cycle cy = c.cycle();
-            if (!compressorColumn) {
-                Arrays.fill(compressor, cy.startIndex(), Math.min(cy.stopIndex(), n), true);
-            }
-            if (!fanColumn) {
-                Arrays.fill(blower, cy.startIndex(), Math.min(cy.stopIndex(), n), true);
-                if (cy.offBlower() == BlowerState.ON && Double.isFinite(cy.blowerOnSeconds())) {
-                    double until = cy.startS() + cy.onSeconds() + cy.blowerOnSeconds();
-                    for (int i = cy.stopIndex(); i < Math.min(cy.endIndex(), n) && time[i] <= until; i++) {
-                        blower[i] = true;
-                    }
-                }
-            }
             double onEnd = cy.startS() + cy.onSeconds();
             double end = Math.max(onEnd, cy.startS() + cy.onSeconds() + cy.offSeconds());
             double onset = c.moisture().wet() && Double.isFinite(c.moisture().onsetS())

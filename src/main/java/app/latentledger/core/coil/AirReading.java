@@ -1,8 +1,9 @@
 package app.latentledger.core.coil;
 
 import app.latentledger.core.InvalidInputException;
+import app.latentledger.core.measure.FieldLimits;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.psychro.HandbookEdition;
-import app.latentledger.core.psychro.InputLimits;
 import app.latentledger.core.psychro.MoistAirState;
 import app.latentledger.core.psychro.Psychrometrics;
 import app.latentledger.core.psychro.SaturationPressure;
@@ -23,10 +24,8 @@ public record AirReading(String where, double dryBulbC, double dryBulbTolK, Humi
                          double humiditySi, double humidityTolSi) {
 
     public AirReading {
-        InputLimits.check(where + " dry-bulb tolerance", Quantity.TEMPERATURE_DIFFERENCE, dryBulbTolK, 0, 10, null);
-        double maxTol = humidityKind == HumidityKind.RELATIVE_HUMIDITY ? 50 : 10;
-        InputLimits.check(where + " " + humidityKind.label() + " tolerance", humidityKind.toleranceQuantity(),
-                humidityTolSi, 0, maxTol, null);
+        FieldLimits.TEMPERATURE_TOLERANCE.check(where + " dry-bulb tolerance", dryBulbTolK);
+        humidityKind.toleranceLimit().check(where + " " + humidityKind.label() + " tolerance", humidityTolSi);
     }
 
     /**

@@ -1,8 +1,10 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.measure.ProbeMatch;
 import app.latentledger.core.psychro.Psychrometrics;
 import app.latentledger.core.psychro.SaturationPressure;
 import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.Ratio;
 
 import java.util.ArrayList;
 import java.util.Collections;
@@ -12,9 +14,13 @@ import java.util.List;
  * The coil check as a function of its readings, for uncertainty propagation: the same equations as
  * {@link CoilProcess} and {@link ApparatusDewPoint}, evaluated at any perturbed set of readings.
  * The site pressure is held exact (it is common to both states; its effect is discussed in
- * docs/methods.md §2). Probes are treated as independent (return and supply read by different
- * instruments); a single probe moved between the two would make the errors correlated and the
- * humidity-ratio drop markedly more certain (docs/methods.md §9.7). With outdoor air the
+ * docs/methods.md §2). Probes are independent (return and supply read by different instruments)
+ * unless the readings say one instrument read both, or two probes were compared side by side and
+ * corrected to each other ({@link ProbeMatch#sameInstrument()}): then the two dry bulbs share one
+ * error, and so do the two humidity readings when they are of one kind (correlation 1, JCGM
+ * 100:2008 §5.2), which leaves in the humidity-ratio drop only what the offset does differently
+ * at the two states. An entered supply dew-point offset is taken off the supply reading before
+ * anything else. With outdoor air the
  * entering state is the {@link MixedAir mix} of the return and outdoor readings, so the outdoor
  * dry bulb, humidity and the outdoor-air fraction enter the budget too (independent of the rest).
  */
@@ -39,14 +45,17 @@ public final class CoilModel implements Propagation.Model {
         AirReading e = readings.entering();
         AirReading l = readings.leaving();
         List<UncertainInput> in = new ArrayList<>();
+        boolean same = readings.probes().sameInstrument();
+        String dryBulbGroup = same ? "dryBulbProbe" : null;
+        String humidityGroup = same && e.humidityKind() == l.humidityKind() ? "humidityProbe" : null;
         in.add(new UncertainInput("enteringDryBulb", e.where() + " dry bulb", Quantity.TEMPERATURE_DIFFERENCE,
-                e.dryBulbC(), e.dryBulbTolK()));
+                e.dryBulbC(), e.dryBulbTolK(), dryBulbGroup));
         in.add(new UncertainInput("enteringHumidity", e.where() + " " + e.humidityKind().label(),
-                e.humidityKind().toleranceQuantity(), e.humiditySi(), e.humidityTolSi()));
+                e.humidityKind().toleranceQuantity(), e.humiditySi(), e.humidityTolSi(), humidityGroup));
         in.add(new UncertainInput("leavingDryBulb", l.where() + " dry bulb", Quantity.TEMPERATURE_DIFFERENCE,
-                l.dryBulbC(), l.dryBulbTolK()));
+                l.dryBulbC(), l.dryBulbTolK(), dryBulbGroup));
         in.add(new UncertainInput("leavingHumidity", l.where() + " " + l.humidityKind().label(),
-                l.humidityKind().toleranceQuantity(), l.humiditySi(), l.humidityTolSi()));
+                l.humidityKind().toleranceQuantity(), l.humiditySi(), l.humidityTolSi(), humidityGroup));
         in.add(new UncertainInput("airflow", "airflow", Quantity.AIRFLOW, readings.airflowM3PerS(),
                 readings.airflowTolFraction() * readings.airflowM3PerS()));
         boolean coil = readings.hasCoilTemperature();
@@ -81,7 +90,8 @@ public final class CoilModel implements Propagation.Model {
         double tr = x[ENTERING_DB];
         double t2 = x[LEAVING_DB];
         double wr = AirReading.humidityRatio(readings.entering().humidityKind(), p, tr, x[ENTERING_HUMIDITY], clamp);
-        double w2 = AirReading.humidityRatio(readings.leaving().humidityKind(), p, t2, x[LEAVING_HUMIDITY], clamp);
+        double w2 = supplyOffsetRemoved(readings.probes(), p, t2,
+                AirReading.humidityRatio(readings.leaving().humidityKind(), p, t2, x[LEAVING_HUMIDITY], clamp), clamp);
         double t1 = tr;
         double w1 = wr;
         double wo = Double.NaN;
@@ -105,7 +115,7 @@ public final class CoilModel implements Propagation.Model {
             java.util.Arrays.fill(y, Double.NaN);
             return y;
         }
-        CoilProcess q = CoilProcess.of(p, t1, w1, t2, w2, x[AIRFLOW], readings.airflowAt());
+        CoilProcess q = CoilProcess.of(p, t1, w1, t2, w2, x[AIRFLOW], readings.airflowAt(), readings.airflowBasis());
         ApparatusDewPoint adp = ApparatusDewPoint.find(p, t1, w1, t2, w2);
         double dp1 = dewPoint(w1, p);
         double coil = readings.hasCoilTemperature() ? x[COIL] : adp.temperatureC();
@@ -134,7 +144,44 @@ public final class CoilModel implements Propagation.Model {
                 : Condensate.rateKgPerS(x[CONDENSATE_VOLUME], x[CONDENSATE_TIME]);
         set(y, Measurand.CONDENSATE_RATE, rate);
         set(y, Measurand.CONDENSATE_MINUS_AIRSIDE, rate - q.moistureRemovalKgPerS());
+        double latentFromCondensate = rate * latentHeatJPerKg(t2);
+        set(y, Measurand.LATENT_FROM_CONDENSATE, latentFromCondensate);
+        double sensible = q.sensibleW();
+        set(y, Measurand.SHR_FROM_CONDENSATE, sensible >= 0
+                ? Ratio.of(sensible, sensible + latentFromCondensate, Double.NaN) : Double.NaN);
+        set(y, Measurand.AIRFLOW_PER_NOMINAL_CAPACITY, readings.hasNominalCapacity()
+                ? x[AIRFLOW] / readings.nominalCapacityW() : Double.NaN);
+        set(y, Measurand.LEAVING_RELATIVE_HUMIDITY,
+                Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(w2, p), t2));
         return y;
+    }
+
+    /**
+     * Heat given up per kg of water condensed and drained at the leaving dry bulb, J/kg: the same
+     * h_fg as {@link CoilProcess}'s latent split, (2501 + 1.86 t − 4.186 t) kJ/kg (ASHRAE HoF 2017
+     * ch. 1, eq. 32 constants with the liquid enthalpy 4.186 t), so latent = water removed × h_fg.
+     */
+    static double latentHeatJPerKg(double leavingDryBulbC) {
+        return 2_501_000 + 1_860 * leavingDryBulbC - CoilProcess.CP_LIQUID_WATER * leavingDryBulbC;
+    }
+
+    /**
+     * The supply humidity ratio with the probe's entered dew-point offset taken off: dew point of
+     * {@code w}, minus the offset, back to a humidity ratio (ASHRAE HoF 2017 ch. 1, eqs. 20 and 6).
+     * A corrected dew point above the dry bulb is held at it (clamp) or gives NaN.
+     */
+    static double supplyOffsetRemoved(ProbeMatch probes, double p, double t2, double w, boolean clamp) {
+        if (!probes.hasOffset() || !(w > 0)) {
+            return w;
+        }
+        double dp = SaturationPressure.dewPointC(Psychrometrics.vaporPressurePa(w, p)) - probes.supplyDewPointOffsetK();
+        if (dp > t2) {
+            if (!clamp) {
+                return Double.NaN;
+            }
+            dp = t2;
+        }
+        return Psychrometrics.humidityRatio(SaturationPressure.pascals(dp), p);
     }
 
     private static double dewPoint(double w, double p) {

@@ -1,6 +1,9 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.measure.AirflowBasis;
+import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.psychro.HandbookEdition;
+import app.latentledger.core.units.Ratio;
 
 /**
  * The air-side energy and moisture balance of a cooling-and-dehumidifying coil, by mass flow.
@@ -9,7 +12,8 @@ import app.latentledger.core.psychro.HandbookEdition;
  * dehumidification", Example 3; SI-edition coefficients throughout, so the numbers do not depend
  * on the tech's display units):
  * <ul>
- *   <li>dry-air mass flow ṁ_da = V̇ / v, v by eq. 28 at the point where V̇ was measured;</li>
+ *   <li>dry-air mass flow ṁ_da = V̇ / v, v by eq. 28 at the point where V̇ was measured, for an
+ *       actual airflow; ṁ_da = V̇_std ρ_std / (1 + W) for standard cfm ({@link AirflowBasis});</li>
  *   <li>water removed (eq. 42) ṁ_w = ṁ_da (W₁ − W₂);</li>
  *   <li>total (eq. 43) q = ṁ_da [(h₁ − h₂) − (W₁ − W₂) h_w2], h by eq. 32, with the condensate
  *       leaving at the supply dry bulb, h_w2 = 4.186 t₂ kJ/kg (the liquid-water enthalpy the
@@ -34,7 +38,8 @@ import app.latentledger.core.psychro.HandbookEdition;
  * @param sensibleW             W, positive when cooling
  * @param latentW               W, positive when removing water
  * @param totalW                W
- * @param sensibleHeatRatio     q_s / q; NaN when q = 0
+ * @param sensibleHeatRatio     q_s / q; NaN unless q &gt; 0 and q_s ≥ 0 ({@link Ratio}; the check
+ *                              further withholds it unless q is clearly positive)
  * @param moistureRemovalKgPerS water condensed, kg/s
  * @param humidityRatioDrop     W₁ − W₂, kg/kg
  * @param temperatureDropK      t₁ − t₂, K
@@ -60,19 +65,28 @@ public record CoilProcess(double massFlowKgPerS, double sensibleW, double latent
      * @param at            where the airflow was measured
      */
     public static CoilProcess of(double pressurePa, double t1C, double w1, double t2C, double w2,
-                                 double airflowM3PerS, AirflowLocation at) {
+                                 double airflowM3PerS, AirflowPoint at) {
+        return of(pressurePa, t1C, w1, t2C, w2, airflowM3PerS, at, AirflowBasis.ACTUAL);
+    }
+
+    /**
+     * @param basis actual volume, or standard cfm
+     */
+    public static CoilProcess of(double pressurePa, double t1C, double w1, double t2C, double w2,
+                                 double airflowM3PerS, AirflowPoint at, AirflowBasis basis) {
         HandbookEdition si = HandbookEdition.SI;
-        double v = at == AirflowLocation.ENTERING
+        boolean entering = at == AirflowPoint.ENTERING;
+        double v = entering
                 ? si.specificVolumeM3PerKg(t1C, w1, pressurePa)
                 : si.specificVolumeM3PerKg(t2C, w2, pressurePa);
-        double m = airflowM3PerS / v;
+        double m = basis.dryAirMassFlowKgPerS(airflowM3PerS, v, entering ? w1 : w2);
         double h1 = si.enthalpyJPerKg(t1C, w1);
         double h2 = si.enthalpyJPerKg(t2C, w2);
         double dw = w1 - w2;
         double total = m * ((h1 - h2) - dw * CP_LIQUID_WATER * t2C);
         double sensible = m * (h1 - si.enthalpyJPerKg(t2C, w1));
         double latent = total - sensible;
-        double shr = total == 0 ? Double.NaN : sensible / total;
+        double shr = sensible >= 0 ? Ratio.of(sensible, total, Double.NaN) : Double.NaN;
         double perCapacity = total > 0 ? airflowM3PerS / total : Double.NaN;
         return new CoilProcess(m, sensible, latent, total, shr, m * dw, dw, t1C - t2C, h1 - h2,
                 latent / airflowM3PerS, perCapacity);

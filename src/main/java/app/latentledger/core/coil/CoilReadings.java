@@ -1,7 +1,10 @@
 package app.latentledger.core.coil;
 
-import app.latentledger.core.psychro.InputLimits;
-import app.latentledger.core.units.Quantity;
+import app.latentledger.core.measure.AirflowBasis;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.FieldLimits;
+import app.latentledger.core.measure.ProbeMatch;
 
 import java.util.Objects;
 
@@ -22,51 +25,68 @@ import java.util.Objects;
  * @param condensate         timed condensate catch, or null
  * @param outdoor            outdoor air mixed into the return upstream of the coil, or null when
  *                           the entering reading already is the coil-entering air
+ * @param airflowBasis       whether the airflow is an actual volume or standard cfm
+ * @param probes             whether the return and supply probes are one instrument, and the
+ *                           supply probe's offset
  */
 public record CoilReadings(double pressurePa, AirReading entering, AirReading leaving,
-                           double airflowM3PerS, double airflowTolFraction, AirflowLocation airflowAt,
+                           double airflowM3PerS, double airflowTolFraction, AirflowPoint airflowAt,
                            double coilTemperatureC, double coilTolK, CoilTemperatureKind coilKind,
-                           double nominalCapacityW, Condensate condensate, OutdoorAir outdoor) {
-    /** 20 cfm: below any air handler. */
-    public static final double MIN_AIRFLOW_M3_PER_S = 0.0094;
-    /** 100 000 cfm: above any single coil a field tablet meets. */
-    public static final double MAX_AIRFLOW_M3_PER_S = 47.2;
-    /** Half a ton. */
-    public static final double MIN_NOMINAL_W = 1758.0;
-    /** 500 tons. */
-    public static final double MAX_NOMINAL_W = 1.76e6;
-
+                           double nominalCapacityW, Condensate condensate, OutdoorAir outdoor,
+                           AirflowBasis airflowBasis, ProbeMatch probes) {
     public CoilReadings {
         Objects.requireNonNull(entering, "entering");
         Objects.requireNonNull(leaving, "leaving");
         Objects.requireNonNull(airflowAt, "airflowAt");
-        InputLimits.checkPressure("pressure", pressurePa);
-        InputLimits.check("airflow", Quantity.AIRFLOW, airflowM3PerS, MIN_AIRFLOW_M3_PER_S, MAX_AIRFLOW_M3_PER_S, null);
-        InputLimits.check("airflow tolerance", Quantity.FRACTION_PERCENT, airflowTolFraction, 0, 0.5, null);
+        Objects.requireNonNull(airflowBasis, "airflowBasis");
+        Objects.requireNonNull(probes, "probes");
+        FieldLimits.PRESSURE.check(pressurePa);
+        FieldLimits.AIRFLOW.check(airflowM3PerS);
+        FieldLimits.AIRFLOW_TOLERANCE.check(airflowTolFraction);
         if (!Double.isNaN(coilTemperatureC)) {
-            InputLimits.check("coil temperature", Quantity.TEMPERATURE, coilTemperatureC, -30.0, 35.0,
-                    "a cooling coil runs between about −20 °F and 95 °F");
-            InputLimits.check("coil temperature tolerance", Quantity.TEMPERATURE_DIFFERENCE, coilTolK, 0, 10, null);
+            FieldLimits.COIL_TEMPERATURE.check(coilTemperatureC);
+            FieldLimits.TEMPERATURE_TOLERANCE.check("coil temperature tolerance", coilTolK);
             Objects.requireNonNull(coilKind, "coilKind");
         }
         if (!Double.isNaN(nominalCapacityW)) {
-            InputLimits.check("nominal capacity", Quantity.POWER_LARGE, nominalCapacityW, MIN_NOMINAL_W, MAX_NOMINAL_W, null);
+            FieldLimits.NOMINAL_CAPACITY.check(nominalCapacityW);
         }
     }
 
     /** Readings without outdoor air: the entering reading is the air entering the coil. */
     public CoilReadings(double pressurePa, AirReading entering, AirReading leaving,
-                        double airflowM3PerS, double airflowTolFraction, AirflowLocation airflowAt,
+                        double airflowM3PerS, double airflowTolFraction, AirflowPoint airflowAt,
                         double coilTemperatureC, double coilTolK, CoilTemperatureKind coilKind,
                         double nominalCapacityW, Condensate condensate) {
         this(pressurePa, entering, leaving, airflowM3PerS, airflowTolFraction, airflowAt, coilTemperatureC, coilTolK,
                 coilKind, nominalCapacityW, condensate, null);
     }
 
+    /** Readings with an actual airflow and independent probes. */
+    public CoilReadings(double pressurePa, AirReading entering, AirReading leaving,
+                        double airflowM3PerS, double airflowTolFraction, AirflowPoint airflowAt,
+                        double coilTemperatureC, double coilTolK, CoilTemperatureKind coilKind,
+                        double nominalCapacityW, Condensate condensate, OutdoorAir outdoor) {
+        this(pressurePa, entering, leaving, airflowM3PerS, airflowTolFraction, airflowAt, coilTemperatureC, coilTolK,
+                coilKind, nominalCapacityW, condensate, outdoor, AirflowBasis.ACTUAL, ProbeMatch.INDEPENDENT);
+    }
+
     /** These readings with outdoor air mixed into the return upstream of the coil. */
     public CoilReadings withOutdoor(OutdoorAir air) {
         return new CoilReadings(pressurePa, entering, leaving, airflowM3PerS, airflowTolFraction, airflowAt,
-                coilTemperatureC, coilTolK, coilKind, nominalCapacityW, condensate, air);
+                coilTemperatureC, coilTolK, coilKind, nominalCapacityW, condensate, air, airflowBasis, probes);
+    }
+
+    /** These readings with the airflow read on {@code basis}. */
+    public CoilReadings withAirflowBasis(AirflowBasis basis) {
+        return new CoilReadings(pressurePa, entering, leaving, airflowM3PerS, airflowTolFraction, airflowAt,
+                coilTemperatureC, coilTolK, coilKind, nominalCapacityW, condensate, outdoor, basis, probes);
+    }
+
+    /** These readings with the probes related as {@code match}. */
+    public CoilReadings withProbes(ProbeMatch match) {
+        return new CoilReadings(pressurePa, entering, leaving, airflowM3PerS, airflowTolFraction, airflowAt,
+                coilTemperatureC, coilTolK, coilKind, nominalCapacityW, condensate, outdoor, airflowBasis, match);
     }
 
     /** True when the entering state is computed as a mix of return and outdoor air. */

@@ -19,7 +19,7 @@ import java.util.Map;
  * @param adp                 apparatus dew point and bypass factor, or why there is none
  * @param coilTemperatureC    the coil temperature compared with the dew point (measured, or the
  *                            ADP), or NaN
- * @param coilTemperatureSource "measured" | "apparatus-dew-point" | "none"
+ * @param coilTemperatureSource which coil temperature stood in
  * @param estimates           each measurand with its expanded uncertainty (k = 2)
  * @param marginCall          the dew-point margin's call
  * @param dropCall            the humidity-ratio drop's call
@@ -32,27 +32,20 @@ import java.util.Map;
  * @param mix                 the adiabatic mix that gave {@code entering}, or null
  */
 public record CoilResult(CoilReadings readings, MoistAirState entering, MoistAirState leaving, CoilProcess process,
-                         ApparatusDewPoint adp, double coilTemperatureC, String coilTemperatureSource,
+                         ApparatusDewPoint adp, double coilTemperatureC, CoilTemperatureSource coilTemperatureSource,
                          Map<Measurand, Estimate> estimates, CoilVerdict.Call marginCall,
                          CoilVerdict.Call dropCall, CoilVerdict verdict, CondensateCheck condensate,
                          List<Finding> findings, MoistAirState returnAir, MoistAirState outdoorAir,
                          AdiabaticMixing.Mix mix) {
-    public static final String SOURCE_MEASURED = "measured";
-    /** {@link #enteringSource()}: the entering state is a reading. */
-    public static final String ENTERING_MEASURED = "measured";
-    /** {@link #enteringSource()}: the entering state is computed as a mix of return and outdoor air. */
-    public static final String ENTERING_MIXED = "mixed";
-    public static final String SOURCE_ADP = "apparatus-dew-point";
-    public static final String SOURCE_NONE = "none";
 
     public CoilResult {
         estimates = Map.copyOf(estimates);
         findings = List.copyOf(findings);
     }
 
-    /** "measured" | "mixed". */
-    public String enteringSource() {
-        return mix != null ? ENTERING_MIXED : ENTERING_MEASURED;
+    /** A reading, or the mix of return and outdoor air. */
+    public EnteringSource enteringSource() {
+        return mix != null ? EnteringSource.MIXED : EnteringSource.MEASURED;
     }
 
     public boolean mixed() {

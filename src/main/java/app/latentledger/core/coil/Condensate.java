@@ -1,5 +1,6 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.psychro.InputLimits;
 import app.latentledger.core.units.Quantity;
 
@@ -21,11 +22,9 @@ public record Condensate(double volumeM3, double volumeTolFraction, double secon
     public static final double WATER_DENSITY_KG_PER_M3 = 1000.0;
 
     public Condensate {
-        InputLimits.check("condensate volume", Quantity.WATER_VOLUME, volumeM3, 0, 0.05,
-                "more than 50 L in one catch is not a condensate reading");
-        InputLimits.check("condensate minutes", Quantity.DURATION_MINUTES, seconds, 30, 24 * 3600.0,
-                "time at least half a minute");
-        InputLimits.check("condensate volume tolerance", Quantity.FRACTION_PERCENT, volumeTolFraction, 0, 0.5, null);
+        FieldLimits.CONDENSATE_VOLUME.check(volumeM3);
+        FieldLimits.COLLECTION_TIME.check("condensate minutes", seconds);
+        FieldLimits.CONDENSATE_VOLUME_TOLERANCE.check(volumeTolFraction);
         InputLimits.check("condensate timing tolerance", Quantity.DURATION_SECONDS, secondsTolS, 0, seconds / 2, null);
     }
 

@@ -7,6 +7,9 @@ package app.latentledger.core.coil;
  * @param expandedSi expanded uncertainty, k = 2, SI; NaN when not assessable
  */
 public record Estimate(double valueSi, double expandedSi) {
+    /** A result that does not exist (or is withheld as not measurable). */
+    public static final Estimate NONE = new Estimate(Double.NaN, Double.NaN);
+
     public boolean exists() {
         return Double.isFinite(valueSi);
     }

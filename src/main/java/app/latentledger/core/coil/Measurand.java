@@ -24,9 +24,19 @@ public enum Measurand {
     BYPASS_FACTOR("bypassFactor", "bypass factor", Quantity.DIMENSIONLESS),
     COIL_TEMPERATURE("coilTemperature", "coil temperature", Quantity.TEMPERATURE),
     DEW_POINT_MARGIN("dewPointMargin", "entering dew point minus coil temperature", Quantity.TEMPERATURE_DIFFERENCE),
-    AIRFLOW_PER_CAPACITY("airflowPerTon", "airflow per unit of measured total capacity", Quantity.AIRFLOW_PER_CAPACITY),
+    /** Airflow over the measured total: shown for reference only; findings judge airflow per nominal ton. */
+    AIRFLOW_PER_CAPACITY("airflowPerMeasuredTon", "airflow per unit of measured total capacity", Quantity.AIRFLOW_PER_CAPACITY),
+    /** Airflow as given over the nameplate capacity; does not exist without a nameplate. */
+    AIRFLOW_PER_NOMINAL_CAPACITY("airflowPerTon", "airflow per unit of nominal (nameplate) capacity",
+            Quantity.AIRFLOW_PER_CAPACITY),
     CONDENSATE_RATE("condensateRate", "condensate caught per hour", Quantity.WATER_RATE),
-    CONDENSATE_MINUS_AIRSIDE("condensateMinusAirside", "condensate minus air-side moisture removal", Quantity.WATER_RATE);
+    CONDENSATE_MINUS_AIRSIDE("condensateMinusAirside", "condensate minus air-side moisture removal", Quantity.WATER_RATE),
+    /** Latent capacity from the water caught: condensate rate × h_fg at the leaving dry bulb. */
+    LATENT_FROM_CONDENSATE("latentFromCondensate", "latent capacity from the condensate caught", Quantity.POWER),
+    /** Sensible ÷ (sensible + latent from the condensate caught). */
+    SHR_FROM_CONDENSATE("shrFromCondensate", "sensible heat ratio with latent from the condensate caught",
+            Quantity.DIMENSIONLESS),
+    LEAVING_RELATIVE_HUMIDITY("leavingRelativeHumidity", "leaving (supply) relative humidity", Quantity.RELATIVE_HUMIDITY);
 
     private final String key;
     private final String label;

@@ -1,7 +1,6 @@
 package app.latentledger.core.coil;
 
-import app.latentledger.core.psychro.InputLimits;
-import app.latentledger.core.units.Quantity;
+import app.latentledger.core.measure.FieldLimits;
 
 import java.util.Objects;
 
@@ -24,8 +23,7 @@ import java.util.Objects;
 public record OutdoorAir(AirReading air, double fraction, double fractionTol) {
     public OutdoorAir {
         Objects.requireNonNull(air, "air");
-        InputLimits.check("outdoor-air fraction", Quantity.FRACTION_PERCENT, fraction, 0, 1,
-                "a share of the coil airflow lies between 0 and 100 %");
-        InputLimits.check("outdoor-air fraction tolerance", Quantity.FRACTION_PERCENT, fractionTol, 0, 0.5, null);
+        FieldLimits.OUTDOOR_FRACTION.check(fraction);
+        FieldLimits.OUTDOOR_FRACTION_TOLERANCE.check(fractionTol);
     }
 }

@@ -8,13 +8,16 @@ import java.util.SplittableRandom;
  * Propagation of instrument tolerances through a model y = f(x), two ways.
  *
  * <ul>
- *   <li><b>First order</b> (JCGM 100:2008, GUM §5.1.2, uncorrelated inputs):
- *       u_c²(y) = Σ c_i² u²(x_i), sensitivity coefficients c_i = ∂f/∂x_i taken numerically by
+ *   <li><b>First order</b> (JCGM 100:2008, GUM §5.1.2; correlated inputs by §5.2.2):
+ *       u_c²(y) = Σ_i Σ_j c_i c_j r_ij u(x_i) u(x_j), r_ij = 1 for i = j and for inputs in the same
+ *       {@link UncertainInput#correlationGroup() correlation group}, 0 otherwise (so with no groups,
+ *       Σ c_i² u²(x_i)); sensitivity coefficients c_i = ∂f/∂x_i taken numerically by
  *       central differences with steps of 10⁻³ u(x_i); where one side of a step leaves the
  *       physical range (RH above 100 %, no apparatus dew point), a one-sided difference is used.
  *       Expanded uncertainty U = k u_c, k = 2 (≈ 95 % for a near-normal output).</li>
  *   <li><b>Monte Carlo</b> (JCGM 101:2008, Supplement 1): draws every input from its rectangular
- *       distribution, evaluates the model with readings past saturation held at it, and reports
+ *       distribution (inputs of one correlation group from one shared draw, scaled by each
+ *       half-width), evaluates the model with readings past saturation held at it, and reports
  *       the standard deviation of the outputs (times k = 2, for comparison with the first-order U)
  *       and the probabilistically symmetric 95 % coverage interval.</li>
  * </ul>
@@ -53,12 +56,13 @@ public final class Propagation {
     public static Result firstOrder(List<UncertainInput> inputs, Model model) {
         double[] x0 = nominal(inputs);
         double[] y0 = model.evaluate(x0, false);
-        double[] sumSq = new double[y0.length];
+        double[][] cu = new double[x0.length][]; // c_i u(x_i) per output
         for (int i = 0; i < x0.length; i++) {
             double u = inputs.get(i).standardUncertainty();
             if (u == 0) {
                 continue;
             }
+            cu[i] = new double[y0.length];
             double h = u * 1e-3;
             double[] up = model.evaluate(shift(x0, i, h), false);
             double[] down = model.evaluate(shift(x0, i, -h), false);
@@ -73,7 +77,21 @@ public final class Propagation {
                 } else {
                     c = Double.NaN;
                 }
-                sumSq[j] += c * u * (c * u);
+                cu[i][j] = c * u;
+            }
+        }
+        double[] sumSq = new double[y0.length];
+        for (int i = 0; i < x0.length; i++) {
+            if (cu[i] == null) {
+                continue;
+            }
+            for (int k = 0; k < x0.length; k++) {
+                if (cu[k] == null || (k != i && !inputs.get(i).correlatedWith(inputs.get(k)))) {
+                    continue;
+                }
+                for (int j = 0; j < y0.length; j++) {
+                    sumSq[j] += cu[i][j] * cu[k][j];
+                }
             }
         }
         double[] standard = new double[y0.length];
@@ -100,9 +118,13 @@ public final class Propagation {
         SplittableRandom random = new SplittableRandom(seed);
         double[] x = new double[x0.length];
         for (int d = 0; d < draws; d++) {
+            java.util.Map<String, Double> shared = new java.util.HashMap<>();
             for (int i = 0; i < x0.length; i++) {
                 double a = inputs.get(i).halfWidthSi();
-                x[i] = a == 0 ? x0[i] : x0[i] + a * (2 * random.nextDouble() - 1);
+                String group = inputs.get(i).correlationGroup();
+                double draw = group == null ? 2 * random.nextDouble() - 1
+                        : shared.computeIfAbsent(group, g -> 2 * random.nextDouble() - 1);
+                x[i] = a == 0 ? x0[i] : x0[i] + a * draw;
             }
             double[] y = model.evaluate(x, true);
             for (int j = 0; j < m; j++) {

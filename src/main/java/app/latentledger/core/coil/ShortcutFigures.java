@@ -1,5 +1,6 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.units.Conversions;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
@@ -50,7 +51,16 @@ public record ShortcutFigures(UnitSystem convention, double pressureRatio, doubl
      */
     public static ShortcutFigures of(UnitSystem convention, double pressurePa, double airflowM3PerS,
                                      CoilProcess process) {
-        double r = pressureRatio(pressurePa);
+        return of(convention, pressurePa, airflowM3PerS, process, AirflowBasis.ACTUAL);
+    }
+
+    /**
+     * @param basis standard cfm already stands for standard-air mass, so its constants are not
+     *              scaled (ratio 1); an actual airflow gets the altitude ratio p/p₀
+     */
+    public static ShortcutFigures of(UnitSystem convention, double pressurePa, double airflowM3PerS,
+                                     CoilProcess process, AirflowBasis basis) {
+        double r = basis == AirflowBasis.STANDARD ? 1.0 : pressureRatio(pressurePa);
         if (convention == UnitSystem.IP) {
             double cfm = Quantity.AIRFLOW.toDisplay(UnitSystem.IP, airflowM3PerS);
             double dtF = process.temperatureDropK() * 1.8;

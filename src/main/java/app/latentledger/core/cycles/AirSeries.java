@@ -26,6 +26,7 @@ public final class AirSeries {
     /** 1 / v of the return air, kg dry air per m³: turns airflow into dry-air mass flow. */
     final double[] returnDryAirDensity;
     final boolean humidity;
+    private final double pressurePa;
 
     /** Per-sample air of {@code log} at {@code pressurePa}, as the analysis sees it (before any probe-offset correction). */
     public static AirSeries of(LogSeries log, double pressurePa) {
@@ -53,6 +54,7 @@ public final class AirSeries {
     }
 
     AirSeries(LogSeries log, double pressurePa) {
+        this.pressurePa = pressurePa;
         size = log.size();
         returnDbC = column(log, Channel.RETURN_DB);
         supplyDbC = column(log, Channel.SUPPLY_DB);
@@ -131,6 +133,33 @@ public final class AirSeries {
             double corrected = Math.max(0.0, Math.min(100.0, rh - offsetRhPct));
             supplyW[i] = Psychrometrics.humidityRatio(corrected / 100.0 * pws, pressurePa);
             supplyH[i] = EDITION.enthalpyJPerKg(t, supplyW[i]);
+        }
+    }
+
+    /** Enthalpy by the edition the series uses (eq. 32), J/kg. */
+    static double enthalpy(double dryBulbC, double w) {
+        return EDITION.enthalpyJPerKg(dryBulbC, w);
+    }
+
+    /**
+     * Takes a humidity probe's lag of {@code lagS} out of the supply humidity ratio (see
+     * {@link HumidityLag}) and recomputes the supply enthalpy; gaps longer than {@code gapS} are not
+     * bridged.
+     */
+    void sharpenSupplyHumidity(LogSeries log, double lagS, double gapS) {
+        if (supplyW == null || !(lagS > 0)) {
+            return;
+        }
+        double[] w = supplyW.clone();
+        for (int i = 0; i < size; i++) {
+            boolean gapNear = i > 0 && log.timeS(i) - log.timeS(i - 1) > gapS
+                    || i + 1 < size && log.timeS(i + 1) - log.timeS(i) > gapS;
+            double x = gapNear ? w[i] : HumidityLag.sharpened(log, w, i, lagS);
+            double cap = Double.isNaN(supplyDbC[i]) ? Double.NaN
+                    : Psychrometrics.saturationHumidityRatio(supplyDbC[i], pressurePa);
+            supplyW[i] = Double.isNaN(x) ? x : Math.max(0.0, Double.isNaN(cap) ? x : Math.min(cap, x));
+            supplyH[i] = Double.isNaN(supplyW[i]) || Double.isNaN(supplyDbC[i]) ? Double.NaN
+                    : EDITION.enthalpyJPerKg(supplyDbC[i], supplyW[i]);
         }
     }
 

@@ -20,19 +20,16 @@ import java.util.List;
  * and runs or rests shorter than {@link Thresholds#MIN_RUN_TIME} are merged away. Signatures after
  * docs/methods.md §9.9 (common practice).
  *
- * <p>Blower in the rest: from the {@code fan} column when logged; otherwise judged from 90 s to
- * 10 min into the rest: with the blower on, air passes the stopped coil and any evaporation is
- * adiabatic, so supply enthalpy stays within {@link Thresholds#BLOWER_ENTHALPY_BAND} of the return
- * (supply ≈ return dry bulb on a dry coil, cooler and more humid on a wet one); with the blower off
- * the still supply probe stays colder and drier than that, drifting slowly (docs/methods.md §9.9).
+ * <p>Blower in the rest: from the {@code fan} column when logged; otherwise sample by sample from
+ * the air, by {@link BlowerInference}: running while the supply stays on the return's enthalpy
+ * (adiabatic evaporation from the stopped coil, or a dry coil), stopped from where it leaves it. A
+ * rest whose blower ran less than half of it is OFF with a fan-off delay of that length.
  *
  * <p>A sample interval over {@link Thresholds#GAP_FACTOR} × the log's median breaks the record: a
  * run across it is dropped (its length is unknown) and a rest ends at it. A run still going when
  * the log ends is dropped the same way, and the rest before it ends at its start (it is not rest).
  */
 public final class CycleDetector {
-    private static final double BLOWER_JUDGE_FROM_S = 90.0;
-    private static final double BLOWER_JUDGE_TO_S = 600.0;
 
     /** Stop index of a run broken by a gap: its start bounds the rest before it, it makes no cycle. */
     private static final int BROKEN = -1;
@@ -43,11 +40,27 @@ public final class CycleDetector {
         this.settings = settings;
     }
 
-    /** Runs found, in order; only runs whose start and stop were both seen. */
-    List<Cycle> detect(LogSeries log, AirSeries air) {
+    /**
+     * Runs found, in order (only runs whose start and stop were both seen), with the compressor and
+     * blower state of every sample.
+     *
+     * @param cycles     the complete runs with their rests
+     * @param compressor per sample: 1 running, 0 resting, {@link LogSeries#UNKNOWN} outside the cycles
+     * @param blower     per sample: 1 blower on, 0 off, {@link LogSeries#UNKNOWN} when it cannot be told
+     */
+    record Detection(List<Cycle> cycles, byte[] compressor, byte[] blower) {
+    }
+
+    Detection detect(LogSeries log, AirSeries air) {
         boolean fromStatus = log.has(Channel.COMPRESSOR);
         List<int[]> runs = fromStatus ? runsFromStatus(log) : runsFromTemperatures(log, air);
-        return cycles(log, air, runs, fromStatus);
+        int n = log.size();
+        byte[] compressor = new byte[n];
+        byte[] blower = new byte[n];
+        java.util.Arrays.fill(compressor, LogSeries.UNKNOWN);
+        java.util.Arrays.fill(blower, LogSeries.UNKNOWN);
+        List<Cycle> cycles = cycles(log, air, runs, fromStatus, compressor, blower);
+        return new Detection(cycles, compressor, blower);
     }
 
     double gapS(LogSeries log) {
@@ -253,7 +266,9 @@ public final class CycleDetector {
         return merged;
     }
 
-    private List<Cycle> cycles(LogSeries log, AirSeries air, List<int[]> runs, boolean fromStatus) {
+    private List<Cycle> cycles(LogSeries log, AirSeries air, List<int[]> runs, boolean fromStatus, byte[] compressor,
+                               byte[] blower) {
+        double band = settings.valueSi(Thresholds.BLOWER_ENTHALPY_BAND);
         List<Cycle> out = new ArrayList<>();
         double gap = gapS(log);
         int n = log.size();
@@ -276,17 +291,32 @@ public final class CycleDetector {
             double offEndS = e < n && complete ? log.timeS(e) : log.timeS(e - 1);
             double onS = log.timeS(b) - log.timeS(a);
             double offS = offEndS - log.timeS(b);
-            BlowerState blower;
+            java.util.Arrays.fill(compressor, a, b, (byte) 1);
+            java.util.Arrays.fill(compressor, b, e, (byte) 0);
+            BlowerState state;
             double blowerOnS;
             if (log.has(Channel.FAN)) {
                 blowerOnS = fanSeconds(log, b, e, gap);
-                blower = Double.isNaN(blowerOnS) ? BlowerState.UNKNOWN
+                state = Double.isNaN(blowerOnS) ? BlowerState.UNKNOWN
                         : blowerOnS >= 0.5 * offS ? BlowerState.ON : BlowerState.OFF;
+                for (int i = a; i < e; i++) {
+                    blower[i] = log.status(Channel.FAN, i);
+                }
             } else {
-                blower = inferBlower(log, air, b, e);
-                blowerOnS = blower == BlowerState.ON ? offS : blower == BlowerState.OFF ? 0.0 : Double.NaN;
+                // the blower runs with the compressor (thermostat G with Y, common practice)
+                java.util.Arrays.fill(blower, a, b, (byte) 1);
+                int end = BlowerInference.blowerEnd(log, air, b, e, band, gap);
+                if (end < 0) {
+                    state = BlowerState.UNKNOWN;
+                    blowerOnS = Double.NaN;
+                } else {
+                    java.util.Arrays.fill(blower, b, end, (byte) 1);
+                    java.util.Arrays.fill(blower, end, e, (byte) 0);
+                    blowerOnS = end == e ? offS : end == b ? 0.0 : log.timeS(end) - log.timeS(b);
+                    state = blowerOnS >= 0.5 * offS ? BlowerState.ON : BlowerState.OFF;
+                }
             }
-            out.add(new Cycle(a, b, e, log.timeS(a), onS, offS, complete, blower, blowerOnS, fromStatus));
+            out.add(new Cycle(a, b, e, log.timeS(a), onS, offS, complete, state, blowerOnS, fromStatus));
         }
         return out;
     }
@@ -311,33 +341,5 @@ public final class CycleDetector {
             }
         }
         return totalS > 0 && knownS < 0.5 * totalS ? Double.NaN : onS;
-    }
-
-    private BlowerState inferBlower(LogSeries log, AirSeries air, int from, int to) {
-        if (!air.humidity) {
-            return BlowerState.UNKNOWN;
-        }
-        double band = settings.valueSi(Thresholds.BLOWER_ENTHALPY_BAND);
-        double t0 = log.timeS(from);
-        double[] dh = new double[Math.max(0, to - from)];
-        int m = 0;
-        for (int i = from; i < to; i++) {
-            double s = log.timeS(i) - t0;
-            if (s < BLOWER_JUDGE_FROM_S || s > BLOWER_JUDGE_TO_S) {
-                continue;
-            }
-            double d = air.supplyH[i] - air.returnH[i];
-            if (!Double.isNaN(d)) {
-                dh[m++] = d;
-            }
-        }
-        if (m < 2) {
-            return BlowerState.UNKNOWN;
-        }
-        double median = Stats.median(dh, m);
-        if (Math.abs(median) <= band) {
-            return BlowerState.ON;
-        }
-        return median < -band ? BlowerState.OFF : BlowerState.UNKNOWN;
     }
 }

@@ -15,8 +15,9 @@ import java.util.Locale;
 
 /**
  * Findings from logged run cycles. Codes are stable: {@code short-cycling},
- * {@code short-cycling-limits-latent}, {@code off-cycle-reevaporation}, {@code coil-never-wet},
- * {@code sensor-offset}. Each threshold and its source is in the "logged run cycles" section of
+ * {@code short-cycling-limits-latent}, {@code off-cycle-reevaporation},
+ * {@code fan-off-delay-reevaporation}, {@code coil-never-wet}, {@code sensor-offset},
+ * {@code humid-while-off}, {@code oversized-for-load}. Each threshold and its source is in the "logged run cycles" section of
  * {@link Thresholds}.
  */
 final class CycleFindings {
@@ -29,6 +30,7 @@ final class CycleFindings {
     List<Finding> find(RunCycleReport r) {
         List<Finding> out = new ArrayList<>();
         if (r.cycles().isEmpty()) {
+            humidWhileOff(r, out);
             return out;
         }
         boolean shortCycling = shortCycling(r, out);
@@ -38,6 +40,8 @@ final class CycleFindings {
         reevaporation(r, out);
         coilNeverWet(r, out);
         sensorOffset(r, out);
+        humidWhileOff(r, out);
+        oversizedForLoad(r, out);
         out.sort(Comparator.comparing(Finding::severity).reversed());
         return out;
     }
@@ -77,12 +81,15 @@ final class CycleFindings {
             return;
         }
         String which = Double.isNaN(measured) ? "predicted" : "measured";
-        out.add(new Finding(FindingCode.SHORT_CYCLING_LIMITS_LATENT, Severity.FIX,
-                String.format(Locale.ROOT, "The runs are too short to dry the house: the system removes about"
-                        + " %.0f %% of the moisture it removes when it runs steadily.", 100 * judged),
-                String.format(Locale.ROOT, "latent fraction %s %.2f (measured %s, predicted %s by Henderson &"
+        String sentence = judged < 0
+                ? "The runs are too short to dry the house: over the logged cycles the system put back at least as"
+                        + " much moisture as it removed."
+                : String.format(Locale.ROOT, "The runs are too short to dry the house: the system removes about"
+                        + " %.0f %% of the moisture it removes when it runs steadily.", 100 * judged);
+        out.add(new Finding(FindingCode.SHORT_CYCLING_LIMITS_LATENT, Severity.FIX, sentence,
+                String.format(Locale.ROOT, "latent fraction %s %s (measured %s, predicted %s by Henderson &"
                                 + " Rengarajan 1996 with t_wet %.0f s, gamma %.2f, tau %.0f s, %s) below %.2f"
-                                + " (common practice, no source)", which, judged, fraction(measured),
+                                + " (common practice, no source)", which, fraction(judged), fraction(measured),
                         fraction(predicted), r.model().twetS(), r.model().gamma(), r.model().tauS(),
                         r.model().source(), min),
                 List.of(Evidence.of("latentFractionMeasured", "measured share of steady moisture removal",
@@ -102,6 +109,33 @@ final class CycleFindings {
         if (r.blowerOnRests() == 0 && !(r.returnedKg() > 0) || !(share >= min)) {
             return;
         }
+        long through = r.cycles().stream().filter(c -> c.cycle().offBlower() == BlowerState.ON).count();
+        boolean delay = r.fanOffDelayRests() > through;
+        List<Evidence> evidence = List.of(Evidence.of("reevaporationShare", "share of removed moisture put back",
+                        Quantity.FRACTION_PERCENT, share),
+                Evidence.of("moistureReturned", "water put back while the blower ran in rests", Quantity.WATER_MASS,
+                        r.returnedKg()),
+                Evidence.of("moistureRemoved", "water removed during runs", Quantity.WATER_MASS, r.removedKg()),
+                Evidence.of("fanOffDelay", "median blower run-on after the compressor stops",
+                        Quantity.DURATION_MINUTES, r.fanOffDelayMedianS()));
+        String source = r.blowerInferred() ? "blower stop found from the air (end of the constant-enthalpy"
+                + " signature)" : "blower from its status column";
+        if (delay) {
+            out.add(new Finding(FindingCode.FAN_OFF_DELAY_REEVAPORATION, Severity.FIX,
+                    String.format(Locale.ROOT, "After the compressor stops, the blower runs on for about %.1f minutes"
+                            + " and blows water from the wet coil back into the house: about %.0f %% of what it"
+                            + " removed.", r.fanOffDelayMedianS() / 60.0, 100 * share),
+                    String.format(Locale.ROOT, "fan-off delay median %.0f s in %d of %d rests (%s); rests returned"
+                                    + " %.0f %% of the moisture removed; limit %.0f %% (common practice, no source)",
+                            r.fanOffDelayMedianS(), r.fanOffDelayRests(), r.cycles().size(), source, 100 * share,
+                            100 * min),
+                    evidence,
+                    List.of("Shorten the air handler's or thermostat's fan-off delay (the fan is already on AUTO"
+                                    + " if the blower stops by itself)",
+                            "Where the equipment allows, choose a dehumidifying or no-delay blower profile",
+                            "Check that the condensate pan drains freely (standing water re-evaporates too)")));
+            return;
+        }
         double[] blower = r.cycles().stream().mapToDouble(c -> c.cycle().blowerOnSeconds())
                 .filter(v -> v > 0).sorted().toArray();
         double medianBlower = blower.length == 0 ? Double.NaN : blower[blower.length / 2];
@@ -110,18 +144,80 @@ final class CycleFindings {
                         + " from the wet coil back into the house: about %.0f %% of what it removed.", 100 * share),
                 // the masses themselves go in the evidence, which every display shows in the tech's units
                 String.format(Locale.ROOT, "blower-on rests returned %.0f %% of the moisture removed;"
-                                + " blower ran on after the compressor in %d of %d rests (median %.1f min);"
+                                + " blower ran on after the compressor in %d of %d rests (median %.1f min, %s);"
                                 + " limit %.0f %% (common practice, no source)",
-                        100 * share,
-                        r.blowerOnRests(), r.cycles().size(), medianBlower / 60.0, 100 * min),
-                List.of(Evidence.of("reevaporationShare", "share of removed moisture put back",
-                                Quantity.FRACTION_PERCENT, share),
-                        Evidence.of("moistureReturned", "water put back in blower-on rests", Quantity.WATER_MASS,
-                                r.returnedKg()),
-                        Evidence.of("moistureRemoved", "water removed during runs", Quantity.WATER_MASS, r.removedKg())),
+                        100 * share, r.blowerOnRests(), r.cycles().size(), medianBlower / 60.0, source, 100 * min),
+                evidence,
                 List.of("Set the thermostat fan to AUTO rather than ON",
                         "Check the air handler's fan-off delay and shorten it if the complaint persists",
                         "Check that the condensate pan drains freely (standing water re-evaporates too)")));
+    }
+
+    private void humidWhileOff(RunCycleReport r, List<Finding> out) {
+        HouseHumidity h = r.house();
+        if (h == null || h.longOffPeriods() == 0) {
+            return;
+        }
+        double gain = settings.valueSi(Thresholds.OFF_MOISTURE_GAIN);
+        double rhTarget = settings.valueSi(Thresholds.INDOOR_RH_TARGET);
+        double dpMax = settings.valueSi(Thresholds.INDOOR_DEW_POINT_MAX);
+        boolean humid = h.rhP95Pct() > rhTarget || h.dewPointP95C() > dpMax;
+        if (!(h.offTrendPerHour() > gain) || !humid) {
+            return;
+        }
+        out.add(new Finding(FindingCode.HUMID_WHILE_OFF, Severity.CHECK,
+                "While the air conditioner was off or satisfied, the house kept getting more humid: the moisture"
+                        + " comes in or is made faster than the short runs take it out.",
+                String.format(Locale.ROOT, "return humidity ratio rose %.2f g/kg per hour (median of %d off periods"
+                                + " ≥ %.0f min, %.1f h in all; limit %.2f g/kg per hour, common practice, no source);"
+                                + " return RH p95 %.0f %% (target %.0f %%), dew point p95 %.1f °C (benchmark %.1f °C)"
+                                + "%s", 1000 * h.offTrendPerHour(), h.longOffPeriods(),
+                        settings.valueSi(Thresholds.LONG_OFF_PERIOD) / 60.0, h.longOffHours(), 1000 * gain,
+                        h.rhP95Pct(), rhTarget, h.dewPointP95C(), dpMax,
+                        Double.isNaN(h.outdoorDewPointMedianC()) ? ""
+                                : String.format(Locale.ROOT, "; indoor dew point %+.1f K against outdoors",
+                                h.indoorMinusOutdoorDewPointK())),
+                List.of(Evidence.of("offMoistureGain", "rise of the house's humidity ratio per hour while off",
+                                Quantity.HUMIDITY_RATIO_FINE, h.offTrendPerHour()),
+                        Evidence.of("returnRhP95", "return RH, 95th percentile", Quantity.RELATIVE_HUMIDITY, h.rhP95Pct()),
+                        Evidence.of("returnDewPointP95", "return dew point, 95th percentile", Quantity.TEMPERATURE,
+                                h.dewPointP95C())),
+                List.of("Look for moisture sources while the unit is off: bathroom and kitchen exhaust that is not"
+                                + " used, a wet crawlspace or basement, leaky return ducts in a humid attic or crawlspace",
+                        "Check the house's air tightness and any outdoor-air intake that runs while the unit is off",
+                        "If the house stays humid with the sources dealt with, consider a dehumidifier or equipment"
+                                + " that dehumidifies at low load")));
+    }
+
+    private void oversizedForLoad(RunCycleReport r, List<Finding> out) {
+        LoadLine l = r.loadLine();
+        if (l == null) {
+            return;
+        }
+        double hot = settings.valueSi(Thresholds.HOT_OUTDOOR_MIN);
+        double min = settings.valueSi(Thresholds.HOT_RUNTIME_MIN);
+        if (!(l.hotOutdoorC() >= hot) || !(l.hotRuntimeFraction() + l.hotRuntimeU() < min)) {
+            return;
+        }
+        out.add(new Finding(FindingCode.OVERSIZED_FOR_LOAD, Severity.CHECK,
+                String.format(Locale.ROOT, "Even in the hottest logged hours the air conditioner ran only about"
+                        + " %.0f %% of the time: it is larger than this house's cooling load, so its runs stay short.",
+                        100 * l.hotRuntimeFraction()),
+                String.format(Locale.ROOT, "runtime fraction %.2f ± %.2f (k = 2, hour to hour) over the %d hottest of"
+                                + " %d logged hours at %.1f °C mean outdoors; limit %.2f at ≥ %.1f °C (common practice,"
+                                + " no source); load line %s", l.hotRuntimeFraction(), l.hotRuntimeU(), l.hotHours(),
+                        l.hours(), l.hotOutdoorC(), min, hot, Double.isNaN(l.continuousC()) ? "not fitted"
+                                : String.format(Locale.ROOT, "would reach continuous running at %.1f °C outdoors",
+                                l.continuousC())),
+                List.of(new Evidence("hotRuntimeFraction", "runtime fraction over the hottest logged hours",
+                                Quantity.FRACTION_PERCENT, l.hotRuntimeFraction(), l.hotRuntimeU()),
+                        Evidence.of("hotOutdoor", "mean outdoor temperature of those hours", Quantity.TEMPERATURE,
+                                l.hotOutdoorC()),
+                        Evidence.of("continuousRunOutdoor", "outdoor temperature of continuous running (load line)",
+                                Quantity.TEMPERATURE, l.continuousC())),
+                List.of("Compare the equipment's capacity with a room-by-room cooling load calculation",
+                        "If oversized: a lower stage or blower setting, or variable-capacity equipment, lengthens runs",
+                        "Log again on a hotter week if the hottest logged hours were mild")));
     }
 
     private void coilNeverWet(RunCycleReport r, List<Finding> out) {
@@ -154,12 +250,18 @@ final class CycleFindings {
         }
         out.add(new Finding(FindingCode.SENSOR_OFFSET, Severity.CHECK,
                 String.format(Locale.ROOT, "The two humidity probes disagree by %.1f %% RH when they should read the"
-                        + " same; the moisture numbers were corrected for it but are less certain.", Math.abs(offset)),
-                String.format(Locale.ROOT, "median supply − return RH %+.1f %% RH over %d samples with the blower on,"
-                                + " compressor off ≥ %.0f min and dry bulbs within 1 K; tolerance %.1f %% RH"
-                                + " (common practice, no source); supply RH corrected by %+.1f %% RH",
-                        offset, r.sensorCheckSamples(), settings.valueSi(Thresholds.SENSOR_CHECK_AFTER) / 60.0, tol,
-                        -r.supplyCorrectionRhPct()),
+                        + " same moisture; %s", Math.abs(offset), r.supplyCorrectionRhPct() != 0
+                        ? "the moisture numbers were corrected for it but are less certain."
+                        : "the blower ran too briefly over a dry coil to correct for it, so the moisture numbers are"
+                                + " uncorrected and less certain."),
+                String.format(Locale.ROOT, "median supply RH − RH of the return's vapour pressure at the supply dry bulb"
+                                + " %+.1f %% RH (dew points %+.2f K) over %d samples, %.0f min with the blower on,"
+                                + " compressor off ≥ %.0f min; tolerance %.1f %% RH (common practice, no source);"
+                                + " %s", offset, r.sensorOffsetDewPointK(), r.sensorCheckSamples(),
+                        r.sensorCheckSeconds() / 60.0, settings.valueSi(Thresholds.SENSOR_CHECK_AFTER) / 60.0, tol,
+                        r.supplyCorrectionRhPct() != 0 ? String.format(Locale.ROOT, "supply RH corrected by %+.1f %% RH",
+                                -r.supplyCorrectionRhPct()) : String.format(Locale.ROOT, "not corrected (needs %.0f min)",
+                                settings.valueSi(Thresholds.SENSOR_CHECK_MIN_TIME) / 60.0)),
                 List.of(new Evidence("sensorOffsetRh", "supply minus return RH over a dry coil",
                         Quantity.RELATIVE_HUMIDITY, offset, Double.NaN)),
                 List.of("Put both probes side by side for 15 minutes and note the difference",
@@ -168,6 +270,6 @@ final class CycleFindings {
     }
 
     private static String fraction(double v) {
-        return Double.isNaN(v) ? "unknown" : String.format(Locale.ROOT, "%.2f", v);
+        return app.latentledger.core.units.Ratio.known(v, "not worked out").number(2, "more put back than removed");
     }
 }

@@ -20,9 +20,34 @@ package app.latentledger.core.cycles;
  * @param tauS        τ: time constant of the on-cycle latent capacity, s; 0–500 s
  * @param nMaxPerHour N_max: thermostat cycling rate at 50 % runtime, cycles per hour; EnergyPlus accepts
  *                    0–5, up to 10 is allowed here for sensitivity studies
- * @param source      "fitted" when t_wet and γ came from the log, "default" otherwise
+ * @param source      whether t_wet and γ came from the log or are the suggested defaults
  */
-public record LatentDegradationModel(double twetS, double gamma, double tauS, double nMaxPerHour, String source) {
+public record LatentDegradationModel(double twetS, double gamma, double tauS, double nMaxPerHour, Source source) {
+    /** Where t_wet and γ came from. */
+    public enum Source {
+        /** Fitted to the log. */
+        FITTED("fitted"),
+        /** The EnergyPlus-suggested defaults. */
+        DEFAULT("default");
+
+        private final String key;
+
+        Source(String key) {
+            this.key = key;
+        }
+
+        /** JSON key: "fitted" | "default". */
+        public String key() {
+            return key;
+        }
+
+        /** The key, as the log table and findings print it. */
+        @Override
+        public String toString() {
+            return key;
+        }
+    }
+
     /** Rating-point entering wet-bulb depression 26.7 − 19.4 °C used by E2 (EnergyPlus ER). */
     public static final double RATED_WET_BULB_DEPRESSION_K = 26.7 - 19.4;
     /** Upper limit EnergyPlus puts on the scaled t_wet (E2), s. */
@@ -32,7 +57,7 @@ public record LatentDegradationModel(double twetS, double gamma, double tauS, do
      * The values the EnergyPlus Input Output Reference suggests for Coil:Cooling:DX:SingleSpeed:
      * t_wet 1000 s, γ 1.5, τ 45 s, N_max 3 cycles/h.
      */
-    public static final LatentDegradationModel DEFAULTS = new LatentDegradationModel(1000.0, 1.5, 45.0, 3.0, "default");
+    public static final LatentDegradationModel DEFAULTS = new LatentDegradationModel(1000.0, 1.5, 45.0, 3.0, Source.DEFAULT);
 
     public LatentDegradationModel {
         if (!(twetS > 0 && twetS <= TWET_CAP_S) || !(gamma > 0 && gamma <= 5) || !(tauS >= 0 && tauS <= 500)
@@ -45,7 +70,7 @@ public record LatentDegradationModel(double twetS, double gamma, double tauS, do
 
     /** The same model with t_wet and γ taken from a log. */
     public LatentDegradationModel withFitted(double fittedTwetS, double fittedGamma) {
-        return new LatentDegradationModel(fittedTwetS, fittedGamma, tauS, nMaxPerHour, "fitted");
+        return new LatentDegradationModel(fittedTwetS, fittedGamma, tauS, nMaxPerHour, Source.FITTED);
     }
 
     /**

@@ -27,7 +27,14 @@ final class ModelFit {
     }
 
     /** t_wet, γ and the number of rests used; NaN pair when the log does not allow a fit. */
-    double[] fit(LogSeries log, AirSeries air, List<Cycle> cycles, double steadyW, double gapS) {
+    /**
+     * @param blower    per-sample blower state (1 on)
+     * @param flowRatio fan-only airflow ÷ airflow during runs (1 when the same): γ compares the
+     *                  evaporation rate with the steady removal rate in mass terms, so the humidity-ratio
+     *                  ratio is scaled by it
+     */
+    double[] fit(LogSeries log, AirSeries air, List<Cycle> cycles, byte[] blower, double flowRatio, double steadyW,
+                 double gapS) {
         if (!air.humidity || !(steadyW > 0)) {
             return new double[] {Double.NaN, Double.NaN, 0};
         }
@@ -37,7 +44,7 @@ final class ModelFit {
             if (c.onSeconds() < longRunS || c.offBlower() != BlowerState.ON) {
                 continue;
             }
-            int end = blowerEnd(log, c);
+            int end = blowerEnd(blower, c);
             double restS = log.timeS(end - 1) - log.timeS(c.stopIndex());
             if (restS < MIN_REST_S) {
                 continue;
@@ -45,7 +52,7 @@ final class ModelFit {
             double[] g = fitRest(log, air, c.stopIndex(), end, steadyW, gapS);
             if (g != null) {
                 twets.add(g[0]);
-                gammas.add(g[1]);
+                gammas.add(g[1] * flowRatio);
             }
         }
         if (twets.isEmpty()) {
@@ -60,12 +67,9 @@ final class ModelFit {
     }
 
     /** One past the last sample of the rest with the blower on. */
-    private static int blowerEnd(LogSeries log, Cycle c) {
-        if (!log.has(Channel.FAN)) {
-            return c.endIndex();
-        }
+    private static int blowerEnd(byte[] blower, Cycle c) {
         int i = c.stopIndex();
-        while (i < c.endIndex() && log.status(Channel.FAN, i) == 1) {
+        while (i < c.endIndex() && blower[i] == 1) {
             i++;
         }
         return i;

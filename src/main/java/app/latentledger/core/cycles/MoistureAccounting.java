@@ -7,7 +7,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Moisture removed and returned per cycle, from the humidity-ratio difference across the coil:
+ * Moisture removed and returned per cycle, from the humidity-ratio difference across the coil
+ * (returned only while the blower ran, so still-air readings after it stopped count nothing):
  * m = ∫ ṁ_da·(W_return − W_supply) dt with ṁ_da = V̇ / v_return (mass balance on the dry air,
  * ASHRAE Handbook—Fundamentals 2017 ch. 1 eq. 28 for v; docs/methods.md §9.9). Integration
  * is by the trapezoid rule inside each run or rest, with the last sample held to the period's end
@@ -21,7 +22,12 @@ final class MoistureAccounting {
         this.settings = settings;
     }
 
-    List<CycleMoisture> account(LogSeries log, AirSeries air, List<Cycle> cycles, double gapS, double steadyW) {
+    /**
+     * @param blower per sample 1 when the blower ran (from the status column or inferred from the air);
+     *               water is counted as returned only over those samples
+     */
+    List<CycleMoisture> account(LogSeries log, AirSeries air, List<Cycle> cycles, byte[] blower, double gapS,
+                                double steadyW) {
         double floor = settings.valueSi(Thresholds.MOISTURE_REMOVAL_FLOOR);
         List<CycleMoisture> out = new ArrayList<>(cycles.size());
         for (Cycle c : cycles) {
@@ -31,11 +37,10 @@ final class MoistureAccounting {
             }
             double removed = integrate(log, air, c.startIndex(), c.stopIndex(), gapS, null, 1.0);
             double returned = 0.0;
-            if (c.offBlower() == BlowerState.ON || log.has(Channel.FAN) && c.blowerOnSeconds() > 0) {
-                byte[] mask = log.has(Channel.FAN) ? fanMask(log, c) : null;
-                returned = integrate(log, air, c.stopIndex(), c.endIndex(), gapS, mask, -1.0);
-            } else if (c.offBlower() == BlowerState.UNKNOWN) {
+            if (c.offBlower() == BlowerState.UNKNOWN) {
                 returned = Double.NaN;
+            } else if (c.blowerOnSeconds() > 0) {
+                returned = integrate(log, air, c.stopIndex(), c.endIndex(), gapS, blower, -1.0);
             }
             double[] late = lateDrying(log, air, c);
             double reference = !Double.isNaN(steadyW) ? steadyW : late[0];
@@ -45,21 +50,13 @@ final class MoistureAccounting {
         return out;
     }
 
-    private static byte[] fanMask(LogSeries log, Cycle c) {
-        byte[] m = new byte[c.endIndex() - c.stopIndex()];
-        for (int i = c.stopIndex(); i < c.endIndex(); i++) {
-            m[i - c.stopIndex()] = log.status(Channel.FAN, i) == 1 ? (byte) 1 : 0;
-        }
-        return m;
-    }
-
     /**
-     * ∫ sign·(W_r − W_s)/v_r dt over samples [from, to), only where mask (relative to from) is 1.
+     * ∫ sign·(W_r − W_s)/v_r dt over samples [from, to), only where mask (indexed like the log) is 1.
      */
     static double integrate(LogSeries log, AirSeries air, int from, int to, double gapS, byte[] mask, double sign) {
         double sum = 0.0;
         for (int i = from; i < to; i++) {
-            if (mask != null && mask[i - from] != 1) {
+            if (mask != null && mask[i] != 1) {
                 continue;
             }
             if (i + 1 >= log.size()) {
@@ -73,7 +70,7 @@ final class MoistureAccounting {
             if (Double.isNaN(f)) {
                 continue;
             }
-            boolean nextInside = i + 1 < to && (mask == null || mask[i + 1 - from] == 1);
+            boolean nextInside = i + 1 < to && (mask == null || mask[i + 1] == 1);
             double g = nextInside ? flux(air, i + 1) : Double.NaN;
             sum += sign * dt * (Double.isNaN(g) ? f : 0.5 * (f + g));
         }

@@ -1,12 +1,19 @@
 package app.latentledger.core.cycles;
 
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.findings.Thresholds;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.psychro.InputLimits;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.psychro.Psychrometrics;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.units.Quantity;
 
+import app.latentledger.core.measure.FieldLimits;
 import java.util.ArrayList;
+import app.latentledger.core.measure.FieldLimits;
 import java.util.List;
 
 /**
@@ -14,10 +21,11 @@ import java.util.List;
  * and findings. Pure: the log arrives as a {@link LogSeries}, nothing is read or written here.
  */
 public final class RunCycleAnalysis {
-    /** Airflow accepted: 0.02–10 m³/s (≈ 42–21 000 cfm), residential and light-commercial air handlers. */
-    public static final double MIN_AIRFLOW_M3_PER_S = 0.02;
-    public static final double MAX_AIRFLOW_M3_PER_S = 10.0;
-    private static final double SENSOR_CHECK_MAX_SPLIT_K = 1.0;
+    /** Airflow accepted: the one airflow range of {@link FieldLimits#AIRFLOW}. */
+    public static final double MIN_AIRFLOW_M3_PER_S = FieldLimits.AIRFLOW.minSi();
+    public static final double MAX_AIRFLOW_M3_PER_S = FieldLimits.AIRFLOW.maxSi();
+    /** Supply and return dry bulbs further apart than this are not compared (air still mixing). */
+    private static final double SENSOR_CHECK_MAX_SPLIT_K = 3.0;
     private static final int SENSOR_CHECK_MIN_SAMPLES = 5;
 
     private final ThresholdSettings settings;
@@ -26,19 +34,30 @@ public final class RunCycleAnalysis {
         this.settings = settings;
     }
 
+    /** {@link #analyse(LogSeries, double, double, double)} with the same airflow in rests as in runs. */
+    public RunCycleReport analyse(LogSeries log, double pressurePa, double airflowM3PerS) {
+        return analyse(log, pressurePa, airflowM3PerS, Double.NaN);
+    }
+
     /**
-     * @param log           the record, SI
-     * @param pressurePa    site pressure, Pa
-     * @param airflowM3PerS air handler airflow, m³/s, or NaN when not known (masses are then NaN;
-     *                      fractions do not need it)
+     * @param log              the record, SI
+     * @param pressurePa       site pressure, Pa
+     * @param airflowM3PerS    air handler airflow during runs, m³/s, or NaN when not known (masses are
+     *                         then NaN; fractions do not need it)
+     * @param fanAirflowM3PerS airflow with the blower alone (fan-only speed), m³/s, for the water blown
+     *                         back in rests; NaN when the same as during runs
      * @throws LogNotAnalysableException when the log cannot give runs (no compressor column and not
      *                                   both return and supply dry bulbs)
      * @throws app.latentledger.core.InvalidInputException for a pressure or airflow out of range
      */
-    public RunCycleReport analyse(LogSeries log, double pressurePa, double airflowM3PerS) {
+    public RunCycleReport analyse(LogSeries log, double pressurePa, double airflowM3PerS, double fanAirflowM3PerS) {
         InputLimits.checkPressure("pressure", pressurePa);
         if (!Double.isNaN(airflowM3PerS)) {
             InputLimits.check("airflow", Quantity.AIRFLOW, airflowM3PerS, MIN_AIRFLOW_M3_PER_S, MAX_AIRFLOW_M3_PER_S, null);
+        }
+        if (!Double.isNaN(fanAirflowM3PerS)) {
+            InputLimits.check("fan-only airflow", Quantity.AIRFLOW, fanAirflowM3PerS, MIN_AIRFLOW_M3_PER_S,
+                    MAX_AIRFLOW_M3_PER_S, null);
         }
         if (!log.has(Channel.COMPRESSOR) && !(log.has(Channel.RETURN_DB) && log.has(Channel.SUPPLY_DB))) {
             throw new LogNotAnalysableException("cannot time the compressor: the log needs a compressor column,"
@@ -49,24 +68,40 @@ public final class RunCycleAnalysis {
         }
         AirSeries air = new AirSeries(log, pressurePa);
         CycleDetector detector = new CycleDetector(settings);
-        List<Cycle> cycles = detector.detect(log, air);
+        CycleDetector.Detection found = detector.detect(log, air);
+        List<Cycle> cycles = found.cycles();
         double gapS = detector.gapS(log);
-        // a probe pair that disagrees over a dry coil would bias every moisture figure: zero it first
-        double[] sensor = sensorOffset(log, air, cycles, pressurePa);
-        boolean corrected = Math.abs(sensor[0]) > settings.valueSi(Thresholds.SENSOR_OFFSET_RH);
+        // a probe pair that disagrees over a dry coil would bias every moisture figure: zero it first,
+        // but only when the blower ran over a dry coil long enough to tell
+        double[] sensor = sensorOffset(log, air, cycles, found.blower(), pressurePa);
+        boolean corrected = Math.abs(sensor[0]) > settings.valueSi(Thresholds.SENSOR_OFFSET_RH)
+                && sensor[3] >= settings.valueSi(Thresholds.SENSOR_CHECK_MIN_TIME);
         if (corrected) {
             air.correctSupplyRh(sensor[0], pressurePa);
-            cycles = detector.detect(log, air);
+            found = detector.detect(log, air);
+            cycles = found.cycles();
         }
+        // a supply humidity probe slower than its thermistor: take its extra lag out, then look again
+        double humidityLagS = HumidityLag.estimate(log, air, cycles, found.blower());
+        if (humidityLagS > 0) {
+            air.sharpenSupplyHumidity(log, humidityLagS, gapS);
+            found = detector.detect(log, air);
+            cycles = found.cycles();
+        }
+        byte[] blower = found.blower();
+        // fan-only airflow ÷ run airflow: evaporation in rests scales with the air moved then
+        double restFlow = Double.isNaN(fanAirflowM3PerS) ? airflowM3PerS : fanAirflowM3PerS;
+        double flowRatio = !Double.isNaN(fanAirflowM3PerS) && !Double.isNaN(airflowM3PerS)
+                ? fanAirflowM3PerS / airflowM3PerS : 1.0;
         MoistureAccounting accounting = new MoistureAccounting(settings);
-        List<CycleMoisture> first = accounting.account(log, air, cycles, gapS, Double.NaN);
+        List<CycleMoisture> first = accounting.account(log, air, cycles, blower, gapS, Double.NaN);
         double longRunS = settings.valueSi(Thresholds.LONG_CYCLE_ON_TIME);
         double floor = settings.valueSi(Thresholds.MOISTURE_REMOVAL_FLOOR);
         double[] steady = steadyDrying(cycles, first, longRunS, floor);
         List<CycleMoisture> moisture = Double.isNaN(steady[0]) ? first
-                : accounting.account(log, air, cycles, gapS, steady[0]);
+                : accounting.account(log, air, cycles, blower, gapS, steady[0]);
 
-        double[] fit = new ModelFit(longRunS).fit(log, air, cycles, steady[0], gapS);
+        double[] fit = new ModelFit(longRunS).fit(log, air, cycles, blower, flowRatio, steady[0], gapS);
         LatentDegradationModel model = Double.isNaN(fit[0]) ? LatentDegradationModel.DEFAULTS
                 : LatentDegradationModel.DEFAULTS.withFitted(fit[0], fit[1]);
 
@@ -79,18 +114,25 @@ public final class RunCycleAnalysis {
         double predictedWeighted = 0;
         double onForPredicted = 0;
         int blowerOnRests = 0;
+        double[] delays = new double[cycles.size()];
+        int delayed = 0;
         for (int k = 0; k < cycles.size(); k++) {
             Cycle c = cycles.get(k);
             CycleMoisture m = moisture.get(k);
             if (c.blowerOnSeconds() > 0) {
                 blowerOnRests++;
+                if (c.offBlower() == BlowerState.OFF) {
+                    delays[delayed++] = c.blowerOnSeconds();
+                }
             }
             double evapS = evaporationBefore(cycles, k);
             double predicted = Double.isNaN(evapS) ? Double.NaN : model.netOverSteadyOnTime(c.onSeconds(), evapS);
             double measured = Double.NaN;
+            // returned water in run-airflow units: the rest moved flowRatio times the air
+            double returnedRunUnits = m.returnedPerFlow() * flowRatio;
             if (steady[1] > 0 && !Double.isNaN(m.removedPerFlow()) && !Double.isNaN(m.returnedPerFlow())) {
-                measured = m.netPerFlow() / (steady[1] * c.onSeconds());
-                netPerFlow += m.netPerFlow();
+                measured = (m.removedPerFlow() - returnedRunUnits) / (steady[1] * c.onSeconds());
+                netPerFlow += m.removedPerFlow() - returnedRunUnits;
                 onForMeasured += c.onSeconds();
             }
             if (!Double.isNaN(predicted)) {
@@ -101,10 +143,10 @@ public final class RunCycleAnalysis {
                 removed += m.removedPerFlow();
             }
             if (!Double.isNaN(m.returnedPerFlow())) {
-                returned += m.returnedPerFlow();
+                returned += returnedRunUnits;
             }
             results.add(new CycleResult(c, m, masses ? m.removedPerFlow() * airflowM3PerS : Double.NaN,
-                    masses ? m.returnedPerFlow() * airflowM3PerS : Double.NaN, predicted, measured));
+                    masses ? m.returnedPerFlow() * restFlow : Double.NaN, predicted, measured));
         }
         double duration = log.durationS();
         double[] on = new double[cycles.size()];
@@ -120,6 +162,14 @@ public final class RunCycleAnalysis {
         }
         double flow = masses ? airflowM3PerS : Double.NaN;
         boolean anyHumidity = air.humidity && !cycles.isEmpty();
+        // a share needs a clearly positive removal: one below the noise floor held over the run time
+        // (in kg per m³/s, with dry air near 1.2 kg/m³) is not measurable, whatever its sign
+        double share = anyHumidity && removed > 1.2 * floor * onTotal ? returned / removed : Double.NaN;
+        HouseHumidity house = HouseHumidity.of(log, air, pressurePa, offMask(log, found.compressor(), cycles),
+                settings.valueSi(Thresholds.INDOOR_RH_TARGET), settings.valueSi(Thresholds.INDOOR_DEW_POINT_MAX),
+                settings.valueSi(Thresholds.LONG_OFF_PERIOD), gapS);
+        LoadLine load = LoadLine.of(log, found.compressor(), gapS);
+        boolean inferred = !log.has(Channel.FAN);
         RunCycleReport draft = new RunCycleReport(log.size(), duration, log.has(Channel.COMPRESSOR), results,
                 duration > 0 ? cycles.size() / (duration / 3600.0) : Double.NaN,
                 Stats.median(on, on.length), coveredS > 0 ? onTotal / coveredS : Double.NaN, flow,
@@ -128,17 +178,23 @@ public final class RunCycleAnalysis {
                 steady[0], steady[1] * flow,
                 onForMeasured > 0 ? netPerFlow / (steady[1] * onForMeasured) : Double.NaN,
                 onForPredicted > 0 ? predictedWeighted / onForPredicted : Double.NaN,
-                model, (int) fit[2], anyHumidity && removed > 0 ? returned / removed : Double.NaN, blowerOnRests,
-                sensor[0], (int) sensor[1], corrected ? sensor[0] : 0.0, List.of());
-        return withFindings(draft, new CycleFindings(settings).find(draft));
+                model, (int) fit[2], share, blowerOnRests,
+                sensor[0], (int) sensor[1], corrected ? sensor[0] : 0.0, List.of(),
+                masses ? restFlow : Double.NaN, Stats.median(delays, delayed), delayed, inferred,
+                sensor[2], sensor[3], house, load, new CycleSeries(air, found.compressor(), blower, inferred),
+                humidityLagS);
+        return draft.withFindings(new CycleFindings(settings).find(draft));
     }
 
-    private static RunCycleReport withFindings(RunCycleReport r, List<app.latentledger.core.findings.Finding> f) {
-        return new RunCycleReport(r.samples(), r.durationS(), r.compressorFromStatus(), r.cycles(), r.cyclesPerHour(),
-                r.medianOnS(), r.runtimeFraction(), r.airflowM3PerS(), r.removedKg(), r.returnedKg(),
-                r.netRemovalKgPerS(), r.steadyDryingW(), r.steadyRemovalKgPerS(), r.latentFractionMeasured(),
-                r.latentFractionPredicted(), r.model(), r.fitRests(), r.reevaporationShare(), r.blowerOnRests(),
-                r.sensorOffsetRhPct(), r.sensorCheckSamples(), r.supplyCorrectionRhPct(), f);
+    /** Samples with the compressor off: from its column, else the rests of the cycles found (all, when none). */
+    private static boolean[] offMask(LogSeries log, byte[] compressor, List<Cycle> cycles) {
+        boolean[] off = new boolean[log.size()];
+        boolean status = log.has(Channel.COMPRESSOR);
+        for (int i = 0; i < off.length; i++) {
+            off[i] = status ? log.status(Channel.COMPRESSOR, i) == 0
+                    : cycles.isEmpty() || compressor[i] == 0;
+        }
+        return off;
     }
 
     /**
@@ -172,23 +228,27 @@ public final class RunCycleAnalysis {
     }
 
     /**
-     * Supply minus return RH where they should agree: blower on, compressor off for at least
-     * {@link Thresholds#SENSOR_CHECK_AFTER} (coil dry), dry bulbs within 1 K (docs/methods.md §9.9).
+     * Where the probes should agree: blower on, compressor off for at least
+     * {@link Thresholds#SENSOR_CHECK_AFTER} (coil dry). Compared in moisture terms, never as RH at two
+     * temperatures: the supply RH against the RH the return's vapour pressure gives at the supply's own
+     * dry bulb (100·p_w,return / p_ws(t_supply), ASHRAE Handbook—Fundamentals 2017 ch. 1 eqs. 20, 24),
+     * so blower heat or duct gains that warm the supply cannot look like a probe error.
+     *
+     * @return {median supply − expected RH, % RH; samples; median dew-point difference, K; seconds}
      */
-    private double[] sensorOffset(LogSeries log, AirSeries air, List<Cycle> cycles, double p) {
+    private double[] sensorOffset(LogSeries log, AirSeries air, List<Cycle> cycles, byte[] blower, double p) {
         if (!air.humidity) {
-            return new double[] {Double.NaN, 0, Double.NaN};
+            return new double[] {Double.NaN, 0, Double.NaN, 0};
         }
         double after = settings.valueSi(Thresholds.SENSOR_CHECK_AFTER);
         List<Double> d = new ArrayList<>();
-        List<Double> dw = new ArrayList<>();
+        List<Double> ddp = new ArrayList<>();
+        double seconds = 0;
+        double gap = settings.valueSi(Thresholds.GAP_FACTOR) * log.nominalIntervalS();
         for (Cycle c : cycles) {
-            if (c.offBlower() != BlowerState.ON) {
-                continue;
-            }
             double t0 = log.timeS(c.stopIndex());
             for (int i = c.stopIndex(); i < c.endIndex(); i++) {
-                if (log.timeS(i) - t0 < after || log.has(Channel.FAN) && log.status(Channel.FAN, i) != 1) {
+                if (log.timeS(i) - t0 < after || blower[i] != 1) {
                     continue;
                 }
                 double tr = air.returnDbC[i];
@@ -197,17 +257,20 @@ public final class RunCycleAnalysis {
                         || Double.isNaN(air.returnW[i]) || Double.isNaN(air.supplyW[i])) {
                     continue;
                 }
-                double rhR = Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(air.returnW[i], p), tr);
+                double pwR = Psychrometrics.vaporPressurePa(air.returnW[i], p);
+                double expected = Psychrometrics.relativeHumidityPct(pwR, ts);
                 double rhS = Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(air.supplyW[i], p), ts);
-                d.add(rhS - rhR);
-                dw.add(air.supplyW[i] - air.returnW[i]);
+                d.add(rhS - expected);
+                ddp.add(Psychrometrics.dewPointC(air.supplyW[i], p) - Psychrometrics.dewPointC(air.returnW[i], p));
+                double dt = i + 1 < log.size() ? log.timeS(i + 1) - log.timeS(i) : 0;
+                seconds += dt > gap ? 0 : dt;
             }
         }
         if (d.size() < SENSOR_CHECK_MIN_SAMPLES) {
-            return new double[] {Double.NaN, d.size(), Double.NaN};
+            return new double[] {Double.NaN, d.size(), Double.NaN, seconds};
         }
         double[] a = d.stream().mapToDouble(Double::doubleValue).toArray();
-        double[] b = dw.stream().mapToDouble(Double::doubleValue).toArray();
-        return new double[] {Stats.median(a, a.length), a.length, Stats.median(b, b.length)};
+        double[] b = ddp.stream().mapToDouble(Double::doubleValue).toArray();
+        return new double[] {Stats.median(a, a.length), a.length, Stats.median(b, b.length), seconds};
     }
 }

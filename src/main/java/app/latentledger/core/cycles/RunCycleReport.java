@@ -2,6 +2,7 @@ package app.latentledger.core.cycles;
 
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.findings.FindingCode;
+import app.latentledger.core.units.Ratio;
 
 import java.util.List;
 
@@ -16,9 +17,9 @@ import java.util.List;
  * @param medianOnS               median run time, s
  * @param runtimeFraction         Σ run time ÷ Σ (run + rest) of the cycles, the time they cover (not the
  *                                whole log: runs cut by its ends or a gap are not counted)
- * @param airflowM3PerS           airflow used for the masses, m³/s (NaN when not given)
+ * @param airflowM3PerS           airflow used for the masses during runs, m³/s (NaN when not given)
  * @param removedKg               total removed during runs, kg
- * @param returnedKg              total returned in blower-on rests, kg
+ * @param returnedKg              total returned while the blower ran in rests, kg (at the fan-only airflow)
  * @param netRemovalKgPerS        (removed − returned) ÷ the same covered time, kg/s
  * @param steadyDryingW           steady W_return − W_supply from the long runs, kg/kg
  * @param steadyRemovalKgPerS     steady-state moisture removal rate, kg/s
@@ -26,13 +27,26 @@ import java.util.List;
  * @param latentFractionPredicted the same from {@link LatentDegradationModel} at the observed timing
  * @param model                   the model parameters used
  * @param fitRests                blower-on rests t_wet and γ were fitted to (0 when defaults)
- * @param reevaporationShare      returned ÷ removed
+ * @param reevaporationShare      returned ÷ removed (NaN when nothing measurable was removed)
  * @param blowerOnRests           rests in which the blower ran at all (continuous or a fan-off delay)
- * @param sensorOffsetRhPct       median supply − return RH over a dry coil with the blower on, % RH
+ * @param sensorOffsetRhPct       median supply RH minus the RH the return's vapour pressure gives at the
+ *                                supply's dry bulb, over a dry coil with the blower on, % RH (NaN: not checked)
  * @param sensorCheckSamples      samples behind that median (0: not checkable)
  * @param supplyCorrectionRhPct   RH taken off every supply reading because the probes disagreed
  *                                beyond tolerance, % RH (0 when not corrected)
  * @param findings                findings, most urgent first
+ * @param fanAirflowM3PerS        airflow used for water returned in rests, m³/s (NaN when not given)
+ * @param fanOffDelayMedianS      median blower run-on after the compressor in rests where the blower
+ *                                then stopped, s (NaN when no such rest)
+ * @param fanOffDelayRests        rests with such a run-on
+ * @param blowerInferred          blower state came from the air (no blower column)
+ * @param sensorOffsetDewPointK   the same disagreement as a dew-point difference, supply − return, K
+ * @param sensorCheckSeconds      blower time over a dry coil the check rests on, s
+ * @param house                   the house's humidity over the log (null without return humidity)
+ * @param loadLine                runtime against outdoor temperature (null without outdoor column or hours)
+ * @param series                  the per-sample series the analysis used
+ * @param supplyHumidityLagS      the supply humidity probe's lag behind its thermistor found and taken
+ *                                out, s (0 when none was found or it could not be told)
  */
 public record RunCycleReport(int samples, double durationS, boolean compressorFromStatus, List<CycleResult> cycles,
                              double cyclesPerHour, double medianOnS, double runtimeFraction, double airflowM3PerS,
@@ -40,7 +54,17 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
                              double steadyRemovalKgPerS, double latentFractionMeasured,
                              double latentFractionPredicted, LatentDegradationModel model, int fitRests,
                              double reevaporationShare, int blowerOnRests, double sensorOffsetRhPct,
-                             int sensorCheckSamples, double supplyCorrectionRhPct, List<Finding> findings) {
+                             int sensorCheckSamples, double supplyCorrectionRhPct, List<Finding> findings,
+                             double fanAirflowM3PerS, double fanOffDelayMedianS, int fanOffDelayRests,
+                             boolean blowerInferred, double sensorOffsetDewPointK, double sensorCheckSeconds,
+                             HouseHumidity house, LoadLine loadLine, CycleSeries series, double supplyHumidityLagS) {
+    /** Why a share of returned water cannot be given. */
+    public static final String NOTHING_REMOVED = "no moisture measurably removed during the runs";
+    /** Said of a returned share below zero: the rests took water out rather than putting it back. */
+    public static final String NONE_RETURNED = "the air left the coil drier in the rests";
+    /** Why a latent fraction cannot be given. */
+    public static final String NO_STEADY_RUN = "no run long and wet enough to give the steady removal rate";
+
     public RunCycleReport {
         cycles = List.copyOf(cycles);
         findings = List.copyOf(findings);
@@ -49,5 +73,35 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
     /** Whether a finding with this code is present. */
     public boolean has(FindingCode code) {
         return findings.stream().anyMatch(f -> f.code() == code);
+    }
+
+    /** The same report with these findings. */
+    public RunCycleReport withFindings(List<Finding> f) {
+        return new RunCycleReport(samples, durationS, compressorFromStatus, cycles, cyclesPerHour, medianOnS,
+                runtimeFraction, airflowM3PerS, removedKg, returnedKg, netRemovalKgPerS, steadyDryingW,
+                steadyRemovalKgPerS, latentFractionMeasured, latentFractionPredicted, model, fitRests,
+                reevaporationShare, blowerOnRests, sensorOffsetRhPct, sensorCheckSamples, supplyCorrectionRhPct, f,
+                fanAirflowM3PerS, fanOffDelayMedianS, fanOffDelayRests, blowerInferred, sensorOffsetDewPointK,
+                sensorCheckSeconds, house, loadLine, series, supplyHumidityLagS);
+    }
+
+    /** Returned ÷ removed, or not measurable with the reason. */
+    public Ratio reevaporation() {
+        return Ratio.known(reevaporationShare, NOTHING_REMOVED);
+    }
+
+    /** Measured latent fraction, or not measurable with the reason. */
+    public Ratio latentMeasured() {
+        return Ratio.known(latentFractionMeasured, NO_STEADY_RUN);
+    }
+
+    /** Model latent fraction, or not measurable with the reason. */
+    public Ratio latentPredicted() {
+        return Ratio.known(latentFractionPredicted, "the blower's state in the rests is not known");
+    }
+
+    /** Share of the covered time the compressor ran. */
+    public Ratio runtime() {
+        return Ratio.known(runtimeFraction, "no complete run and rest in the log");
     }
 }

@@ -22,6 +22,8 @@ public enum FindingCode {
     LOW_LATENT_SHARE,
     INDOOR_HUMIDITY_HIGH,
     CONDENSATE_MISMATCH,
+    CAPACITY_BELOW_NAMEPLATE,
+    SUPPLY_NEAR_SATURATION,
 
     // Logged run cycles (core.cycles.CycleFindings).
     SHORT_CYCLING,
@@ -29,9 +31,16 @@ public enum FindingCode {
     OFF_CYCLE_REEVAPORATION,
     COIL_NEVER_WET,
     SENSOR_OFFSET,
+    FAN_OFF_DELAY_REEVAPORATION,
+    HUMID_WHILE_OFF,
+    OVERSIZED_FOR_LOAD,
 
     // The house's moisture budget (core.house).
-    ;
+    RETURN_LEAK,
+    VENTILATION_MOISTURE_LOAD,
+    INFILTRATION_MOISTURE_LOAD,
+    REMOVAL_BELOW_GAINS,
+    DEHUMIDIFIER_ADVISED;
 
     private final String key = name().toLowerCase(Locale.ROOT).replace('_', '-');
 

@@ -1,27 +1,25 @@
 package app.latentledger.core.psychro;
 
 import app.latentledger.core.InvalidInputException;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.units.Quantity;
 
 /**
- * What a field reading may be. Wider than any air a tech meets, narrower than the equations'
+ * Range checks against {@link FieldLimits}, the one table of accepted ranges. What a field reading may be: wider than any air a tech meets, narrower than the equations'
  * validity, so that a slipped decimal point is caught at the keypad rather than in a report.
  */
 public final class InputLimits {
-    /** −60 °F, the coldest outdoor air the app accepts (common practice, no source). */
-    public static final double MIN_TEMP_C = -50.0;
-    /** 200 °F, above any attic or supply-air reading (common practice, no source). */
-    public static final double MAX_TEMP_C = 95.0;
-    /** −1500 ft (≈ −457 m), below the lowest inhabited land (Dead Sea shore, −430 m). */
-    public static final double MIN_ELEVATION_M = -450.0;
+    /** −58 °F, the coldest outdoor air the app accepts ({@link FieldLimits#AIR_TEMPERATURE}). */
+    public static final double MIN_TEMP_C = FieldLimits.AIR_TEMPERATURE.minSi();
+    /** 203 °F, above any attic or supply-air reading. */
+    public static final double MAX_TEMP_C = FieldLimits.AIR_TEMPERATURE.maxSi();
+    /** −1500 ft (≈ −457 m), below the lowest inhabited land ({@link FieldLimits#ELEVATION}). */
+    public static final double MIN_ELEVATION_M = FieldLimits.ELEVATION.minSi();
     /** 15 000 ft (≈ 4572 m), above the highest towns with air conditioning. */
-    public static final double MAX_ELEVATION_M = 4500.0;
-    /**
-     * 50 kPa to 110 kPa (7.25 to 15.95 psia): the standard atmosphere at 5600 m and a record
-     * sea-level high (108.4 kPa) plus margin.
-     */
-    public static final double MIN_PRESSURE_PA = 50_000.0;
-    public static final double MAX_PRESSURE_PA = 110_000.0;
+    public static final double MAX_ELEVATION_M = FieldLimits.ELEVATION.maxSi();
+    /** 50 kPa to 110 kPa (7.25 to 15.95 psia): {@link FieldLimits#PRESSURE}. */
+    public static final double MIN_PRESSURE_PA = FieldLimits.PRESSURE.minSi();
+    public static final double MAX_PRESSURE_PA = FieldLimits.PRESSURE.maxSi();
 
     private InputLimits() {
     }

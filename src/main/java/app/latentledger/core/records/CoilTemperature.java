@@ -1,5 +1,7 @@
 package app.latentledger.core.records;
 
+import app.latentledger.core.measure.CoilTemperatureKind;
+
 /**
  * A measured coil temperature, °C, with its tolerance in K.
  *

@@ -1,5 +1,6 @@
 package app.latentledger.core.records;
 
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.units.Quantity;
 
 /**
@@ -22,8 +23,8 @@ import app.latentledger.core.units.Quantity;
 public record HvacSystem(String id, String siteId, String label, SystemType type, double nominalCapacityW,
                          String refrigerant, String blowerType, String fanSetting, String thermostatNotes,
                          String meteringDevice, String filter) {
-    public static final double MIN_CAPACITY_W = 500;
-    public static final double MAX_CAPACITY_W = 200_000;
+    public static final double MIN_CAPACITY_W = FieldLimits.NOMINAL_CAPACITY.minSi();
+    public static final double MAX_CAPACITY_W = FieldLimits.NOMINAL_CAPACITY.maxSi();
 
     public HvacSystem {
         id = Check.id("system id", id);

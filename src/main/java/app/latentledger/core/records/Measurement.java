@@ -1,6 +1,7 @@
 package app.latentledger.core.records;
 
 import app.latentledger.core.InvalidInputException;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.units.Quantity;
 
 /**
@@ -25,8 +26,9 @@ public record Measurement(double valueSi, double toleranceSi) {
      *
      * @param maxToleranceSi largest believable tolerance (a tolerance wider than this is a typo)
      */
-    Measurement within(String field, Quantity q, double minSi, double maxSi, double maxToleranceSi) {
-        Check.range(field, q, valueSi, minSi, maxSi);
+    Measurement within(String field, FieldLimits.Limit limit, double maxToleranceSi) {
+        Quantity q = limit.quantity();
+        Check.range(field, q, valueSi, limit.minSi(), limit.maxSi());
         if (toleranceSi > maxToleranceSi) {
             throw new InvalidInputException(field + " tolerance", q == Quantity.TEMPERATURE
                     ? Quantity.TEMPERATURE_DIFFERENCE : q, toleranceSi, 0, maxToleranceSi, null);

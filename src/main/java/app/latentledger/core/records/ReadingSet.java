@@ -1,7 +1,7 @@
 package app.latentledger.core.records;
 
-import app.latentledger.core.psychro.InputLimits;
-import app.latentledger.core.units.Quantity;
+import app.latentledger.core.measure.FieldLimits;
+import app.latentledger.core.measure.ProbeMatch;
 
 import java.time.OffsetDateTime;
 import java.time.temporal.ChronoUnit;
@@ -26,25 +26,16 @@ import java.time.temporal.ChronoUnit;
  * @param stationPressurePa   measured station pressure, Pa ± Pa, or null to use the site elevation
  * @param condensate          condensate caught, or null
  * @param notes               free text
+ * @param probes              whether one instrument read return and supply, and the supply
+ *                            probe's dew-point offset; {@link ProbeMatch#INDEPENDENT} when not said
  */
 public record ReadingSet(String id, String visitId, OffsetDateTime takenAt, String label, String instrument,
                          Measurement returnDryBulb, HumidityReading returnHumidity,
                          Measurement supplyDryBulb, HumidityReading supplyHumidity,
                          Measurement outdoorDryBulb, HumidityReading outdoorHumidity,
                          CoilTemperature coilTemperature, Airflow airflow, Measurement stationPressurePa,
-                         Condensate condensate, String notes) {
-    /** 10 K: a wider dry-bulb tolerance is a typo, not an instrument (common practice, no source). */
-    static final double MAX_TEMPERATURE_TOLERANCE_K = HumidityReading.MAX_TEMPERATURE_TOLERANCE_K;
-    /** 0.0094 to 25 m³/s, about 20 to 53 000 cfm: the coil check's own lower limit, so a stored set always checks. */
-    public static final double MIN_AIRFLOW_M3_PER_S = app.latentledger.core.coil.CoilReadings.MIN_AIRFLOW_M3_PER_S;
-    public static final double MAX_AIRFLOW_M3_PER_S = 25;
-    /** 50 L in one catch is far beyond a timed catch at a drain (common practice, no source). */
-    public static final double MAX_CONDENSATE_M3 = 0.05;
-    /** 30 s to 24 h collection time, as the coil check accepts. */
-    public static final double MIN_COLLECTION_S = 30;
-    public static final double MAX_COLLECTION_S = 86_400;
-    /** 5 kPa: wider than the spread between weather and the standard atmosphere. */
-    static final double MAX_PRESSURE_TOLERANCE_PA = 5_000;
+                         Condensate condensate, String notes, ProbeMatch probes) {
+    // every range below is FieldLimits', the same the keypad and the coil check use, so a stored set always checks
 
     public ReadingSet {
         id = Check.id("reading set id", id);
@@ -66,28 +57,40 @@ public record ReadingSet(String id, String visitId, OffsetDateTime takenAt, Stri
             outdoorHumidity.checked("outdoor");
         }
         if (coilTemperature != null) {
-            temperature("coil temperature", coilTemperature.value());
+            coilTemperature.value().within("coil temperature", FieldLimits.COIL_TEMPERATURE,
+                    FieldLimits.TEMPERATURE_TOLERANCE.maxSi());
         }
         if (airflow != null) {
             // tolerances up to half the reading, as the coil check accepts them
-            airflow.volume().within("airflow", Quantity.AIRFLOW, MIN_AIRFLOW_M3_PER_S, MAX_AIRFLOW_M3_PER_S,
-                    airflow.volume().valueSi() / 2);
+            airflow.volume().within("airflow", FieldLimits.AIRFLOW,
+                    airflow.volume().valueSi() * FieldLimits.AIRFLOW_TOLERANCE.maxSi());
         }
         if (stationPressurePa != null) {
-            stationPressurePa.within("station pressure", Quantity.PRESSURE, InputLimits.MIN_PRESSURE_PA,
-                    InputLimits.MAX_PRESSURE_PA, MAX_PRESSURE_TOLERANCE_PA);
+            stationPressurePa.within("station pressure", FieldLimits.PRESSURE, FieldLimits.PRESSURE_TOLERANCE.maxSi());
         }
         if (condensate != null) {
-            condensate.volume().within("condensate volume", Quantity.WATER_VOLUME, 0, MAX_CONDENSATE_M3,
-                    condensate.volume().valueSi() / 2);
-            condensate.seconds().within("condensate collection time", Quantity.DURATION_MINUTES,
-                    MIN_COLLECTION_S, MAX_COLLECTION_S, condensate.seconds().valueSi() / 2);
+            condensate.volume().within("condensate volume", FieldLimits.CONDENSATE_VOLUME,
+                    condensate.volume().valueSi() * FieldLimits.CONDENSATE_VOLUME_TOLERANCE.maxSi());
+            condensate.seconds().within("condensate collection time", FieldLimits.COLLECTION_TIME,
+                    condensate.seconds().valueSi() / 2);
         }
         notes = Check.optionalText("reading set notes", notes, 10_000);
+        probes = probes == null ? ProbeMatch.INDEPENDENT : probes;
+    }
+
+    /** A reading set with independent probes and no offset. */
+    public ReadingSet(String id, String visitId, OffsetDateTime takenAt, String label, String instrument,
+                      Measurement returnDryBulb, HumidityReading returnHumidity,
+                      Measurement supplyDryBulb, HumidityReading supplyHumidity,
+                      Measurement outdoorDryBulb, HumidityReading outdoorHumidity,
+                      CoilTemperature coilTemperature, Airflow airflow, Measurement stationPressurePa,
+                      Condensate condensate, String notes) {
+        this(id, visitId, takenAt, label, instrument, returnDryBulb, returnHumidity, supplyDryBulb, supplyHumidity,
+                outdoorDryBulb, outdoorHumidity, coilTemperature, airflow, stationPressurePa, condensate, notes,
+                ProbeMatch.INDEPENDENT);
     }
 
     private static void temperature(String field, Measurement m) {
-        m.within(field, Quantity.TEMPERATURE, InputLimits.MIN_TEMP_C, InputLimits.MAX_TEMP_C,
-                MAX_TEMPERATURE_TOLERANCE_K);
+        m.within(field, FieldLimits.AIR_TEMPERATURE, FieldLimits.TEMPERATURE_TOLERANCE.maxSi());
     }
 }

@@ -1,6 +1,8 @@
 package app.latentledger.core.settings;
 
 import app.latentledger.core.coil.Tolerances;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
 
 /**
  * The ± half-widths a tech's instruments are taken to have when a reading gives none; the coil
@@ -17,8 +19,25 @@ import app.latentledger.core.coil.Tolerances;
  */
 public record InstrumentTolerances(double dryBulbK, double relativeHumidityPct, double wetBulbK, double dewPointK,
                                    double coilK, double airflowFraction, double condensateFraction) {
-    /** The defaults of {@link Tolerances} (docs/methods.md §9.1; Title 24 RA3.7.2.2 for airflow). */
+    /** The defaults of {@link Tolerances}, the one table (docs/methods.md, "Default instrument tolerances"). */
     public static final InstrumentTolerances DEFAULTS = new InstrumentTolerances(Tolerances.DRY_BULB_K,
             Tolerances.RELATIVE_HUMIDITY_PCT, Tolerances.WET_BULB_K, Tolerances.DEW_POINT_K, Tolerances.COIL_K,
             Tolerances.AIRFLOW_FRACTION, Tolerances.CONDENSATE_FRACTION);
+
+    /** The tolerance a fresh humidity reading of {@code kind} gets, SI (K, or %-points of RH). */
+    public double humidity(HumidityKind kind) {
+        return switch (kind) {
+            case WET_BULB -> wetBulbK;
+            case RELATIVE_HUMIDITY -> relativeHumidityPct;
+            case DEW_POINT -> dewPointK;
+        };
+    }
+
+    /**
+     * The tolerance a fresh coil temperature of {@code kind} gets, K: the surface probe's from these
+     * settings, a gauge saturation reading's from the one table ({@link Tolerances#coil}).
+     */
+    public double coil(CoilTemperatureKind kind) {
+        return Tolerances.coil(kind, coilK);
+    }
 }

@@ -43,6 +43,8 @@ public final class DisplayNumber {
             case HUMIDITY_RATIO -> 5;
             case SPECIFIC_VOLUME, DENSITY, DIMENSIONLESS -> 3;
             case POWER_LARGE, WATER_RATE, POWER_PER_AIRFLOW, WATER_MASS -> 2;
+            case WATER_MASS_DAILY, LENGTH, WIND_SPEED -> 1;
+            case AREA, VOLUME -> 0;
             case WATER_VOLUME -> ip ? 1 : 0;
             case FRACTION_PERCENT -> 0;
             case ELEVATION, AIRFLOW, POWER, AIRFLOW_PER_CAPACITY, DURATION_SECONDS -> 0;

@@ -53,7 +53,19 @@ public enum Quantity {
     /** A pure number (SHR, bypass factor, fractions, counts per hour): no unit. */
     DIMENSIONLESS("", 1, 0, "", 1, 0),
     /** A fraction stored 0–1, shown in percent. */
-    FRACTION_PERCENT("%", 100, 0, "%", 100, 0);
+    FRACTION_PERCENT("%", 100, 0, "%", 100, 0),
+
+    // --- the house's moisture budget ---
+    /** Water gained or removed per day by mass; stored in kg/s, shown as kg/day or lb/day. */
+    WATER_MASS_DAILY("kg/day", 86_400, 0, "lb/day", 86_400 / Conversions.KG_PER_LB, 0),
+    /** Floor area; stored in m², shown as m² or ft². */
+    AREA("m²", 1, 0, "ft²", 1 / (Conversions.M_PER_FT * Conversions.M_PER_FT), 0),
+    /** Building volume; stored in m³, shown as m³ or ft³. */
+    VOLUME("m³", 1, 0, "ft³", 1 / Conversions.M3_PER_FT3, 0),
+    /** Length (ceiling height); stored in m, shown as m or ft. */
+    LENGTH("m", 1, 0, "ft", 1 / Conversions.M_PER_FT, 0),
+    /** Wind speed; stored in m/s, shown as m/s or mph. */
+    WIND_SPEED("m/s", 1, 0, "mph", 3600 / (Conversions.M_PER_FT * 5280), 0);
 
     private final String siSymbol;
     private final double siFactor;

@@ -1,14 +1,13 @@
 package app.latentledger.core.visit;
 
 import app.latentledger.core.coil.AirReading;
-import app.latentledger.core.coil.AirflowLocation;
 import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilReadings;
 import app.latentledger.core.coil.CoilResult;
-import app.latentledger.core.coil.CoilTemperatureKind;
 import app.latentledger.core.coil.Condensate;
-import app.latentledger.core.coil.HumidityKind;
 import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
 import app.latentledger.core.psychro.StandardAtmosphere;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.HvacSystem;
@@ -54,20 +53,14 @@ public final class ReadingSetCheck {
         AirReading entering = air("return", rs.returnDryBulb(), rs.returnHumidity());
         AirReading leaving = air("supply", rs.supplyDryBulb(), rs.supplyHumidity());
         Measurement flow = rs.airflow().volume();
-        AirflowLocation at = switch (rs.airflow().point()) {
-            case ENTERING -> AirflowLocation.ENTERING;
-            case LEAVING -> AirflowLocation.LEAVING;
-        };
+        AirflowPoint at = rs.airflow().point();
         double coilC = Double.NaN;
         double coilTolK = 0;
         CoilTemperatureKind coilKind = null;
         if (rs.coilTemperature() != null) {
             coilC = rs.coilTemperature().value().valueSi();
             coilTolK = rs.coilTemperature().value().toleranceSi();
-            coilKind = switch (rs.coilTemperature().kind()) {
-                case COIL_SURFACE -> CoilTemperatureKind.COIL_SURFACE;
-                case EVAPORATOR_SATURATION -> CoilTemperatureKind.EVAPORATOR_SATURATION;
-            };
+            coilKind = rs.coilTemperature().kind();
         }
         Condensate condensate = null;
         if (rs.condensate() != null) {
@@ -76,7 +69,7 @@ public final class ReadingSetCheck {
             condensate = new Condensate(volume.valueSi(), fraction(volume), seconds.valueSi(), seconds.toleranceSi());
         }
         return new CoilReadings(pressurePa, entering, leaving, flow.valueSi(), fraction(flow), at, coilC, coilTolK,
-                coilKind, system.nominalCapacityW(), condensate);
+                coilKind, system.nominalCapacityW(), condensate, null, rs.airflow().basis(), rs.probes());
     }
 
     /**
@@ -96,12 +89,7 @@ public final class ReadingSetCheck {
     }
 
     private static AirReading air(String where, Measurement dryBulb, HumidityReading humidity) {
-        HumidityKind kind = switch (humidity.kind()) {
-            case WET_BULB -> HumidityKind.WET_BULB;
-            case RH -> HumidityKind.RELATIVE_HUMIDITY;
-            case DEW_POINT -> HumidityKind.DEW_POINT;
-        };
-        return new AirReading(where, dryBulb.valueSi(), dryBulb.toleranceSi(), kind, humidity.value().valueSi(),
+        return new AirReading(where, dryBulb.valueSi(), dryBulb.toleranceSi(), humidity.kind(), humidity.value().valueSi(),
                 humidity.value().toleranceSi());
     }
 

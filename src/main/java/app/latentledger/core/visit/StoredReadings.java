@@ -3,11 +3,8 @@ package app.latentledger.core.visit;
 import app.latentledger.core.coil.AirReading;
 import app.latentledger.core.coil.CoilReadings;
 import app.latentledger.core.records.Airflow;
-import app.latentledger.core.records.AirflowPoint;
 import app.latentledger.core.records.CoilTemperature;
-import app.latentledger.core.records.CoilTemperatureKind;
 import app.latentledger.core.records.Condensate;
-import app.latentledger.core.records.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
@@ -38,18 +35,10 @@ public final class StoredReadings {
         }
         CoilTemperature coil = null;
         if (!Double.isNaN(c.coilTemperatureC())) {
-            CoilTemperatureKind kind = switch (c.coilKind()) {
-                case COIL_SURFACE -> CoilTemperatureKind.COIL_SURFACE;
-                case EVAPORATOR_SATURATION -> CoilTemperatureKind.EVAPORATOR_SATURATION;
-            };
-            coil = new CoilTemperature(kind, new Measurement(c.coilTemperatureC(), c.coilTolK()));
+            coil = new CoilTemperature(c.coilKind(), new Measurement(c.coilTemperatureC(), c.coilTolK()));
         }
-        AirflowPoint point = switch (c.airflowAt()) {
-            case ENTERING -> AirflowPoint.ENTERING;
-            case LEAVING -> AirflowPoint.LEAVING;
-        };
         Airflow airflow = new Airflow(new Measurement(c.airflowM3PerS(), c.airflowM3PerS() * c.airflowTolFraction()),
-                point, airflowMethod);
+                c.airflowAt(), airflowMethod, c.airflowBasis());
         Condensate condensate = null;
         if (c.condensate() != null) {
             var k = c.condensate();
@@ -59,15 +48,10 @@ public final class StoredReadings {
         return new ReadingSet(id, visitId, takenAt, label, instrumentText,
                 new Measurement(c.entering().dryBulbC(), c.entering().dryBulbTolK()), humidity(c.entering()),
                 new Measurement(c.leaving().dryBulbC(), c.leaving().dryBulbTolK()), humidity(c.leaving()),
-                null, null, coil, airflow, stationPressure, condensate, notes);
+                null, null, coil, airflow, stationPressure, condensate, notes, c.probes());
     }
 
     private static HumidityReading humidity(AirReading a) {
-        HumidityKind kind = switch (a.humidityKind()) {
-            case WET_BULB -> HumidityKind.WET_BULB;
-            case RELATIVE_HUMIDITY -> HumidityKind.RH;
-            case DEW_POINT -> HumidityKind.DEW_POINT;
-        };
-        return new HumidityReading(kind, new Measurement(a.humiditySi(), a.humidityTolSi()));
+        return new HumidityReading(a.humidityKind(), new Measurement(a.humiditySi(), a.humidityTolSi()));
     }
 }

@@ -111,7 +111,7 @@ final class IsoTimes {
         return v;
     }
 
-    private static int daysInMonth(int y, int m) {
+    static int daysInMonth(int y, int m) {
         switch (m) {
             case 2:
                 return (y % 4 == 0 && (y % 100 != 0 || y % 400 == 0)) ? 29 : 28;

@@ -3,7 +3,7 @@ package app.latentledger.io.logcsv;
 import app.latentledger.core.cycles.Channel;
 import app.latentledger.core.cycles.LogSeries;
 import app.latentledger.core.cycles.TimeOrigin;
-import app.latentledger.core.psychro.InputLimits;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import org.apache.commons.csv.CSVFormat;
@@ -26,6 +26,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.time.ZoneId;
 
 /**
  * Reads a data-logger CSV into a {@link LogSeries}, converting to SI once, here at the edge.
@@ -59,6 +60,8 @@ public final class LogCsvImporter {
 
     private final UnitSystem units;
     private final Map<String, String> maps;
+    private final DateOrder dateOrder;
+    private final ZoneId zone;
     private final ImportProgress progress;
 
     /**
@@ -67,8 +70,23 @@ public final class LogCsvImporter {
      * @param progress told how far the import has got
      */
     public LogCsvImporter(UnitSystem units, Map<String, String> maps, ImportProgress progress) {
+        this(units, maps, DateOrder.AUTO, null, progress);
+    }
+
+    /**
+     * @param units     unit system of the temperature columns when their headers state none
+     * @param maps      logger header → generic field name, any order
+     * @param dateOrder how dates that are not ISO-8601 are read
+     * @param zone      time zone of clock times written without a UTC offset; null reads them as
+     *                  a local clock without a zone (shown as written)
+     * @param progress  told how far the import has got
+     */
+    public LogCsvImporter(UnitSystem units, Map<String, String> maps, DateOrder dateOrder, ZoneId zone,
+                          ImportProgress progress) {
         this.units = units;
         this.maps = new LinkedHashMap<>(maps);
+        this.dateOrder = dateOrder == null ? DateOrder.AUTO : dateOrder;
+        this.zone = zone;
         this.progress = progress == null ? ImportProgress.NONE : progress;
     }
 
@@ -101,10 +119,11 @@ public final class LogCsvImporter {
             if (!it.hasNext()) {
                 throw new LogRefusedException("the file is empty: a log needs a header row and sample rows");
             }
-            Header header = header(it.next());
+            HeaderLayout header = HeaderLayout.read(names(it.next()), maps);
             // rows are about as long as the header: size the columns once instead of doubling them
             int capacity = (int) Math.max(1024, Math.min(50_000_000L, totalChars / Math.max(20, headerLine.length())));
-            Rows rows = new Rows(header, capacity);
+            UnitSystem stated = header.statedTemperatureUnit();
+            Rows rows = new Rows(header, capacity, stated != null ? stated : units, stated != null);
             int rowsRead = 0;
             IsoTimes.Parsed parsed = new IsoTimes.Parsed();
             Boolean offsetMode = null;
@@ -119,10 +138,10 @@ public final class LogCsvImporter {
                 if ((rowsRead & 8191) == 0 && totalChars > 0) {
                     progress.progress(Math.min(1.0, rec.getCharacterPosition() / (double) totalChars));
                 }
-                String problem = rows.add(rec, line, decimalComma, parsed, offsetMode);
+                RowProblem problem = rows.add(rec, line, decimalComma, parsed, offsetMode);
                 if (problem != null) {
-                    rows.reject(problem);
-                } else if (offsetMode == null && header.timeIsIso) {
+                    rows.reject(problem.text());
+                } else if (offsetMode == null && header.timeIsIso && !rows.slashed) {
                     offsetMode = parsed.hasOffset;
                     rows.firstOffsetSeconds = parsed.offsetSeconds;
                 }
@@ -177,7 +196,15 @@ public final class LogCsvImporter {
         return semi > comma ? ';' : ',';
     }
 
-    private static String clean(String s) {
+    private static String[] names(CSVRecord rec) {
+        String[] names = new String[rec.size()];
+        for (int c = 0; c < names.length; c++) {
+            names[c] = clean(rec.get(c));
+        }
+        return names;
+    }
+
+    static String clean(String s) {
         String t = s.strip();
         if (!t.isEmpty() && t.charAt(0) == '\uFEFF') {
             t = t.substring(1).strip();
@@ -186,114 +213,6 @@ public final class LogCsvImporter {
             t = t.substring(1, t.length() - 1).strip();
         }
         return t;
-    }
-
-    /** Where each field sits in the header. */
-    private static final class Header {
-        final int width;
-        int timeColumn = -1;
-        boolean timeIsIso;
-        final int[] analogColumn = new int[Channel.values().length];
-        final String[] names;
-        final Map<String, String> columns = new LinkedHashMap<>();
-        final List<String> ignored = new ArrayList<>();
-        /** Channels present, with their columns, in reading order (built once, read per row). */
-        Channel[] present = new Channel[0];
-        int[] presentColumn = new int[0];
-
-        Header(int width) {
-            this.width = width;
-            this.names = new String[width];
-            Arrays.fill(analogColumn, -1);
-        }
-    }
-
-    private Header header(CSVRecord rec) throws LogRefusedException {
-        Header h = new Header(rec.size());
-        Map<String, String> lowerMaps = new LinkedHashMap<>();
-        for (Map.Entry<String, String> e : maps.entrySet()) {
-            String field = e.getValue().strip().toLowerCase(Locale.ROOT);
-            if (!field.equals("time") && !field.equals("seconds") && Channel.ofField(field) == null) {
-                throw new LogRefusedException("--map " + e.getKey() + "=" + e.getValue() + ": '" + e.getValue()
-                        + "' is not a field; fields are time, seconds, " + fieldList());
-            }
-            lowerMaps.put(e.getKey().strip().toLowerCase(Locale.ROOT), field);
-        }
-        List<String> unmatched = new ArrayList<>(lowerMaps.keySet());
-        for (int c = 0; c < rec.size(); c++) {
-            String name = clean(rec.get(c));
-            h.names[c] = name;
-            String key = name.toLowerCase(Locale.ROOT);
-            String field = lowerMaps.get(key);
-            if (field != null) {
-                unmatched.remove(key);
-            } else if (key.equals("time") || key.equals("seconds") || Channel.ofField(key) != null) {
-                field = key;
-            }
-            if (field == null) {
-                if (!name.isEmpty()) {
-                    h.ignored.add(name);
-                }
-                continue;
-            }
-            if (h.columns.containsValue(field)) {
-                throw new LogRefusedException("two columns are read as " + field + " (the second is '" + name
-                        + "', column " + (c + 1) + "); map one of them to another field");
-            }
-            h.columns.put(name, field);
-            if (field.equals("time") || field.equals("seconds")) {
-                if (h.timeColumn >= 0) {
-                    throw new LogRefusedException("both a time and a seconds column: keep one (map the other"
-                            + " to a different field or delete it)");
-                }
-                h.timeColumn = c;
-                h.timeIsIso = field.equals("time");
-            } else {
-                h.analogColumn[Channel.ofField(field).ordinal()] = c;
-            }
-        }
-        List<Channel> present = new ArrayList<>();
-        for (Channel ch : CHANNELS) {
-            if (h.analogColumn[ch.ordinal()] >= 0) {
-                present.add(ch);
-            }
-        }
-        h.present = present.toArray(new Channel[0]);
-        h.presentColumn = new int[h.present.length];
-        for (int k = 0; k < h.present.length; k++) {
-            h.presentColumn[k] = h.analogColumn[h.present[k].ordinal()];
-        }
-        if (!unmatched.isEmpty()) {
-            throw new LogRefusedException("--map names header(s) not in the file: " + unmatched
-                    + "; headers are " + Arrays.toString(h.names));
-        }
-        if (h.timeColumn < 0) {
-            throw new LogRefusedException("no time column: expected a column named 'time' (ISO-8601 date-time)"
-                    + " or 'seconds' (elapsed), or --map HEADER=time; headers are " + shown(h.names));
-        }
-        boolean anyTemperature = false;
-        for (Channel ch : Channel.values()) {
-            anyTemperature |= ch.isTemperature() && h.analogColumn[ch.ordinal()] >= 0;
-        }
-        if (!anyTemperature) {
-            throw new LogRefusedException("no temperature column: expected at least one of return_db, supply_db,"
-                    + " return_wb, supply_wb, coil_temp, outdoor_db (or --map HEADER=field); headers are "
-                    + shown(h.names));
-        }
-        return h;
-    }
-
-    private static String fieldList() {
-        StringBuilder b = new StringBuilder();
-        for (Channel c : Channel.values()) {
-            b.append(b.length() == 0 ? "" : ", ").append(c.field());
-        }
-        return b.toString();
-    }
-
-    private static String shown(String[] names) {
-        String s = Arrays.toString(names);
-        return s.length() > 300 ? s.substring(0, 300) + "…]" : s;
     }
 
     private static String quote(String v) {
@@ -308,8 +227,16 @@ public final class LogCsvImporter {
 
     /** Growing columns of good rows. */
     private final class Rows {
-        final Header header;
+        final HeaderLayout header;
+        /** The unit temperatures are read in, and whether a header stated it. */
+        final UnitSystem tempUnit;
+        final boolean unitFromHeader;
         double[] time;
+        /** Date fields of slashed dates (year·10⁴ + first·10² + second), decided at the end. */
+        int[] dateKey;
+        boolean slashed;
+        boolean yearFirst;
+        final SlashedTimes.Parsed slashedParsed = new SlashedTimes.Parsed();
         final double[][] analog = new double[Channel.values().length][];
         final byte[][] status = new byte[Channel.values().length][];
         int n;
@@ -317,8 +244,10 @@ public final class LogCsvImporter {
         final List<String> rejected = new ArrayList<>();
         int firstOffsetSeconds;
 
-        Rows(Header header, int capacity) {
+        Rows(HeaderLayout header, int capacity, UnitSystem tempUnit, boolean unitFromHeader) {
             this.header = header;
+            this.tempUnit = tempUnit;
+            this.unitFromHeader = unitFromHeader;
             this.time = new double[capacity];
             for (Channel c : CHANNELS) {
                 if (header.analogColumn[c.ordinal()] >= 0) {
@@ -339,17 +268,17 @@ public final class LogCsvImporter {
         }
 
         /** Adds the record, or returns why it was kept out. */
-        String add(CSVRecord rec, long line, boolean decimalComma, IsoTimes.Parsed parsed, Boolean offsetMode) {
+        RowProblem add(CSVRecord rec, long line, boolean decimalComma, IsoTimes.Parsed parsed, Boolean offsetMode) {
             int size = rec.size();
             if (size < header.width) {
                 if (size == 1 && rec.get(0).isEmpty()) {
-                    return line + ": empty row";
+                    return RowProblem.row(line, "empty row");
                 }
-                return line + ": " + size + " of " + header.width + " columns (line cut short?)";
+                return RowProblem.row(line, size + " of " + header.width + " columns (line cut short?)");
             }
             for (int c = header.width; c < size; c++) {
                 if (!rec.get(c).isEmpty()) {
-                    return line + ": " + size + " columns, the header has " + header.width;
+                    return RowProblem.row(line, size + " columns, the header has " + header.width);
                 }
             }
             if (n == time.length) {
@@ -359,45 +288,68 @@ public final class LogCsvImporter {
             String tv = clean(rec.get(tc));
             double t;
             if (header.timeIsIso) {
-                if (!IsoTimes.parse(tv, parsed)) {
-                    return line + ":" + (tc + 1) + ": time " + quote(tv) + " is not an ISO-8601 date-time"
-                            + " (e.g. 2026-07-14T13:05:00 or 2026-07-14T13:05:00-04:00)";
+                RowProblem p = clockTime(tv, line, tc, parsed, offsetMode);
+                if (p != null) {
+                    return p;
                 }
-                if (offsetMode != null && offsetMode != parsed.hasOffset) {
-                    return line + ":" + (tc + 1) + ": time " + quote(tv) + (parsed.hasOffset
-                            ? " has a UTC offset, earlier rows had none" : " has no UTC offset, earlier rows had one");
-                }
-                t = parsed.epochSeconds;
+                t = slashed ? slashedParsed.secondOfDay : parsed.epochSeconds;
             } else {
-                t = number(tv, decimalComma);
+                t = DecimalText.parse(tv, decimalComma);
                 if (!Double.isFinite(t)) {
-                    return line + ":" + (tc + 1) + ": seconds " + quote(tv) + " is not a number";
+                    return new RowProblem(line, tc + 1, "seconds", quote(tv) + " is not a number");
                 }
             }
-            time[n] = t;
             for (int k = 0; k < header.present.length; k++) {
                 Channel ch = header.present[k];
                 int c = header.presentColumn[k];
                 String v = clean(rec.get(c));
                 String problem = ch.isStatus() ? status(ch, v) : analog(ch, v, decimalComma);
                 if (problem != null) {
-                    return line + ":" + (c + 1) + ": " + ch.field() + " " + problem;
+                    return new RowProblem(line, c + 1, ch.field(), problem);
                 }
+            }
+            time[n] = t;
+            if (slashed) {
+                dateKey[n] = slashedParsed.year * 10_000 + slashedParsed.first * 100 + slashedParsed.second;
             }
             n++;
             return null;
         }
 
+        /** ISO-8601 or a slashed date-time; the first good row decides which the file uses. */
+        private RowProblem clockTime(String tv, long line, int tc, IsoTimes.Parsed parsed, Boolean offsetMode) {
+            boolean first = n == 0 && !slashed && offsetMode == null;
+            if (!slashed && IsoTimes.parse(tv, parsed)) {
+                if (offsetMode != null && offsetMode != parsed.hasOffset) {
+                    return new RowProblem(line, tc + 1, "time", quote(tv) + (parsed.hasOffset
+                            ? " has a UTC offset, earlier rows had none" : " has no UTC offset, earlier rows had one"));
+                }
+                return null;
+            }
+            if ((slashed || first) && SlashedTimes.parse(tv, slashedParsed)
+                    && (!slashed || slashedParsed.yearFirst == yearFirst)) {
+                if (!slashed) {
+                    slashed = true;
+                    yearFirst = slashedParsed.yearFirst;
+                    dateKey = new int[time.length];
+                }
+                return null;
+            }
+            return new RowProblem(line, tc + 1, "time", quote(tv) + " is not a date and time this reader knows"
+                    + " (e.g. 2026-07-14T13:05:00, 2026-07-14T13:05:00-04:00, 7/14/2026 1:05:00 PM or"
+                    + " 14/07/2026 13:05)");
+        }
+
         private String status(Channel ch, String v) {
             byte b;
-            if (missing(v)) {
+            if (DecimalText.missing(v)) {
                 b = LogSeries.UNKNOWN;
             } else if (v.equals("1") || v.equalsIgnoreCase("on") || v.equalsIgnoreCase("true")) {
                 b = 1;
             } else if (v.equals("0") || v.equalsIgnoreCase("off") || v.equalsIgnoreCase("false")) {
                 b = 0;
             } else {
-                double d = number(v, false);
+                double d = DecimalText.parse(v, false);
                 if (!(d >= 0 && d <= 1)) {
                     return quote(v) + " is not a status (0/1, on/off)";
                 }
@@ -409,24 +361,25 @@ public final class LogCsvImporter {
 
         private String analog(Channel ch, String v, boolean decimalComma) {
             double si;
-            if (missing(v)) {
+            if (DecimalText.missing(v)) {
                 si = Double.NaN;
             } else {
-                double shown = number(v, decimalComma);
+                double shown = DecimalText.parse(v, decimalComma);
                 if (!Double.isFinite(shown)) {
                     return quote(v) + " is not a number";
                 }
                 if (ch.isTemperature()) {
-                    si = Quantity.TEMPERATURE.fromDisplay(units, shown);
-                    if (si < InputLimits.MIN_TEMP_C || si > InputLimits.MAX_TEMP_C) {
+                    si = Quantity.TEMPERATURE.fromDisplay(tempUnit, shown);
+                    if (!FieldLimits.AIR_TEMPERATURE.accepts(si)) {
                         return String.format(Locale.ROOT, "%s %s outside %.0f to %.0f %s", quote(v),
-                                Quantity.TEMPERATURE.symbol(units),
-                                Quantity.TEMPERATURE.toDisplay(units, InputLimits.MIN_TEMP_C),
-                                Quantity.TEMPERATURE.toDisplay(units, InputLimits.MAX_TEMP_C),
-                                Quantity.TEMPERATURE.symbol(units));
+                                Quantity.TEMPERATURE.symbol(tempUnit),
+                                Quantity.TEMPERATURE.toDisplay(tempUnit, FieldLimits.AIR_TEMPERATURE.minSi()),
+                                Quantity.TEMPERATURE.toDisplay(tempUnit, FieldLimits.AIR_TEMPERATURE.maxSi()),
+                                Quantity.TEMPERATURE.symbol(tempUnit));
                     }
                 } else {
-                    if (shown < 0 || shown > 100 + RH_SATURATION_SLACK_PCT) {
+                    if (shown < FieldLimits.RELATIVE_HUMIDITY.minSi()
+                            || shown > FieldLimits.RELATIVE_HUMIDITY.maxSi() + RH_SATURATION_SLACK_PCT) {
                         return quote(v) + " % outside 0 to 100 %";
                     }
                     si = Math.min(100.0, shown);
@@ -439,6 +392,9 @@ public final class LogCsvImporter {
         private void grow() {
             int cap = time.length * 2;
             time = Arrays.copyOf(time, cap);
+            if (dateKey != null) {
+                dateKey = Arrays.copyOf(dateKey, cap);
+            }
             for (int i = 0; i < analog.length; i++) {
                 if (analog[i] != null) {
                     analog[i] = Arrays.copyOf(analog[i], cap);
@@ -455,7 +411,17 @@ public final class LogCsvImporter {
                 throw new LogRefusedException("no readable rows: " + rowsRead + " data row(s), all kept out"
                         + (rejected.isEmpty() ? "" : "; first: " + rejected.get(0)));
             }
-            int[] order = timeOrder();
+            DateOrder order = DateOrder.YMD;
+            if (slashed) {
+                order = ClockTimeResolver.resolve(time, dateKey, n, yearFirst, dateOrder);
+            }
+            boolean zoned = header.timeIsIso && !hasOffset && zone != null;
+            int firstOffset = firstOffsetSeconds;
+            if (zoned) {
+                firstOffset = ClockTimeResolver.toUtc(time, n, zone);
+            }
+            UnitCheck.check(header, analog, n, tempUnit, unitFromHeader);
+            int[] sorted = timeOrder();
             int outOfOrder = 0;
             double maxSoFar = Double.NEGATIVE_INFINITY;
             for (int i = 0; i < n; i++) {
@@ -468,7 +434,7 @@ public final class LogCsvImporter {
             int kept = 0;
             int duplicates = 0;
             for (int k = 0; k < n; k++) {
-                int i = order == null ? k : order[k];
+                int i = sorted == null ? k : sorted[k];
                 if (kept > 0 && time[i] == time[keep[kept - 1]]) {
                     duplicates++;
                     continue;
@@ -493,28 +459,21 @@ public final class LogCsvImporter {
                     s.put(ch, pick(status[ch.ordinal()], keep, kept));
                 }
             }
-            TimeOrigin origin = header.timeIsIso ? new TimeOrigin(t0, firstOffsetSeconds, hasOffset) : null;
+            if (zoned && sorted != null) {
+                firstOffset = zone.getRules().getOffset(java.time.Instant.ofEpochSecond((long) t0)).getTotalSeconds();
+            }
+            TimeOrigin origin = header.timeIsIso ? new TimeOrigin(t0, firstOffset, hasOffset || zoned) : null;
             LogSeries series = new LogSeries(t, a, s, origin);
             double median = series.nominalIntervalS();
             if (median > MAX_INTERVAL_S) {
                 throw new LogRefusedException(String.format(Locale.ROOT, "samples are %.0f s apart (median): cycle"
                         + " timing needs an interval of 1 s to 5 min", median));
             }
-            int gaps = 0;
-            int irregular = 0;
-            double longest = 0;
-            for (int k = 1; k < kept; k++) {
-                double x = t[k] - t[k - 1];
-                if (x > GAP_FACTOR * median) {
-                    gaps++;
-                    longest = Math.max(longest, x);
-                } else if (Math.abs(x - median) > 0.1 * median) {
-                    irregular++;
-                }
-            }
+            IntervalStats intervals = IntervalStats.of(t, median, GAP_FACTOR);
             ImportReport report = new ImportReport(delimiter, decimalComma, header.timeIsIso ? "time" : "seconds",
                     hasOffset, header.columns, header.ignored, rowsRead, kept, rejectedCount, rejected, outOfOrder,
-                    duplicates, median, gaps, longest, irregular);
+                    duplicates, median, intervals.gaps(), intervals.longestGapS(), intervals.irregular(),
+                    tempUnit, unitFromHeader, slashed ? order : null, zoned ? zone.getId() : "");
             return new LogImport(series, report);
         }
 
@@ -554,89 +513,5 @@ public final class LogCsvImporter {
             out[k] = v[keep[k]];
         }
         return out;
-    }
-
-    private static boolean missing(String v) {
-        return v.isEmpty() || v.equalsIgnoreCase("nan") || v.equalsIgnoreCase("na") || v.equals("-")
-                || v.equalsIgnoreCase("null");
-    }
-
-    private static final double[] POWERS_OF_TEN = new double[23];
-
-    static {
-        POWERS_OF_TEN[0] = 1;
-        for (int i = 1; i < POWERS_OF_TEN.length; i++) {
-            POWERS_OF_TEN[i] = POWERS_OF_TEN[i - 1] * 10;
-        }
-    }
-
-    /**
-     * A plain decimal number, or NaN. No hex, no NaN/Infinity words, no thousands separators.
-     * Logger readings have a few digits: up to 15 significant digits without an exponent the value
-     * is mantissa ÷ 10^k, both exact in a double, so the one division is correctly rounded and equals
-     * Double.parseDouble (Clinger's fast path); anything else goes to Double.parseDouble.
-     */
-    static double number(String v, boolean decimalComma) {
-        int n = v.length();
-        if (n == 0 || n > 40) {
-            return Double.NaN;
-        }
-        int i = 0;
-        boolean negative = false;
-        char first = v.charAt(0);
-        if (first == '+' || first == '-') {
-            negative = first == '-';
-            i = 1;
-        }
-        long mantissa = 0;
-        int digits = 0;
-        int fraction = -1;
-        boolean exponent = false;
-        boolean anyDigit = false;
-        for (; i < n; i++) {
-            char c = v.charAt(i);
-            if (c >= '0' && c <= '9') {
-                anyDigit = true;
-                if (fraction >= 0) {
-                    fraction++;
-                }
-                if (mantissa != 0 || c != '0') {
-                    digits++;
-                }
-                mantissa = digits <= 18 ? mantissa * 10 + (c - '0') : mantissa;
-            } else if ((c == '.' || c == ',' && decimalComma) && fraction < 0) {
-                fraction = 0;
-            } else if ((c == 'e' || c == 'E') && i > 0) {
-                exponent = true;
-                break;
-            } else {
-                return Double.NaN;
-            }
-        }
-        if (!anyDigit) {
-            return Double.NaN;
-        }
-        if (!exponent && digits <= 15 && Math.max(0, fraction) < POWERS_OF_TEN.length) {
-            double x = mantissa / POWERS_OF_TEN[Math.max(0, fraction)];
-            return negative ? -x : x;
-        }
-        // rare forms (exponent, many digits): check the shape, then let the JDK parse it
-        if (exponent) {
-            String e = v.substring(i + 1);
-            int j = e.startsWith("+") || e.startsWith("-") ? 1 : 0;
-            if (j == e.length()) {
-                return Double.NaN;
-            }
-            for (; j < e.length(); j++) {
-                if (e.charAt(j) < '0' || e.charAt(j) > '9') {
-                    return Double.NaN;
-                }
-            }
-        }
-        try {
-            return Double.parseDouble(decimalComma ? v.replace(',', '.') : v);
-        } catch (NumberFormatException ex) {
-            return Double.NaN;
-        }
     }
 }

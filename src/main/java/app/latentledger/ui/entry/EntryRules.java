@@ -2,7 +2,8 @@ package app.latentledger.ui.entry;
 
 import app.latentledger.core.coil.AirReading;
 import app.latentledger.core.coil.CoilReadings;
-import app.latentledger.core.coil.HumidityKind;
+import app.latentledger.core.measure.FieldLimits;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.psychro.HandbookEdition;
 import app.latentledger.core.psychro.InputLimits;
 import app.latentledger.core.records.HvacSystem;
@@ -45,9 +46,7 @@ public final class EntryRules {
 
     /** Refuses a nameplate size outside what a system record and the coil check accept. */
     public static void checkNominal(double capacityW) {
-        InputLimits.check("nominal size", Quantity.POWER_LARGE, capacityW,
-                Math.max(HvacSystem.MIN_CAPACITY_W, CoilReadings.MIN_NOMINAL_W),
-                Math.min(HvacSystem.MAX_CAPACITY_W, CoilReadings.MAX_NOMINAL_W), null);
+        FieldLimits.NOMINAL_CAPACITY.check("nominal size", capacityW);
     }
 
     private static void range(String field, Slot slot, String choice, SlotValue v) {
@@ -55,34 +54,31 @@ public final class EntryRules {
         Quantity tq = slot.toleranceQuantity(choice);
         switch (slot) {
             case COIL_TEMPERATURE -> {
-                // the coil check's own band for a cooling coil
-                InputLimits.check(field, q, v.valueSi(), -30.0, 35.0, "a cooling coil runs between about −20 °F and 95 °F");
-                InputLimits.check(field + " tolerance", tq, v.toleranceSi(), 0, 10, null);
+                FieldLimits.COIL_TEMPERATURE.check(field, v.valueSi());
+                FieldLimits.TEMPERATURE_TOLERANCE.check(field + " tolerance", v.toleranceSi());
             }
             case AIRFLOW -> {
-                InputLimits.check(field, q, v.valueSi(),
-                        Math.max(ReadingSet.MIN_AIRFLOW_M3_PER_S, CoilReadings.MIN_AIRFLOW_M3_PER_S),
-                        Math.min(ReadingSet.MAX_AIRFLOW_M3_PER_S, CoilReadings.MAX_AIRFLOW_M3_PER_S), null);
-                InputLimits.check(field + " tolerance", tq, v.toleranceSi(), 0, 0.5, null);
+                FieldLimits.AIRFLOW.check(field, v.valueSi());
+                FieldLimits.AIRFLOW_TOLERANCE.check(field + " tolerance", v.toleranceSi());
             }
             case CONDENSATE_VOLUME -> {
-                InputLimits.check(field, q, v.valueSi(), 0, ReadingSet.MAX_CONDENSATE_M3, null);
-                InputLimits.check(field + " tolerance", tq, v.toleranceSi(), 0, ReadingSet.MAX_CONDENSATE_M3, null);
+                FieldLimits.CONDENSATE_VOLUME.check(field, v.valueSi());
+                InputLimits.check(field + " tolerance", tq, v.toleranceSi(), 0,
+                        v.valueSi() * FieldLimits.CONDENSATE_VOLUME_TOLERANCE.maxSi(), null);
             }
             case CONDENSATE_MINUTES -> {
-                InputLimits.check("condensate collection time", q, v.valueSi(), ReadingSet.MIN_COLLECTION_S,
-                        ReadingSet.MAX_COLLECTION_S, null);
+                FieldLimits.COLLECTION_TIME.check(v.valueSi());
                 InputLimits.check("condensate collection time tolerance", tq, v.toleranceSi(), 0,
-                        ReadingSet.MAX_COLLECTION_S / 24, null);
+                        v.valueSi() / 2, null);
             }
             case NOMINAL_TONS -> checkNominal(v.valueSi());
             default -> {
                 if (q == Quantity.RELATIVE_HUMIDITY) {
-                    InputLimits.check(field, q, v.valueSi(), 0, 100, null);
-                    InputLimits.check(field + " tolerance", tq, v.toleranceSi(), 0, 20, null);
+                    FieldLimits.RELATIVE_HUMIDITY.check(field, v.valueSi());
+                    FieldLimits.RELATIVE_HUMIDITY_TOLERANCE.check(field + " tolerance", v.toleranceSi());
                 } else {
-                    InputLimits.check(field, q, v.valueSi(), InputLimits.MIN_TEMP_C, InputLimits.MAX_TEMP_C, null);
-                    InputLimits.check(field + " tolerance", tq, v.toleranceSi(), 0, 10, null);
+                    FieldLimits.AIR_TEMPERATURE.check(field, v.valueSi());
+                    FieldLimits.TEMPERATURE_TOLERANCE.check(field + " tolerance", v.toleranceSi());
                 }
             }
         }
@@ -94,11 +90,7 @@ public final class EntryRules {
         if (db == null || h == null) {
             return;
         }
-        HumidityKind kind = switch (d.choice(hum)) {
-            case "rh" -> HumidityKind.RELATIVE_HUMIDITY;
-            case "dew-point" -> HumidityKind.DEW_POINT;
-            default -> HumidityKind.WET_BULB;
-        };
+        HumidityKind kind = HumidityKind.parse("humidity kind", d.choice(hum));
         new AirReading(where, db.valueSi(), db.toleranceSi(), kind, h.valueSi(), h.toleranceSi())
                 .state(pressurePa, HandbookEdition.SI);
     }

@@ -47,9 +47,13 @@ final class KeypadView extends VBox {
 
         HBox choices = new HBox(8);
         choices.setId("pad-choices");
+        Label hint = Ui.wrapped("", "hint");
+        hint.setId("pad-hint");
         Runnable fillChoices = () -> {
             choices.getChildren().clear();
             Slot s = vm.selectedProperty().get();
+            hint.setText(s.hint(vm.choice(s)));
+            hint.setManaged(!hint.getText().isEmpty());
             javafx.scene.control.ToggleGroup group = new javafx.scene.control.ToggleGroup();
             for (String c : s.choices()) {
                 ToggleButton b = new ToggleButton(Slot.choiceLabel(c));
@@ -81,7 +85,7 @@ final class KeypadView extends VBox {
 
         GridPane keys = keys(vm);
         VBox.setVgrow(keys, Priority.ALWAYS);
-        getChildren().addAll(head, shown, choices, keys, message);
+        getChildren().addAll(head, shown, choices, hint, keys, message);
     }
 
     private static GridPane keys(EntryViewModel vm) {

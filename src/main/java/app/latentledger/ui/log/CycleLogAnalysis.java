@@ -1,42 +1,34 @@
 package app.latentledger.ui.log;
 
 import app.latentledger.chart.source.LogTimelineSource;
-import app.latentledger.core.InvalidInputException;
-import app.latentledger.core.cycles.LogNotAnalysableException;
-import app.latentledger.core.cycles.LogSeries;
-import app.latentledger.core.cycles.RunCycleAnalysis;
+import app.latentledger.core.cycles.HouseHumidity;
+import app.latentledger.core.cycles.LoadLine;
 import app.latentledger.core.cycles.RunCycleReport;
-import app.latentledger.core.records.Ids;
+import app.latentledger.core.units.Ratio;
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
-import app.latentledger.core.visit.StoredLogSeries;
 import app.latentledger.io.logcsv.ImportProgress;
 import app.latentledger.io.logcsv.ImportReport;
-import app.latentledger.io.logcsv.LogCsvImporter;
-import app.latentledger.io.logcsv.LogImport;
-import app.latentledger.io.logcsv.LogRefusedException;
 import app.latentledger.ui.present.Row;
 import app.latentledger.ui.present.Shown;
 import app.latentledger.ui.session.LogAnalysis;
 import app.latentledger.ui.session.LogAnalysisService;
 import app.latentledger.ui.session.LogRequest;
+import app.latentledger.visit.LogProblem;
+import app.latentledger.visit.VisitLog;
+import app.latentledger.visit.VisitLogs;
 
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.time.OffsetDateTime;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
-import java.util.stream.Collectors;
 
 /**
- * The log analysis the app ships with, the same steps as the {@code log} command: the CSV through
- * {@link LogCsvImporter} (in the visit's units, with the tech's header map), cycles through
- * {@link RunCycleAnalysis} at the site's pressure and airflow, the log kept with the visit through
- * the ledger's {@code LogRepository} as {@link StoredLogSeries} stores it (so the report and a
- * reopened visit read it back), the timeline through {@link LogTimelineSource}.
+ * The log analysis the app ships with: the steps of {@link VisitLogs}, the same service the report
+ * and the {@code log} command call (read in the visit's units with the tech's header map, date order
+ * and zone; analysed at the visit's conditions; kept with the visit with the airflows it was analysed
+ * at), then the timeline through {@link LogTimelineSource} from the series the analysis used.
  */
 public final class CycleLogAnalysis implements LogAnalysisService {
     @Override
@@ -46,20 +38,14 @@ public final class CycleLogAnalysis implements LogAnalysisService {
 
     @Override
     public LogAnalysis importAndAnalyse(LogRequest request, Path file, ImportProgress progress) throws Exception {
-        LogImport imported;
+        VisitLog a;
         try {
-            imported = new LogCsvImporter(request.units(), request.headerMap(), progress).read(file);
-        } catch (NoSuchFileException e) {
-            throw new IllegalArgumentException("no such file: " + file);
-        } catch (LogRefusedException e) {
-            throw new IllegalArgumentException(file.getFileName() + " refused: " + e.getMessage(), e);
+            a = VisitLogs.importAndKeep(request.ledger(), request.visit(), file, options(request),
+                    request.airflowM3PerS(), request.fanAirflowM3PerS(), request.thresholds(), progress);
+        } catch (LogProblem e) {
+            throw new IllegalArgumentException(e.getMessage(), e);
         }
-        RunCycleReport report = analyse(imported.series(), request);
-        // kept only once it analyses: a log the screen cannot read is not put in the visit's report
-        String name = file.getFileName().toString();
-        request.ledger().logs().save(new ImportedLog(Ids.newId(), request.visit().id(), name,
-                mapping(imported.report().columns()), OffsetDateTime.now(), StoredLogSeries.samples(imported.series())));
-        return analysis(name, imported.series(), report, request, notes(imported.report()));
+        return analysis(a, request.units(), notes(a.importReport()));
     }
 
     @Override
@@ -69,31 +55,27 @@ public final class CycleLogAnalysis implements LogAnalysisService {
             return Optional.empty();
         }
         ImportedLog log = request.ledger().logs().find(ids.get(ids.size() - 1)).orElseThrow();
-        StoredLogSeries stored = StoredLogSeries.of(log.samples(), request.visit().startedAt().getOffset());
-        RunCycleReport report = analyse(stored.series(), request);
-        String notes = stored.ignored().isEmpty() ? "" : "Not read: " + String.join("; ", stored.ignored()) + ".";
-        return Optional.of(analysis(log.sourceFileName(), stored.series(), report, request, notes));
-    }
-
-    private static RunCycleReport analyse(LogSeries series, LogRequest request) {
-        try {
-            return new RunCycleAnalysis(request.thresholds()).analyse(series, request.pressurePa(),
-                    request.airflowM3PerS());
-        } catch (InvalidInputException e) {
-            throw new IllegalArgumentException(e.message(request.units()), e);
-        } catch (LogNotAnalysableException e) {
-            throw new IllegalArgumentException(e.getMessage(), e);
+        VisitLog a = VisitLogs.analyseKept(request.ledger(), log, request.thresholds(), request.units());
+        if (!a.analysed()) {
+            throw new IllegalArgumentException(a.refusal());
         }
+        String notes = a.ignored().isEmpty() ? "" : "Not read: " + String.join("; ", a.ignored()) + ".";
+        return Optional.of(analysis(a, request.units(), notes));
     }
 
-    private static LogAnalysis analysis(String source, LogSeries series, RunCycleReport r, LogRequest request,
-                                        String notes) {
-        UnitSystem u = request.units();
-        return new LogAnalysis(source, summary(r, u), r.findings(), notes,
-                LogTimelineSource.timeline(series, r, request.pressurePa(), u, source));
+    private static VisitLogs.ReadOptions options(LogRequest r) {
+        return new VisitLogs.ReadOptions(r.units(), r.headerMap(), r.dateOrder(), r.zone());
+    }
+
+    private static LogAnalysis analysis(VisitLog a, UnitSystem u, String notes) {
+        String all = (notes + " " + a.note()).strip();
+        return new LogAnalysis(a.source(), summary(a.report(), u), a.report().findings(), all,
+                LogTimelineSource.timeline(a.series(), a.report(), a.conditions().pressurePa(), u, a.source()));
     }
 
     /** The cycle summary, in the order the {@code log} command prints it. */
+    private static final String MORE_RETURNED = "more put back than removed";
+
     static List<Row> summary(RunCycleReport r, UnitSystem u) {
         List<Row> rows = new ArrayList<>();
         rows.add(new Row("samples", "Samples", Shown.number(r.samples(), 0), ""));
@@ -110,20 +92,49 @@ public final class CycleLogAnalysis implements LogAnalysisService {
                 mass));
         rows.add(new Row("net-per-hour", "Net removed", Shown.of(Quantity.WATER_RATE, u, r.netRemovalKgPerS(), 3),
                 Quantity.WATER_RATE.symbol(u)));
-        rows.add(new Row("latent-measured", "Latent fraction, measured", Shown.number(r.latentFractionMeasured(), 2),
+        rows.add(new Row("returned-share", "Share returned", r.reevaporation().percent(RunCycleReport.NONE_RETURNED), ""));
+        rows.add(new Row("blower-from", "Blower state from", r.blowerInferred() ? "the air (inferred)"
+                : "blower column", ""));
+        rows.add(new Row("fan-off-delay", "Fan-off delay", Double.isNaN(r.fanOffDelayMedianS()) ? "none found"
+                : Shown.number(r.fanOffDelayMedianS() / 60, 1), Double.isNaN(r.fanOffDelayMedianS()) ? "" : "min"));
+        rows.add(new Row("latent-measured", "Latent fraction, measured", r.latentMeasured().number(2, MORE_RETURNED),
                 ""));
-        rows.add(new Row("latent-predicted", "Latent fraction, model", Shown.number(r.latentFractionPredicted(), 2),
+        rows.add(new Row("latent-predicted", "Latent fraction, model", r.latentPredicted().number(2, MORE_RETURNED),
                 ""));
+        if (r.house() != null) {
+            HouseHumidity h = r.house();
+            rows.add(new Row("house-dew-point", "House dew point, median / p95",
+                    Shown.of(Quantity.TEMPERATURE, u, h.dewPointMedianC(), 1) + " / "
+                            + Shown.of(Quantity.TEMPERATURE, u, h.dewPointP95C(), 1), Quantity.TEMPERATURE.symbol(u)));
+            rows.add(new Row("house-rh", "House RH, median / p95", Shown.number(h.rhMedianPct(), 0) + " / "
+                    + Shown.number(h.rhP95Pct(), 0), "%"));
+            rows.add(new Row("house-rh-hours", "Hours above RH target", Shown.number(h.hoursAboveRhTarget(), 1), "h"));
+            rows.add(new Row("house-off-trend", "Humidity rise while off", h.longOffPeriods() == 0
+                    ? Ratio.NOT_MEASURABLE + " (no long off period)"
+                    : Shown.of(Quantity.HUMIDITY_RATIO_FINE, u, h.offTrendPerHour(), 2),
+                    h.longOffPeriods() == 0 ? "" : Quantity.HUMIDITY_RATIO_FINE.symbol(u) + " per h"));
+        }
+        if (r.loadLine() != null) {
+            LoadLine l = r.loadLine();
+            rows.add(new Row("hot-runtime", "Running in the hottest hours", Shown.number(100 * l.hotRuntimeFraction(), 0)
+                    + " ± " + Shown.number(100 * l.hotRuntimeU(), 0), "%"));
+            rows.add(new Row("continuous-at", "Would run continuously at", Double.isNaN(l.continuousC())
+                    ? Ratio.NOT_MEASURABLE + " (no line fitted)" : Shown.of(Quantity.TEMPERATURE, u, l.continuousC(), 1),
+                    Double.isNaN(l.continuousC()) ? "" : Quantity.TEMPERATURE.symbol(u)));
+        }
         return rows;
-    }
-
-    private static String mapping(Map<String, String> columns) {
-        return columns.entrySet().stream().map(e -> e.getKey() + "=" + e.getValue()).collect(Collectors.joining("; "));
     }
 
     private static String notes(ImportReport rep) {
         List<String> parts = new ArrayList<>();
         parts.add(rep.rowsKept() + " of " + rep.rowsRead() + " rows kept");
+        parts.add("temperatures in " + rep.temperatureUnitText());
+        if (rep.dateOrder() != null) {
+            parts.add("dates read as " + rep.dateOrder().key());
+        }
+        if (!rep.timeZone().isEmpty()) {
+            parts.add("clock times in " + rep.timeZone());
+        }
         if (rep.rejectedCount() > 0) {
             parts.add(rep.rejectedCount() + " kept out (" + String.join(", ", rep.rejected().subList(0,
                     Math.min(3, rep.rejected().size()))) + (rep.rejectedCount() > 3 ? ", …" : "") + ")");

@@ -4,10 +4,11 @@ import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.cycles.RunCycleAnalysis;
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.psychro.InputLimits;
-import app.latentledger.core.psychro.StandardAtmosphere;
+import app.latentledger.io.logcsv.DateOrder;
+import app.latentledger.io.logcsv.HeaderMap;
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.ReadingSet;
-import app.latentledger.core.records.Visit;
+import app.latentledger.visit.VisitLogs;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.ui.chart.CoilCharts;
@@ -36,7 +37,7 @@ import javafx.collections.ObservableList;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.LinkedHashMap;
+import java.time.ZoneId;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -58,6 +59,9 @@ public final class LogImportViewModel {
     private final StringProperty file = new SimpleStringProperty("");
     private final StringProperty headerMap = new SimpleStringProperty("");
     private final StringProperty airflow = new SimpleStringProperty("");
+    private final StringProperty fanAirflow = new SimpleStringProperty("");
+    private final StringProperty dateOrder = new SimpleStringProperty("");
+    private final StringProperty timeZone = new SimpleStringProperty("");
     private final ReadOnlyBooleanWrapper airflowNeeded = new ReadOnlyBooleanWrapper(false);
     private final ReadOnlyStringWrapper airflowCaption = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
@@ -109,6 +113,21 @@ public final class LogImportViewModel {
     /** Airflow typed in the tech's units, used when the visit's reading sets give none. */
     public StringProperty airflowProperty() {
         return airflow;
+    }
+
+    /** Airflow with the blower alone (fan-only speed), typed in the tech's units; empty: same as during runs. */
+    public StringProperty fanAirflowProperty() {
+        return fanAirflow;
+    }
+
+    /** "mdy", "dmy", "ymd" or empty (decide from the file). */
+    public StringProperty dateOrderProperty() {
+        return dateOrder;
+    }
+
+    /** Zone of clock times written without a UTC offset, e.g. "America/Chicago"; empty: the tablet's. */
+    public StringProperty timeZoneProperty() {
+        return timeZone;
     }
 
     /** True when no reading set of the visit has an airflow: the screen asks for it. */
@@ -192,7 +211,8 @@ public final class LogImportViewModel {
                     if (mine == job) {
                         show(a);
                         status.set("Imported " + a.source() + " and kept it with this visit."
-                                + (Double.isNaN(request.airflowM3PerS()) ? " Give the airflow for water masses." : ""));
+                                + (airflowNeeded.get() && Double.isNaN(request.airflowM3PerS())
+                                ? " Give the airflow for water masses." : ""));
                         busy.set(false);
                         listKept();
                     }
@@ -241,23 +261,22 @@ public final class LogImportViewModel {
         timeline.set(null);
     }
 
-    /** What the analysis needs from the visit: its pressure, its airflow, the units and thresholds. */
+    /**
+     * What the analysis needs besides the visit's own conditions ({@link VisitLogs} applies the one
+     * rule): the typed airflows, the units, thresholds, header map, date order and zone.
+     */
     private LogRequest request(Map<String, String> map) {
-        Visit v = session.visit();
-        List<ReadingSet> sets = session.ledger().readings().forVisit(v.id());
-        double pressure = StandardAtmosphere.pressurePa(session.site().elevationM());
-        for (ReadingSet rs : sets) {
-            if (rs.stationPressurePa() != null) {
-                // the visit's first measured station pressure, as the report takes it
-                pressure = rs.stationPressurePa().valueSi();
-                break;
-            }
+        DateOrder order;
+        ZoneId zone;
+        try {
+            order = dateOrder.get() == null || dateOrder.get().isBlank() ? DateOrder.AUTO
+                    : DateOrder.parse(dateOrder.get());
+            zone = timeZone.get() == null || timeZone.get().isBlank() ? null : ZoneId.of(timeZone.get().strip());
+        } catch (java.time.DateTimeException e) {
+            throw new IllegalArgumentException("time zone '" + timeZone.get() + "' is not known (e.g. America/Chicago)");
         }
-        double flow = visitAirflow(sets);
-        if (Double.isNaN(flow)) {
-            flow = typedAirflow();
-        }
-        return new LogRequest(session.ledger(), v, pressure, flow, session.units(), session.thresholds(), map);
+        return new LogRequest(session.ledger(), session.visit(), typedAirflow(airflow, "airflow"),
+                typedAirflow(fanAirflow, "fan-only airflow"), session.units(), session.thresholds(), map, order, zone);
     }
 
     /** The airflow of the visit's last reading set that has one (the state the logger ran in), else NaN. */
@@ -271,8 +290,8 @@ public final class LogImportViewModel {
         return flow;
     }
 
-    private double typedAirflow() {
-        String t = airflow.get() == null ? "" : airflow.get().strip();
+    private double typedAirflow(StringProperty box, String field) {
+        String t = box.get() == null ? "" : box.get().strip();
         if (t.isEmpty()) {
             return Double.NaN;
         }
@@ -281,11 +300,11 @@ public final class LogImportViewModel {
         try {
             shown = Double.parseDouble(t.replace(',', '.'));
         } catch (NumberFormatException e) {
-            throw new IllegalArgumentException("airflow '" + t + "' is not a number");
+            throw new IllegalArgumentException(field + " '" + t + "' is not a number");
         }
         double si = Quantity.AIRFLOW.fromDisplay(u, shown);
         try {
-            InputLimits.check("airflow", Quantity.AIRFLOW, si, RunCycleAnalysis.MIN_AIRFLOW_M3_PER_S,
+            InputLimits.check(field, Quantity.AIRFLOW, si, RunCycleAnalysis.MIN_AIRFLOW_M3_PER_S,
                     RunCycleAnalysis.MAX_AIRFLOW_M3_PER_S, null);
         } catch (InvalidInputException e) {
             throw new IllegalArgumentException(e.message(u), e);
@@ -293,24 +312,9 @@ public final class LogImportViewModel {
         return si;
     }
 
-    /** "A=b; C=d" or one per line; the header is everything before the last '='. */
+    /** The header map as typed; see {@link HeaderMap#parse(String)}. */
     static Map<String, String> parseMap(String text) {
-        Map<String, String> m = new LinkedHashMap<>();
-        if (text == null) {
-            return m;
-        }
-        for (String part : text.split("[;\\n]")) {
-            String p = part.strip();
-            if (p.isEmpty()) {
-                continue;
-            }
-            int eq = p.lastIndexOf('=');
-            if (eq <= 0 || eq == p.length() - 1) {
-                throw new IllegalArgumentException("column name '" + p + "' must be HEADER=field, e.g. RA Temp=return_db");
-            }
-            m.put(p.substring(0, eq).strip(), p.substring(eq + 1).strip());
-        }
-        return m;
+        return HeaderMap.parse(text);
     }
 
     private void showAirflowNeed() {

@@ -109,9 +109,9 @@ public final class VisitResults {
 
     private static String coilSource(CoilResult r) {
         return switch (r.coilTemperatureSource()) {
-            case CoilResult.SOURCE_MEASURED -> "measured";
-            case CoilResult.SOURCE_ADP -> "apparatus dew point";
-            default -> "none";
+            case MEASURED -> "measured";
+            case APPARATUS_DEW_POINT -> "apparatus dew point";
+            case NONE -> "none";
         };
     }
 

@@ -39,11 +39,9 @@ final class DemoLog {
                 throw new IOException("demo log " + RESOURCE + " missing from the build");
             }
             Files.copy(in, file, StandardCopyOption.REPLACE_EXISTING);
-            var site = session.ledger().sites().find(visit.get().siteId()).orElseThrow();
             // the sample's own airflow (field-data-samples/README.md): 520 L/s, invented
-            LogRequest request = new LogRequest(session.ledger(), visit.get(),
-                    app.latentledger.core.psychro.StandardAtmosphere.pressurePa(site.elevationM()), 0.52,
-                    UnitSystem.SI, session.thresholds(), Map.of());
+            LogRequest request = new LogRequest(session.ledger(), visit.get(), 0.52, Double.NaN,
+                    UnitSystem.SI, session.thresholds(), Map.of(), null, null);
             new CycleLogAnalysis().importAndAnalyse(request, file, ImportProgress.NONE);
         } finally {
             Files.deleteIfExists(file);

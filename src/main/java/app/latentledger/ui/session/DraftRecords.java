@@ -1,9 +1,10 @@
 package app.latentledger.ui.session;
 
 import app.latentledger.core.records.Airflow;
-import app.latentledger.core.records.AirflowPoint;
+import app.latentledger.core.measure.AirflowBasis;
+import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.records.CoilTemperature;
-import app.latentledger.core.records.CoilTemperatureKind;
+import app.latentledger.core.measure.CoilTemperatureKind;
 import app.latentledger.core.records.Condensate;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
@@ -50,7 +51,8 @@ public final class DraftRecords {
             SlotValue a = d.value(Slot.AIRFLOW);
             airflow = new Airflow(new Measurement(a.valueSi(), a.valueSi() * a.toleranceSi()),
                     AirflowPoint.parse("airflow point", d.choice(Slot.AIRFLOW)),
-                    b == null || b.airflow() == null ? "" : b.airflow().method());
+                    b == null || b.airflow() == null ? "" : b.airflow().method(),
+                    b == null || b.airflow() == null ? AirflowBasis.ACTUAL : b.airflow().basis());
         }
         Condensate condensate = d.has(Slot.CONDENSATE_VOLUME) && d.has(Slot.CONDENSATE_MINUTES)
                 ? new Condensate(m(d, Slot.CONDENSATE_VOLUME), m(d, Slot.CONDENSATE_MINUTES)) : null;
@@ -60,7 +62,7 @@ public final class DraftRecords {
                 m(d, Slot.RETURN_DRY_BULB), humidity(d, Slot.RETURN_HUMIDITY),
                 m(d, Slot.SUPPLY_DRY_BULB), humidity(d, Slot.SUPPLY_HUMIDITY),
                 outdoorDb, outdoorHum, coil, airflow, b == null ? null : b.stationPressurePa(), condensate,
-                b == null ? "" : b.notes());
+                b == null ? "" : b.notes(), b == null ? null : b.probes());
     }
 
     /** The draft a stored reading set opens as. */

@@ -1,6 +1,8 @@
 package app.latentledger.ui.session;
 
-import app.latentledger.core.records.HumidityKind;
+import app.latentledger.core.coil.Tolerances;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 
@@ -19,7 +21,7 @@ public enum Slot {
     OUTDOOR_DRY_BULB("outdoor-dry-bulb", "Outdoor", "Dry bulb", Group.OUTDOOR, K.F05),
     OUTDOOR_HUMIDITY("outdoor-humidity", "Outdoor", "Humidity", Group.OUTDOOR, K.F05),
     COIL_TEMPERATURE("coil-temperature", "Coil", "Coil temperature", Group.COIL, K.F10),
-    AIRFLOW("airflow", "Airflow", "Airflow", Group.AIRFLOW, 0.07),
+    AIRFLOW("airflow", "Airflow", "Airflow", Group.AIRFLOW, Tolerances.AIRFLOW_FRACTION),
     NOMINAL_TONS("nominal-tons", "System", "Nominal size", Group.AIRFLOW, 0),
     CONDENSATE_VOLUME("condensate-volume", "Condensate", "Water caught", Group.CONDENSATE, 20e-6),
     CONDENSATE_MINUTES("condensate-minutes", "Condensate", "Collection time", Group.CONDENSATE, 5);
@@ -27,10 +29,10 @@ public enum Slot {
     /** Where a box sits on the screen. */
     public enum Group { RETURN, SUPPLY, OUTDOOR, COIL, AIRFLOW, CONDENSATE }
 
-    /** Default tolerances: ±0.5 °F probe, ±1 °F coil clamp (common practice, no source). */
+    /** Default tolerances: the one table, {@link Tolerances}. */
     private static final class K {
-        static final double F05 = 0.5 / 1.8;
-        static final double F10 = 1.0 / 1.8;
+        static final double F05 = Tolerances.DRY_BULB_K;
+        static final double F10 = Tolerances.COIL_K;
     }
 
     private final String key;
@@ -130,11 +132,11 @@ public enum Slot {
 
     /** The tolerance a fresh value gets, SI (airflow: a fraction of reading). */
     public double defaultToleranceSi(String choice) {
-        if (isHumidity() && "rh".equals(choice)) {
-            return 2; // ±2 %RH, a common capacitive sensor rating (common practice, no source)
+        if (isHumidity() && choice != null) {
+            return Tolerances.humidity(HumidityKind.parse("humidity kind", choice));
         }
-        if (this == COIL_TEMPERATURE && "evaporator-saturation".equals(choice)) {
-            return 1.8 / 1.8; // ±3.5 psi ≈ ±1.8 °F for R-410A near 40 °F (domain notes §1.4)
+        if (this == COIL_TEMPERATURE && choice != null) {
+            return Tolerances.coil(CoilTemperatureKind.parse("coil temperature kind", choice), defaultToleranceSi);
         }
         return defaultToleranceSi;
     }
@@ -146,7 +148,7 @@ public enum Slot {
             case "rh" -> "RH";
             case "dew-point" -> "Dew point";
             case "coil-surface" -> "Surface probe";
-            case "evaporator-saturation" -> "Saturation (gauges)";
+            case "evaporator-saturation" -> "Evaporator saturation (gauges)";
             case "entering" -> "Return side";
             case "leaving" -> "Supply side";
             default -> choice;
@@ -159,11 +161,26 @@ public enum Slot {
             return choiceLabel(choice);
         }
         return switch (this) {
-            case COIL_TEMPERATURE -> "evaporator-saturation".equals(choice) ? "Coil (gauges)" : "Coil (probe)";
+            case COIL_TEMPERATURE -> "evaporator-saturation".equals(choice) ? "Coil (saturation)" : "Coil (probe)";
             case AIRFLOW -> "entering".equals(choice) ? "Airflow (return side)" : "Airflow (supply side)";
             case CONDENSATE_MINUTES -> "Collection time";
             default -> label;
         };
+    }
+
+    /**
+     * A line under the pad saying what the box's reading means, or "" when it needs none: a coil
+     * temperature is a surface probe or the refrigerant's saturation, never a suction-line reading.
+     */
+    public String hint(String choice) {
+        if (this != COIL_TEMPERATURE) {
+            return "";
+        }
+        return "evaporator-saturation".equals(choice)
+                ? "From the suction pressure, by a certified technician. The coil surface runs warmer than this,"
+                        + " so it can show a warm coil but not prove a cold one."
+                : "A probe on the coil fins. Not a suction-line (vapour-line) temperature: that includes the"
+                        + " superheat and makes the coil look warmer than it is.";
     }
 
     /** The box title with its choice, e.g. "Return wet bulb". */

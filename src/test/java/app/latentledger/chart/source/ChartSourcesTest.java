@@ -3,14 +3,14 @@ package app.latentledger.chart.source;
 import app.latentledger.chart.psychro.CoilProcessOverlay;
 import app.latentledger.chart.timeline.TimelineData;
 import app.latentledger.core.coil.AirReading;
-import app.latentledger.core.coil.AirflowLocation;
 import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilReadings;
 import app.latentledger.core.coil.CoilResult;
-import app.latentledger.core.coil.HumidityKind;
 import app.latentledger.core.cycles.RunCycleAnalysis;
 import app.latentledger.core.cycles.RunCycleReport;
 import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.psychro.StandardAtmosphere;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
@@ -40,7 +40,7 @@ class ChartSourcesTest {
         CoilReadings readings = new CoilReadings(101_325,
                 new AirReading("return", f(75), 0.5 / 1.8, HumidityKind.RELATIVE_HUMIDITY, 50, 2),
                 new AirReading("supply", f(55), 0.5 / 1.8, HumidityKind.RELATIVE_HUMIDITY, 90, 2),
-                Quantity.AIRFLOW.fromDisplay(UnitSystem.IP, 1200), 0.1, AirflowLocation.ENTERING,
+                Quantity.AIRFLOW.fromDisplay(UnitSystem.IP, 1200), 0.1, AirflowPoint.ENTERING,
                 Double.NaN, 0, null, Double.NaN, null);
         CoilResult r = CoilCheck.run(readings, ThresholdSettings.DEFAULTS, UnitSystem.IP);
         CoilProcessOverlay o = CoilChartSource.overlay("Before", r);

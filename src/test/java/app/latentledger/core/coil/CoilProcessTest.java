@@ -1,5 +1,7 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.units.Conversions;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
@@ -19,7 +21,7 @@ class CoilProcessTest {
         // give 197.7 kW, hence ±1.5 %.
         AirReading in = new AirReading("return", 30, 0, HumidityKind.RELATIVE_HUMIDITY, 50, 0);
         AirReading out = new AirReading("supply", 10, 0, HumidityKind.RELATIVE_HUMIDITY, 100, 0);
-        CoilReadings r = new CoilReadings(101_325, in, out, 5.0, 0, AirflowLocation.ENTERING, Double.NaN, 0, null,
+        CoilReadings r = new CoilReadings(101_325, in, out, 5.0, 0, AirflowPoint.ENTERING, Double.NaN, 0, null,
                 Double.NaN, null);
         CoilResult res = CoilCheck.run(r, app.latentledger.core.findings.ThresholdSettings.DEFAULTS, UnitSystem.SI);
         assertEquals(197_000, res.process().totalW(), 197_000 * 0.015);

@@ -9,12 +9,13 @@ import static app.latentledger.core.coil.CoilVerdict.Call.*;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 class CoilVerdictTest {
-    @ParameterizedTest(name = "margin {0}, drop {1} → {2} (rule of docs/methods.md §9.7, a GUM-based proposal)")
+    @ParameterizedTest(name = "margin {0}, drop {1} → {2} (direct evidence first: the GUM rule of docs/methods.md)")
     @CsvSource({
-            "BELOW, REMOVING, DEHUMIDIFYING", "BELOW, WITHIN, CANT_TELL", "BELOW, ADDING, CANT_TELL",
-            "ABOVE, REMOVING, CANT_TELL", "ABOVE, WITHIN, NOT_DEHUMIDIFYING", "ABOVE, ADDING, NOT_DEHUMIDIFYING",
-            "WITHIN, REMOVING, CANT_TELL", "WITHIN, ADDING, CANT_TELL", "UNKNOWN, ADDING, NOT_DEHUMIDIFYING",
-            "UNKNOWN, WITHIN, CANT_TELL", "UNKNOWN, REMOVING, CANT_TELL", "BELOW, UNKNOWN, CANT_TELL"})
+            "BELOW, REMOVING, DEHUMIDIFYING", "BELOW, WITHIN, CANT_TELL", "BELOW, ADDING, NOT_DEHUMIDIFYING",
+            "ABOVE, REMOVING, DEHUMIDIFYING", "ABOVE, WITHIN, NOT_DEHUMIDIFYING", "ABOVE, ADDING, NOT_DEHUMIDIFYING",
+            "WITHIN, REMOVING, DEHUMIDIFYING", "WITHIN, ADDING, NOT_DEHUMIDIFYING", "UNKNOWN, ADDING, NOT_DEHUMIDIFYING",
+            "UNKNOWN, WITHIN, CANT_TELL", "UNKNOWN, REMOVING, DEHUMIDIFYING", "BELOW, UNKNOWN, CANT_TELL",
+            "WITHIN, WITHIN, CANT_TELL"})
     void rule(CoilVerdict.Call margin, CoilVerdict.Call drop, CoilVerdict expected) {
         assertEquals(expected, CoilVerdict.decide(margin, drop));
     }
@@ -47,7 +48,7 @@ class CoilVerdictTest {
     void dehumidifying() {
         CoilResult r = IpCase.returnRh(78, 55).supplyRh(57, 92).cfm(1100).nominalTons(3).coilF(47).run();
         assertEquals(CoilVerdict.DEHUMIDIFYING, r.verdict());
-        assertEquals(CoilResult.SOURCE_MEASURED, r.coilTemperatureSource());
+        assertEquals(CoilTemperatureSource.MEASURED, r.coilTemperatureSource());
     }
 
     @Test
@@ -55,7 +56,7 @@ class CoilVerdictTest {
     void dehumidifyingOnAdp() {
         CoilResult r = IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).run();
         assertEquals(CoilVerdict.DEHUMIDIFYING, r.verdict());
-        assertEquals(CoilResult.SOURCE_ADP, r.coilTemperatureSource());
+        assertEquals(CoilTemperatureSource.APPARATUS_DEW_POINT, r.coilTemperatureSource());
         assertEquals(r.adp().temperatureC(), r.coilTemperatureC(), 0);
     }
 
@@ -71,13 +72,13 @@ class CoilVerdictTest {
     void notDehumidifyingAddingMoisture() {
         CoilResult r = IpCase.returnRh(75, 50).supplyRh(63, 86).cfm(1200).run();
         assertEquals(CoilVerdict.NOT_DEHUMIDIFYING, r.verdict());
-        assertEquals(CoilResult.SOURCE_NONE, r.coilTemperatureSource());
+        assertEquals(CoilTemperatureSource.NONE, r.coilTemperatureSource());
     }
 
     @Test
-    @DisplayName("Can't tell: coil surface 59 °F against a 60.2 °F entering dew point (76 °F/58 %)")
+    @DisplayName("Can't tell: a 2 °F split (75/50 → 73/53) gives no measurable drop, and a 55 °F coil probe sits on the 55.1 °F dew point")
     void cantTell() {
-        CoilResult r = IpCase.returnRh(76, 58).supplyRh(59, 90).cfm(1200).nominalTons(3).coilF(59).run();
+        CoilResult r = IpCase.returnRh(75, 50).supplyRh(73, 53).cfm(1200).nominalTons(3).coilF(55).run();
         assertEquals(CoilVerdict.CANT_TELL, r.verdict());
         assertEquals(CoilVerdict.Call.WITHIN, r.marginCall());
     }

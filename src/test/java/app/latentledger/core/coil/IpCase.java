@@ -1,5 +1,10 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.measure.AirflowBasis;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.HumidityKind;
+import app.latentledger.core.measure.ProbeMatch;
 import app.latentledger.core.psychro.SitePressure;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
@@ -10,12 +15,14 @@ final class IpCase {
     private AirReading entering;
     private AirReading leaving;
     private double airflow;
-    private AirflowLocation at = AirflowLocation.ENTERING;
+    private AirflowPoint at = AirflowPoint.ENTERING;
     private double coilC = Double.NaN;
     private CoilTemperatureKind coilKind;
     private double nominalW = Double.NaN;
     private Condensate condensate;
     private OutdoorAir outdoor;
+    private AirflowBasis basis = AirflowBasis.ACTUAL;
+    private ProbeMatch probes = ProbeMatch.INDEPENDENT;
 
     static double c(double f) {
         return (f - 32) / 1.8;
@@ -26,6 +33,30 @@ final class IpCase {
         k.entering = new AirReading("return", c(dbF), Tolerances.DRY_BULB_K, HumidityKind.RELATIVE_HUMIDITY, rh,
                 Tolerances.RELATIVE_HUMIDITY_PCT);
         return k;
+    }
+
+    static IpCase returnDp(double dbF, double dpF) {
+        IpCase k = new IpCase();
+        k.entering = new AirReading("return", c(dbF), Tolerances.DRY_BULB_K, HumidityKind.DEW_POINT, c(dpF),
+                Tolerances.DEW_POINT_K);
+        return k;
+    }
+
+    /** The airflow is standard cfm. */
+    IpCase standardCfm() {
+        basis = AirflowBasis.STANDARD;
+        return this;
+    }
+
+    /** One instrument read both points (or the probes were compared side by side); supply dew-point offset in °F. */
+    IpCase probes(boolean same, double supplyDewPointOffsetF) {
+        probes = new ProbeMatch(same, supplyDewPointOffsetF / 1.8);
+        return this;
+    }
+
+    IpCase pressurePa(double pa) {
+        pressurePa = pa;
+        return this;
     }
 
     static IpCase returnWb(double dbF, double wbF) {
@@ -59,7 +90,7 @@ final class IpCase {
     }
 
     IpCase airflowAtSupply() {
-        at = AirflowLocation.LEAVING;
+        at = AirflowPoint.LEAVING;
         return this;
     }
 
@@ -104,7 +135,7 @@ final class IpCase {
 
     CoilReadings readings() {
         return new CoilReadings(pressurePa, entering, leaving, airflow, Tolerances.AIRFLOW_FRACTION, at, coilC,
-                Tolerances.COIL_K, coilKind, nominalW, condensate, outdoor);
+                Tolerances.COIL_K, coilKind, nominalW, condensate, outdoor, basis, probes);
     }
 
     CoilResult run() {

@@ -1,5 +1,7 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.HumidityKind;
 import com.google.gson.JsonElement;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonParser;
@@ -42,8 +44,8 @@ class ReferenceCasesTest {
         double p = c.get("pressurePa").getAsDouble();
         AirReading in = reading("return", c, "entering");
         AirReading out = reading("supply", c, "leaving");
-        AirflowLocation at = "leaving".equals(c.get("airflowAt").getAsString())
-                ? AirflowLocation.LEAVING : AirflowLocation.ENTERING;
+        AirflowPoint at = "leaving".equals(c.get("airflowAt").getAsString())
+                ? AirflowPoint.LEAVING : AirflowPoint.ENTERING;
         CoilReadings r = new CoilReadings(p, in, out, c.get("airflowM3PerS").getAsDouble(), 0.1, at, Double.NaN, 0,
                 null, Double.NaN, null);
         CoilResult res = CoilCheck.run(r, app.latentledger.core.findings.ThresholdSettings.DEFAULTS,

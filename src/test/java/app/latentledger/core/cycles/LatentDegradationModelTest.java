@@ -25,7 +25,7 @@ class LatentDegradationModelTest {
         assertEquals(1.5, P1.gamma());
         assertEquals(45.0, P1.tauS());
         assertEquals(3.0, P1.nMaxPerHour());
-        assertEquals("default", P1.source());
+        assertEquals("default", P1.source().key());
     }
 
     @Test
@@ -37,9 +37,9 @@ class LatentDegradationModelTest {
         }
         // break-even runtime fractions,docs/methods.md §3.6 (derived from E3–E7)
         assertEquals(0.562, breakEven(P1), 0.001);
-        assertEquals(0.580, breakEven(new LatentDegradationModel(1400, 1.5, 45, 3, "x")), 0.001);
-        assertEquals(0.545, breakEven(new LatentDegradationModel(1000, 1.5, 45, 2.5, "x")), 0.001);
-        assertEquals(0.607, breakEven(new LatentDegradationModel(1000, 1.5, 45, 6, "x")), 0.001);
+        assertEquals(0.580, breakEven(new LatentDegradationModel(1400, 1.5, 45, 3, LatentDegradationModel.Source.DEFAULT)), 0.001);
+        assertEquals(0.545, breakEven(new LatentDegradationModel(1000, 1.5, 45, 2.5, LatentDegradationModel.Source.DEFAULT)), 0.001);
+        assertEquals(0.607, breakEven(new LatentDegradationModel(1000, 1.5, 45, 6, LatentDegradationModel.Source.DEFAULT)), 0.001);
     }
 
     private static double breakEven(LatentDegradationModel m) {
@@ -88,7 +88,7 @@ class LatentDegradationModelTest {
         for (Map<String, String> r : rows) {
             String id = r.get("case_id");
             LatentDegradationModel m = new LatentDegradationModel(d(r, "twet_s"), d(r, "gamma"), d(r, "tau_s"),
-                    d(r, "nmax_cph"), "ref").atConditions(d(r, "ql_ratio"), d(r, "wb_dep_C"));
+                    d(r, "nmax_cph"), LatentDegradationModel.Source.DEFAULT).atConditions(d(r, "ql_ratio"), d(r, "wb_dep_C"));
             assertEquals(d(r, "twet_eff_s"), m.twetS(), 0.05, id);
             assertEquals(d(r, "gamma_eff"), m.gamma(), 0.00005, id);
             double evap = d(r, "evap_time_s");
@@ -112,8 +112,8 @@ class LatentDegradationModelTest {
     @DisplayName("closed form vs a step-by-step simulation of the water held on the coil (0.1 s steps, 200 cycles)")
     void closedFormMatchesCoilWaterSimulation() {
         double[][] cases = {{300, 300}, {1200, 600}, {600, 600}, {2700, 900}, {300, 90}, {600, 0}, {1500, 375}};
-        for (LatentDegradationModel m : List.of(P1, new LatentDegradationModel(1400, 1.5, 45, 3, "x"),
-                new LatentDegradationModel(1000, 1.0, 45, 3, "x"))) {
+        for (LatentDegradationModel m : List.of(P1, new LatentDegradationModel(1400, 1.5, 45, 3, LatentDegradationModel.Source.DEFAULT),
+                new LatentDegradationModel(1000, 1.0, 45, 3, LatentDegradationModel.Source.DEFAULT))) {
             for (double[] c : cases) {
                 double simulated = simulateDrainedPerOnTime(m.twetS(), m.gamma(), m.tauS(), c[0], c[1]);
                 assertEquals(simulated, m.netOverSteadyOnTime(c[0], c[1]), 2e-4, m + " on " + c[0] + " evap " + c[1]);

@@ -108,7 +108,7 @@ class RunCycleAnalysisSyntheticTest {
         // the reference vectors (LatentVectors.java) S4_2CPH_20ON_10OFF, P1: net/(ss × t_on) = 0.381, from H&R 1996 with the EnergyPlus-suggested values
         assertEquals(0.381, r.latentFractionMeasured(), 0.005);
         assertEquals(0.381, r.latentFractionPredicted(), 0.001);
-        assertEquals("default", r.model().source());
+        assertEquals("default", r.model().source().key());
         assertEquals(dw, r.steadyDryingW(), 1e-6);
         assertTrue(r.has(FindingCode.OFF_CYCLE_REEVAPORATION));
         assertFalse(r.has(FindingCode.SHORT_CYCLING));
@@ -174,7 +174,7 @@ class RunCycleAnalysisSyntheticTest {
         Rows rows = SyntheticLog.generate(s);
         assertEquals(0, rows.cappedSamples);
         RunCycleReport r = ANALYSIS.analyse(rows.series(false), 101_325, AIRFLOW);
-        assertEquals("fitted", r.model().source());
+        assertEquals("fitted", r.model().source().key());
         assertEquals(1200, r.model().twetS(), 0.02 * 1200);
         assertEquals(1.2, r.model().gamma(), 0.02 * 1.2);
         assertEquals(4, r.fitRests());

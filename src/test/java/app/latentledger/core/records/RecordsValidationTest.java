@@ -1,6 +1,8 @@
 package app.latentledger.core.records;
 
 import app.latentledger.core.InvalidInputException;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.HumidityKind;
 import org.junit.jupiter.api.Test;
 
 import java.time.OffsetDateTime;
@@ -53,9 +55,9 @@ class RecordsValidationTest {
     @Test
     void readingsOutOfRangeNameTheirField() {
         Measurement ok = new Measurement(24, 0.3);
-        HumidityReading rh = new HumidityReading(HumidityKind.RH, new Measurement(55, 2));
+        HumidityReading rh = new HumidityReading(HumidityKind.RELATIVE_HUMIDITY, new Measurement(55, 2));
         assertEquals("supply rh", assertThrows(InvalidInputException.class, () -> new ReadingSet("r", "v", T, "", "",
-                ok, rh, ok, new HumidityReading(HumidityKind.RH, new Measurement(104, 2)),
+                ok, rh, ok, new HumidityReading(HumidityKind.RELATIVE_HUMIDITY, new Measurement(104, 2)),
                 null, null, null, null, null, null, "")).field());
         assertEquals("return dry bulb tolerance", assertThrows(InvalidInputException.class, () -> new ReadingSet("r", "v", T,
                 "", "", new Measurement(24, 30), rh, ok, rh, null, null, null, null, null, null, "")).field());

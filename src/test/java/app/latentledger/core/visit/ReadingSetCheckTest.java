@@ -3,8 +3,9 @@ package app.latentledger.core.visit;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.CoilVerdict;
 import app.latentledger.core.findings.ThresholdSettings;
+import app.latentledger.core.measure.AirflowPoint;
+import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.records.Airflow;
-import app.latentledger.core.records.AirflowPoint;
 import app.latentledger.core.records.Condensate;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Measurement;
@@ -53,14 +54,14 @@ class ReadingSetCheckTest {
             Site site = ledger.sites().find(DemoScenario.SITE_HERON).orElseThrow();
             HvacSystem system = ledger.systems().find(DemoScenario.SYSTEM_HERON).orElseThrow();
             ReadingSet a = ledger.readings().find(DemoScenario.READINGS_AFTER).orElseThrow();
-            double flow = ReadingSet.MIN_AIRFLOW_M3_PER_S;
+            double flow = FieldLimits.AIRFLOW.minSi();
             double volume = 1e-6;
             ReadingSet edge = new ReadingSet(a.id(), a.visitId(), a.takenAt(), a.label(), a.instrument(),
                     a.returnDryBulb(), a.returnHumidity(), a.supplyDryBulb(), a.supplyHumidity(),
                     a.outdoorDryBulb(), a.outdoorHumidity(), a.coilTemperature(),
                     new Airflow(new Measurement(flow, flow / 2), AirflowPoint.ENTERING, "edge"), null,
                     new Condensate(new Measurement(volume, volume / 2),
-                            new Measurement(ReadingSet.MIN_COLLECTION_S, ReadingSet.MIN_COLLECTION_S / 2)),
+                            new Measurement(FieldLimits.COLLECTION_TIME.minSi(), FieldLimits.COLLECTION_TIME.minSi() / 2)),
                     a.notes());
             CoilResult r = ReadingSetCheck.run(edge, system, site, ThresholdSettings.DEFAULTS, UnitSystem.IP);
             assertTrue(r.condensate() != null);

@@ -1,11 +1,11 @@
 package app.latentledger.core.visit;
 
 import app.latentledger.core.coil.AirReading;
-import app.latentledger.core.coil.AirflowLocation;
+import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.coil.CoilReadings;
-import app.latentledger.core.coil.CoilTemperatureKind;
+import app.latentledger.core.measure.CoilTemperatureKind;
 import app.latentledger.core.coil.Condensate;
-import app.latentledger.core.coil.HumidityKind;
+import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.coil.OutdoorAir;
 import app.latentledger.core.psychro.StandardAtmosphere;
 import app.latentledger.core.records.HvacSystem;
@@ -39,7 +39,7 @@ class StoredReadingsTest {
             double tol = kind == HumidityKind.RELATIVE_HUMIDITY ? 2 : 0.3;
             CoilReadings typed = new CoilReadings(p, new AirReading("return", 24.4, 0.25, kind, value, tol),
                     new AirReading("supply", 13.3, 0.25, HumidityKind.WET_BULB, 12.2, 0.3), 0.566, 0.08,
-                    AirflowLocation.LEAVING, 7.2, 0.6, CoilTemperatureKind.EVAPORATOR_SATURATION,
+                    AirflowPoint.LEAVING, 7.2, 0.6, CoilTemperatureKind.EVAPORATOR_SATURATION,
                     SYSTEM.nominalCapacityW(), new Condensate(850e-6, 0.02, 900, 5));
             ReadingSet stored = StoredReadings.of("r", "v", AT, "before", "", typed, null, "hood", "");
             assertEquals(typed, ReadingSetCheck.inputs(stored, SYSTEM, SITE), kind.name());
@@ -50,7 +50,7 @@ class StoredReadingsTest {
     void aMeasuredPressureIsKeptAndUsed() {
         CoilReadings typed = new CoilReadings(99_000, new AirReading("return", 24, 0.3, HumidityKind.RELATIVE_HUMIDITY,
                 50, 2), new AirReading("supply", 13, 0.3, HumidityKind.RELATIVE_HUMIDITY, 90, 2), 0.5, 0.1,
-                AirflowLocation.ENTERING, Double.NaN, 0, null, SYSTEM.nominalCapacityW(), null);
+                AirflowPoint.ENTERING, Double.NaN, 0, null, SYSTEM.nominalCapacityW(), null);
         ReadingSet stored = StoredReadings.of("r", "v", AT, "", "", typed, new Measurement(99_000, 300), "", "");
         assertEquals(typed, ReadingSetCheck.inputs(stored, SYSTEM, SITE));
     }
@@ -60,7 +60,7 @@ class StoredReadingsTest {
         double p = StandardAtmosphere.pressurePa(0);
         AirReading r = new AirReading("return", 24, 0.3, HumidityKind.RELATIVE_HUMIDITY, 50, 2);
         CoilReadings mixed = new CoilReadings(p, r, new AirReading("supply", 13, 0.3, HumidityKind.RELATIVE_HUMIDITY,
-                90, 2), 0.5, 0.1, AirflowLocation.ENTERING, Double.NaN, 0, null, Double.NaN, null)
+                90, 2), 0.5, 0.1, AirflowPoint.ENTERING, Double.NaN, 0, null, Double.NaN, null)
                 .withOutdoor(new OutdoorAir(new AirReading("outdoor", 32, 0.3, HumidityKind.RELATIVE_HUMIDITY, 60, 2),
                         0.2, 0.05));
         assertThrows(IllegalArgumentException.class,

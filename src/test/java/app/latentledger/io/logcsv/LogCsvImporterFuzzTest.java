@@ -86,20 +86,20 @@ class LogCsvImporterFuzzTest {
     void numbersAgreeWithTheJdk(@ForAll @IntRange(min = -2_000_000, max = 2_000_000) int whole,
                                 @ForAll @IntRange(min = 0, max = 6) int decimals) {
         String text = java.math.BigDecimal.valueOf(whole).movePointLeft(decimals).toPlainString();
-        org.junit.jupiter.api.Assertions.assertEquals(Double.parseDouble(text), LogCsvImporter.number(text, false), 0.0, text);
+        org.junit.jupiter.api.Assertions.assertEquals(Double.parseDouble(text), DecimalText.parse(text, false), 0.0, text);
         org.junit.jupiter.api.Assertions.assertEquals(Double.parseDouble(text),
-                LogCsvImporter.number(text.replace('.', ','), true), 0.0, text);
+                DecimalText.parse(text.replace('.', ','), true), 0.0, text);
     }
 
     @net.jqwik.api.Example
     void numberShapes() {
         String[] ok = {"1e3", "-2.5E-2", "+7", ".5", "5.", "000012.500", "12345678901234567890", "1.7976931348623157e308"};
         for (String s : ok) {
-            org.junit.jupiter.api.Assertions.assertEquals(Double.parseDouble(s), LogCsvImporter.number(s, false), 0.0, s);
+            org.junit.jupiter.api.Assertions.assertEquals(Double.parseDouble(s), DecimalText.parse(s, false), 0.0, s);
         }
         String[] bad = {"", "-", ".", "e5", "1e", "1e+", "1.2.3", "0x10", "NaN", "Infinity", "1,5", "12a", "--1", "1e5.5"};
         for (String s : bad) {
-            org.junit.jupiter.api.Assertions.assertTrue(Double.isNaN(LogCsvImporter.number(s, false)), s);
+            org.junit.jupiter.api.Assertions.assertTrue(Double.isNaN(DecimalText.parse(s, false)), s);
         }
     }
 }

@@ -86,9 +86,9 @@ class LogImportViewModelTest {
             assertTrue(progress.stream().anyMatch(p -> p > 0 && p < 1), "progress on the way: " + progress);
             assertEquals(1.0, progress.get(progress.size() - 1));
             shownCodes = codes(vm.findings());
-            // README: short-cycling, short-cycling-limits-latent, off-cycle-reevaporation
+            // README: short-cycling, short-cycling-limits-latent, fan-off-delay-reevaporation (the sample has a 3-min fan-off delay)
             assertTrue(shownCodes.containsAll(List.of("short-cycling", "short-cycling-limits-latent",
-                    "off-cycle-reevaporation")), shownCodes.toString());
+                    "fan-off-delay-reevaporation")), shownCodes.toString());
             shownRate = row(vm, "cycles-per-hour").value();
             // README: ≈ 3.9 cycles per hour
             assertEquals(3.9, Double.parseDouble(shownRate), 0.2);

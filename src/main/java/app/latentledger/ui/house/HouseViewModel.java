@@ -1,0 +1,113 @@
+package app.latentledger.ui.house;
+
+import app.latentledger.core.house.HouseBudget;
+import app.latentledger.core.house.HouseFacts;
+import app.latentledger.core.house.HouseVisitReadings;
+import app.latentledger.core.house.MoistureBudget;
+import app.latentledger.core.house.ScenarioResult;
+import app.latentledger.core.house.WhatIfRequest;
+import app.latentledger.core.units.DisplayNumber;
+import app.latentledger.core.units.Quantity;
+import app.latentledger.report.HouseEvidence;
+import app.latentledger.report.VisitEvidence;
+import app.latentledger.ui.session.AppSession;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The House screen's state: the open visit's house budget (the same path as {@code house --visit}:
+ * {@link HouseEvidence} then {@link MoistureBudget}), the fix candidates as table rows, and storing
+ * a house fact or visit reading at once, after which the budget is recomputed. Needs no JavaFX
+ * toolkit: observable properties only.
+ */
+public final class HouseViewModel {
+    /** One row of the fix planner table, shown as typed. */
+    public record FixRow(String key, String change, String balance, String dewPoint, String shr) {
+    }
+
+    private final AppSession session;
+    private final ReadOnlyObjectWrapper<HouseBudget> budget = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyStringWrapper refusal = new ReadOnlyStringWrapper("");
+
+    public HouseViewModel(AppSession session) {
+        this.session = session;
+        session.visitProperty().addListener((o, a, b) -> recompute());
+        session.unitsProperty().addListener((o, a, b) -> recompute());
+        recompute();
+    }
+
+    public ReadOnlyObjectProperty<HouseBudget> budgetProperty() {
+        return budget.getReadOnlyProperty();
+    }
+
+    /** Why there is no budget yet ("" with one). */
+    public ReadOnlyStringProperty refusalProperty() {
+        return refusal.getReadOnlyProperty();
+    }
+
+    /** Stores the site's house facts at once and recomputes. */
+    public void keep(HouseFacts facts) {
+        session.ledger().houses().saveFacts(session.visit().siteId(), facts);
+        recompute();
+    }
+
+    /** Stores the visit's house readings at once and recomputes. */
+    public void keep(HouseVisitReadings readings) {
+        session.ledger().houses().saveReadings(session.visit().id(), readings);
+        recompute();
+    }
+
+    /** The units the screen shows. */
+    public app.latentledger.core.units.UnitSystem units() {
+        return session.units();
+    }
+
+    /** The open visit's stored house readings. */
+    public HouseVisitReadings readings() {
+        return session.visit() == null ? HouseVisitReadings.EMPTY : session.ledger().houses().readings(session.visit().id());
+    }
+
+    /** The fix planner as table rows: as found first, then each candidate. */
+    public List<FixRow> fixRows() {
+        HouseBudget b = budget.get();
+        List<FixRow> rows = new ArrayList<>();
+        if (b == null) {
+            return rows;
+        }
+        rows.add(row(b.asFound()));
+        b.whatIfs().forEach(w -> rows.add(row(w)));
+        return rows;
+    }
+
+    private FixRow row(ScenarioResult s) {
+        var u = session.units();
+        return new FixRow(s.scenario().key(), s.scenario().change(),
+                DisplayNumber.withSpread(Quantity.WATER_RATE_DAILY, u, s.balance().valueSi(), s.balance().expandedSi()),
+                s.hasEquilibrium() ? DisplayNumber.withSpread(Quantity.TEMPERATURE, u, s.equilibriumDewPointC().valueSi(),
+                        s.equilibriumDewPointC().expandedSi()) : "none (keeps rising)",
+                DisplayNumber.number(s.shr().valueSi(), 3));
+    }
+
+    /** Recomputes the budget of the open visit from what is stored. */
+    public void recompute() {
+        if (session.visit() == null) {
+            budget.set(null);
+            refusal.set("open a visit first");
+            return;
+        }
+        VisitEvidence ev = VisitEvidence.load(session.ledger(), session.visit().id(), session.units());
+        HouseEvidence e = HouseEvidence.of(session.ledger(), ev, session.thresholds(), Double.NaN);
+        if (!e.ready()) {
+            budget.set(null);
+            refusal.set(e.refusal());
+            return;
+        }
+        budget.set(MoistureBudget.compute(e.inputs(), WhatIfRequest.DEFAULTS, session.units()));
+        refusal.set("");
+    }
+}
