@@ -1,5 +1,6 @@
 package app.latentledger.bundle;
 
+import app.latentledger.io.TempFiles;
 import app.latentledger.core.records.Timestamps;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.ImportedLog;
@@ -75,8 +76,15 @@ public final class BundleWriter {
 
         Path absolute = target.toAbsolutePath();
         Path folder = absolute.getParent();
+        if (folder == null || absolute.getFileName() == null) {
+            throw new IOException(target + " is a folder; give a file name for the bundle");
+        }
         Files.createDirectories(folder);
-        Path partial = Files.createTempFile(folder, absolute.getFileName().toString(), ".partial");
+        if (Files.isDirectory(absolute)) {
+            throw new IOException(target + " is a folder; give a file name for the bundle");
+        }
+        // private (rw-------) and named for this process, so a killed export's leftover is removed next time
+        Path partial = TempFiles.beside(absolute);
         try {
             try (OutputStream file = Files.newOutputStream(partial); ZipOutputStream zip = new ZipOutputStream(file)) {
                 put(zip, BundleFormat.MANIFEST, json(manifest));

@@ -1,6 +1,7 @@
 package app.latentledger.cli;
 
 import app.latentledger.core.InvalidInputException;
+import app.latentledger.store.StoreException;
 
 import java.io.PrintStream;
 import java.nio.file.Path;
@@ -33,7 +34,10 @@ public final class Cli {
                 new ReportCommand(), new DataCommand(), new SettingsCommand(), new ScreensCommand()));
     }
 
-    public int run(List<String> words, PrintStream out, PrintStream err) {
+    public int run(List<String> words, PrintStream rawOut, PrintStream rawErr) {
+        // text from records (a bundle's site name, notes) never reaches the terminal as control codes
+        PrintStream out = TerminalSafe.wrap(rawOut);
+        PrintStream err = TerminalSafe.wrap(rawErr);
         List<String> rest = new ArrayList<>(words);
         Path dataDir = null;
         try {
@@ -41,7 +45,7 @@ public final class Cli {
                 String opt = rest.remove(0);
                 if (opt.equals("--data-dir") || opt.startsWith("--data-dir=")) {
                     String v = opt.contains("=") ? opt.substring(opt.indexOf('=') + 1) : next(rest, opt);
-                    dataDir = Path.of(v);
+                    dataDir = dataDir(v);
                 } else if (opt.equals("--help")) {
                     out.print(overview());
                     return OK;
@@ -61,7 +65,7 @@ public final class Cli {
                 out.print(command.usage());
                 return OK;
             }
-            Args args = Args.parse(rest, Set.of("json", "help"));
+            Args args = Args.parse(rest, Set.of("json", "help", Args.DECIMAL_COMMA));
             return command.run(args, new CliContext(out, err, dataDir));
         } catch (UsageException e) {
             err.println("latent-ledger: " + e.getMessage());
@@ -69,10 +73,39 @@ public final class Cli {
         } catch (InvalidInputException e) {
             err.println("latent-ledger: " + e.getMessage());
             return REFUSED;
+        } catch (StoreException e) {
+            if (e.kind() == StoreException.Kind.FAILED) {
+                err.println("latent-ledger: the ledger could not do it: " + e.getMessage());
+                return FAILED;
+            }
+            // busy (try again) or a data folder that cannot hold a ledger: the tech can act on both
+            err.println("latent-ledger: " + e.getMessage());
+            return REFUSED;
+        } catch (OutOfMemoryError e) {
+            err.println("latent-ledger: refused: this needs more memory than the app has ("
+                    + (Runtime.getRuntime().maxMemory() >> 20) + " MiB); nothing was changed");
+            return REFUSED;
         } catch (Exception e) {
             err.println("latent-ledger: unexpected failure: " + e);
             return FAILED;
         }
+    }
+
+    /** The {@code --data-dir} value: refused when empty or an existing file (a folder is needed). */
+    private static Path dataDir(String value) {
+        if (value.isBlank()) {
+            throw new UsageException("--data-dir is empty: give the folder that holds (or will hold) the ledger");
+        }
+        Path p;
+        try {
+            p = Path.of(value);
+        } catch (java.nio.file.InvalidPathException e) {
+            throw new UsageException("--data-dir '" + value + "' is not a usable folder name: " + e.getReason());
+        }
+        if (java.nio.file.Files.exists(p) && !java.nio.file.Files.isDirectory(p)) {
+            throw new UsageException("--data-dir " + value + " is a file, not a folder; give a folder");
+        }
+        return p;
     }
 
     private static String next(List<String> rest, String opt) {

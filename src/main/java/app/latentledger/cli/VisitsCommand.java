@@ -99,8 +99,12 @@ public final class VisitsCommand implements Command {
                 }
                 case "export": {
                     Visit v = Visits.find(ledger, words.get(1));
-                    Path file = Path.of(words.get(2));
-                    Bundles.exportVisit(ledger, v.id(), file);
+                    Path file = exportTarget(words.get(2));
+                    try {
+                        Bundles.exportVisit(ledger, v.id(), file);
+                    } catch (IOException e) {
+                        throw new UsageException("cannot write " + file + ": " + e.getMessage());
+                    }
                     result = exported(file, "visit", v.id());
                     text = "Exported visit " + v.id() + " to " + file + " (" + Files.size(file) + " bytes)\n";
                     break;
@@ -109,8 +113,12 @@ public final class VisitsCommand implements Command {
                     String siteId = words.get(1);
                     Site site = ledger.sites().find(siteId).orElseThrow(() ->
                             new UsageException("no site with id '" + siteId + "' (see: visits list --json, field siteId)"));
-                    Path file = Path.of(words.get(2));
-                    Bundles.exportSite(ledger, site.id(), file);
+                    Path file = exportTarget(words.get(2));
+                    try {
+                        Bundles.exportSite(ledger, site.id(), file);
+                    } catch (IOException e) {
+                        throw new UsageException("cannot write " + file + ": " + e.getMessage());
+                    }
                     result = exported(file, "site", site.id());
                     text = "Exported site " + site.name() + " (" + site.id() + ") to " + file + " ("
                             + Files.size(file) + " bytes)\n";
@@ -233,6 +241,34 @@ public final class VisitsCommand implements Command {
                     l.samples().size(), String.join(", ", l.samples().channelNames())));
         }
         return b.append(Cautions.SAFETY_LINE).append('\n').toString();
+    }
+
+    /**
+     * Where an export may go: a file name in a folder that exists (the command line does not create
+     * folder trees), not a folder itself.
+     */
+    private static Path exportTarget(String word) {
+        if (word.isBlank()) {
+            throw new UsageException("the bundle file name is empty; give a file such as visit.zip");
+        }
+        Path file;
+        try {
+            file = Path.of(word);
+        } catch (java.nio.file.InvalidPathException e) {
+            throw new UsageException("'" + word + "' is not a usable file name: " + e.getReason());
+        }
+        Path absolute = file.toAbsolutePath().normalize();
+        Path folder = absolute.getParent();
+        if (folder == null || Files.isDirectory(absolute)) {
+            throw new UsageException("cannot write " + word + ": it is a folder; give a file name such as visit.zip");
+        }
+        if (!Files.isDirectory(folder)) {
+            throw new UsageException("cannot write " + word + ": folder " + folder + " does not exist");
+        }
+        if (!Files.isWritable(folder)) {
+            throw new UsageException("cannot write " + word + ": no permission to create files in " + folder);
+        }
+        return file;
     }
 
     private static Map<String, Object> exported(Path file, String scope, String id) throws IOException {

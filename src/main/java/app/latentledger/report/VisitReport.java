@@ -70,14 +70,13 @@ public final class VisitReport {
             }
             Path temp;
             try {
-                temp = Files.createTempFile(folder, "." + target.getFileName() + "-", ".part");
+                temp = app.latentledger.io.TempFiles.beside(target);
             } catch (IOException | SecurityException e) {
                 throw new ReportRefusedException("cannot write " + output + ": no permission to create files in "
                         + folder, e);
             }
             boolean moved = false;
             try {
-                readableByOthers(temp);
                 try (OutputStream out = Files.newOutputStream(temp)) {
                     body.write(out);
                 }
@@ -98,13 +97,6 @@ public final class VisitReport {
                         // the temporary file is hidden and named .part; nothing more can be done
                     }
                 }
-            }
-        }
-
-        /** A temporary file is private (rw-------); a report is a document to hand on (rw-r--r--). */
-        private static void readableByOthers(Path file) throws IOException {
-            if (file.getFileSystem().supportedFileAttributeViews().contains("posix")) {
-                Files.setPosixFilePermissions(file, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
             }
         }
     }

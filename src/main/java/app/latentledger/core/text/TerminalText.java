@@ -4,7 +4,8 @@ package app.latentledger.core.text;
  * Text from records (a site name, notes, a file name inside a bundle) made safe to print on a
  * terminal: control characters (C0, DEL, C1, which start escape sequences that can clear the
  * screen or set the window title) and the Unicode bidirectional controls (which can show
- * "Invoice\u202EFDP.exe" reversed) are written as visible {@code \\u+XXXX} escapes, so what the tech
+ * "Invoice" + U+202E + "FDP.exe" reversed) are written as visible {@code \\uXXXX} escapes (the JSON spelling, so
+ * JSON output stays valid and decodes to the stored text), so what the tech
  * reads is what is stored. Tab stays a tab; line breaks are kept only where the caller allows them.
  * Unicode bidi controls: U+061C, U+200E, U+200F, U+202A to U+202E, U+2066 to U+2069 (Unicode
  * Standard Annex #9, "Explicit Directional Formatting Characters").
@@ -32,7 +33,7 @@ public final class TerminalText {
             }
             if (b != null) {
                 if (unsafe) {
-                    b.append(String.format("\\u+%04X", (int) c));
+                    b.append(String.format("\\u%04X", (int) c));
                 } else {
                     b.append(c);
                 }
