@@ -244,8 +244,8 @@ public final class VisitsCommand implements Command {
     }
 
     /**
-     * Where an export may go: a file name in a folder that exists (the command line does not create
-     * folder trees), not a folder itself.
+     * Where an export may go: a file name (not a folder) in a folder that exists or whose parent
+     * does (one new folder is made; a mistyped path never makes a whole tree).
      */
     private static Path exportTarget(String word) {
         if (word.isBlank()) {
@@ -262,10 +262,15 @@ public final class VisitsCommand implements Command {
         if (folder == null || Files.isDirectory(absolute)) {
             throw new UsageException("cannot write " + word + ": it is a folder; give a file name such as visit.zip");
         }
-        if (!Files.isDirectory(folder)) {
-            throw new UsageException("cannot write " + word + ": folder " + folder + " does not exist");
+        if (Files.exists(folder) && !Files.isDirectory(folder)) {
+            throw new UsageException("cannot write " + word + ": " + folder + " is a file, not a folder");
         }
-        if (!Files.isWritable(folder)) {
+        Path above = folder.getParent();
+        if (!Files.isDirectory(folder) && (above == null || !Files.isDirectory(above))) {
+            // one new folder is made for the bundle, never a whole tree from a mistyped path
+            throw new UsageException("cannot write " + word + ": folder " + above + " does not exist");
+        }
+        if (Files.isDirectory(folder) && !Files.isWritable(folder)) {
             throw new UsageException("cannot write " + word + ": no permission to create files in " + folder);
         }
         return file;

@@ -5,7 +5,7 @@ package app.latentledger.store;
  * a ledger database). Nothing of the failed transaction was kept. {@link #kind()} tells a caller
  * whether trying again later can help.
  */
-public final class StoreException extends RuntimeException {
+public class StoreException extends RuntimeException {
     private static final long serialVersionUID = 1L;
 
     /** Why the store could not do it. */
@@ -14,6 +14,8 @@ public final class StoreException extends RuntimeException {
         BUSY,
         /** The data folder or file cannot be used as a ledger (not a folder, no permission, not a database). */
         UNAVAILABLE,
+        /** A save based on data another program changed meanwhile; nothing was written. */
+        CONFLICT,
         /** Anything else. */
         FAILED
     }

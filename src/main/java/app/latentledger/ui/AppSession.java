@@ -12,6 +12,8 @@ import app.latentledger.core.records.Site;
 import app.latentledger.core.records.Visit;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.store.Ledger;
+import app.latentledger.store.SettingsConflictException;
+import app.latentledger.store.SettingsRepository;
 import app.latentledger.ui.entry.Draft;
 import app.latentledger.ui.entry.DraftRecords;
 import app.latentledger.ui.entry.DraftStore;
@@ -44,6 +46,7 @@ public final class AppSession implements AutoCloseable {
     private final DraftStore drafts;
     private final LogAnalysisService logAnalysis;
     private final ReadOnlyObjectWrapper<Settings> settings = new ReadOnlyObjectWrapper<>();
+    private SettingsRepository.Stamped settingsBase;
     private final ReadOnlyObjectWrapper<UnitSystem> units = new ReadOnlyObjectWrapper<>();
     /** The app opens on what the system in hand is doing; Job and Readings are one tap away. */
     private final ObjectProperty<Screen> screen = new SimpleObjectProperty<>(Screen.RESULTS);
@@ -58,7 +61,8 @@ public final class AppSession implements AutoCloseable {
         this.dataFolder = dataFolder;
         this.drafts = new FileDraftStore(dataFolder);
         this.logAnalysis = logAnalysis;
-        Settings stored = ledger.settings().load();
+        settingsBase = ledger.settings().loadStamped();
+        Settings stored = settingsBase.settings();
         settings.set(stored);
         units.set(stored.units());
         dark.set(stored.theme() == DisplayTheme.DARK);
@@ -73,7 +77,24 @@ public final class AppSession implements AutoCloseable {
                 saveSettings(settings.get().withChoice(SettingsCatalogue.THEME, wanted.key()));
             }
         });
+        // another program (the command line) may change settings while the app runs: look on every screen change
+        screen.addListener((o, a, b) -> reloadSettingsIfChanged());
         openLatestVisit();
+    }
+
+    /**
+     * Takes the stored settings again when another program changed them since they were loaded or
+     * saved here, so the screens show them and the next save starts from them.
+     *
+     * @return true when they had changed
+     */
+    public boolean reloadSettingsIfChanged() {
+        if (ledger.settings().version().equals(settingsBase.version())) {
+            return false;
+        }
+        settingsBase = ledger.settings().loadStamped();
+        settings.set(settingsBase.settings());
+        return true;
     }
 
     /** Opens the ledger in {@code dataFolder} (seeding the demo when empty) with its stored settings. */
@@ -83,8 +104,15 @@ public final class AppSession implements AutoCloseable {
 
     /** Stores changed settings and applies them to every screen. */
     public void saveSettings(Settings changed) {
-        ledger.settings().save(changed);
-        settings.set(changed);
+        try {
+            // only what changed here is written; changes saved elsewhere meanwhile are kept
+            settingsBase = ledger.settings().save(settingsBase, changed);
+        } catch (SettingsConflictException e) {
+            settingsBase = ledger.settings().loadStamped();
+            settings.set(settingsBase.settings());
+            throw e;
+        }
+        settings.set(settingsBase.settings());
     }
 
     /**
