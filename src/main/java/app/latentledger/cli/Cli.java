@@ -65,7 +65,7 @@ public final class Cli {
                 out.print(command.usage());
                 return OK;
             }
-            Args args = Args.parse(rest, Set.of("json", "help", Args.DECIMAL_COMMA));
+            Args args = Args.parse(rest, Set.of("json", "help", "repair", Args.DECIMAL_COMMA));
             return command.run(args, new CliContext(out, err, dataDir));
         } catch (UsageException e) {
             err.println("latent-ledger: " + e.getMessage());

@@ -44,10 +44,13 @@ public final class VisitsCommand implements Command {
                 + "       latent-ledger [--data-dir DIR] visits export ID FILE [--json]\n"
                 + "       latent-ledger [--data-dir DIR] visits export-site SITE_ID FILE [--json]\n"
                 + "       latent-ledger [--data-dir DIR] visits import FILE [--json]\n"
+                + "       latent-ledger [--data-dir DIR] visits check [--repair] [--json]\n"
                 + "  ID: a visit id or its first characters (at least 4) as 'visits list' shows them\n"
                 + "  export writes one visit with its site, system, readings, logs and snapshots;\n"
                 + "  export-site writes a site with all its systems and visits (SITE_ID as in 'visits list --json')\n"
                 + "  import checks the whole bundle first and changes nothing when it refuses it\n"
+                + "  check lists stored reading sets and logs that fail today's checks; --repair makes failing\n"
+                + "      optional values missing (a record that cannot be repaired so is listed for removal)\n"
                 + "  data folder: --data-dir, else $" + DataLocation.ENV + ", else the app's private storage\n";
     }
 
@@ -55,11 +58,12 @@ public final class VisitsCommand implements Command {
     public int run(Args args, CliContext context) throws IOException {
         List<String> words = args.positionals();
         if (words.isEmpty()) {
-            throw new UsageException("visits needs a subcommand: list, show, export, export-site or import\n" + usage());
+            throw new UsageException("visits needs a subcommand: list, show, export, export-site, import or check\n" + usage());
         }
         String sub = words.get(0);
         boolean json = args.flag("json");
         UnitSystem units = sub.equals("show") ? UnitOptions.units(args) : UnitSystem.IP;
+        boolean repair = sub.equals("check") && args.flag("repair");
         args.rejectUnknown();
         switch (sub) {
             case "list":
@@ -76,6 +80,9 @@ public final class VisitsCommand implements Command {
                 break;
             case "import":
                 expect(words, 2, "visits import FILE");
+                break;
+            case "check":
+                expect(words, 1, "visits check [--repair]");
                 break;
             default:
                 throw new UsageException("unknown visits subcommand '" + sub + "'\n" + usage());
@@ -122,6 +129,12 @@ public final class VisitsCommand implements Command {
                     result = exported(file, "site", site.id());
                     text = "Exported site " + site.name() + " (" + site.id() + ") to " + file + " ("
                             + Files.size(file) + " bytes)\n";
+                    break;
+                }
+                case "check": {
+                    List<VisitsCheck.Finding> found = VisitsCheck.run(ledger, repair);
+                    result = VisitsCheck.json(found);
+                    text = VisitsCheck.table(found);
                     break;
                 }
                 default: {
