@@ -304,13 +304,14 @@ public final class BundleReader {
                     + " missing; nothing was imported");
         }
         EntryStream in = new EntryStream(zip.getInputStream(inZip.get(samplesEntry)), samplesEntry, l.bytes());
-        try (in) {
+        // closed in finally, not by try-with-resources: the catch below still reads the stream to its end
+        try {
             BufferedReader text = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8.newDecoder()
                     .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT)), 1 << 16);
             var samples = LogCsv.read(text, samplesEntry, base, names, units, declared, budget);
             in.drain();
             if (in.count() != l.bytes() || !in.sha256().equals(l.sha256())) {
-                throw mismatch(samplesEntry);
+                throw new EntryStream.TooLarge("changed");
             }
             return new ImportedLog(id, f.text("visitId"), f.text("sourceFileName"), f.optionalText("columnMapping"),
                     f.time("importedAt"), samples);
@@ -325,6 +326,8 @@ public final class BundleReader {
             throw new BundleException("bundle refused: " + e.getMessage() + "; nothing was imported", e);
         } catch (EntryStream.TooLarge e) {
             throw mismatch(samplesEntry);
+        } finally {
+            in.close();
         }
     }
 

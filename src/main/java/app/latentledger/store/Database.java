@@ -27,6 +27,11 @@ public final class Database implements AutoCloseable {
     /** Waiting this long for another program's write to finish before giving up. */
     static final int BUSY_TIMEOUT_MS = 10_000;
 
+    /** The busy timeout in force: {@link #BUSY_TIMEOUT_MS}, shortened only by tests (system property). */
+    static int busyTimeoutMs() {
+        return Integer.getInteger("latentledger.busyTimeoutMs", BUSY_TIMEOUT_MS);
+    }
+
     private final Path file;
     private final Connection connection;
     private final boolean created;
@@ -61,7 +66,7 @@ public final class Database implements AutoCloseable {
             config.setJournalMode(SQLiteConfig.JournalMode.WAL);
             config.setSynchronous(SQLiteConfig.SynchronousMode.FULL);
             config.enforceForeignKeys(true);
-            config.setBusyTimeout(BUSY_TIMEOUT_MS);
+            config.setBusyTimeout(busyTimeoutMs());
             c = config.createConnection("jdbc:sqlite:" + file.toAbsolutePath());
         } catch (SQLException e) {
             throw new StoreException(StoreException.Kind.UNAVAILABLE, "cannot open " + file + ": " + e.getMessage(), e);
@@ -245,7 +250,7 @@ public final class Database implements AutoCloseable {
     private StoreException failure(String what, SQLException e) {
         if (busy(e)) {
             return new StoreException(StoreException.Kind.BUSY, BUSY_MESSAGE + " (waited "
-                    + BUSY_TIMEOUT_MS / 1000 + " s for " + file + ")", e);
+                    + busyTimeoutMs() / 1000.0 + " s for " + file + ")", e);
         }
         return new StoreException(what + ": " + e.getMessage(), e);
     }
