@@ -49,7 +49,7 @@ class BundleValidationTest {
     @BeforeEach
     void setUp() throws IOException {
         source = Ledger.open(dir.resolve("source"));
-        source.logs().save(TestRecords.log("log-1", DemoScenario.VISIT_COMPLAINT, 20_000));
+        source.logs().save(TestRecords.log("log-1", DemoScenario.VISIT_COMPLAINT, 2_000));
         target = new Ledger(Database.open(dir.resolve("target.db")));
         template = dir.resolve("template.zip");
         Bundles.exportVisit(source, DemoScenario.VISIT_COMPLAINT, template);
@@ -86,10 +86,11 @@ class BundleValidationTest {
     @Test
     void brokenTimeAxesAreRefused() throws Exception {
         refused(e -> times(e, i -> 1_717_416_000_000L), LOG, "fewer than two distinct sample times");
-        refused(e -> times(e, i -> Long.MAX_VALUE - 20_000 + i), LOG + " line 2", "clock time", "1970 to 2200");
+        refused(e -> times(e, i -> Long.MAX_VALUE - 2_000 + i), LOG + " line 2", "clock time", "1970 to 2200");
         refused(e -> times(e, i -> -62_200_000_000_000L + i * 1000L), LOG + " line 2", "clock time");
-        // ten days between samples: sample 6413 (line 6415) is past the year 2200
-        refused(e -> times(e, i -> 1_717_416_000_000L + i * 864_000_000L), LOG + " line 6415", "clock time");
+        // ten days between samples: 2 000 samples span 54 years
+        refused(e -> times(e, i -> 1_717_416_000_000L + i * 864_000_000L), LOG + " line 2001", "days refused",
+                "at most 366 days");
         // a median of 10 minutes over a short span
         List<String> few = new ArrayList<>();
         refused(e -> {
@@ -100,12 +101,12 @@ class BundleValidationTest {
 
     @Test
     void aLyingSampleCountIsRefusedBeforeAnythingIsSizedByIt() throws Exception {
-        refused(e -> BundleFiles.editText(e, "logs.json", t -> t.replace("\"sampleCount\": 20000", "\"sampleCount\": 300000000")),
+        refused(e -> BundleFiles.editText(e, "logs.json", t -> t.replace("\"sampleCount\": 2000", "\"sampleCount\": 300000000")),
                 "declares 300000000 samples", "at most 10000000");
-        refused(e -> BundleFiles.editText(e, "logs.json", t -> t.replace("\"sampleCount\": 20000", "\"sampleCount\": 2147483647")),
+        refused(e -> BundleFiles.editText(e, "logs.json", t -> t.replace("\"sampleCount\": 2000", "\"sampleCount\": 2147483647")),
                 "declares 2147483647 samples");
-        refused(e -> BundleFiles.editText(e, "logs.json", t -> t.replace("\"sampleCount\": 20000", "\"sampleCount\": 20001")),
-                "20000 samples, logs.json lists 20001");
+        refused(e -> BundleFiles.editText(e, "logs.json", t -> t.replace("\"sampleCount\": 2000", "\"sampleCount\": 2001")),
+                "2000 samples, logs.json lists 2001");
     }
 
     @Test

@@ -185,6 +185,7 @@ class ImportAndSettingsCrashTest {
         Thread reader = new Thread(() -> read(child.getInputStream(), printed));
         reader.setDaemon(true);
         reader.start();
+        readers.put(child, reader);
         return child;
     }
 
@@ -192,8 +193,13 @@ class ImportAndSettingsCrashTest {
         child.destroyForcibly();
         assertTrue(child.waitFor(20, TimeUnit.SECONDS), "child did not die");
         assertEquals(137, child.exitValue(), () -> "child must end by SIGKILL, not by itself: " + stderr());
-        Thread.sleep(20); // the reader drains what the child printed before it died
+        // every line the child printed before it died is read before the ledger is checked
+        Thread reader = readers.remove(child);
+        reader.join(10_000);
+        assertTrue(!reader.isAlive(), "the child's output was read to its end");
     }
+
+    private final Map<Process, Thread> readers = new HashMap<>();
 
     private String stderr() {
         try {
