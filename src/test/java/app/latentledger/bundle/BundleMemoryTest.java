@@ -2,6 +2,7 @@ package app.latentledger.bundle;
 
 import app.latentledger.store.DemoScenario;
 import app.latentledger.store.Ledger;
+import app.latentledger.store.TestLedgers;
 import app.latentledger.store.TestRecords;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
@@ -41,7 +42,7 @@ class BundleMemoryTest {
 
     @BeforeEach
     void setUp() throws Exception {
-        try (Ledger source = Ledger.open(dir.resolve("source"))) {
+        try (Ledger source = TestLedgers.withDemo(dir.resolve("source"))) {
             source.logs().save(TestRecords.log("log-1", DemoScenario.VISIT_COMPLAINT, 2_000));
             Bundles.exportVisit(source, DemoScenario.VISIT_COMPLAINT, dir.resolve("template.zip"));
         }

@@ -3,6 +3,7 @@ package app.latentledger.bundle;
 import app.latentledger.store.Database;
 import app.latentledger.store.DemoScenario;
 import app.latentledger.store.Ledger;
+import app.latentledger.store.TestLedgers;
 import app.latentledger.store.TestRecords;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
@@ -48,7 +49,7 @@ class BundleValidationTest {
 
     @BeforeEach
     void setUp() throws IOException {
-        source = Ledger.open(dir.resolve("source"));
+        source = TestLedgers.withDemo(dir.resolve("source"));
         source.logs().save(TestRecords.log("log-1", DemoScenario.VISIT_COMPLAINT, 2_000));
         target = new Ledger(Database.open(dir.resolve("target.db")));
         template = dir.resolve("template.zip");

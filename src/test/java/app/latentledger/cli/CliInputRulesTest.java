@@ -4,6 +4,7 @@ import app.latentledger.bundle.BundleFiles;
 import app.latentledger.bundle.Bundles;
 import app.latentledger.store.DemoScenario;
 import app.latentledger.store.Ledger;
+import app.latentledger.store.TestLedgers;
 import com.google.gson.JsonParser;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -118,12 +119,12 @@ class CliInputRulesTest {
     @Test
     void recordTextCannotDriveTheTerminal() throws Exception {
         Path template = dir.resolve("t.zip");
-        try (Ledger l = Ledger.open(dir.resolve("source"))) {
+        try (Ledger l = TestLedgers.withDemo(dir.resolve("source"))) {
             Bundles.exportVisit(l, DemoScenario.VISIT_COMPLAINT, template);
         }
         String hostile = "\u001B]0;pwned\u0007\u001B[2J\u001B[31mInvoice \u202EFDP.exe";
         java.util.Set<String> ids = new java.util.HashSet<>();
-        try (Ledger l = Ledger.open(dir.resolve("source"))) {
+        try (Ledger l = TestLedgers.withDemo(dir.resolve("source"))) {
             var content = Bundles.ofVisit(l, DemoScenario.VISIT_COMPLAINT);
             ids.add(content.site().id());
             content.systems().forEach(x -> ids.add(x.id()));

@@ -7,6 +7,7 @@ import app.latentledger.core.records.TimeBase;
 import app.latentledger.core.visit.RecordRules;
 import app.latentledger.store.DemoScenario;
 import app.latentledger.store.Ledger;
+import app.latentledger.store.TestLedgers;
 import app.latentledger.store.OlderBuild;
 import app.latentledger.store.TestRecords;
 import com.google.gson.JsonObject;
@@ -37,7 +38,7 @@ class VisitsCheckTest {
     @Test
     void listsAndRepairsStoredRecordsThatFailTodaysRules() {
         Path data = dir.resolve("data");
-        try (Ledger ledger = Ledger.open(data)) {
+        try (Ledger ledger = TestLedgers.withDemo(data)) {
             ImportedLog good = TestRecords.log("rh-log", DemoScenario.VISIT_COMPLAINT, 100);
             List<LogChannel> channels = new ArrayList<>(good.samples().channels());
             double[] rh = new double[100];

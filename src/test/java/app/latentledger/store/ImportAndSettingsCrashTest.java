@@ -44,7 +44,7 @@ class ImportAndSettingsCrashTest {
         Path data = dir.resolve("data");
         Path template = dir.resolve("template.zip");
         Set<String> ids = new HashSet<>();
-        try (Ledger source = Ledger.open(dir.resolve("source"))) {
+        try (Ledger source = TestLedgers.withDemo(dir.resolve("source"))) {
             source.logs().save(TestRecords.log("log-1", DemoScenario.VISIT_COMPLAINT, 5_000));
             Bundles.exportVisit(source, DemoScenario.VISIT_COMPLAINT, template);
             var content = Bundles.ofVisit(source, DemoScenario.VISIT_COMPLAINT);

@@ -33,6 +33,7 @@ class ReadersDuringWritesTest {
     void readOnlyCommandsDoNotWaitForAWriterAndWritesSayBusy() throws Exception {
         Path data = dir.resolve("data");
         assertEquals(0, cli(data, "settings", "set", "tolRh", "5").code, "ledger made, a setting stored");
+        assertEquals(0, cli(data, "visits", "list").code, "a first run's demo, if any, added before the lock is held");
         String before = System.getProperty("latentledger.busyTimeoutMs");
         System.setProperty("latentledger.busyTimeoutMs", "1500");
         try (Connection writer = DriverManager.getConnection("jdbc:sqlite:" + data.resolve(Ledger.FILE_NAME))) {
