@@ -1,6 +1,6 @@
 package app.latentledger.bench;
 
-import app.latentledger.chart.demo.SaltreedDemo;
+import app.latentledger.fielddata.SaltreedDemo;
 import app.latentledger.chart.draw.Theme;
 import app.latentledger.chart.timeline.TimeViewport;
 import app.latentledger.chart.timeline.TimelineChart;

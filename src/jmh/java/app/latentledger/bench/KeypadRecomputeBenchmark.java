@@ -3,16 +3,17 @@ package app.latentledger.bench;
 import app.latentledger.core.psychro.HandbookEdition;
 import app.latentledger.core.psychro.MoistAirState;
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.AppSession;
-import app.latentledger.ui.entry.Draft;
 import app.latentledger.ui.entry.EntryRules;
 import app.latentledger.ui.entry.EntryViewModel;
-import app.latentledger.ui.entry.Slot;
-import app.latentledger.ui.entry.SlotValue;
-import app.latentledger.ui.log.LogAnalysisService;
-import app.latentledger.ui.results.ResultSheet;
+import app.latentledger.ui.present.ResultSheet;
 import app.latentledger.ui.results.ResultsViewModel;
-import app.latentledger.ui.results.VisitResults;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.CoilChecker;
+import app.latentledger.ui.session.CurrentCheck;
+import app.latentledger.ui.session.Draft;
+import app.latentledger.ui.session.LogAnalysisService;
+import app.latentledger.ui.session.Slot;
+import app.latentledger.ui.session.SlotValue;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Level;
@@ -25,6 +26,7 @@ import org.openjdk.jmh.annotations.TearDown;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.OffsetDateTime;
 import java.util.concurrent.TimeUnit;
 
 /**
@@ -32,8 +34,8 @@ import java.util.concurrent.TimeUnit;
  * temperature each time (46 / 47 °F):
  * <ul>
  * <li>{@code recompute}: the check of the value (EntryRules) and every result the screens show
- *     (VisitResults through ReadingSetCheck: both states, capacities with their uncertainty,
- *     findings) — the target is 5 ms;</li>
+ *     (the session's CurrentCheck through ReadingSetCheck: both states, capacities with their
+ *     uncertainty, findings, worded as the sheet) — the target is 5 ms;</li>
  * <li>{@code enterWithSave}: the whole Enter as the app runs it: check, draft file written and
  *     forced to disk, reading set saved in SQLite (synchronous=FULL), results view model
  *     recomputed; the disk dominates it;</li>
@@ -79,8 +81,9 @@ public class KeypadRecomputeBenchmark {
     public ResultSheet recompute() {
         double coilC = ((n++ & 1) == 0 ? 46 - 32 : 47 - 32) / 1.8;
         Draft candidate = after.with(Slot.COIL_TEMPERATURE, new SlotValue(coilC, 1.0));
-        EntryRules.check(candidate, Slot.COIL_TEMPERATURE, session.site(), session.system());
-        return VisitResults.of(candidate, session.site(), session.system(), session.thresholds(), session.units());
+        EntryRules.check(candidate, Slot.COIL_TEMPERATURE, session.site());
+        return CurrentCheck.of(candidate, session.site(), session.system(), session.thresholds(), session.units(),
+                CoilChecker.STANDARD, OffsetDateTime.now()).sheet();
     }
 
     @Benchmark

@@ -44,8 +44,8 @@ public class ReportBenchmark {
     @Setup(Level.Trial)
     public void open() throws Exception {
         dir = Files.createTempDirectory("report-bench");
-        ledger = Ledger.open(dir.resolve("plain"));
-        withLog = Ledger.open(dir.resolve("log"));
+        ledger = Ledger.open(dir.resolve("plain"), Ledger.FirstRun.SEED_DEMO);
+        withLog = Ledger.open(dir.resolve("log"), Ledger.FirstRun.SEED_DEMO);
         var series = new LogCsvImporter(UnitSystem.IP, Map.of(), null)
                 .read(Path.of("field-data-samples/oversized-short-cycling.csv")).series();
         withLog.logs().save(new ImportedLog("bench-log", DemoScenario.VISIT_COMPLAINT, "oversized-short-cycling.csv",

@@ -1,6 +1,6 @@
 package app.latentledger.bench;
 
-import app.latentledger.chart.demo.SaltreedDemo;
+import app.latentledger.fielddata.SaltreedDemo;
 import app.latentledger.chart.draw.Colour;
 import app.latentledger.chart.draw.Painter;
 import app.latentledger.chart.draw.RecordingPainter;

@@ -1,22 +1,20 @@
 package app.latentledger.bundle;
 
-import app.latentledger.io.TempFiles;
-import app.latentledger.core.records.Timestamps;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.LogChannel;
 import app.latentledger.core.records.ResultsSnapshot;
+import app.latentledger.core.records.Timestamps;
 import app.latentledger.core.records.Visit;
+import app.latentledger.files.SafeFiles;
 import app.latentledger.store.AppVersion;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 
 import java.io.IOException;
-import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
 import java.time.temporal.ChronoUnit;
@@ -83,19 +81,15 @@ public final class BundleWriter {
         if (Files.isDirectory(absolute)) {
             throw new IOException(target + " is a folder; give a file name for the bundle");
         }
-        // private (rw-------) and named for this process, so a killed export's leftover is removed next time
-        Path partial = TempFiles.beside(absolute);
-        try {
-            try (OutputStream file = Files.newOutputStream(partial); ZipOutputStream zip = new ZipOutputStream(file)) {
-                put(zip, BundleFormat.MANIFEST, json(manifest));
-                for (Map.Entry<String, byte[]> e : entries.entrySet()) {
-                    put(zip, e.getKey(), e.getValue());
-                }
+        // private (rw-------) and written whole: SafeFiles names the temporary for this process
+        SafeFiles.writeAtomically(absolute, file -> {
+            ZipOutputStream zip = new ZipOutputStream(file);
+            put(zip, BundleFormat.MANIFEST, json(manifest));
+            for (Map.Entry<String, byte[]> e : entries.entrySet()) {
+                put(zip, e.getKey(), e.getValue());
             }
-            Files.move(partial, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } finally {
-            Files.deleteIfExists(partial);
-        }
+            zip.finish();
+        }, SafeFiles.Durability.REPLACE_WHOLE);
     }
 
     private static JsonObject logJson(ImportedLog l) {

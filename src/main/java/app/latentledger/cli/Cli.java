@@ -16,6 +16,8 @@ import java.util.Set;
  * 0 done, 2 input refused (message on standard error), 1 unexpected failure.
  */
 public final class Cli {
+    private static final System.Logger LOG = System.getLogger(Cli.class.getName());
+
     public static final int OK = 0;
     public static final int FAILED = 1;
     public static final int REFUSED = 2;
@@ -28,10 +30,15 @@ public final class Cli {
         }
     }
 
-    /** All commands this build offers. */
+    /** The commands that need no display; {@code Main} adds the ones that draw the app. */
+    public static List<Command> standardCommands() {
+        return List.of(new StateCommand(), new CoilCommand(), new LogCommand(), new VisitsCommand(),
+                new ReportCommand(), new DataCommand(), new SettingsCommand());
+    }
+
+    /** The display-free commands alone (tests and tools that never draw). */
     public static Cli standard() {
-        return new Cli(List.of(new StateCommand(), new CoilCommand(), new LogCommand(), new VisitsCommand(),
-                new ReportCommand(), new DataCommand(), new SettingsCommand(), new ScreensCommand()));
+        return new Cli(standardCommands());
     }
 
     public int run(List<String> words, PrintStream rawOut, PrintStream rawErr) {
@@ -86,7 +93,10 @@ public final class Cli {
                     + (Runtime.getRuntime().maxMemory() >> 20) + " MiB); nothing was changed");
             return REFUSED;
         } catch (Exception e) {
-            err.println("latent-ledger: unexpected failure: " + e);
+            // the tech reads a sentence; the class name and stack go to the log (java.util.logging, level FINE)
+            LOG.log(System.Logger.Level.DEBUG, "command failed", e);
+            err.println("latent-ledger: unexpected failure: " + (e.getMessage() == null || e.getMessage().isBlank()
+                    ? "the command stopped before it finished; nothing saved was changed" : e.getMessage()));
             return FAILED;
         }
     }

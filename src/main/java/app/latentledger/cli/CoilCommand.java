@@ -178,7 +178,7 @@ public final class CoilCommand implements Command {
             b.append("  none\n");
         }
         for (Finding f : r.findings()) {
-            b.append("  [").append(f.severity().key()).append("] ").append(f.code()).append(": ").append(f.message()).append('\n');
+            b.append("  [").append(f.severity().key()).append("] ").append(f.code().key()).append(": ").append(f.message()).append('\n');
             b.append("      ").append(f.technical()).append('\n');
             for (String next : f.nextChecks()) {
                 b.append("      - ").append(next).append('\n');

@@ -130,7 +130,7 @@ final class CoilJson {
 
     static Map<String, Object> finding(Finding f, UnitSystem units) {
         Map<String, Object> m = new LinkedHashMap<>();
-        m.put("code", f.code());
+        m.put("code", f.code().key());
         m.put("severity", f.severity().key());
         m.put("message", f.message());
         m.put("technical", f.technical());

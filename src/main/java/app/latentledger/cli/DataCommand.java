@@ -56,7 +56,7 @@ public final class DataCommand implements Command {
         } catch (IllegalArgumentException e) {
             throw new UsageException("--format " + e.getMessage());
         }
-        try (Ledger ledger = Ledger.open(DataLocation.resolve(context.dataDir()).folder())) {
+        try (Ledger ledger = Ledger.open(DataLocation.resolve(context.dataDir()).folder(), Ledger.FirstRun.SEED_DEMO)) {
             Visit visit = Visits.find(ledger, words.get(0));
             Path written;
             try {

@@ -1,25 +1,26 @@
 package app.latentledger.cli;
 
-import java.util.Locale;
+import app.latentledger.core.units.DisplayNumber;
 
-/** Number formatting for readable tables: fixed decimals, the same on every locale. */
+import java.util.Locale;
+import java.util.regex.Pattern;
+
+/** Readable tables: numbers as the app and the report print them, labels padded, units after. */
 final class Format {
+    /** Spaces left at the end of a row whose unit is empty. */
+    private static final Pattern TRAILING_SPACES = Pattern.compile(" +\n$");
+
     private Format() {
     }
 
+    /** A number in display units, printed as everywhere else ({@link DisplayNumber#number}). */
     static String fixed(double v, int decimals) {
-        if (Double.isNaN(v)) {
-            return "—";
-        }
-        if (Double.isInfinite(v)) {
-            return v > 0 ? "∞" : "−∞";
-        }
-        String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
-        return s.matches("-0\\.?0*") ? s.substring(1) : s;
+        return DisplayNumber.number(v, decimals);
     }
 
     /** A table row: label padded, value right-aligned, then the unit. */
     static String row(String label, String value, String unit) {
-        return String.format(Locale.ROOT, "  %-22s %12s %s%n", label, value, unit).replaceAll(" +\n$", "\n");
+        String row = String.format(Locale.ROOT, "  %-22s %12s %s%n", label, value, unit);
+        return TRAILING_SPACES.matcher(row).replaceAll("\n");
     }
 }

@@ -111,7 +111,7 @@ final class LogJson {
         List<Map<String, Object>> out = new ArrayList<>();
         for (Finding f : findings) {
             Map<String, Object> x = new LinkedHashMap<>();
-            x.put("code", f.code());
+            x.put("code", f.code().key());
             x.put("severity", f.severity().key());
             x.put("message", f.message());
             x.put("technical", f.technical());

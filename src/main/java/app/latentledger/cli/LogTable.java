@@ -92,7 +92,7 @@ final class LogTable {
             b.append("  none: cycling and off-cycle moisture are within the limits checked\n");
         }
         for (Finding f : r.findings()) {
-            b.append("  [").append(f.severity().key().toUpperCase(Locale.ROOT)).append("] ").append(f.code())
+            b.append("  [").append(f.severity().key().toUpperCase(Locale.ROOT)).append("] ").append(f.code().key())
                     .append(": ").append(f.message()).append('\n');
             b.append("        ").append(f.technical()).append('\n');
             for (String n : f.nextChecks()) {

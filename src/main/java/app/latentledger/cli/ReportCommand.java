@@ -62,7 +62,7 @@ public final class ReportCommand implements Command {
         }
         Path file = Path.of(out);
         DataLocation location = DataLocation.resolve(context.dataDir());
-        try (Ledger ledger = Ledger.open(location.folder())) {
+        try (Ledger ledger = Ledger.open(location.folder(), Ledger.FirstRun.SEED_DEMO)) {
             Visit visit = Visits.find(ledger, words.get(0));
             Visit other = compare == null ? null : Visits.find(ledger, compare);
             long started = System.nanoTime();

@@ -88,7 +88,7 @@ public final class VisitsCommand implements Command {
                 throw new UsageException("unknown visits subcommand '" + sub + "'\n" + usage());
         }
         DataLocation location = DataLocation.resolve(context.dataDir());
-        try (Ledger ledger = Ledger.open(location.folder())) {
+        try (Ledger ledger = Ledger.open(location.folder(), Ledger.FirstRun.SEED_DEMO)) {
             Object result;
             String text;
             switch (sub) {

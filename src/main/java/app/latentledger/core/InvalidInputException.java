@@ -1,9 +1,8 @@
 package app.latentledger.core;
 
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
-
-import java.util.Locale;
 
 /**
  * A reading or setting the core refuses. It names the field, the value and the accepted range,
@@ -86,11 +85,6 @@ public final class InvalidInputException extends IllegalArgumentException {
     }
 
     private static String number(double v) {
-        if (Double.isInfinite(v)) {
-            return v > 0 ? "∞" : "-∞";
-        }
-        String s = String.format(Locale.ROOT, "%.4f", v);
-        s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
-        return "-0".equals(s) ? "0" : s;
+        return DisplayNumber.exact(v);
     }
 }

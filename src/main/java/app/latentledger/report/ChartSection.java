@@ -10,6 +10,7 @@ import app.latentledger.chart.source.LogTimelineSource;
 import app.latentledger.chart.timeline.TimelineChart;
 import app.latentledger.chart.timeline.TimelineData;
 import app.latentledger.core.coil.CoilResult;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.report.pdf.Ink;
 import app.latentledger.report.pdf.PageFlow;
@@ -56,7 +57,7 @@ final class ChartSection {
                 + " to leaving. Air that loses water moves down the chart (less water per pound of air); air that only"
                 + " cools moves straight left. The dotted level line marks the entering air's dew point: a coil colder"
                 + " than it (triangle) condenses water. Drawn at "
-                + Numbers.withUnit(Quantity.PRESSURE, data.units(), pressurePa()) + ".";
+                + DisplayNumber.withUnit(Quantity.PRESSURE, data.units(), pressurePa()) + ".";
     }
 
     PsychroChartData psychroData() {

@@ -1,6 +1,7 @@
 package app.latentledger.report;
 
 import app.latentledger.core.findings.Evidence;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.UnitSystem;
 
 /** A finding's evidence as one line: "label: value ± U unit". */
@@ -9,6 +10,6 @@ final class EvidenceText {
     }
 
     static String of(Evidence e, UnitSystem units) {
-        return e.label() + ": " + Numbers.withSpread(e.quantity(), units, e.valueSi(), e.uncertaintySi());
+        return e.label() + ": " + DisplayNumber.withSpread(e.quantity(), units, e.valueSi(), e.uncertaintySi());
     }
 }

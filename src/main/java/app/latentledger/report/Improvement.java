@@ -4,6 +4,7 @@ import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.Estimate;
 import app.latentledger.core.coil.Measurand;
 import app.latentledger.core.cycles.RunCycleReport;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 
@@ -94,7 +95,7 @@ public record Improvement(String key, String label, Quantity quantity, Estimate 
     private static Improvement coil(String key, String label, Measurand m, CoilResult b, CoilResult a, int better,
                                     UnitSystem units) {
         return new Improvement(key, label, m.quantity(), b.estimate(m), a.estimate(m), better,
-                Numbers.decimals(m.quantity(), units));
+                DisplayNumber.decimals(m.quantity(), units));
     }
 
     private static Improvement log(String key, String label, Quantity q, RunCycleReport b, RunCycleReport a,

@@ -8,6 +8,7 @@ import app.latentledger.core.records.HumidityKind;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.report.pdf.Ink;
@@ -110,9 +111,9 @@ final class ReadingsSection {
         row(tb, sets, "Airflow", this::airflow);
         rowChecked(tb, sets, "Pressure used", this::pressure);
         row(tb, sets, "Condensate caught", s -> s.condensate() == null ? "not caught"
-                : Numbers.withSpread(Quantity.WATER_VOLUME, units, s.condensate().volume().valueSi(),
+                : DisplayNumber.withSpread(Quantity.WATER_VOLUME, units, s.condensate().volume().valueSi(),
                 s.condensate().volume().toleranceSi()) + " in "
-                + Numbers.withSpread(Quantity.DURATION_MINUTES, units, s.condensate().seconds().valueSi(),
+                + DisplayNumber.withSpread(Quantity.DURATION_MINUTES, units, s.condensate().seconds().valueSi(),
                 s.condensate().seconds().toleranceSi()));
         row(tb, sets, "Instruments", s -> s.instrument().isEmpty() ? "not recorded" : s.instrument());
         row(tb, sets, "Notes", s -> s.notes().isEmpty() ? "—" : s.notes());
@@ -138,14 +139,14 @@ final class ReadingsSection {
         est(tb, sets, Measurand.SENSIBLE, "Sensible capacity");
         est(tb, sets, Measurand.LATENT, "Latent capacity");
         rowResult(tb, sets, "Total capacity", r -> Numbers.estimate(Quantity.POWER, units, r.estimate(Measurand.TOTAL))
-                + " (" + Numbers.withUnit(Quantity.POWER_LARGE, units, r.process().totalW()) + ")");
+                + " (" + DisplayNumber.withUnit(Quantity.POWER_LARGE, units, r.process().totalW()) + ")");
         est(tb, sets, Measurand.SHR, "Sensible heat ratio");
         rowResult(tb, sets, "Moisture removal", r -> Numbers.estimate(Quantity.WATER_RATE, units,
                 r.estimate(Measurand.MOISTURE_REMOVAL)) + " ("
-                + Numbers.withUnit(Quantity.WATER_RATE_DAILY, units, r.process().moistureRemovalKgPerS()) + ")");
+                + DisplayNumber.withUnit(Quantity.WATER_RATE_DAILY, units, r.process().moistureRemovalKgPerS()) + ")");
         est(tb, sets, Measurand.LATENT_PER_AIRFLOW, "Latent capacity per airflow");
         est(tb, sets, Measurand.AIRFLOW_PER_CAPACITY, "Airflow per measured capacity");
-        rowResult(tb, sets, "Airflow per nominal capacity", r -> Numbers.withUnit(Quantity.AIRFLOW_PER_CAPACITY, units,
+        rowResult(tb, sets, "Airflow per nominal capacity", r -> DisplayNumber.withUnit(Quantity.AIRFLOW_PER_CAPACITY, units,
                 r.airflowPerNominalCapacity()));
         rowResult(tb, sets, "Apparatus dew point", r -> r.adp().found()
                 ? Numbers.estimate(Quantity.TEMPERATURE, units, r.estimate(Measurand.APPARATUS_DEW_POINT))
@@ -195,7 +196,7 @@ final class ReadingsSection {
     }
 
     private String temperature(Measurement m) {
-        return m == null ? "not measured" : Numbers.withSpread(Quantity.TEMPERATURE, units, m.valueSi(), m.toleranceSi());
+        return m == null ? "not measured" : DisplayNumber.withSpread(Quantity.TEMPERATURE, units, m.valueSi(), m.toleranceSi());
     }
 
     private String humidity(HumidityReading h) {
@@ -203,7 +204,7 @@ final class ReadingsSection {
             return "not measured";
         }
         if (h.kind() == HumidityKind.RH) {
-            return Numbers.withSpread(Quantity.RELATIVE_HUMIDITY, units, h.value().valueSi(), h.value().toleranceSi())
+            return DisplayNumber.withSpread(Quantity.RELATIVE_HUMIDITY, units, h.value().valueSi(), h.value().toleranceSi())
                     + " RH";
         }
         return temperature(h.value()) + (h.kind() == HumidityKind.WET_BULB ? " wet bulb" : " dew point");
@@ -214,7 +215,7 @@ final class ReadingsSection {
         if (a == null) {
             return "not measured";
         }
-        return Numbers.withSpread(Quantity.AIRFLOW, units, a.volume().valueSi(), a.volume().toleranceSi())
+        return DisplayNumber.withSpread(Quantity.AIRFLOW, units, a.volume().valueSi(), a.volume().toleranceSi())
                 + " at the " + (a.point().key().equals("entering") ? "return (entering)" : "supply (leaving)") + " side"
                 + (a.method().isEmpty() ? "" : "; " + a.method());
     }
@@ -222,13 +223,13 @@ final class ReadingsSection {
     private String pressure(CheckedReadings c) {
         ReadingSet s = c.set();
         if (s.stationPressurePa() != null) {
-            return Numbers.withSpread(Quantity.PRESSURE, units, s.stationPressurePa().valueSi(),
+            return DisplayNumber.withSpread(Quantity.PRESSURE, units, s.stationPressurePa().valueSi(),
                     s.stationPressurePa().toleranceSi()) + " measured";
         }
         if (!c.checked()) {
             return "standard atmosphere at the site elevation";
         }
-        return Numbers.withUnit(Quantity.PRESSURE, units, c.result().readings().pressurePa())
+        return DisplayNumber.withUnit(Quantity.PRESSURE, units, c.result().readings().pressurePa())
                 + " (standard atmosphere at the site elevation)";
     }
 }

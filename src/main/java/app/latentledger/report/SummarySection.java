@@ -6,6 +6,7 @@ import app.latentledger.core.coil.Measurand;
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Site;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.report.pdf.Ink;
@@ -94,14 +95,14 @@ final class SummarySection {
             Site s = v.site();
             if (v == data.visits().get(0) || !s.id().equals(data.visits().get(0).site().id())) {
                 fact(t, "Site", s.name() + ", " + s.address() + " (elevation "
-                        + Numbers.withUnit(Quantity.ELEVATION, units, s.elevationM()) + ")");
+                        + DisplayNumber.withUnit(Quantity.ELEVATION, units, s.elevationM()) + ")");
             }
         }
         for (VisitEvidence v : data.visits()) {
             if (data.differentSystems() || v == data.visits().get(0)) {
                 HvacSystem s = v.system();
                 fact(t, "System", s.label() + ": " + PlainWords.systemType(s.type()) + ", "
-                        + Numbers.withUnit(Quantity.POWER_LARGE, units, s.nominalCapacityW()) + " nominal"
+                        + DisplayNumber.withUnit(Quantity.POWER_LARGE, units, s.nominalCapacityW()) + " nominal"
                         + (s.refrigerant().isEmpty() ? "" : ", " + s.refrigerant())
                         + (s.blowerType().isEmpty() ? "" : "; blower " + s.blowerType()));
             }
@@ -180,7 +181,7 @@ final class SummarySection {
     /** "about 235 pints over a day of running": the rate a homeowner can picture. */
     private String daily(CoilResult r) {
         double perDay = Quantity.WATER_RATE_DAILY.toDisplay(units, r.process().moistureRemovalKgPerS());
-        return "about " + Numbers.fixed(perDay, 0) + " " + Quantity.WATER_RATE_DAILY.symbol(units).replace("/day", "")
+        return "about " + DisplayNumber.number(perDay, 0) + " " + Quantity.WATER_RATE_DAILY.symbol(units).replace("/day", "")
                 + " over a day of running";
     }
 
@@ -198,9 +199,9 @@ final class SummarySection {
                 continue;
             }
             tb.row(i.label(),
-                    Numbers.withSpread(i.quantity(), units, i.before().valueSi(), i.before().expandedSi(), i.decimals()),
-                    Numbers.withSpread(i.quantity(), units, i.after().valueSi(), i.after().expandedSi(), i.decimals()),
-                    Numbers.change(i.quantity(), units, i.changeSi(), i.changeUncertaintySi(), i.decimals()),
+                    DisplayNumber.withSpread(i.quantity(), units, i.before().valueSi(), i.before().expandedSi(), i.decimals()),
+                    DisplayNumber.withSpread(i.quantity(), units, i.after().valueSi(), i.after().expandedSi(), i.decimals()),
+                    DisplayNumber.change(i.quantity(), units, i.changeSi(), i.changeUncertaintySi(), i.decimals()),
                     i.verdict());
         }
         return tb;

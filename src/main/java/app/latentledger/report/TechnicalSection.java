@@ -3,6 +3,7 @@ package app.latentledger.report;
 import app.latentledger.core.cycles.RunCycleReport;
 import app.latentledger.core.findings.Evidence;
 import app.latentledger.core.findings.Finding;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.report.pdf.Ink;
@@ -55,7 +56,7 @@ final class TechnicalSection {
         }
         for (Finding f : findings) {
             t.flow().need(60);
-            t.leadIn("[" + f.severity().key() + "] " + f.code() + " — ", f.message(), Ink.BODY, 10, t.flow().width() - 10);
+            t.leadIn("[" + f.severity().key() + "] " + f.code().key() + " — ", f.message(), Ink.BODY, 10, t.flow().width() - 10);
             t.gap(1);
             t.leadIn("Technical: ", f.technical(), Ink.BODY.sized(8.8), 10, t.flow().width() - 10);
             t.gap(1);
@@ -95,26 +96,26 @@ final class TechnicalSection {
     private Table figures(AnalysedLog l) {
         RunCycleReport r = l.report();
         Table tb = new Table(new String[] {"Logged figure", "Value"}, new double[] {1.6, 2.4}, new boolean[] {false, false});
-        tb.row("Samples", r.samples() + " over " + Numbers.fixed(r.durationS() / 3600.0, 1) + " h, every "
-                + Numbers.fixed(l.series().nominalIntervalS(), 0) + " s (median)");
+        tb.row("Samples", r.samples() + " over " + DisplayNumber.number(r.durationS() / 3600.0, 1) + " h, every "
+                + DisplayNumber.number(l.series().nominalIntervalS(), 0) + " s (median)");
         tb.row("Runs found", r.cycles().size() + (r.compressorFromStatus() ? " (timed from the compressor column)"
                 : " (inferred from the supply temperature)"));
-        tb.row("Cycles per hour", Numbers.fixed(r.cyclesPerHour(), 2));
-        tb.row("Median run time", Numbers.withUnit(Quantity.DURATION_MINUTES, units, r.medianOnS()));
-        tb.row("Run-time fraction", Numbers.withUnit(Quantity.FRACTION_PERCENT, units, r.runtimeFraction()));
+        tb.row("Cycles per hour", DisplayNumber.number(r.cyclesPerHour(), 2));
+        tb.row("Median run time", DisplayNumber.withUnit(Quantity.DURATION_MINUTES, units, r.medianOnS()));
+        tb.row("Run-time fraction", DisplayNumber.withUnit(Quantity.FRACTION_PERCENT, units, r.runtimeFraction()));
         tb.row("Airflow used for masses", Double.isFinite(r.airflowM3PerS())
-                ? Numbers.withUnit(Quantity.AIRFLOW, units, r.airflowM3PerS()) + " (from reading set " + l.airflowFrom() + ")"
+                ? DisplayNumber.withUnit(Quantity.AIRFLOW, units, r.airflowM3PerS()) + " (from reading set " + l.airflowFrom() + ")"
                 : "none: masses not worked out");
-        tb.row("Water removed during runs", Numbers.withUnit(Quantity.WATER_MASS, units, r.removedKg()));
-        tb.row("Water returned in blower-on rests", Numbers.withUnit(Quantity.WATER_MASS, units, r.returnedKg()));
-        tb.row("Net removal rate over the log", Numbers.withUnit(Quantity.WATER_RATE, units, r.netRemovalKgPerS()));
-        tb.row("Steady-state removal rate", Numbers.withUnit(Quantity.WATER_RATE, units, r.steadyRemovalKgPerS()));
-        tb.row("Latent fraction delivered, measured", Numbers.withUnit(Quantity.FRACTION_PERCENT, units,
+        tb.row("Water removed during runs", DisplayNumber.withUnit(Quantity.WATER_MASS, units, r.removedKg()));
+        tb.row("Water returned in blower-on rests", DisplayNumber.withUnit(Quantity.WATER_MASS, units, r.returnedKg()));
+        tb.row("Net removal rate over the log", DisplayNumber.withUnit(Quantity.WATER_RATE, units, r.netRemovalKgPerS()));
+        tb.row("Steady-state removal rate", DisplayNumber.withUnit(Quantity.WATER_RATE, units, r.steadyRemovalKgPerS()));
+        tb.row("Latent fraction delivered, measured", DisplayNumber.withUnit(Quantity.FRACTION_PERCENT, units,
                 r.latentFractionMeasured()));
-        tb.row("Latent fraction, part-load model", Numbers.withUnit(Quantity.FRACTION_PERCENT, units,
+        tb.row("Latent fraction, part-load model", DisplayNumber.withUnit(Quantity.FRACTION_PERCENT, units,
                 r.latentFractionPredicted()));
-        tb.row("Re-evaporated share", Numbers.withUnit(Quantity.FRACTION_PERCENT, units, r.reevaporationShare()));
-        tb.row("Pressure used", Numbers.withUnit(Quantity.PRESSURE, units, l.pressurePa()));
+        tb.row("Re-evaporated share", DisplayNumber.withUnit(Quantity.FRACTION_PERCENT, units, r.reevaporationShare()));
+        tb.row("Pressure used", DisplayNumber.withUnit(Quantity.PRESSURE, units, l.pressurePa()));
         return tb;
     }
 }

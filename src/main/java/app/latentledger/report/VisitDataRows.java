@@ -11,6 +11,7 @@ import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.Timestamps;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 
@@ -144,16 +145,16 @@ final class VisitDataRows {
 
     private void findings(String source, String id, String label, List<Finding> findings) {
         for (Finding f : findings) {
-            add(source, id, label, "finding", f.code(), f.severity().key(), null, Double.NaN, Double.NaN, "", f.code(),
+            add(source, id, label, "finding", f.code().key(), f.severity().key(), null, Double.NaN, Double.NaN, "", f.code().key(),
                     f.message());
-            add(source, id, label, "technical", f.code(), "technical", null, Double.NaN, Double.NaN, "", f.code(),
+            add(source, id, label, "technical", f.code().key(), "technical", null, Double.NaN, Double.NaN, "", f.code().key(),
                     f.technical());
             for (Evidence e : f.evidence()) {
                 add(source, id, label, "evidence", e.key(), e.label(), e.quantity(), e.valueSi(), e.uncertaintySi(),
-                        Double.isNaN(e.uncertaintySi()) ? "" : DataRow.EXPANDED, f.code(), "");
+                        Double.isNaN(e.uncertaintySi()) ? "" : DataRow.EXPANDED, f.code().key(), "");
             }
             for (String n : f.nextChecks()) {
-                add(source, id, label, "next-check", f.code(), "next check", null, Double.NaN, Double.NaN, "", f.code(), n);
+                add(source, id, label, "next-check", f.code().key(), "next check", null, Double.NaN, Double.NaN, "", f.code().key(), n);
             }
         }
     }
@@ -190,7 +191,7 @@ final class VisitDataRows {
     private void add(String source, String id, String label, String record, String key, String name, Quantity q,
                      double si, double spreadSi, String spreadKind, String findingCode, String text) {
         double value = q == null || !Double.isFinite(si) ? Double.NaN : q.toDisplay(units, si);
-        double spread = q == null || !Double.isFinite(spreadSi) ? Double.NaN : Numbers.spread(q).toDisplay(units, spreadSi);
+        double spread = q == null || !Double.isFinite(spreadSi) ? Double.NaN : DisplayNumber.spreadQuantity(q).toDisplay(units, spreadSi);
         rows.add(new DataRow(v.visit().id(), source, id, label, record, key, name, value,
                 q == null ? "" : q.symbol(units), spread, Double.isNaN(spread) ? "" : spreadKind, findingCode, text));
     }

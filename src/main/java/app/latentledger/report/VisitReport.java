@@ -2,14 +2,14 @@ package app.latentledger.report;
 
 import app.latentledger.core.settings.PaperSize;
 import app.latentledger.core.units.UnitSystem;
+import app.latentledger.files.SafeFiles;
 import app.latentledger.store.Ledger;
 
 import java.io.IOException;
 import java.io.OutputStream;
-import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.time.OffsetDateTime;
 
 /**
@@ -32,6 +32,9 @@ public final class VisitReport {
      * @param compareVisitIdOrNull exact id of another visit, or null for a one-visit report
      * @param paper                page size
      * @param units                display units
+     * Each worked-out reading set of the report is kept as a results snapshot once the file is
+     * written ({@link ReportSnapshots}).
+     *
      * @return the file written
      * @throws ReportRefusedException for an unknown visit, a visit compared with itself, or an output
      *                                path that cannot be written (missing folder, a folder, no permission)
@@ -40,7 +43,10 @@ public final class VisitReport {
                              Path output) {
         ReportData data = ReportData.load(ledger, visitId, compareVisitIdOrNull, units);
         OffsetDateTime now = OffsetDateTime.now(data.latest().visit().startedAt().getOffset());
-        return SafeFile.write(output, out -> ReportDocument.write(data, paper, now, out));
+        Path written = SafeFile.write(output, out -> ReportDocument.write(data, paper, now, out));
+        // what the customer was given is kept with the readings, whatever a later version computes
+        ReportSnapshots.keep(ledger, data, now);
+        return written;
     }
 
     /** As {@link #write}, into a stream (the caller owns it); for previews and tests. */
@@ -50,7 +56,7 @@ public final class VisitReport {
         ReportDocument.write(data, paper, OffsetDateTime.now(data.latest().visit().startedAt().getOffset()), out);
     }
 
-    /** Writes through a temporary file in the target folder, then moves it into place. */
+    /** Refuses a target the tech cannot have meant, then writes through {@link SafeFiles}. */
     static final class SafeFile {
         interface Body {
             void write(OutputStream out) throws IOException;
@@ -68,35 +74,13 @@ public final class VisitReport {
             if (Files.isDirectory(target)) {
                 throw new ReportRefusedException("cannot write " + output + ": it is a folder; give a file name");
             }
-            Path temp;
             try {
-                temp = app.latentledger.io.TempFiles.beside(target);
-            } catch (IOException | SecurityException e) {
+                return SafeFiles.writeAtomically(target, body::write, SafeFiles.Durability.REPLACE_WHOLE);
+            } catch (AccessDeniedException | SecurityException e) {
                 throw new ReportRefusedException("cannot write " + output + ": no permission to create files in "
                         + folder, e);
-            }
-            boolean moved = false;
-            try {
-                try (OutputStream out = Files.newOutputStream(temp)) {
-                    body.write(out);
-                }
-                try {
-                    Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-                } catch (AtomicMoveNotSupportedException e) {
-                    Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
-                }
-                moved = true;
-                return target;
             } catch (IOException e) {
                 throw new ReportRefusedException("cannot write " + output + ": " + e.getMessage(), e);
-            } finally {
-                if (!moved) {
-                    try {
-                        Files.deleteIfExists(temp);
-                    } catch (IOException ignored) {
-                        // the temporary file is hidden and named .part; nothing more can be done
-                    }
-                }
             }
         }
     }

@@ -30,14 +30,30 @@ public final class Ledger implements AutoCloseable {
         this.settings = new SettingsRepository(db);
     }
 
-    /**
-     * Opens the ledger in {@code dataDir} (creating the folder and file on first use) and, when it
-     * holds no site yet, seeds the invented demo scenario so a new tablet has something to show.
-     */
+    /** What a ledger that holds no site yet (its first run) is given. */
+    public enum FirstRun {
+        /** Nothing: a command that only reads or sets something leaves a new ledger empty. */
+        NOTHING,
+        /** The invented Saltreed demo, so the app and the visit, report and data commands have something to show. */
+        SEED_DEMO
+    }
+
+    /** Opens the ledger in {@code dataDir}, creating the folder and file on first use; adds nothing. */
     public static Ledger open(Path dataDir) {
+        return open(dataDir, FirstRun.NOTHING);
+    }
+
+    /**
+     * Opens the ledger in {@code dataDir}, creating the folder and file on first use, and takes the
+     * first-run step the caller names when the ledger holds no site yet. The faces a tech looks
+     * through (the app, {@code visits}, {@code report}, {@code data}) seed the demo; nothing else does.
+     */
+    public static Ledger open(Path dataDir, FirstRun firstRun) {
         Ledger ledger = new Ledger(Database.open(dataDir.resolve(FILE_NAME)));
         try {
-            DemoScenario.seedIfEmpty(ledger);
+            if (firstRun == FirstRun.SEED_DEMO) {
+                DemoScenario.seedIfEmpty(ledger);
+            }
         } catch (RuntimeException e) {
             ledger.close();
             throw e;

@@ -1,11 +1,14 @@
 package app.latentledger.ui;
 
+import app.latentledger.core.settings.Settings;
+import app.latentledger.ui.chart.ChartSlots;
 import app.latentledger.ui.compare.CompareView;
 import app.latentledger.ui.compare.CompareViewModel;
 import app.latentledger.ui.entry.EntryViewModel;
 import app.latentledger.ui.entry.ReadingsView;
 import app.latentledger.ui.export.ExportView;
 import app.latentledger.ui.export.ExportViewModel;
+import app.latentledger.ui.export.ReportViewModel;
 import app.latentledger.ui.job.JobView;
 import app.latentledger.ui.job.JobViewModel;
 import app.latentledger.ui.log.LogImportViewModel;
@@ -16,11 +19,13 @@ import app.latentledger.ui.look.Theme;
 import app.latentledger.ui.look.Ui;
 import app.latentledger.ui.results.ResultsView;
 import app.latentledger.ui.results.ResultsViewModel;
-import app.latentledger.ui.chart.ChartSlots;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Background;
+import app.latentledger.ui.session.Screen;
 import app.latentledger.ui.settings.SettingsStore;
 import app.latentledger.ui.settings.SettingsView;
 import app.latentledger.ui.settings.SettingsViewModel;
-import javafx.beans.binding.Bindings;
+import javafx.application.Platform;
 import javafx.geometry.Pos;
 import javafx.scene.Parent;
 import javafx.scene.Scene;
@@ -29,28 +34,29 @@ import javafx.scene.control.Label;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.layout.BorderPane;
-import javafx.scene.layout.Region;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Pane;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
-import java.time.format.DateTimeFormatter;
 import java.util.EnumMap;
 import java.util.Map;
+import java.util.concurrent.Executor;
 
 /**
  * The frame around every screen: a header with the job in hand and the theme switch, the screen
- * list (a rail on the left in landscape, a bar at the bottom in portrait), and the screen itself.
- * It holds every view model for the life of the window (views bind to them weakly).
+ * list (a rail on the left in landscape, a bar at the bottom in portrait), and the screen itself,
+ * laid out over a {@link ShellViewModel}. It holds every view model for the life of the window
+ * (views bind to them weakly).
  */
 public final class AppShell extends BorderPane {
-    private static final DateTimeFormatter DAY = DateTimeFormatter.ofPattern("yyyy-MM-dd");
-
     private final AppSession session;
-    private final java.util.concurrent.Executor work;
-    private final java.util.concurrent.Executor fx;
+    private final ShellViewModel shell;
+    private final Executor work;
+    private final Executor fx;
     /** One writer of reports for the export and compare screens. */
-    private app.latentledger.ui.export.ReportViewModel reports;
+    private ReportViewModel reports;
     // built on first use, so the first frame waits only for the first screen's view model
     private EntryViewModel entry;
     private ResultsViewModel results;
@@ -77,41 +83,42 @@ public final class AppShell extends BorderPane {
      * @param fx   where their results are applied; {@link Background#DIRECT} for both renders a
      *             screen complete in one call (the {@code screens} command, tests)
      */
-    public AppShell(AppSession session, java.util.concurrent.Executor work, java.util.concurrent.Executor fx) {
+    public AppShell(AppSession session, Executor work, Executor fx) {
         this.session = session;
+        this.shell = new ShellViewModel(session);
         this.work = work;
         this.fx = fx;
         setId("shell");
         setTop(header());
         ToggleGroup group = new ToggleGroup();
-        for (Screen s : Screen.values()) {
+        for (Screen s : shell.screens()) {
             ToggleButton b = new ToggleButton(s.title());
             b.setId("nav-" + s.key());
             b.setGraphic(icon(s).node(28));
             b.setToggleGroup(group);
-            b.setOnAction(e -> session.screenProperty().set(s));
+            b.setOnAction(e -> shell.show(s));
             navButtons.put(s, b);
         }
         rail.getStyleClass().addAll("nav", "rail");
         ((VBox) rail).setSpacing(8);
         bar.getStyleClass().addAll("nav", "bar");
         ((HBox) bar).setAlignment(Pos.CENTER);
-        session.screenProperty().addListener((o, a, b) -> show(b));
+        shell.screenProperty().addListener((o, a, b) -> show(b));
         sceneProperty().addListener((o, a, scene) -> {
             if (scene != null) {
-                Theme.apply(scene, session.darkProperty().get());
+                Theme.apply(scene, shell.darkProperty().get());
                 scene.widthProperty().addListener((x, y, z) -> fit(scene));
                 scene.heightProperty().addListener((x, y, z) -> fit(scene));
                 fit(scene);
             }
         });
-        session.darkProperty().addListener((o, a, b) -> {
+        shell.darkProperty().addListener((o, a, b) -> {
             if (getScene() != null) {
                 Theme.apply(getScene(), b);
             }
         });
         placeNav();
-        show(session.screenProperty().get());
+        show(shell.screenProperty().get());
     }
 
     /** A scene for this shell, styled, at the given size. */
@@ -167,9 +174,9 @@ public final class AppShell extends BorderPane {
         return export;
     }
 
-    public app.latentledger.ui.export.ReportViewModel reports() {
+    public ReportViewModel reports() {
         if (reports == null) {
-            reports = new app.latentledger.ui.export.ReportViewModel(session, work, fx);
+            reports = new ReportViewModel(session, work, fx);
         }
         return reports;
     }
@@ -179,12 +186,12 @@ public final class AppShell extends BorderPane {
         if (settings == null) {
             settings = new SettingsViewModel(new SettingsStore() {
                 @Override
-                public app.latentledger.core.settings.Settings load() {
+                public Settings load() {
                     return session.settings();
                 }
 
                 @Override
-                public void save(app.latentledger.core.settings.Settings changed) {
+                public void save(Settings changed) {
                     session.saveSettings(changed);
                 }
             });
@@ -222,8 +229,8 @@ public final class AppShell extends BorderPane {
 
     /** Builds the screens not shown yet, one per pulse, so the first switch to each is instant. */
     public void prepareOtherScreens() {
-        for (Screen s : Screen.values()) {
-            javafx.application.Platform.runLater(() -> view(s));
+        for (Screen s : shell.screens()) {
+            Platform.runLater(() -> view(s));
         }
     }
 
@@ -290,28 +297,19 @@ public final class AppShell extends BorderPane {
         Label title = Ui.label("Latent Ledger", "app-title");
         Label context = Ui.label("", "context");
         context.setId("context");
-        context.textProperty().bind(Bindings.createStringBinding(() -> {
-            if (session.visit() == null) {
-                return "No visit open";
-            }
-            return session.site().name() + "  ·  " + session.system().label() + "  ·  "
-                    + JobViewModel.purposeWord(session.visit().purpose()) + " " + session.visit().startedAt().format(DAY);
-        }, session.visitProperty(), session.systemProperty()));
-        Button newSet = Ui.button("new-reading-set", "New set", Icons.NEW, () -> {
-            session.newReadingSet();
-            session.screenProperty().set(Screen.READINGS);
-        });
+        context.textProperty().bind(shell.contextText());
+        Button newSet = Ui.button("new-reading-set", "New set", Icons.NEW, shell::newReadingSet);
         ToggleButton theme = new ToggleButton("Dark");
         theme.setId("theme-toggle");
         theme.setGraphic(Icons.THEME.node(24));
-        theme.selectedProperty().bindBidirectional(session.darkProperty());
+        theme.selectedProperty().bindBidirectional(shell.darkProperty());
         HBox right = new HBox(8, newSet, theme);
         right.setAlignment(Pos.CENTER_RIGHT);
         right.setMinWidth(Region.USE_PREF_SIZE);
         title.setMinWidth(Region.USE_PREF_SIZE);
         context.setWrapText(true);
         context.setMinWidth(0);
-        HBox.setHgrow(context, javafx.scene.layout.Priority.ALWAYS);
+        HBox.setHgrow(context, Priority.ALWAYS);
         context.setMaxWidth(Double.MAX_VALUE);
         HBox h = new HBox(16, title, context, right);
         h.setAlignment(Pos.CENTER_LEFT);

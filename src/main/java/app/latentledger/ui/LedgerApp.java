@@ -1,8 +1,9 @@
 package app.latentledger.ui;
 
 import app.latentledger.store.DataLocation;
-import app.latentledger.ui.log.LogAnalysisService;
-import app.latentledger.ui.results.VisitResults;
+import app.latentledger.ui.log.CycleLogAnalysis;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.LogAnalysisService;
 import javafx.animation.AnimationTimer;
 import javafx.application.Application;
 import javafx.geometry.Dimension2D;
@@ -38,26 +39,15 @@ public final class LedgerApp extends Application {
         Application.launch(LedgerApp.class, args);
     }
 
+    /**
+     * Opens the ledger and the visit in progress, off the FX thread while the toolkit is still
+     * starting. The session works the open reading set out as it opens ({@link
+     * AppSession#currentCheck()}), so the core's classes are loaded here and the first screen shows
+     * that very check instead of working it out again.
+     */
     private static AppSession openSession(String[] args) {
         Path dataDir = DataLocation.dataDirOption(args);
-        AppSession s = AppSession.open(DataLocation.resolve(dataDir).folder(), LogAnalysisService.find());
-        warmUp(s);
-        return s;
-    }
-
-    /**
-     * Works the open reading set out once, off the FX thread, while the toolkit is still starting:
-     * the first screen then finds the core's classes loaded. The result is thrown away; the
-     * screens compute their own.
-     */
-    private static void warmUp(AppSession s) {
-        if (s.draft() != null && s.system() != null) {
-            try {
-                VisitResults.of(s.draft(), s.site(), s.system(), s.thresholds(), s.units());
-            } catch (RuntimeException ignored) {
-                // the screen will show whatever the check says; warming up must never stop the app
-            }
-        }
+        return AppSession.open(DataLocation.resolve(dataDir).folder(), LogAnalysisService.find(new CycleLogAnalysis()));
     }
 
     @Override

@@ -48,7 +48,7 @@ class BundleTest {
 
     @BeforeEach
     void setUp() {
-        source = Ledger.open(dir.resolve("source"));
+        source = Ledger.open(dir.resolve("source"), Ledger.FirstRun.SEED_DEMO);
         // a log and a snapshot on the demo's complaint visit, so every entry kind is exported
         source.logs().save(TestRecords.log("log-1", DemoScenario.VISIT_COMPLAINT, 20_000));
         source.snapshots().save(new ResultsSnapshot("snap-1", SnapshotSubject.READING_SET, DemoScenario.READINGS_AFTER,

@@ -182,7 +182,7 @@ class SettingsCommandTest {
         assertEquals(0, run("settings set defaultElevation 5000").code());
         String caseA = "coil --return-db 75 --return-rh 50 --supply-db 55 --supply-rh 90 --airflow 1200";
         Run stored = run(caseA);
-        assertTrue(stored.out().contains("standard atmosphere at 5000 ft"), stored.out());
+        assertTrue(stored.out().contains("standard atmosphere at 5,000 ft"), stored.out());
         Run explicit = run(caseA + " --elevation 0");
         assertTrue(explicit.out().contains("standard atmosphere at 0 ft"), explicit.out());
     }

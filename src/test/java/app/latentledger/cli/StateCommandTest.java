@@ -32,7 +32,7 @@ class StateCommandTest {
         return new Run(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
     }
 
-    /** AHRI rating entering air 80/67 °F (domain-practice.md Appendix A, values [DER] from HoF IP eqs). */
+    /** AHRI rating entering air 80/67 °F (docs/methods.md §9.8, values [DER] from HoF IP eqs). */
     @Test
     void jsonForTheRatingPoint() {
         Run r = run("state", "--dry-bulb", "80", "--wet-bulb", "67", "--json");
@@ -63,7 +63,7 @@ class StateCommandTest {
         assertEquals(0.8962, j.get("specificVolume").getAsDouble(), 0.0002);
     }
 
-    /** 5280 ft standard atmosphere 12.100 psia (domain-practice.md Appendix A, [DER] from eq. 3). */
+    /** 5280 ft standard atmosphere 12.100 psia (docs/methods.md §9.8, [DER] from eq. 3). */
     @Test
     void elevationSetsPressure() {
         JsonObject j = run("state", "--elevation", "5280", "--dry-bulb", "75", "--rh", "40", "--json").json();

@@ -56,6 +56,17 @@ class VisitsCommandTest {
     }
 
     @Test
+    void aSettingsCommandLeavesANewFolderEmptyAndVisitsThenShowsTheDemo() {
+        assertEquals(0, run("settings", "show").code());
+        try (app.latentledger.store.Ledger l = app.latentledger.store.Ledger.open(dir.resolve("data"))) {
+            assertEquals(0, l.sites().all().size(), "only the faces a tech looks through seed the demo");
+        }
+        Run r = run("visits", "list", "--json");
+        assertEquals(0, r.code(), r.err());
+        assertEquals(2, JsonParser.parseString(r.out()).getAsJsonArray().size(), "the demo's two visits");
+    }
+
+    @Test
     void showByPrefixEndsWithTheSafetyLine() {
         Run r = run("visits", "show", DemoScenario.VISIT_COMPLAINT.substring(0, 6));
         assertEquals(0, r.code(), r.err());

@@ -101,6 +101,16 @@ public final class SyntheticLog {
 
         /** As a series, with or without the status columns. */
         public LogSeries series(boolean withStatus) {
+            return series(withStatus, null);
+        }
+
+        /** As a series whose first sample is at the scenario's clock time and offset. */
+        public LogSeries seriesWithClock(boolean withStatus) {
+            return series(withStatus, new TimeOrigin(scenario.start.toEpochSecond(scenario.offset),
+                    scenario.offset.getTotalSeconds(), true));
+        }
+
+        private LogSeries series(boolean withStatus, TimeOrigin origin) {
             Map<Channel, double[]> a = new EnumMap<>(Channel.class);
             a.put(Channel.RETURN_DB, returnDb);
             a.put(Channel.RETURN_RH, returnRh);
@@ -111,7 +121,7 @@ public final class SyntheticLog {
                 st.put(Channel.COMPRESSOR, compressor);
                 st.put(Channel.FAN, fan);
             }
-            return new LogSeries(t, a, st, null);
+            return new LogSeries(t, a, st, origin);
         }
 
         /** Rows in the given layout. */

@@ -1,5 +1,6 @@
 package app.latentledger.report;
 
+import app.latentledger.core.findings.FindingCode;
 import app.latentledger.core.findings.Thresholds;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.store.DemoScenario;
@@ -21,7 +22,7 @@ class ReportThresholdsTest {
 
     @Test
     void storedAirflowLimitReachesTheReport(@TempDir Path dir) {
-        try (Ledger ledger = Ledger.open(dir)) {
+        try (Ledger ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO)) {
             assertFalse(afterHasHighAirflow(ledger), "default 450 cfm/ton: quiet");
             ledger.settings().save(ledger.settings().load().withTyped(Thresholds.COIL_HIGH_AIRFLOW_PER_TON.key(), 350,
                     UnitSystem.IP));
@@ -33,6 +34,6 @@ class ReportThresholdsTest {
         return VisitEvidence.load(ledger, DemoScenario.VISIT_COMPLAINT, UnitSystem.IP).checkedReadings().stream()
                 .filter(c -> c.set().id().equals(DemoScenario.READINGS_AFTER))
                 .flatMap(c -> c.result().findings().stream())
-                .anyMatch(f -> f.code().equals("high-airflow-per-ton"));
+                .anyMatch(f -> f.code() == FindingCode.HIGH_AIRFLOW_PER_TON);
     }
 }

@@ -57,7 +57,7 @@ class VisitDataExportTest {
     @Test
     void csvRoundTripGivesTheCoilCheckNumbers() throws Exception {
         Path out = dir.resolve("v.csv");
-        try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
+        try (Ledger ledger = Ledger.open(dir.resolve("data"), Ledger.FirstRun.SEED_DEMO)) {
             VisitDataExport.write(ledger, DemoScenario.VISIT_COMPLAINT, VisitDataExport.Format.CSV, UnitSystem.IP, out);
             List<CSVRecord> rows = parse(Files.readString(out, StandardCharsets.UTF_8));
             var visit = ledger.visits().find(DemoScenario.VISIT_COMPLAINT).orElseThrow();
@@ -89,9 +89,9 @@ class VisitDataExportTest {
                 assertEquals(rs.instrument(), row(rows, id, "info", "instrument").get("text"));
                 int evidence = 0;
                 for (Finding f : r.findings()) {
-                    assertEquals(f.message(), row(rows, id, "finding", f.code()).get("text"));
-                    assertEquals(f.severity().key(), row(rows, id, "finding", f.code()).get("label"));
-                    assertEquals(f.technical(), row(rows, id, "technical", f.code()).get("text"));
+                    assertEquals(f.message(), row(rows, id, "finding", f.code().key()).get("text"));
+                    assertEquals(f.severity().key(), row(rows, id, "finding", f.code().key()).get("label"));
+                    assertEquals(f.technical(), row(rows, id, "technical", f.code().key()).get("text"));
                     evidence += f.evidence().size();
                 }
                 long exported = rows.stream().filter(x -> x.get("source_id").equals(id)
@@ -104,7 +104,7 @@ class VisitDataExportTest {
     @Test
     void jsonRoundTripGroupsTheSameRows() throws Exception {
         Path out = dir.resolve("v.json");
-        try (Ledger ledger = Ledger.open(dir.resolve("data"))) {
+        try (Ledger ledger = Ledger.open(dir.resolve("data"), Ledger.FirstRun.SEED_DEMO)) {
             VisitDataExport.write(ledger, DemoScenario.VISIT_COMMISSIONING, VisitDataExport.Format.JSON, UnitSystem.SI, out);
             JsonObject root = JsonParser.parseString(Files.readString(out, StandardCharsets.UTF_8)).getAsJsonObject();
             assertEquals(VisitDataExport.JSON_FORMAT, root.get("format").getAsString());

@@ -29,19 +29,29 @@ class DemoScenarioTest {
 
     @Test
     void seededOnceOnFirstOpen() {
-        try (Ledger ledger = Ledger.open(dir)) {
+        try (Ledger ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO)) {
             assertEquals(2, ledger.sites().all().size());
             assertEquals(2, ledger.visits().all().size());
             assertEquals(3, ledger.readings().count());
         }
-        try (Ledger ledger = Ledger.open(dir)) {
+        try (Ledger ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO)) {
             assertEquals(2, ledger.visits().all().size(), "not seeded twice");
         }
     }
 
     @Test
-    void beforeTheCoilRunsAboveTheReturnDewPointAndAfterWellBelowIt() {
+    void openingAddsNothingUnlessTheCallerAsksForTheDemo() {
         try (Ledger ledger = Ledger.open(dir)) {
+            assertEquals(0, ledger.sites().all().size());
+        }
+        try (Ledger ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO)) {
+            assertEquals(2, ledger.sites().all().size(), "an empty ledger is on its first run");
+        }
+    }
+
+    @Test
+    void beforeTheCoilRunsAboveTheReturnDewPointAndAfterWellBelowIt() {
+        try (Ledger ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO)) {
             HvacSystem system = ledger.systems().find(DemoScenario.SYSTEM_HERON).orElseThrow();
             double p = StandardAtmosphere.pressurePa(ledger.sites().find(DemoScenario.SITE_HERON).orElseThrow().elevationM());
             ReadingSet before = ledger.readings().find(DemoScenario.READINGS_BEFORE).orElseThrow();
@@ -76,7 +86,7 @@ class DemoScenarioTest {
 
     @Test
     void commissioningReadingsAreHealthy() {
-        try (Ledger ledger = Ledger.open(dir)) {
+        try (Ledger ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO)) {
             HvacSystem system = ledger.systems().find(DemoScenario.SYSTEM_QUAY).orElseThrow();
             double p = StandardAtmosphere.pressurePa(ledger.sites().find(DemoScenario.SITE_QUAY).orElseThrow().elevationM());
             ReadingSet r = ledger.readings().find(DemoScenario.READINGS_COMMISSIONING).orElseThrow();

@@ -3,6 +3,8 @@ package app.latentledger.ui;
 import app.latentledger.cli.Cli;
 import app.latentledger.core.settings.DisplayTheme;
 import app.latentledger.core.units.UnitSystem;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Screen;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

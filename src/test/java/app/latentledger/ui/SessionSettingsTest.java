@@ -4,8 +4,9 @@ import app.latentledger.core.settings.DisplayTheme;
 import app.latentledger.core.settings.SettingsCatalogue;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.ui.entry.EntryViewModel;
-import app.latentledger.ui.entry.Slot;
 import app.latentledger.ui.job.JobViewModel;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Slot;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

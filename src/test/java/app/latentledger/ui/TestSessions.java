@@ -2,7 +2,8 @@ package app.latentledger.ui;
 
 import app.latentledger.core.records.VisitPurpose;
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.log.LogAnalysisService;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.LogAnalysisService;
 
 import java.nio.file.Path;
 

@@ -2,6 +2,9 @@ package app.latentledger.ui;
 
 import app.latentledger.store.DemoScenario;
 import app.latentledger.ui.log.CycleLogAnalysis;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Background;
+import app.latentledger.ui.session.Screen;
 import javafx.scene.Node;
 import javafx.scene.control.Labeled;
 import javafx.scene.control.TextField;

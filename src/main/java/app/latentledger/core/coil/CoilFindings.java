@@ -2,6 +2,7 @@ package app.latentledger.core.coil;
 
 import app.latentledger.core.findings.Evidence;
 import app.latentledger.core.findings.Finding;
+import app.latentledger.core.findings.FindingCode;
 import app.latentledger.core.findings.Severity;
 import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.core.findings.Thresholds;
@@ -22,16 +23,6 @@ import java.util.List;
  * use the return air, the indoor air.
  */
 public final class CoilFindings {
-    public static final String COIL_ABOVE_DEW_POINT = "coil-above-dew-point";
-    public static final String COIL_MARGIN_INCONCLUSIVE = "coil-margin-inconclusive";
-    public static final String MOISTURE_DROP_INCONCLUSIVE = "moisture-drop-inconclusive";
-    public static final String COIL_ADDING_MOISTURE = "coil-adding-moisture";
-    public static final String READINGS_INCONSISTENT = "readings-inconsistent";
-    public static final String HIGH_AIRFLOW_PER_TON = "high-airflow-per-ton";
-    public static final String LOW_AIRFLOW_PER_TON = "low-airflow-per-ton";
-    public static final String LOW_LATENT_SHARE = "low-latent-share";
-    public static final String INDOOR_HUMIDITY_HIGH = "indoor-humidity-high";
-    public static final String CONDENSATE_MISMATCH = "condensate-mismatch";
 
     private CoilFindings() {
     }
@@ -48,7 +39,7 @@ public final class CoilFindings {
         String enteringDp = r.mixed() ? "entering (mixed-air) dew point " : "entering dew point ";
 
         if (r.marginCall() == CoilVerdict.Call.ABOVE && r.dropCall() != CoilVerdict.Call.REMOVING) {
-            out.add(new Finding(COIL_ABOVE_DEW_POINT, Severity.FIX,
+            out.add(new Finding(FindingCode.COIL_ABOVE_DEW_POINT, Severity.FIX,
                     "The cooling coil is not cold enough to pull water out of the air.",
                     "Coil " + Shown.of(Quantity.TEMPERATURE, units, r.coilTemperatureC(), 1) + " (" + coilWord
                             + ") is above the " + enteringDp + Shown.of(Measurand.ENTERING_DEW_POINT, units, dp, 1)
@@ -67,7 +58,7 @@ public final class CoilFindings {
                     : (r.mixed() ? "Entering (mixed-air) dew point minus " : "Entering dew point minus ") + coilWord + " = "
                       + Shown.of(Measurand.DEW_POINT_MARGIN, units, margin, 1)
                       + " (k = 2): the margin lies within the instruments' uncertainty.";
-            out.add(new Finding(COIL_MARGIN_INCONCLUSIVE, Severity.CHECK,
+            out.add(new Finding(FindingCode.COIL_MARGIN_INCONCLUSIVE, Severity.CHECK,
                     "The readings cannot yet show whether the coil is cold enough to remove moisture.",
                     technical,
                     List.of(evidence(Measurand.DEW_POINT_MARGIN, margin), evidence(Measurand.ENTERING_DEW_POINT, dp),
@@ -77,7 +68,7 @@ public final class CoilFindings {
                             "Repeat after 15 minutes of steady running")));
         }
         if (r.marginCall() == CoilVerdict.Call.BELOW && r.dropCall() == CoilVerdict.Call.WITHIN) {
-            out.add(new Finding(MOISTURE_DROP_INCONCLUSIVE, Severity.CHECK,
+            out.add(new Finding(FindingCode.MOISTURE_DROP_INCONCLUSIVE, Severity.CHECK,
                     "The coil is cold enough, but the readings cannot show water leaving the air.",
                     "Coil is " + Shown.of(Measurand.DEW_POINT_MARGIN, units, margin, 1)
                             + " below the " + enteringDp.trim() + ", but the humidity-ratio drop "
@@ -88,7 +79,7 @@ public final class CoilFindings {
                             "Time a condensate catch at the drain")));
         }
         if (r.dropCall() == CoilVerdict.Call.ADDING && r.marginCall() != CoilVerdict.Call.BELOW) {
-            out.add(new Finding(COIL_ADDING_MOISTURE, Severity.CHECK,
+            out.add(new Finding(FindingCode.COIL_ADDING_MOISTURE, Severity.CHECK,
                     "Air leaving the coil carries more water than the air going in.",
                     "Humidity-ratio drop " + Shown.of(Measurand.HUMIDITY_RATIO_DROP, units, drop, 1)
                             + " (k = 2): supply is wetter than " + enteringWord + ".",
@@ -111,7 +102,7 @@ public final class CoilFindings {
             inconsistent.add("the process line never meets the saturation curve");
         }
         if (!inconsistent.isEmpty()) {
-            out.add(new Finding(READINGS_INCONSISTENT, Severity.CHECK,
+            out.add(new Finding(FindingCode.READINGS_INCONSISTENT, Severity.CHECK,
                     "Some readings disagree with each other, so one of them is probably off.",
                     "Inconsistent: " + String.join("; ", inconsistent) + ".",
                     List.of(evidence(Measurand.TEMPERATURE_DROP, r.estimate(Measurand.TEMPERATURE_DROP)),
@@ -125,7 +116,7 @@ public final class CoilFindings {
         Estimate shr = r.estimate(Measurand.SHR);
         double shrLimit = t.valueSi(Thresholds.COIL_HIGH_SHR);
         if (indoorHigh && r.process().totalW() > 0 && shr.exists() && shr.valueSi() > shrLimit) {
-            out.add(new Finding(LOW_LATENT_SHARE, Severity.FIX,
+            out.add(new Finding(FindingCode.LOW_LATENT_SHARE, Severity.FIX,
                     "The system spends too little of its effort removing moisture while the house is humid.",
                     "SHR " + Shown.of(Measurand.SHR, units, shr, 2) + " above " + Shown.of(Quantity.DIMENSIONLESS, units, shrLimit, 2)
                             + " with indoor air above target; latent " + Shown.of(Measurand.LATENT, units,
@@ -154,7 +145,7 @@ public final class CoilFindings {
                 evidence.add(evidence(Measurand.OUTDOOR_DEW_POINT, outdoorDp));
                 outdoorPart = "; outdoor dew point " + Shown.of(Measurand.OUTDOOR_DEW_POINT, units, outdoorDp, 1);
             }
-            out.add(new Finding(INDOOR_HUMIDITY_HIGH, Severity.CHECK,
+            out.add(new Finding(FindingCode.INDOOR_HUMIDITY_HIGH, Severity.CHECK,
                     "The air in the house is more humid than recommended.",
                     "Return dew point " + Shown.of(Measurand.RETURN_DEW_POINT, units, indoorDp, 1) + " (limit "
                             + Shown.of(Quantity.TEMPERATURE, units, dpLimit, 0) + ", ASHRAE 62.1-2022 §5.12), RH "
@@ -183,7 +174,7 @@ public final class CoilFindings {
         double high = t.valueSi(Thresholds.COIL_HIGH_AIRFLOW_PER_TON);
         double low = t.valueSi(Thresholds.COIL_LOW_AIRFLOW_PER_TON);
         if (perCapacity > high) {
-            out.add(new Finding(HIGH_AIRFLOW_PER_TON, Severity.CHECK,
+            out.add(new Finding(FindingCode.HIGH_AIRFLOW_PER_TON, Severity.CHECK,
                     "So much air moves over the coil that it cannot dry the air well.",
                     "Airflow " + Shown.of(Quantity.AIRFLOW_PER_CAPACITY, units, perCapacity, 0) + " of " + basis
                             + ", above " + Shown.of(Quantity.AIRFLOW_PER_CAPACITY, units, high, 0) + ".",
@@ -193,7 +184,7 @@ public final class CoilFindings {
                             "Check the blower speed setting against the manufacturer's table for cooling",
                             "Consider lowering airflow toward 350 cfm/ton in humid climates, within the manufacturer's range")));
         } else if (perCapacity < low) {
-            out.add(new Finding(LOW_AIRFLOW_PER_TON, Severity.CHECK,
+            out.add(new Finding(FindingCode.LOW_AIRFLOW_PER_TON, Severity.CHECK,
                     "Too little air moves over the coil; it may ice up and cool poorly.",
                     "Airflow " + Shown.of(Quantity.AIRFLOW_PER_CAPACITY, units, perCapacity, 0) + " of " + basis
                             + ", below " + Shown.of(Quantity.AIRFLOW_PER_CAPACITY, units, low, 0) + ".",
@@ -222,7 +213,7 @@ public final class CoilFindings {
         boolean beyondFraction = !Double.isFinite(rel) || Math.abs(rel) > limit;
         if (c.disagreeBeyondUncertainty() && beyondFraction) {
             boolean less = c.difference().valueSi() < 0;
-            out.add(new Finding(CONDENSATE_MISMATCH, Severity.CHECK,
+            out.add(new Finding(FindingCode.CONDENSATE_MISMATCH, Severity.CHECK,
                     less ? "Less water reached the drain than the air readings say the coil removed."
                          : "More water reached the drain than the air readings say the coil removed.",
                     "Condensate " + Shown.of(Measurand.CONDENSATE_RATE, units, c.condensate(), 2) + " vs air side "

@@ -14,7 +14,7 @@ import java.util.List;
  * The site pressure is held exact (it is common to both states; its effect is discussed in
  * docs/methods.md §2). Probes are treated as independent (return and supply read by different
  * instruments); a single probe moved between the two would make the errors correlated and the
- * humidity-ratio drop markedly more certain (domain-practice.md §5.3). With outdoor air the
+ * humidity-ratio drop markedly more certain (docs/methods.md §9.7). With outdoor air the
  * entering state is the {@link MixedAir mix} of the return and outdoor readings, so the outdoor
  * dry bulb, humidity and the outdoor-air fraction enter the budget too (independent of the rest).
  */

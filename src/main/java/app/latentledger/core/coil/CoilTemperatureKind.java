@@ -3,7 +3,7 @@ package app.latentledger.core.coil;
 /**
  * What a measured coil temperature is. The two differ by several degrees (fin and air-film
  * resistance put the coil surface above the refrigerant), so the result always says which one
- * stood in for "the coil" (domain-practice.md §2.6, common practice, no source).
+ * stood in for "the coil" (docs/methods.md §9.3, common practice, no source).
  */
 public enum CoilTemperatureKind {
     /** A probe on the fins or tubes of the wet coil. */

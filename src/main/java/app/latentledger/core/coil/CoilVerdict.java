@@ -16,7 +16,7 @@ package app.latentledger.core.coil;
  * temperature and adding → {@link #NOT_DEHUMIDIFYING}. Every other pairing (a cold coil with no
  * measurable drop, a warm coil with a drop, a cold coil with the air gaining water) →
  * {@link #CANT_TELL}: the readings disagree with each other, and the findings say how. This is the
- * three-state rule of domain-practice.md §5.4 (a design proposal built on the GUM).
+ * three-state rule of docs/methods.md §9.7 (a design proposal built on the GUM).
  */
 public enum CoilVerdict {
     DEHUMIDIFYING("dehumidifying"),

@@ -8,7 +8,7 @@ import app.latentledger.core.units.Quantity;
  *
  * @param volumeM3           water caught, m³ (1 mL = 1e−6 m³)
  * @param volumeTolFraction  ± tolerance of the volume as a fraction (graduated cylinder ±1–2 %,
- *                           domain-practice.md §1.4, common practice, no source)
+ *                           docs/methods.md §9.1, common practice, no source)
  * @param seconds            collection time, s
  * @param secondsTolS        ± tolerance of the timing, s
  */

@@ -2,7 +2,7 @@ package app.latentledger.core.coil;
 
 /**
  * Default instrument tolerances, each the ± half-width a maker would state for typical field kit.
- * All overridable per reading. Sources: domain-practice.md §1.4 (common practice, no source, for
+ * All overridable per reading. Sources: docs/methods.md §9.1 (common practice, no source, for
  * probes; ±10 % of reading for airflow instruments from California Title 24 Part 6 RA3.7.2.2, 2013).
  */
 public final class Tolerances {

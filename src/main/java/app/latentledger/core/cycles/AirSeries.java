@@ -114,7 +114,7 @@ public final class AirSeries {
      * Zeroes the probe pair: takes {@code offsetRhPct} off every supply RH and recomputes the supply
      * humidity ratio and enthalpy (eqs. 24, 20, 32). The offset is removed in RH because capacitive
      * probes err in RH: a constant W offset found over a dry coil at room temperature would
-     * over-correct the cold on-cycle supply about twofold. (latent-degradation.md §5.1 suggests W;
+     * over-correct the cold on-cycle supply about twofold. (docs/methods.md §9.9 suggests W;
      * this is the reasoned departure.)
      */
     void correctSupplyRh(double offsetRhPct, double pressurePa) {

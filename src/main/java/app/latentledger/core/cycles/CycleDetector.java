@@ -18,13 +18,13 @@ import java.util.List;
  * split at several kelvin after the compressor stops (evaporative cooling). Each edge is dated back
  * to where the supply began to move (within {@link Thresholds#EDGE_TOLERANCE} of its high or low),
  * and runs or rests shorter than {@link Thresholds#MIN_RUN_TIME} are merged away. Signatures after
- * latent-degradation.md §5.2 (common practice).
+ * docs/methods.md §9.9 (common practice).
  *
  * <p>Blower in the rest: from the {@code fan} column when logged; otherwise judged from 90 s to
  * 10 min into the rest: with the blower on, air passes the stopped coil and any evaporation is
  * adiabatic, so supply enthalpy stays within {@link Thresholds#BLOWER_ENTHALPY_BAND} of the return
  * (supply ≈ return dry bulb on a dry coil, cooler and more humid on a wet one); with the blower off
- * the still supply probe stays colder and drier than that, drifting slowly (note §5.3).
+ * the still supply probe stays colder and drier than that, drifting slowly (docs/methods.md §9.9).
  *
  * <p>A sample interval over {@link Thresholds#GAP_FACTOR} × the log's median breaks the record: a
  * run across it is dropped (its length is unknown) and a rest ends at it. A run still going when

@@ -2,6 +2,7 @@ package app.latentledger.core.cycles;
 
 import app.latentledger.core.findings.Evidence;
 import app.latentledger.core.findings.Finding;
+import app.latentledger.core.findings.FindingCode;
 import app.latentledger.core.findings.Severity;
 import app.latentledger.core.findings.Thresholds;
 import app.latentledger.core.findings.ThresholdSettings;
@@ -49,7 +50,7 @@ final class CycleFindings {
         if (!often && !brief) {
             return false;
         }
-        out.add(new Finding("short-cycling", Severity.CHECK,
+        out.add(new Finding(FindingCode.SHORT_CYCLING, Severity.CHECK,
                 String.format(Locale.ROOT, "The air conditioner starts and stops too often: %.1f starts an hour,"
                         + " with runs of about %.0f minutes.", r.cyclesPerHour(), r.medianOnS() / 60.0),
                 String.format(Locale.ROOT, "%.2f cycles/h (limit %.1f) and median on-time %.1f min (limit %.1f),"
@@ -76,7 +77,7 @@ final class CycleFindings {
             return;
         }
         String which = Double.isNaN(measured) ? "predicted" : "measured";
-        out.add(new Finding("short-cycling-limits-latent", Severity.FIX,
+        out.add(new Finding(FindingCode.SHORT_CYCLING_LIMITS_LATENT, Severity.FIX,
                 String.format(Locale.ROOT, "The runs are too short to dry the house: the system removes about"
                         + " %.0f %% of the moisture it removes when it runs steadily.", 100 * judged),
                 String.format(Locale.ROOT, "latent fraction %s %.2f (measured %s, predicted %s by Henderson &"
@@ -104,7 +105,7 @@ final class CycleFindings {
         double[] blower = r.cycles().stream().mapToDouble(c -> c.cycle().blowerOnSeconds())
                 .filter(v -> v > 0).sorted().toArray();
         double medianBlower = blower.length == 0 ? Double.NaN : blower[blower.length / 2];
-        out.add(new Finding("off-cycle-reevaporation", Severity.FIX,
+        out.add(new Finding(FindingCode.OFF_CYCLE_REEVAPORATION, Severity.FIX,
                 String.format(Locale.ROOT, "After the compressor stops, the blower keeps running and blows water"
                         + " from the wet coil back into the house: about %.0f %% of what it removed.", 100 * share),
                 // the masses themselves go in the evidence, which every display shows in the tech's units
@@ -130,11 +131,11 @@ final class CycleFindings {
         }
         double floor = settings.valueSi(Thresholds.MOISTURE_REMOVAL_FLOOR);
         double longest = r.cycles().stream().mapToDouble(c -> c.cycle().onSeconds()).max().orElse(0);
-        out.add(new Finding("coil-never-wet", Severity.CHECK,
+        out.add(new Finding(FindingCode.COIL_NEVER_WET, Severity.CHECK,
                 "During every run the air leaving the coil was no drier than the air entering it, so the system"
                         + " removed no moisture.",
                 String.format(Locale.ROOT, "no run kept W_return − W_supply above %.4f kg/kg for two samples;"
-                                + " %d runs, longest %.1f min; floor common practice (latent-degradation.md §5.4)",
+                                + " %d runs, longest %.1f min; floor common practice (docs/methods.md §9.9)",
                         floor, r.cycles().size(), longest / 60.0),
                 List.of(Evidence.of("longestOnTime", "longest compressor on-time", Quantity.DURATION_MINUTES, longest),
                         Evidence.of("moistureRemovalFloor", "humidity-ratio drop counted as removal",
@@ -151,7 +152,7 @@ final class CycleFindings {
         if (!(Math.abs(offset) > tol)) {
             return;
         }
-        out.add(new Finding("sensor-offset", Severity.CHECK,
+        out.add(new Finding(FindingCode.SENSOR_OFFSET, Severity.CHECK,
                 String.format(Locale.ROOT, "The two humidity probes disagree by %.1f %% RH when they should read the"
                         + " same; the moisture numbers were corrected for it but are less certain.", Math.abs(offset)),
                 String.format(Locale.ROOT, "median supply − return RH %+.1f %% RH over %d samples with the blower on,"

@@ -5,8 +5,8 @@ package app.latentledger.core.cycles;
  * Predict the Latent Capacity of Air Conditioners and Heat Pumps at Part-Load Conditions with
  * Constant Fan Operation", ASHRAE Transactions 102(1): 266–274, in its linear-decay form (their
  * eq. 8b) as documented in the EnergyPlus Engineering Reference ("Coils → Single-Speed Electric DX
- * Air Cooling Coil → Latent Capacity Degradation"). Equation labels E1–E8 follow the team note
- * {@code latent-degradation.md} §2.2.
+ * Air Cooling Coil → Latent Capacity Degradation"). Equation labels E1–E8 are those of
+ * docs/methods.md §3.6.
  *
  * <p>Times are in seconds; moisture amounts are in "seconds of steady-state latent capacity"
  * (moisture ÷ steady latent rate), which is how the paper and EnergyPlus write them. Valid for
@@ -133,7 +133,7 @@ public record LatentDegradationModel(double twetS, double gamma, double tauS, do
 
     /**
      * What a log measures: net moisture of the cycle ÷ (steady latent rate × on-time),
-     * max(0, gross(t_on) − E)/t_on. It also charges the start-up ramp (note §2.4 item 6), so a
+     * max(0, gross(t_on) − E)/t_on. It also charges the start-up ramp (docs/methods.md §3.6), so a
      * 5-min cycle with no evaporation scores 0.85, not 1.
      */
     public double netOverSteadyOnTime(double onS, double evapS) {

@@ -5,14 +5,14 @@ import java.util.List;
 
 /**
  * Fits t_wet and γ of {@link LatentDegradationModel} to blower-on rests that follow a long run
- * (latent-degradation.md §5.5 and §5.7, derived from Henderson & Rengarajan 1996's linear decay).
+ * (docs/methods.md §3.6, derived from Henderson & Rengarajan 1996's linear decay).
  *
  * <p>With the coil draining at the stop, the linear-decay law puts moisture back at the rate
  * (W_s − W_r)(s) = γ·ΔW_ss·(1 − γ·s/(2·t_wet)) until the coil is dry at s = 2·t_wet/γ. A straight
  * line A − B·s fitted by least squares from 30 s after the stop (the coil is still cold before that)
  * until the rate falls to 15 % of its start gives γ = A/ΔW_ss. When the rest outlasts the dry-out,
  * t_wet is the whole amount put back, ∫(W_s − W_r) ds / ΔW_ss (the coil's inventory in seconds of
- * steady removal; note §5.7); otherwise t_wet = A²/(2·B·ΔW_ss). Medians over all usable rests are
+ * steady removal; docs/methods.md §9.9); otherwise t_wet = A²/(2·B·ΔW_ss). Medians over all usable rests are
  * kept when they fall in the EnergyPlus input ranges (t_wet 0–3000 s, γ 0–5).
  */
 final class ModelFit {

@@ -9,7 +9,7 @@ import java.util.List;
 /**
  * Moisture removed and returned per cycle, from the humidity-ratio difference across the coil:
  * m = ∫ ṁ_da·(W_return − W_supply) dt with ṁ_da = V̇ / v_return (mass balance on the dry air,
- * ASHRAE Handbook—Fundamentals 2017 ch. 1 eq. 28 for v; latent-degradation.md §5.6). Integration
+ * ASHRAE Handbook—Fundamentals 2017 ch. 1 eq. 28 for v; docs/methods.md §9.9). Integration
  * is by the trapezoid rule inside each run or rest, with the last sample held to the period's end
  * (a logger sample stands for the interval it starts); intervals longer than the gap limit count
  * nothing.

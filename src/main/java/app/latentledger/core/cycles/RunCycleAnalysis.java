@@ -173,7 +173,7 @@ public final class RunCycleAnalysis {
 
     /**
      * Supply minus return RH where they should agree: blower on, compressor off for at least
-     * {@link Thresholds#SENSOR_CHECK_AFTER} (coil dry), dry bulbs within 1 K (note §5.1).
+     * {@link Thresholds#SENSOR_CHECK_AFTER} (coil dry), dry bulbs within 1 K (docs/methods.md §9.9).
      */
     private double[] sensorOffset(LogSeries log, AirSeries air, List<Cycle> cycles, double p) {
         if (!air.humidity) {

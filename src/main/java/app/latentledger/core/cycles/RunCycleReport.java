@@ -1,6 +1,7 @@
 package app.latentledger.core.cycles;
 
 import app.latentledger.core.findings.Finding;
+import app.latentledger.core.findings.FindingCode;
 
 import java.util.List;
 
@@ -46,7 +47,7 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
     }
 
     /** Whether a finding with this code is present. */
-    public boolean has(String code) {
-        return findings.stream().anyMatch(f -> f.code().equals(code));
+    public boolean has(FindingCode code) {
+        return findings.stream().anyMatch(f -> f.code() == code);
     }
 }

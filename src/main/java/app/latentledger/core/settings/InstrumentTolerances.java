@@ -17,7 +17,7 @@ import app.latentledger.core.coil.Tolerances;
  */
 public record InstrumentTolerances(double dryBulbK, double relativeHumidityPct, double wetBulbK, double dewPointK,
                                    double coilK, double airflowFraction, double condensateFraction) {
-    /** The defaults of {@link Tolerances} (domain-practice.md §1.4; Title 24 RA3.7.2.2 for airflow). */
+    /** The defaults of {@link Tolerances} (docs/methods.md §9.1; Title 24 RA3.7.2.2 for airflow). */
     public static final InstrumentTolerances DEFAULTS = new InstrumentTolerances(Tolerances.DRY_BULB_K,
             Tolerances.RELATIVE_HUMIDITY_PCT, Tolerances.WET_BULB_K, Tolerances.DEW_POINT_K, Tolerances.COIL_K,
             Tolerances.AIRFLOW_FRACTION, Tolerances.CONDENSATE_FRACTION);

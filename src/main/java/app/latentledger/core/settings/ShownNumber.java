@@ -1,6 +1,6 @@
 package app.latentledger.core.settings;
 
-import java.util.Locale;
+import app.latentledger.core.units.DisplayNumber;
 
 /** A setting's number as a tech reads and types it: at most four decimals, no trailing zeros. */
 public final class ShownNumber {
@@ -16,11 +16,8 @@ public final class ShownNumber {
         return DECIMAL.matcher(t).matches() ? Double.valueOf(t) : null;
     }
 
+    /** The number as typed back: {@link DisplayNumber#exact}. */
     public static String text(double shown) {
-        if (Double.isNaN(shown)) {
-            return "—";
-        }
-        String s = String.format(Locale.ROOT, "%.4f", shown).replaceAll("0+$", "").replaceAll("\\.$", "");
-        return "-0".equals(s) ? "0" : s;
+        return DisplayNumber.exact(shown);
     }
 }

@@ -1,19 +1,17 @@
 package app.latentledger.ui.compare;
 
+import app.latentledger.chart.psychro.PsychroChartData;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.records.ReadingSet;
-import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.UnitSystem;
-import app.latentledger.core.visit.ReadingSetCheck;
-import app.latentledger.ui.AppSession;
-import app.latentledger.ui.entry.DraftRecords;
-import app.latentledger.ui.results.Shown;
-import app.latentledger.ui.results.VisitResults;
-import app.latentledger.chart.psychro.PsychroChartData;
-import app.latentledger.core.psychro.StandardAtmosphere;
 import app.latentledger.ui.chart.CoilCharts;
 import app.latentledger.ui.chart.PsychroChartViewModel;
 import app.latentledger.ui.export.ReportViewModel;
+import app.latentledger.ui.present.Shown;
+import app.latentledger.ui.present.VisitResults;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.CurrentCheck;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
@@ -26,6 +24,7 @@ import javafx.collections.ObservableList;
 import java.time.OffsetDateTime;
 import java.time.format.DateTimeFormatter;
 import java.util.List;
+import java.util.Objects;
 
 /**
  * The compare screen: an earlier reading set of the same system beside the one being worked on,
@@ -53,8 +52,8 @@ public final class CompareViewModel {
     public CompareViewModel(AppSession session, ReportViewModel reports) {
         this.session = session;
         this.reports = reports;
-        session.draftProperty().addListener((o, a, b) -> refresh());
-        session.settingsProperty().addListener((o, a, b) -> recompute());
+        // the current check changes with the draft, the system and the settings: one listener for all three
+        session.currentCheckProperty().addListener((o, a, b) -> refresh());
         chosen.addListener((o, a, b) -> recompute());
         refresh();
     }
@@ -122,7 +121,8 @@ public final class CompareViewModel {
         ReadingSet pick = keep != null && others.stream().anyMatch(r -> r.id().equals(keep.id()))
                 ? others.stream().filter(r -> r.id().equals(keep.id())).findFirst().get()
                 : latestBeforeCurrent(others);
-        if (pick == chosen.get()) {
+        // an equal record read again raises no change event: work the rows out here then
+        if (Objects.equals(pick, chosen.get())) {
             recompute();
         } else {
             chosen.set(pick);
@@ -145,12 +145,11 @@ public final class CompareViewModel {
         rows.clear();
         verdicts.set("");
         ReadingSet before = chosen.get();
-        CoilResult a = before == null ? null : run(before);
-        CoilResult b = current();
-        if (session.site() != null) {
-            double pressurePa = b != null ? b.readings().pressurePa()
-                    : StandardAtmosphere.pressurePa(session.site().elevationM());
-            chartData.set(CoilCharts.of(session.units(), pressurePa, "Before and after", a, b));
+        CurrentCheck now = session.currentCheck();
+        CoilResult a = before == null ? null : session.checkOf(before);
+        CoilResult b = now.coil();
+        if (now.draft() != null) {
+            chartData.set(CoilCharts.of(now.units(), now.pressurePa(), "Before and after", a, b));
         }
         if (before == null) {
             status.set("No other reading set of this system to compare with yet.");
@@ -158,7 +157,7 @@ public final class CompareViewModel {
         }
         if (a == null || b == null) {
             status.set(b == null ? "The current readings are not complete yet: "
-                    + String.join(", ", VisitResults.waitingFor(session.draft())) + "."
+                    + String.join(", ", now.waitingFor()) + "."
                     : "The earlier reading set has no airflow, so it cannot be worked out.");
             return;
         }
@@ -166,38 +165,15 @@ public final class CompareViewModel {
         for (CompareFigure f : CompareFigure.values()) {
             double x = f.read.applyAsDouble(a);
             double y = f.read.applyAsDouble(b);
+            // printed as the report prints the same figures (DisplayNumber: decimals per quantity, signed change)
+            int decimals = DisplayNumber.decimals(f.quantity, u);
             String change = Double.isFinite(x) && Double.isFinite(y)
-                    ? signed(f.quantity.toDisplay(u, y) - f.quantity.toDisplay(u, x), f.decimals) : Shown.NONE;
-            rows.add(new CompareRow(f.key(), f.label, Shown.of(f.quantity, u, x, f.decimals),
-                    Shown.of(f.quantity, u, y, f.decimals), change, unit(f.quantity, u)));
+                    ? DisplayNumber.signed(f.quantity.toDisplay(u, y) - f.quantity.toDisplay(u, x), decimals) : Shown.NONE;
+            rows.add(new CompareRow(f.key(), f.label, Shown.of(f.quantity, u, x), Shown.of(f.quantity, u, y), change,
+                    f.quantity.symbol(u)));
         }
         verdicts.set(VisitResults.headline(a.verdict()) + "  →  " + VisitResults.headline(b.verdict()));
         status.set("Before: " + describe(before) + ".  After: the reading set on this visit.");
     }
 
-    private static String unit(Quantity q, UnitSystem u) {
-        return q.symbol(u);
-    }
-
-    private static String signed(double v, int decimals) {
-        String s = Shown.number(v, decimals);
-        return s.startsWith("-") || s.equals(Shown.NONE) || Shown.number(0, decimals).equals(s) ? s : "+" + s;
-    }
-
-    private CoilResult current() {
-        ReadingSet rs = DraftRecords.complete(session.draft())
-                ? DraftRecords.toReadingSet(session.draft(), OffsetDateTime.now()) : null;
-        return rs == null ? null : run(rs);
-    }
-
-    private CoilResult run(ReadingSet rs) {
-        try {
-            if (!ReadingSetCheck.missing(rs).isEmpty()) {
-                return null;
-            }
-            return ReadingSetCheck.run(rs, session.system(), session.site(), session.thresholds(), session.units());
-        } catch (IllegalArgumentException e) {
-            return null;
-        }
-    }
 }

@@ -5,14 +5,15 @@ import app.latentledger.core.coil.CoilReadings;
 import app.latentledger.core.coil.HumidityKind;
 import app.latentledger.core.psychro.HandbookEdition;
 import app.latentledger.core.psychro.InputLimits;
-import app.latentledger.core.psychro.StandardAtmosphere;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.Site;
 import app.latentledger.core.units.Quantity;
-import app.latentledger.core.visit.ReadingSetCheck;
+import app.latentledger.ui.session.CurrentCheck;
+import app.latentledger.ui.session.Draft;
+import app.latentledger.ui.session.Slot;
+import app.latentledger.ui.session.SlotValue;
 
-import java.time.OffsetDateTime;
 
 /**
  * Whether a value may go into a box. Nothing here is new physics or a new limit: each check is a
@@ -25,25 +26,21 @@ public final class EntryRules {
 
     /**
      * Refuses {@code candidate} (the draft with the new value in {@code slot}) when the value is out
-     * of range, makes its air stream impossible (a wet bulb above the dry bulb), or makes a reading
-     * set the record or the coil check refuses.
+     * of its box's range or makes its air stream impossible (a wet bulb above the dry bulb). Whether
+     * the whole set makes a record and a coil check is the session's question, asked once when it
+     * keeps the candidate ({@code AppSession.keep}).
      *
      * @throws app.latentledger.core.InvalidInputException naming field, value and accepted range
-     * @throws app.latentledger.core.records.InvalidRecordException when the record refuses it
      */
-    public static void check(Draft candidate, Slot slot, Site site, HvacSystem system) {
+    public static void check(Draft candidate, Slot slot, Site site) {
         SlotValue v = candidate.value(slot);
         String choice = candidate.choice(slot);
         String field = slot.title(choice).toLowerCase(java.util.Locale.ROOT).replace("rh", "RH");
         range(field, slot, choice, v);
-        double pressurePa = pressure(candidate, site);
+        double pressurePa = CurrentCheck.pressurePa(candidate, site);
         stream(candidate, Slot.RETURN_DRY_BULB, Slot.RETURN_HUMIDITY, "return", pressurePa);
         stream(candidate, Slot.SUPPLY_DRY_BULB, Slot.SUPPLY_HUMIDITY, "supply", pressurePa);
         stream(candidate, Slot.OUTDOOR_DRY_BULB, Slot.OUTDOOR_HUMIDITY, "outdoor", pressurePa);
-        ReadingSet rs = DraftRecords.toReadingSet(candidate, OffsetDateTime.now());
-        if (rs != null && ReadingSetCheck.missing(rs).isEmpty()) {
-            ReadingSetCheck.inputs(rs, system, site);
-        }
     }
 
     /** Refuses a nameplate size outside what a system record and the coil check accept. */
@@ -51,12 +48,6 @@ public final class EntryRules {
         InputLimits.check("nominal size", Quantity.POWER_LARGE, capacityW,
                 Math.max(HvacSystem.MIN_CAPACITY_W, CoilReadings.MIN_NOMINAL_W),
                 Math.min(HvacSystem.MAX_CAPACITY_W, CoilReadings.MAX_NOMINAL_W), null);
-    }
-
-    /** The site pressure the draft is worked out at (measured, else the standard atmosphere). */
-    public static double pressure(Draft d, Site site) {
-        ReadingSet b = d.base();
-        return b != null ? ReadingSetCheck.pressurePa(b, site) : StandardAtmosphere.pressurePa(site.elevationM());
     }
 
     private static void range(String field, Slot slot, String choice, SlotValue v) {

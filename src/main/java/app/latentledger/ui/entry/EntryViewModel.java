@@ -4,10 +4,14 @@ import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.InvalidRecordException;
+import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
-import app.latentledger.ui.AppSession;
-import app.latentledger.ui.results.Shown;
+import app.latentledger.ui.present.Shown;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Draft;
+import app.latentledger.ui.session.Slot;
+import app.latentledger.ui.session.SlotValue;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
 import javafx.beans.property.BooleanProperty;
@@ -296,7 +300,7 @@ public final class EntryViewModel {
     private boolean tryKeep(Draft candidate, Slot s) {
         try {
             if (candidate.has(s)) {
-                EntryRules.check(candidate, s, session.site(), session.system());
+                EntryRules.check(candidate, s, session.site());
             }
             session.keep(candidate);
             refused.set(false);
@@ -317,15 +321,15 @@ public final class EntryViewModel {
     private String shownValue(Slot s) {
         if (s == Slot.NOMINAL_TONS) {
             HvacSystem sys = session.system();
-            return sys == null ? Shown.NONE : Shown.of(Quantity.POWER_LARGE, units(), sys.nominalCapacityW(), 1);
+            return sys == null ? Shown.NONE : Shown.of(Quantity.POWER_LARGE, units(), sys.nominalCapacityW());
         }
         Draft d = session.draft();
         SlotValue v = d == null ? null : d.value(s);
         if (v == null) {
             return Shown.NONE;
         }
-        int decimals = s == Slot.AIRFLOW || s == Slot.CONDENSATE_VOLUME ? 0 : 1;
-        return Shown.number(s.toDisplay(units(), d.choice(s), v.valueSi()), decimals);
+        String c = d.choice(s);
+        return Shown.number(s.toDisplay(units(), c, v.valueSi()), DisplayNumber.decimals(s.quantity(c), s.unitsFor(units())));
     }
 
     private String shownTolerance(Slot s) {
@@ -335,7 +339,7 @@ public final class EntryViewModel {
             return "";
         }
         String c = d.choice(s);
-        int decimals = s == Slot.CONDENSATE_VOLUME ? 0 : 1;
+        int decimals = DisplayNumber.decimals(s.toleranceQuantity(c), s.unitsFor(units()));
         return "± " + Shown.number(s.toleranceToDisplay(units(), c, v.toleranceSi()), decimals) + " "
                 + s.toleranceSymbol(units(), c);
     }

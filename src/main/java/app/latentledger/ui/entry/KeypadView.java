@@ -1,6 +1,7 @@
 package app.latentledger.ui.entry;
 
 import app.latentledger.ui.look.Ui;
+import app.latentledger.ui.session.Slot;
 import javafx.beans.binding.Bindings;
 import javafx.geometry.Pos;
 import javafx.scene.control.Button;

@@ -6,6 +6,7 @@ import app.latentledger.ui.look.Reflowing;
 import app.latentledger.ui.look.Ui;
 import app.latentledger.ui.results.ResultsViewModel;
 import app.latentledger.ui.results.VerdictBanner;
+import app.latentledger.ui.session.Slot;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.control.Label;

@@ -1,5 +1,6 @@
 package app.latentledger.ui.entry;
 
+import app.latentledger.ui.session.Slot;
 import javafx.beans.binding.Bindings;
 import javafx.css.PseudoClass;
 import javafx.scene.control.Button;

@@ -1,7 +1,7 @@
 package app.latentledger.ui.export;
 
 import app.latentledger.bundle.Bundles;
-import app.latentledger.ui.AppSession;
+import app.latentledger.ui.session.AppSession;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 

@@ -4,13 +4,14 @@ import app.latentledger.core.settings.PaperSize;
 import app.latentledger.report.ReportRefusedException;
 import app.latentledger.report.VisitDataExport;
 import app.latentledger.report.VisitReport;
-import app.latentledger.ui.AppSession;
-import app.latentledger.ui.Background;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Background;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
@@ -24,6 +25,8 @@ import java.util.concurrent.Executor;
  * and units from the settings. The status names the file written, or why nothing was.
  */
 public final class ReportViewModel {
+    private static final System.Logger LOG = System.getLogger(ReportViewModel.class.getName());
+
     private final AppSession session;
     private final Executor work;
     private final Executor fx;
@@ -103,6 +106,23 @@ public final class ReportViewModel {
                 + visitId.substring(0, Math.min(8, visitId.length())) + "." + extension);
     }
 
+    /**
+     * What the tech reads when no file was written: the report's own refusal as it is; anything
+     * else as a plain sentence, with the technical details kept in the app's log, never on screen.
+     */
+    static String failure(String what, Path file, Path folder, Exception e) {
+        String start = "No " + what + " written (" + file.getFileName() + "): ";
+        if (e instanceof ReportRefusedException) {
+            return start + e.getMessage();
+        }
+        LOG.log(System.Logger.Level.ERROR, "writing the " + what + " " + file + " failed", e);
+        if (e instanceof IOException) {
+            return start + "the folder " + folder + " could not be written. Check the free space and try again.";
+        }
+        return start + "something went wrong while making it. Nothing saved was changed; the details are in"
+                + " the app's log.";
+    }
+
     private void run(String what, Path file, Callable<Path> job) {
         if (busy.get()) {
             return;
@@ -118,11 +138,8 @@ public final class ReportViewModel {
                 Path written = job.call();
                 message = "Saved the " + what + ": " + written.getFileName() + " in " + folder();
                 bad = false;
-            } catch (ReportRefusedException e) {
-                message = "No " + what + " written (" + file.getFileName() + "): " + e.getMessage();
-                bad = true;
             } catch (Exception e) {
-                message = "No " + what + " written (" + file.getFileName() + "): " + e;
+                message = failure(what, file, folder(), e);
                 bad = true;
             }
             String shown = message;

@@ -9,8 +9,8 @@ import app.latentledger.core.records.SystemType;
 import app.latentledger.core.records.Visit;
 import app.latentledger.core.records.VisitPurpose;
 import app.latentledger.core.units.Quantity;
-import app.latentledger.ui.AppSession;
-import app.latentledger.ui.Screen;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Screen;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
@@ -66,7 +66,7 @@ public final class JobViewModel {
 
     private void showDefaultElevation() {
         var u = session.units();
-        newSiteElevationFt.set(app.latentledger.ui.results.Shown.number(
+        newSiteElevationFt.set(app.latentledger.ui.present.Shown.number(
                 Quantity.ELEVATION.toDisplay(u, session.settings().defaultElevationM()), 0).replace(",", ""));
         elevationCaption.set("Elevation, " + Quantity.ELEVATION.symbol(u));
     }
@@ -126,7 +126,7 @@ public final class JobViewModel {
 
     /** A system as its list shows it: label, nominal size, staging. */
     public String describe(HvacSystem s) {
-        return s.label() + "\n" + app.latentledger.ui.results.Shown.of(Quantity.POWER_LARGE, session.units(),
+        return s.label() + "\n" + app.latentledger.ui.present.Shown.of(Quantity.POWER_LARGE, session.units(),
                 s.nominalCapacityW(), 1) + " " + Quantity.POWER_LARGE.symbol(session.units()) + " · " + s.type().key();
     }
 

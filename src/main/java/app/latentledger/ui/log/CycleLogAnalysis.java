@@ -16,8 +16,11 @@ import app.latentledger.io.logcsv.ImportReport;
 import app.latentledger.io.logcsv.LogCsvImporter;
 import app.latentledger.io.logcsv.LogImport;
 import app.latentledger.io.logcsv.LogRefusedException;
-import app.latentledger.ui.results.Row;
-import app.latentledger.ui.results.Shown;
+import app.latentledger.ui.present.Row;
+import app.latentledger.ui.present.Shown;
+import app.latentledger.ui.session.LogAnalysis;
+import app.latentledger.ui.session.LogAnalysisService;
+import app.latentledger.ui.session.LogRequest;
 
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;

@@ -10,13 +10,16 @@ import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.Visit;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
-import app.latentledger.ui.AppSession;
-import app.latentledger.ui.Background;
 import app.latentledger.ui.chart.CoilCharts;
 import app.latentledger.ui.chart.TimelineViewModel;
-import app.latentledger.ui.results.FindingCard;
-import app.latentledger.ui.results.Row;
-import app.latentledger.ui.results.VisitResults;
+import app.latentledger.ui.present.FindingCard;
+import app.latentledger.ui.present.Row;
+import app.latentledger.ui.present.VisitResults;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Background;
+import app.latentledger.ui.session.LogAnalysis;
+import app.latentledger.ui.session.LogAnalysisService;
+import app.latentledger.ui.session.LogRequest;
 import javafx.beans.binding.Bindings;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
@@ -47,8 +50,7 @@ import java.util.concurrent.Executor;
  * already kept shows that log.
  */
 public final class LogImportViewModel {
-    public static final String NOT_WIRED_MESSAGE = "Log analysis arrives in a later build: this build can keep"
-            + " readings but cannot read a logger file yet.";
+    public static final String NOT_WIRED_MESSAGE = LogAnalysisService.NOT_WIRED_MESSAGE;
 
     private final AppSession session;
     private final Executor work;

@@ -3,9 +3,9 @@ package app.latentledger.ui.render;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.io.logcsv.ImportProgress;
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.AppSession;
 import app.latentledger.ui.log.CycleLogAnalysis;
-import app.latentledger.ui.log.LogRequest;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.LogRequest;
 
 import java.io.IOException;
 import java.io.InputStream;

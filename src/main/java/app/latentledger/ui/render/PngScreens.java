@@ -1,18 +1,17 @@
 package app.latentledger.ui.render;
 
-import app.latentledger.cli.ScreenRendering;
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.AppSession;
 import app.latentledger.ui.AppShell;
-import app.latentledger.ui.Background;
-import app.latentledger.ui.Screen;
-import app.latentledger.ui.log.LogAnalysisService;
+import app.latentledger.ui.log.CycleLogAnalysis;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Background;
+import app.latentledger.ui.session.LogAnalysisService;
+import app.latentledger.ui.session.Screen;
 import javafx.application.Platform;
 import javafx.embed.swing.SwingFXUtils;
 import javafx.scene.Scene;
 import javafx.scene.image.WritableImage;
 
-import javax.imageio.ImageIO;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
@@ -22,6 +21,7 @@ import java.util.List;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
+import javax.imageio.ImageIO;
 
 /**
  * The {@code screens} command's renderer: each main screen in a scene of the tablet's size,
@@ -31,12 +31,17 @@ import java.util.concurrent.TimeUnit;
  * run on the calling thread so each screen is complete when it is drawn. Also draws the results
  * screen in the dark theme.
  */
-public final class PngScreens implements ScreenRendering {
+public final class PngScreens {
     /** Landscape and portrait tablet sizes the layouts are designed for. */
     static final int LONG_SIDE = 1280;
     static final int SHORT_SIDE = 800;
 
-    @Override
+    /**
+     * Renders every main screen of the app on the ledger in {@code dataFolder} (seeded with the
+     * demo when empty) to PNG files in {@code outDir}, landscape and portrait.
+     *
+     * @return the files written
+     */
     public List<Path> render(Path dataFolder, Path outDir) throws Exception {
         Files.createDirectories(outDir);
         boolean started = startToolkit();
@@ -60,7 +65,7 @@ public final class PngScreens implements ScreenRendering {
     /** Renders on the FX thread; usable from a test that already runs the toolkit. */
     public static List<Path> renderAll(Path dataFolder, Path outDir) {
         List<Path> files = new ArrayList<>();
-        try (AppSession session = AppSession.open(dataFolder, LogAnalysisService.find())) {
+        try (AppSession session = AppSession.open(dataFolder, LogAnalysisService.find(new CycleLogAnalysis()))) {
             try {
                 DemoLog.seed(session);
             } catch (Exception e) {

@@ -1,6 +1,7 @@
 package app.latentledger.ui.results;
 
 import app.latentledger.ui.look.Ui;
+import app.latentledger.ui.present.Row;
 import javafx.scene.control.Label;
 import javafx.scene.layout.ColumnConstraints;
 import javafx.scene.layout.GridPane;

@@ -3,6 +3,8 @@ package app.latentledger.ui.results;
 import app.latentledger.core.findings.Cautions;
 import app.latentledger.ui.look.Icons;
 import app.latentledger.ui.look.Ui;
+import app.latentledger.ui.present.FindingCard;
+import app.latentledger.ui.present.ResultSheet;
 import javafx.beans.value.ObservableValue;
 import javafx.collections.ObservableList;
 import javafx.geometry.Pos;

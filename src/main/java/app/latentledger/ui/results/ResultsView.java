@@ -2,6 +2,7 @@ package app.latentledger.ui.results;
 
 import app.latentledger.ui.look.Reflowing;
 import app.latentledger.ui.look.Ui;
+import app.latentledger.ui.present.ResultSheet;
 import javafx.scene.control.Label;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;

@@ -4,19 +4,20 @@ import app.latentledger.chart.psychro.PsychroChartData;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.visit.ReadingSetCheck;
-import app.latentledger.ui.AppSession;
 import app.latentledger.ui.chart.CoilCharts;
 import app.latentledger.ui.chart.PsychroChartViewModel;
-import app.latentledger.ui.entry.EntryRules;
-import app.latentledger.ui.entry.Draft;
+import app.latentledger.ui.present.ResultSheet;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.CurrentCheck;
+import app.latentledger.ui.session.Draft;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 
 import java.util.Locale;
 
 /**
- * The results screen: the sheet of the draft being entered, recomputed whenever an accepted value
- * changes the draft, the system (its nominal size) or the settings (units, thresholds), and the
+ * The results screen: the sheet of the session's current check (worked out once by the session
+ * whenever an accepted value changes the draft, the system or the settings), and the
  * psychrometric chart of the same coil check. When the visit has a reading set labelled "before"
  * and the set in hand is another one, the chart draws the pair together.
  */
@@ -27,17 +28,12 @@ public final class ResultsViewModel {
     /** Built on first use: after the first frame, so the chart never delays it. */
     private PsychroChartViewModel chart;
     private String beforeKey;
-    private CoilResult before;
+    private ReadingSet beforeSet;
 
     public ResultsViewModel(AppSession session) {
         this.session = session;
-        session.draftProperty().addListener((o, a, b) -> recompute());
-        session.systemProperty().addListener((o, a, b) -> recompute());
-        session.settingsProperty().addListener((o, a, b) -> {
-            beforeKey = null;
-            recompute();
-        });
-        recompute();
+        session.currentCheckProperty().addListener((o, a, b) -> show(b));
+        show(session.currentCheck());
     }
 
     public ReadOnlyObjectProperty<ResultSheet> sheetProperty() {
@@ -64,46 +60,37 @@ public final class ResultsViewModel {
         return chart;
     }
 
-    private void recompute() {
-        if (session.draft() == null || session.system() == null) {
+    private void show(CurrentCheck c) {
+        if (c.draft() == null) {
             return;
         }
-        VisitResults.Outcome o = VisitResults.work(session.draft(), session.site(), session.system(),
-                session.thresholds(), session.units());
-        sheet.set(o.sheet());
-        CoilResult pairedWith = before(session.draft());
+        sheet.set(c.sheet());
+        CoilResult pairedWith = before(c.draft());
         // short: the header already names the site, and the chart's title shares its width with the plot
-        String title = pairedWith != null && o.coil() != null ? "Before and after" : "This reading set";
+        String title = pairedWith != null && c.coil() != null ? "Before and after" : "This reading set";
         // drawn at the pressure the draft was worked out at (a measured station pressure if entered)
-        chartData.set(CoilCharts.of(session.units(), EntryRules.pressure(session.draft(), session.site()), title,
-                pairedWith, o.coil()));
+        chartData.set(CoilCharts.of(c.units(), c.pressurePa(), title, pairedWith, c.coil()));
     }
 
     /**
-     * The coil check of the visit's "before" set when the draft is another set of the same visit;
-     * worked out again only when the visit or the set in hand changes, not on every keypad entry.
+     * The coil check of the visit's "before" set when the draft is another set of the same visit.
+     * The set is looked up again only when the visit or the set in hand changes, not on every keypad
+     * entry; its check comes from the session, which keeps it while system and settings stay.
      */
     private CoilResult before(Draft d) {
         String key = d.visitId() + "/" + d.readingSetId();
-        if (key.equals(beforeKey)) {
-            return before;
-        }
-        beforeKey = key;
-        before = null;
-        if (d.base() != null && "before".equals(d.base().label().toLowerCase(Locale.ROOT))) {
-            return null;
-        }
-        for (ReadingSet rs : session.ledger().readings().forVisit(d.visitId())) {
-            if (!rs.id().equals(d.readingSetId()) && "before".equals(rs.label().toLowerCase(Locale.ROOT))
-                    && ReadingSetCheck.missing(rs).isEmpty()) {
-                try {
-                    before = ReadingSetCheck.run(rs, session.system(), session.site(), session.thresholds(),
-                            session.units());
-                } catch (IllegalArgumentException e) {
-                    before = null;
+        if (!key.equals(beforeKey)) {
+            beforeKey = key;
+            beforeSet = null;
+            if (d.base() == null || !"before".equals(d.base().label().toLowerCase(Locale.ROOT))) {
+                for (ReadingSet rs : session.ledger().readings().forVisit(d.visitId())) {
+                    if (!rs.id().equals(d.readingSetId()) && "before".equals(rs.label().toLowerCase(Locale.ROOT))
+                            && ReadingSetCheck.missing(rs).isEmpty()) {
+                        beforeSet = rs;
+                    }
                 }
             }
         }
-        return before;
+        return beforeSet == null ? null : session.checkOf(beforeSet);
     }
 }

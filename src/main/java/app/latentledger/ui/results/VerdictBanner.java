@@ -2,6 +2,7 @@ package app.latentledger.ui.results;
 
 import app.latentledger.ui.look.Icons;
 import app.latentledger.ui.look.Ui;
+import app.latentledger.ui.present.ResultSheet;
 import javafx.beans.value.ObservableValue;
 import javafx.geometry.Pos;
 import javafx.scene.control.Label;

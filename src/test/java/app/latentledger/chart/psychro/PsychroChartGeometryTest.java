@@ -150,7 +150,7 @@ class PsychroChartGeometryTest {
     @Test
     @DisplayName("a before/after pair draws both processes, their ADPs, coil marks, dew points and a legend")
     void beforeAfterPairIsDrawnWithLegend() {
-        PsychroChartData data = app.latentledger.chart.demo.SaltreedDemo.beforeAfter(UnitSystem.IP);
+        PsychroChartData data = app.latentledger.fielddata.SaltreedDemo.beforeAfter(UnitSystem.IP);
         ChartGeometry g = new ChartGeometry(data);
         for (int i = 0; i < 2; i++) {
             assertEquals(1, g.rec.ops(RecordingPainter.Line.class, "process:" + i).size());
@@ -176,7 +176,7 @@ class PsychroChartGeometryTest {
     @Test
     @DisplayName("the ADP mark sits on the saturation curve at the overlay's ADP")
     void adpMarkSitsOnSaturation() {
-        PsychroChartData data = app.latentledger.chart.demo.SaltreedDemo.single(UnitSystem.IP);
+        PsychroChartData data = app.latentledger.fielddata.SaltreedDemo.single(UnitSystem.IP);
         ChartGeometry g = new ChartGeometry(data);
         RecordingPainter.Circle ring = g.rec.ops(RecordingPainter.Circle.class, "adp:0").get(0);
         double adp = data.overlays().get(0).adpC();
@@ -187,7 +187,7 @@ class PsychroChartGeometryTest {
     @Test
     @DisplayName("painted whole at print size, every label's anchor lies inside the chart area")
     void printSizedChartKeepsItsLabelsInside() {
-        PsychroChart chart = new PsychroChart(app.latentledger.chart.demo.SaltreedDemo.beforeAfter(UnitSystem.SI));
+        PsychroChart chart = new PsychroChart(app.latentledger.fielddata.SaltreedDemo.beforeAfter(UnitSystem.SI));
         RecordingPainter rec = new RecordingPainter();
         chart.paintWhole(rec, app.latentledger.chart.draw.Theme.LIGHT, 1000, 620);
         assertTrue(rec.balanced());

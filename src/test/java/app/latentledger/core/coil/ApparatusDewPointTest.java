@@ -18,7 +18,7 @@ class ApparatusDewPointTest {
     void recoversForwardModel(double adpF, double bf) {
         // Textbook coil model (bypass-factor definition, e.g. McQuiston, Parker & Spitler — from memory):
         // leaving = ADP + BF × (entering − ADP) on both t and W, ADP on the saturation curve (HoF eq. 23).
-        // Entering 75 °F / 50 % RH, as in domain-practice.md §4.3.
+        // Entering 75 °F / 50 % RH, as in docs/methods.md §9.6.
         double t1 = IpCase.c(75);
         double w1 = Psychrometrics.humidityRatio(0.5 * app.latentledger.core.psychro.SaturationPressure.pascals(t1), P);
         double ta = IpCase.c(adpF);
@@ -32,7 +32,7 @@ class ApparatusDewPointTest {
     }
 
     @Test
-    @DisplayName("domain-practice.md §4.3 table row: ADP 50 °F, BF 0.10 → leaving 52.5 °F / 54.5 gr")
+    @DisplayName("docs/methods.md §9.6 table row: ADP 50 °F, BF 0.10 → leaving 52.5 °F / 54.5 gr")
     void tableRow() {
         double t1 = IpCase.c(75);
         double w1 = 64.65 / 7000;

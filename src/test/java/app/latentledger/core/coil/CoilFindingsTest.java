@@ -1,6 +1,7 @@
 package app.latentledger.core.coil;
 
 import app.latentledger.core.findings.Finding;
+import app.latentledger.core.findings.FindingCode;
 import app.latentledger.core.findings.Threshold;
 import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.core.findings.Thresholds;
@@ -13,19 +14,34 @@ import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
 
-import static app.latentledger.core.coil.CoilFindings.*;
+import static app.latentledger.core.findings.FindingCode.*;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-/** Every finding fires on one realistic set of readings and stays quiet on another. */
+/**
+ * Every finding fires on one realistic set of readings and stays quiet on a near miss: readings just
+ * on the quiet side of the same threshold or uncertainty, so each quiet test can fail on its own.
+ */
 class CoilFindingsTest {
-    /** Case A (domain-practice.md §4.2) on a 3-ton nameplate with a 45 °F coil: a healthy coil. */
+    /** Case A (docs/methods.md §9.5) on a 3-ton nameplate with a 45 °F coil: a healthy coil. */
     private static IpCase healthy() {
         return IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).nominalTons(3).coilF(45);
     }
 
-    private static List<String> codes(CoilResult r) {
+    /**
+     * Dew point from dry bulb and RH by the Magnus form with Alduchov & Eskridge's coefficients
+     * (J. Appl. Meteor. 35 (1996) 601–609: a = 17.625, b = 243.04 °C; within about 0.4 °C from −40 to
+     * 50 °C): an estimate independent of the core's Hyland–Wexler solution, good enough to say on
+     * which side of a limit a near miss lies.
+     */
+    private static double magnusDewPointF(double dryBulbF, double rhPct) {
+        double t = (dryBulbF - 32) / 1.8;
+        double g = Math.log(rhPct / 100) + 17.625 * t / (243.04 + t);
+        return 243.04 * g / (17.625 - g) * 1.8 + 32;
+    }
+
+    private static List<FindingCode> codes(CoilResult r) {
         return r.findings().stream().map(Finding::code).collect(Collectors.toList());
     }
 
@@ -43,8 +59,8 @@ class CoilFindingsTest {
         for (Finding f : r.findings()) {
             assertFalse(f.message().isBlank());
             assertFalse(f.technical().isBlank());
-            assertFalse(f.evidence().isEmpty(), f.code());
-            assertFalse(f.nextChecks().isEmpty(), f.code());
+            assertFalse(f.evidence().isEmpty(), f.code().key());
+            assertFalse(f.nextChecks().isEmpty(), f.code().key());
         }
     }
 
@@ -58,8 +74,11 @@ class CoilFindingsTest {
         }
 
         @Test
-        void quiet() {
-            assertFalse(codes(healthy().run()).contains(COIL_ABOVE_DEW_POINT));
+        void quietWhenTheCoilIsAboveTheDewPointOnlyWithinItsUncertainty() {
+            // near miss: dp 55.1 °F (Magnus, below) and the probe at 56 °F ± 1 °F: 0.9 °F above, inside U
+            assertTrue(56 > magnusDewPointF(75, 50), "the probe does read above the dew point");
+            CoilResult r = IpCase.returnRh(75, 50).supplyRh(62, 78).cfm(1450).nominalTons(3).coilF(56).run();
+            assertFalse(codes(r).contains(COIL_ABOVE_DEW_POINT), codes(r).toString());
         }
     }
 
@@ -79,8 +98,12 @@ class CoilFindingsTest {
         }
 
         @Test
-        void quiet() {
-            assertFalse(codes(healthy().run()).contains(COIL_MARGIN_INCONCLUSIVE));
+        void quietJustOutsideTheUncertainty() {
+            // near miss of fires(): the same air, the coil 1 °F colder: margin ≈ 2.2 °F against U ≈ 1.7 °F
+            CoilResult r = IpCase.returnRh(76, 58).supplyRh(59, 90).cfm(1200).nominalTons(3).coilF(58).run();
+            Estimate m = r.estimate(Measurand.DEW_POINT_MARGIN);
+            assertTrue(m.valueSi() > m.expandedSi() && m.valueSi() < 2 * m.expandedSi(), "a near miss: " + m);
+            assertFalse(codes(r).contains(COIL_MARGIN_INCONCLUSIVE));
         }
     }
 
@@ -94,8 +117,12 @@ class CoilFindingsTest {
         }
 
         @Test
-        void quiet() {
-            assertFalse(codes(healthy().run()).contains(MOISTURE_DROP_INCONCLUSIVE));
+        void quietWhenTheDropIsJustBeyondItsUncertainty() {
+            // near miss of fires(): supply dew point 52 °F instead of 54.5 °F; the drop clears its U
+            CoilResult r = IpCase.returnRh(75, 50).supplyDp(58, 52).cfm(1200).nominalTons(3).coilF(45).run();
+            Estimate d = r.estimate(Measurand.HUMIDITY_RATIO_DROP);
+            assertTrue(d.valueSi() > d.expandedSi() && d.valueSi() < 2 * d.expandedSi(), "a near miss: " + d);
+            assertFalse(codes(r).contains(MOISTURE_DROP_INCONCLUSIVE));
         }
     }
 
@@ -107,8 +134,12 @@ class CoilFindingsTest {
         }
 
         @Test
-        void quiet() {
-            assertFalse(codes(healthy().run()).contains(COIL_ADDING_MOISTURE));
+        void quietWhenTheSupplyIsWetterOnlyWithinTheUncertainty() {
+            // near miss: supply dew point 55.5 °F against the return's 55.1 °F (Magnus): wetter, by less than U
+            assertTrue(55.5 > magnusDewPointF(75, 50));
+            CoilResult r = IpCase.returnRh(75, 50).supplyDp(63, 55.5).cfm(1200).run();
+            assertTrue(r.process().humidityRatioDrop() < 0, "the supply does read wetter");
+            assertFalse(codes(r).contains(COIL_ADDING_MOISTURE));
         }
     }
 
@@ -135,8 +166,12 @@ class CoilFindingsTest {
         }
 
         @Test
-        void quiet() {
-            assertFalse(codes(healthy().run()).contains(READINGS_INCONSISTENT));
+        void quietWhenTheCoilProbeIsJustBelowTheDewPoint() {
+            // near miss of coilAboveDewPointWhileAirLosesMoisture: the same air, the probe at 54 °F,
+            // 1.1 °F under the 55.1 °F dew point (Magnus) instead of 4.9 °F above it
+            assertTrue(54 < magnusDewPointF(75, 50));
+            CoilResult r = IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).coilF(54).run();
+            assertFalse(codes(r).contains(READINGS_INCONSISTENT), codes(r).toString());
         }
     }
 
@@ -162,10 +197,21 @@ class CoilFindingsTest {
         }
 
         @Test
-        void quiet() {
-            List<String> c = codes(healthy().run());
-            assertFalse(c.contains(HIGH_AIRFLOW_PER_TON));
-            assertFalse(c.contains(LOW_AIRFLOW_PER_TON));
+        void quietJustInsideTheBand() {
+            // 1347 cfm / 3 tons = 449 cfm/ton, under the 450 limit; 903 / 3 = 301, over the 300 limit
+            List<FindingCode> high = codes(IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1347).nominalTons(3).coilF(45).run());
+            assertFalse(high.contains(HIGH_AIRFLOW_PER_TON), high.toString());
+            List<FindingCode> low = codes(IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(903).nominalTons(3).coilF(45).run());
+            assertFalse(low.contains(LOW_AIRFLOW_PER_TON), low.toString());
+        }
+
+        @Test
+        void firesJustOutsideTheBand() {
+            // 1353 / 3 = 451 cfm/ton; 897 / 3 = 299 cfm/ton
+            assertTrue(codes(IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1353).nominalTons(3).coilF(45).run())
+                    .contains(HIGH_AIRFLOW_PER_TON));
+            assertTrue(codes(IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(897).nominalTons(3).coilF(45).run())
+                    .contains(LOW_AIRFLOW_PER_TON));
         }
     }
 
@@ -211,8 +257,23 @@ class CoilFindingsTest {
         }
 
         @Test
-        void quiet() {
-            assertFalse(codes(healthy().run()).contains(INDOOR_HUMIDITY_HIGH));
+        void quietJustUnderTheRhTarget() {
+            // 70 °F at 59.5 % RH: under the 60 % target, dew point ≈ 55.2 °F (Magnus), under 60 °F
+            assertTrue(magnusDewPointF(70, 59.5) < 59);
+            assertFalse(codes(IpCase.returnRh(70, 59.5).supplyRh(55, 92).cfm(1200).nominalTons(3).coilF(45).run())
+                    .contains(INDOOR_HUMIDITY_HIGH));
+            assertTrue(codes(IpCase.returnRh(70, 60.5).supplyRh(55, 92).cfm(1200).nominalTons(3).coilF(45).run())
+                    .contains(INDOOR_HUMIDITY_HIGH), "60.5 % is over the target");
+        }
+
+        @Test
+        void quietJustUnderTheDewPointLimit() {
+            // 80 °F at 50 % RH: dew point ≈ 59.6 °F (Magnus), under ASHRAE 62.1's 60 °F; 51 % gives ≈ 60.2 °F
+            assertTrue(magnusDewPointF(80, 50) < 60 && magnusDewPointF(80, 51) > 60);
+            assertFalse(codes(IpCase.returnRh(80, 50).supplyRh(58, 92).cfm(1200).nominalTons(3).coilF(45).run())
+                    .contains(INDOOR_HUMIDITY_HIGH));
+            assertTrue(codes(IpCase.returnRh(80, 51).supplyRh(58, 92).cfm(1200).nominalTons(3).coilF(45).run())
+                    .contains(INDOOR_HUMIDITY_HIGH));
         }
     }
 

@@ -15,7 +15,7 @@ class CoilProcessTest {
     @DisplayName("ASHRAE HoF 2021 SI ch. 1 Example 3: 30 °C / 50 % at 5 m³/s to saturated 10 °C needs 197 kW")
     void handbookCoilExample() {
         // Published answer 197 kW (ṁ_da 5.70 kg/s, W1 13.3 g/kg, W2 7.66 g/kg), as read from the 2021 SI text
-        // in domain-practice.md §4.1 [S1]; the handbook reads h and W from Table 2 (real gas), the equations
+        // in docs/methods.md §9.4, HoF 2021 SI ch. 1; the handbook reads h and W from Table 2 (real gas), the equations
         // give 197.7 kW, hence ±1.5 %.
         AirReading in = new AirReading("return", 30, 0, HumidityKind.RELATIVE_HUMIDITY, 50, 0);
         AirReading out = new AirReading("supply", 10, 0, HumidityKind.RELATIVE_HUMIDITY, 100, 0);
@@ -34,7 +34,7 @@ class CoilProcessTest {
     @Test
     @DisplayName("Issue 3 case: 1200 cfm, 75 °F/50 % to 55 °F/90 %, sea level (hand-computed from HoF ch. 1 eqs.)")
     void issueCase1200Cfm() {
-        // Expected values computed by hand from HoF 2017 ch. 1, IP edition (domain-practice.md §4.2 case A):
+        // Expected values computed by hand from HoF 2017 ch. 1, IP edition (docs/methods.md §9.5 case A):
         // W1 = 0.621945·pw/(p − pw) with pw = 0.5·pws(75 °F) → 0.00924 (64.6 gr); W2 at 55 °F/90 % → 0.00826;
         // v1 = 0.370486·534.67·(1 + 1.607858·W1)/14.696 = 13.679 ft³/lb → ṁ_da = 60·1200/13.679 = 5263 lb/h;
         // q_s = 5263·(0.240 + 0.444·W1)·20 = 25 694; q = ṁ[(h1 − h2) − ΔW·(55 − 32)] = 31 135 Btu/h;

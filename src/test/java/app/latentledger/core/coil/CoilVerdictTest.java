@@ -9,7 +9,7 @@ import static app.latentledger.core.coil.CoilVerdict.Call.*;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 class CoilVerdictTest {
-    @ParameterizedTest(name = "margin {0}, drop {1} → {2} (rule of domain-practice.md §5.4, a GUM-based proposal)")
+    @ParameterizedTest(name = "margin {0}, drop {1} → {2} (rule of docs/methods.md §9.7, a GUM-based proposal)")
     @CsvSource({
             "BELOW, REMOVING, DEHUMIDIFYING", "BELOW, WITHIN, CANT_TELL", "BELOW, ADDING, CANT_TELL",
             "ABOVE, REMOVING, CANT_TELL", "ABOVE, WITHIN, NOT_DEHUMIDIFYING", "ABOVE, ADDING, NOT_DEHUMIDIFYING",

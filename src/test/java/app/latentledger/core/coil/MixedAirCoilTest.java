@@ -1,5 +1,7 @@
 package app.latentledger.core.coil;
 
+import app.latentledger.core.findings.FindingCode;
+
 import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.findings.ThresholdSettings;
@@ -160,7 +162,7 @@ class MixedAirCoilTest {
         assertEquals(mc, fo, 0.10 * mc, m.key() + ": first order " + fo + " vs Monte Carlo " + mc);
     }
 
-    private static List<String> codes(CoilResult r) {
+    private static List<FindingCode> codes(CoilResult r) {
         return r.findings().stream().map(Finding::code).collect(Collectors.toList());
     }
 
@@ -171,7 +173,7 @@ class MixedAirCoilTest {
         CoilResult r = IpCase.returnRh(75, 45).supplyRh(56, 92).cfm(1200).nominalTons(3).coilF(45)
                 .outdoorWb(92, 78, 35).run();
         assertTrue(r.estimate(Measurand.ENTERING_DEW_POINT).valueSi() > IpCase.c(60), "mixed dew point above 60 °F");
-        assertFalse(codes(r).contains(CoilFindings.INDOOR_HUMIDITY_HIGH), codes(r).toString());
+        assertFalse(codes(r).contains(FindingCode.INDOOR_HUMIDITY_HIGH), codes(r).toString());
         // the same mixed air typed as the entering reading is (rightly, for lack of the return) taken as indoor air
         AirReading mixedTyped = new AirReading("return", r.entering().dryBulbC(), Tolerances.DRY_BULB_K,
                 HumidityKind.DEW_POINT, r.entering().dewPointC(), Tolerances.DEW_POINT_K);
@@ -179,7 +181,7 @@ class MixedAirCoilTest {
                 r.readings().airflowM3PerS(), 0.1, AirflowLocation.ENTERING, IpCase.c(45), Tolerances.COIL_K,
                 CoilTemperatureKind.COIL_SURFACE, r.readings().nominalCapacityW(), null),
                 ThresholdSettings.DEFAULTS, UnitSystem.IP);
-        assertTrue(codes(typed).contains(CoilFindings.INDOOR_HUMIDITY_HIGH), codes(typed).toString());
+        assertTrue(codes(typed).contains(FindingCode.INDOOR_HUMIDITY_HIGH), codes(typed).toString());
     }
 
     @Test
@@ -190,7 +192,7 @@ class MixedAirCoilTest {
                 .outdoorRh(85, 25, 40).run();
         assertTrue(r.estimate(Measurand.ENTERING_DEW_POINT).valueSi() < IpCase.c(60));
         assertTrue(r.estimate(Measurand.ENTERING_RELATIVE_HUMIDITY).valueSi() < 60);
-        Finding f = r.findings().stream().filter(x -> x.code().equals(CoilFindings.INDOOR_HUMIDITY_HIGH)).findFirst()
+        Finding f = r.findings().stream().filter(x -> x.code().equals(FindingCode.INDOOR_HUMIDITY_HIGH)).findFirst()
                 .orElseThrow(() -> new AssertionError(codes(r).toString()));
         assertTrue(f.technical().contains("outdoor dew point"), f.technical());
         assertTrue(f.evidence().stream().anyMatch(e -> e.key().equals("returnDewPoint")));

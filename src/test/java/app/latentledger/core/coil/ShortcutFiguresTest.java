@@ -19,13 +19,13 @@ class ShortcutFiguresTest {
         assertEquals(60 * 0.075 * 0.24, ShortcutFigures.IP_SENSIBLE, 1e-12);
         assertEquals(60 * 0.075, ShortcutFigures.IP_TOTAL, 1e-12);
         assertEquals(60 * 0.075 * 1061 / 7000.0, ShortcutFigures.IP_LATENT, 0.005);
-        // HoF 2021 SI ch. 18 §"standard air": 1.23, 3010, 1.2 (read in domain-practice.md [S3])
+        // HoF 2021 SI ch. 18 §"standard air": 1.23, 3010, 1.2 (read in docs/methods.md §9.8, HoF 2021 SI ch. 18)
         assertEquals(1.23, ShortcutFigures.SI_SENSIBLE, 0);
         assertEquals(3010, ShortcutFigures.SI_LATENT, 0);
         assertEquals(1.2, ShortcutFigures.SI_TOTAL, 0);
     }
 
-    @ParameterizedTest(name = "{0} ft → ratio {1} (domain-practice.md Appendix A, from HoF ch. 1 eq. 3 per ch. 18)")
+    @ParameterizedTest(name = "{0} ft → ratio {1} (docs/methods.md §9.8, from HoF ch. 1 eq. 3 per ch. 18)")
     @CsvSource({"1000, 0.9644, 1.042, 4.340", "5000, 0.8321, 0.899, 3.744", "5280, 0.8234, 0.889, 3.705"})
     void altitudeScaling(double feet, double ratio, double sensible, double total) {
         double p = SitePressure.fromElevation(feet * 0.3048).pressurePa();
@@ -50,7 +50,7 @@ class ShortcutFiguresTest {
     }
 
     @Test
-    @DisplayName("Case A shortcuts: 1.08 → 25 920, 0.68 → 5555, 4.5 → 32 063 Btu/h (hand-computed, domain-practice.md §4.2)")
+    @DisplayName("Case A shortcuts: 1.08 → 25 920, 0.68 → 5555, 4.5 → 32 063 Btu/h (hand-computed, docs/methods.md §9.5)")
     void caseAShortcuts() {
         // 1.08 × 1200 × 20 = 25 920; 0.68 × 1200 × 6.807 = 5555; 4.5 × 1200 × (28.107 − 22.169) = 32 063
         IpCase k = IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200);
@@ -65,7 +65,7 @@ class ShortcutFiguresTest {
     @Test
     @DisplayName("At 5000 ft uncorrected shortcuts overstate; scaled ones land near the mass-flow figures (case C)")
     void caseCAltitude() {
-        // domain-practice.md §4.2 case C: mass-based total 26 843 Btu/h; uncorrected 4.5 shortcut 33 344
+        // docs/methods.md §9.5 case C: mass-based total 26 843 Btu/h; uncorrected 4.5 shortcut 33 344
         IpCase k = IpCase.returnRh(75, 50).supplyRh(55, 90).cfm(1200).elevationFt(5000);
         CoilReadings r = k.readings();
         CoilProcess q = k.run().process();

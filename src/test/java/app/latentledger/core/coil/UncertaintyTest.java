@@ -32,7 +32,7 @@ class UncertaintyTest {
     }
 
     @Test
-    @DisplayName("Dew point and humidity ratio sensitivities match domain-practice.md §5.2 and §5.3 (derived there)")
+    @DisplayName("Dew point and humidity ratio sensitivities match docs/methods.md §9.7 and §5.3 (derived there)")
     void sensitivities() {
         // §5.2: ±2 % RH, ±0.5 °F rectangular → U(t_d) 1.38 °F at 75/50, 0.90 °F at 55/90;
         // U(W) 3.3 and 1.9 gr; §5.3: independent probes, U95(Δgr) ≈ ±3.8 gr

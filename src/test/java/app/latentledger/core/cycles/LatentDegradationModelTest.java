@@ -30,12 +30,12 @@ class LatentDegradationModelTest {
 
     @Test
     @DisplayName("H&R 1996 documented behaviour: continuous fan, P1 — no net latent removal up to X ≈ 0.5"
-            + " (note §6.2 break-even X = 0.562)")
+            + " (reference vectors, LatentVectors.java break-even X = 0.562)")
     void noNetRemovalAtLowRuntimeWithContinuousFan() {
         for (double x = 0.05; x <= 0.55; x += 0.05) {
             assertEquals(0.0, P1.latentRatio(P1.onTimeS(x), P1.offTimeS(x)), 1e-12, "X = " + x);
         }
-        // break-even runtime fractions, latent-degradation.md §6.2 (derived from E3–E7)
+        // break-even runtime fractions,docs/methods.md §3.6 (derived from E3–E7)
         assertEquals(0.562, breakEven(P1), 0.001);
         assertEquals(0.580, breakEven(new LatentDegradationModel(1400, 1.5, 45, 3, "x")), 0.001);
         assertEquals(0.545, breakEven(new LatentDegradationModel(1000, 1.5, 45, 2.5, "x")), 0.001);
@@ -53,7 +53,7 @@ class LatentDegradationModelTest {
     }
 
     @Test
-    @DisplayName("hand checks in latent-degradation.md §6.6: S2 E = 130.4 s, t_o = 174.5 s, ratio 0.492;"
+    @DisplayName("hand checks in docs/methods.md §3.6: S2 E = 130.4 s, t_o = 174.5 s, ratio 0.492;"
             + " S4 E = 697.5 s, t_o = 742.5 s, ratio 0.396")
     void handChecks() {
         assertEquals(130.4, P1.evaporatedS(90), 0.05);
@@ -81,7 +81,7 @@ class LatentDegradationModelTest {
     }
 
     @Test
-    @DisplayName("all 77 rows of latent-vectors.csv (generator in latent-degradation.md §6.6, from H&R 1996 / EnergyPlus ER)")
+    @DisplayName("all 77 rows of latent-vectors.csv (generator in docs/methods.md §3.6, from H&R 1996 / EnergyPlus ER)")
     void referenceVectors() throws IOException {
         List<Map<String, String>> rows = vectors();
         assertEquals(77, rows.size());

@@ -1,5 +1,7 @@
 package app.latentledger.core.cycles;
 
+import app.latentledger.core.findings.FindingCode;
+
 import app.latentledger.core.findings.ThresholdSettings;
 import app.latentledger.fielddata.SyntheticLog;
 import app.latentledger.fielddata.SyntheticLog.Blower;
@@ -85,7 +87,7 @@ class RunCycleAnalysisSyntheticTest {
 
     @ParameterizedTest(name = "continuous blower, 20 min on / 10 min off, status columns: {0}")
     @ValueSource(booleans = {true, false})
-    @DisplayName("S4 timing (note §6.4): counts, times, and moisture integrals against the analytic integrals")
+    @DisplayName("S4 timing (reference vectors, LatentVectors.java): counts, times, and moisture integrals against the analytic integrals")
     void continuousBlowerS4(boolean status) {
         Rows rows = SyntheticLog.generate(repeated(base(Blower.CONTINUOUS, 1200, 600), 6));
         assertEquals(0, rows.cappedSamples, "generator kept the model's humidity ratio everywhere");
@@ -103,14 +105,14 @@ class RunCycleAnalysisSyntheticTest {
             // onset: ΔW_ss(1 − e^(−t/τ)) = ΔW_ss/2 at t = τ ln 2 = 31.2 s
             assertEquals(45 * Math.log(2), c.moisture().onsetS(), 1.0, "onset");
         }
-        // note §6.4 S4_2CPH_20ON_10OFF, P1: net/(ss × t_on) = 0.381, from H&R 1996 with the EnergyPlus-suggested values
+        // the reference vectors (LatentVectors.java) S4_2CPH_20ON_10OFF, P1: net/(ss × t_on) = 0.381, from H&R 1996 with the EnergyPlus-suggested values
         assertEquals(0.381, r.latentFractionMeasured(), 0.005);
         assertEquals(0.381, r.latentFractionPredicted(), 0.001);
         assertEquals("default", r.model().source());
         assertEquals(dw, r.steadyDryingW(), 1e-6);
-        assertTrue(r.has("off-cycle-reevaporation"));
-        assertFalse(r.has("short-cycling"));
-        assertFalse(r.has("coil-never-wet"));
+        assertTrue(r.has(FindingCode.OFF_CYCLE_REEVAPORATION));
+        assertFalse(r.has(FindingCode.SHORT_CYCLING));
+        assertFalse(r.has(FindingCode.COIL_NEVER_WET));
     }
 
     @ParameterizedTest(name = "blower off in rests (AUTO), 10 min on / 15 min off, status columns: {0}")
@@ -126,7 +128,7 @@ class RunCycleAnalysisSyntheticTest {
             assertEquals(removed, c.removedKg(), 0.01 * removed);
             assertEquals(0.0, c.returnedKg(), 1e-12);
         }
-        assertFalse(r.has("off-cycle-reevaporation"));
+        assertFalse(r.has(FindingCode.OFF_CYCLE_REEVAPORATION));
         // no run ≥ 15 min: the steady rate is unknown, so the measured fraction is too
         assertTrue(Double.isNaN(r.latentFractionMeasured()));
         // model with no evaporation: gross(600)/600 = (600 + 45(e^(−600/45) − 1))/600 = 0.925
@@ -134,7 +136,7 @@ class RunCycleAnalysisSyntheticTest {
     }
 
     @Test
-    @DisplayName("90 s fan-off delay from the fan column: returned = E(90 s) = 130.4 s of steady removal (note §6.6)")
+    @DisplayName("90 s fan-off delay from the fan column: returned = E(90 s) = 130.4 s of steady removal (reference vectors, LatentVectors.java)")
     void fanDelay() {
         Scenario s = repeated(base(Blower.DELAY, 1500, 900), 4);
         s.fanDelayS = 90;
@@ -151,20 +153,20 @@ class RunCycleAnalysisSyntheticTest {
     }
 
     @Test
-    @DisplayName("short cycling, 5 min on / 5 min off with continuous blower: note §6.4 S1 predicts no net removal")
+    @DisplayName("short cycling, 5 min on / 5 min off with continuous blower: the reference vectors (LatentVectors.java) S1 predicts no net removal")
     void shortCyclingContinuous() {
         Rows rows = SyntheticLog.generate(repeated(base(Blower.CONTINUOUS, 300, 300), 12));
         RunCycleReport r = ANALYSIS.analyse(rows.series(true), 101_325, AIRFLOW);
         assertTimings(rows, r);
         assertTrue(r.cyclesPerHour() > 3);
         assertEquals(0.0, r.latentFractionPredicted(), 1e-9); // S1_6CPH_5ON_5OFF_P1: 0.000
-        assertTrue(r.has("short-cycling"));
-        assertTrue(r.has("short-cycling-limits-latent"));
-        assertTrue(r.has("off-cycle-reevaporation"));
+        assertTrue(r.has(FindingCode.SHORT_CYCLING));
+        assertTrue(r.has(FindingCode.SHORT_CYCLING_LIMITS_LATENT));
+        assertTrue(r.has(FindingCode.OFF_CYCLE_REEVAPORATION));
     }
 
     @Test
-    @DisplayName("fit recovers t_wet 1200 s and γ 1.2 from long blower-on rests that dry the coil (note §5.7)")
+    @DisplayName("fit recovers t_wet 1200 s and γ 1.2 from long blower-on rests that dry the coil (docs/methods.md §9.9)")
     void fitsModelToLongRests() {
         Scenario s = repeated(base(Blower.CONTINUOUS, 1800, 2700), 4);
         s.twetS = 1200;
@@ -203,7 +205,7 @@ class RunCycleAnalysisSyntheticTest {
         Rows rows = SyntheticLog.generate(s);
         RunCycleReport r = ANALYSIS.analyse(rows.series(true), 101_325, AIRFLOW);
         assertEquals(4, r.cycles().size());
-        assertTrue(r.has("coil-never-wet"));
+        assertTrue(r.has(FindingCode.COIL_NEVER_WET));
         assertTrue(Double.isNaN(r.steadyDryingW()));
     }
 
@@ -215,11 +217,11 @@ class RunCycleAnalysisSyntheticTest {
         Rows rows = SyntheticLog.generate(s);
         RunCycleReport r = ANALYSIS.analyse(rows.series(false), 101_325, AIRFLOW);
         assertEquals(5, r.sensorOffsetRhPct(), 0.3);
-        assertTrue(r.has("sensor-offset"));
+        assertTrue(r.has(FindingCode.SENSOR_OFFSET));
         Scenario clean = repeated(base(Blower.CONTINUOUS, 1200, 3600), 3);
         RunCycleReport ok = ANALYSIS.analyse(SyntheticLog.generate(clean).series(false), 101_325, AIRFLOW);
         assertEquals(0, ok.sensorOffsetRhPct(), 0.1);
-        assertFalse(ok.has("sensor-offset"));
+        assertFalse(ok.has(FindingCode.SENSOR_OFFSET));
     }
 
     @ParameterizedTest(name = "a 15 min gap inside the third run, status columns: {0}")

@@ -27,10 +27,10 @@ class AdiabaticMixingTest {
     /**
      * ASHRAE Handbook—Fundamentals 2021 SI, ch. 1, the worked mixing example: 2 m³/s of outdoor air
      * at 4 °C db / 2 °C thermodynamic wb mixed with 6.25 m³/s of recirculated air at 25 °C / 50 %,
-     * 101.325 kPa. Published (chart-read) answers as recorded in domain-practice.md §4.1, row E4:
+     * 101.325 kPa. Published (chart-read) answers as recorded in docs/methods.md §9.4, row E4:
      * v₁ 0.789, v₂ 0.858 m³/kg; ṁ 2.535 + 7.284 kg/s; t₃ = 19.5 °C, t₃* = 14.6 °C. The example is
      * Example 4 there; the brief recalled it as Example 6 (from memory) — the number is unverified,
-     * the inputs and answers are the reference. Chart reading: ±0.3 °C (domain-practice.md §4.1).
+     * the inputs and answers are the reference. Chart reading: ±0.3 °C (docs/methods.md §9.4).
      */
     @Test
     @DisplayName("HoF 2021 SI ch. 1 mixing example: ṁ 2.535 + 7.284 kg/s, t₃ 19.5 °C, t₃* 14.6 °C (chart-read, ±0.3 °C)")

@@ -10,8 +10,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 class HandbookChecksTest {
 
     /**
-     * ASHRAE HoF 2017/2021 ch. 1, Table 1 (standard atmospheric data), values as listed in the team's
-     * research notes (domain-practice.md, Appendix A). The table rounds to 0.001 kPa and 0.1 °C.
+     * ASHRAE HoF 2017/2021 ch. 1, Table 1 (standard atmospheric data), values as listed in
+     * docs/methods.md §9.8. The table rounds to 0.001 kPa and 0.1 °C.
      */
     @ParameterizedTest(name = "Table 1: {0} m → {1} kPa, {2} °C")
     @CsvSource({
@@ -31,7 +31,7 @@ class HandbookChecksTest {
 
     /**
      * Saturation pressure against ASHRAE HoF ch. 1 Table 3 (from memory; Table 3 lists IAPWS
-     * values). Hyland–Wexler eqs. 5/6 sit 0.01–0.02 % from IAPWS (reference-libraries.md), so the
+     * values). Hyland–Wexler eqs. 5/6 sit 0.01–0.02 % from IAPWS (docs/methods.md §1 (outside checks)), so the
      * tolerance is 0.05 % to cover that plus the table's 5-digit rounding.
      */
     @ParameterizedTest(name = "Table 3: {0} °C → {1} kPa")
@@ -82,7 +82,7 @@ class HandbookChecksTest {
     /**
      * AHRI 210/240 rating entering air, 80 °F db / 67 °F wb at sea level: W 0.01117 lb/lb
      * (78.2 gr/lb), RH 51.1 %, dew point 60.3 °F, h 31.45 Btu/lb — values derived from the HoF
-     * IP-edition equations by an independent implementation (domain-practice.md Appendix A, [DER]).
+     * IP-edition equations by an independent implementation (docs/methods.md §9.8, [DER]).
      */
     @Test
     void ratingPointInInchPound() {
@@ -96,7 +96,7 @@ class HandbookChecksTest {
 
     /**
      * ASHRAE 62.1-2022 §5.12 caps indoor dew point at 60 °F; at sea level that is 77.3 gr/lb, and
-     * ASHRAE 55's W = 0.012 limit is a 62.3 °F dew point (domain-practice.md Appendix A, [DER]).
+     * ASHRAE 55's W = 0.012 limit is a 62.3 °F dew point (docs/methods.md §9.8, [DER]).
      */
     @Test
     void indoorHumidityLimitsInGrains() {
@@ -108,7 +108,7 @@ class HandbookChecksTest {
 
     /**
      * Standard air, 0.075 lb/ft³ (13.33 ft³/lb), is about dry air at 69 °F or saturated air at
-     * 60 °F at sea level (ASHRAE HoF ch. 18 standard-air note; domain-practice.md Appendix A).
+     * 60 °F at sea level (ASHRAE HoF ch. 18 standard-air note; docs/methods.md §9.8).
      * Both readings are per mass of dry air: 1/v, not the (1 + W)/v density of the mixture.
      */
     @Test

@@ -14,7 +14,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /**
  * A second independent implementation: hvac-engine 1.2.0 (com.synerset, MIT, Maven Central). It
  * departs from the handbook in places (its own specific-heat polynomials, a full enthalpy-balance
- * wet bulb, an approximate dew point), so tolerances follow reference-libraries.md: 0.02 g/kg W,
+ * wet bulb, an approximate dew point), so tolerances follow docs/methods.md §1 (outside checks): 0.02 g/kg W,
  * 0.05 %RH, 0.05 K dew point, 0.01 K wet bulb, 0.05 kJ/kg enthalpy — and only where dry bulb,
  * wet bulb and dew point are all above 0.01 °C, the region where it is valid (its dew point is
  * over water below 0 °C, and its solver fails near a 0 °C wet bulb).

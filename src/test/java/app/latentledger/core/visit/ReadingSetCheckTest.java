@@ -30,7 +30,7 @@ class ReadingSetCheckTest {
 
     @Test
     void demoBeforeAndAfterTellTheStory(@TempDir Path dir) {
-        try (Ledger ledger = Ledger.open(dir)) {
+        try (Ledger ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO)) {
             Site site = ledger.sites().find(DemoScenario.SITE_HERON).orElseThrow();
             HvacSystem system = ledger.systems().find(DemoScenario.SYSTEM_HERON).orElseThrow();
             ReadingSet before = ledger.readings().find(DemoScenario.READINGS_BEFORE).orElseThrow();
@@ -49,7 +49,7 @@ class ReadingSetCheckTest {
     /** Whatever a reading set may store, the coil check accepts: the two sets of limits agree. */
     @Test
     void aReadingSetAtItsLimitsStillChecks(@TempDir Path dir) {
-        try (Ledger ledger = Ledger.open(dir)) {
+        try (Ledger ledger = Ledger.open(dir, Ledger.FirstRun.SEED_DEMO)) {
             Site site = ledger.sites().find(DemoScenario.SITE_HERON).orElseThrow();
             HvacSystem system = ledger.systems().find(DemoScenario.SYSTEM_HERON).orElseThrow();
             ReadingSet a = ledger.readings().find(DemoScenario.READINGS_AFTER).orElseThrow();

@@ -1,6 +1,6 @@
 package app.latentledger.ui.chart;
 
-import app.latentledger.chart.demo.SaltreedDemo;
+import app.latentledger.fielddata.SaltreedDemo;
 import app.latentledger.chart.draw.Theme;
 import app.latentledger.core.units.UnitSystem;
 import javafx.embed.swing.SwingFXUtils;

@@ -1,6 +1,6 @@
 package app.latentledger.ui.chart;
 
-import app.latentledger.chart.demo.SaltreedDemo;
+import app.latentledger.fielddata.SaltreedDemo;
 import app.latentledger.chart.psychro.ChartPoint;
 import app.latentledger.chart.psychro.ChartViewport;
 import app.latentledger.chart.timeline.CycleMark;

@@ -1,6 +1,6 @@
 package app.latentledger.ui.chart;
 
-import app.latentledger.chart.demo.SaltreedDemo;
+import app.latentledger.fielddata.SaltreedDemo;
 import app.latentledger.chart.timeline.CycleMark;
 import app.latentledger.chart.timeline.TimeViewport;
 import app.latentledger.core.units.UnitSystem;

@@ -1,8 +1,8 @@
 package app.latentledger.ui.compare;
 
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.AppSession;
 import app.latentledger.ui.TestSessions;
+import app.latentledger.ui.session.AppSession;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

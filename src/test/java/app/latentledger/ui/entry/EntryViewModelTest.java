@@ -1,8 +1,11 @@
 package app.latentledger.ui.entry;
 
-import app.latentledger.ui.AppSession;
 import app.latentledger.ui.TestSessions;
 import app.latentledger.ui.results.ResultsViewModel;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Draft;
+import app.latentledger.ui.session.FileDraftStore;
+import app.latentledger.ui.session.Slot;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -87,7 +90,7 @@ class EntryViewModelTest {
             assertEquals("%", vm.unit());
             vm.pad().digit(5);
             assertTrue(vm.enter(), vm.messageProperty().get());
-            assertEquals("± 5.0 %", vm.toleranceText(Slot.AIRFLOW).get());
+            assertEquals("± 5 %", vm.toleranceText(Slot.AIRFLOW).get());
             assertEquals(0.05, s.draft().value(Slot.AIRFLOW).toleranceSi(), 1e-12);
         }
     }

@@ -1,5 +1,7 @@
 package app.latentledger.ui.entry;
 
+import app.latentledger.ui.session.Slot;
+
 /** Types a number on the pad of a box and presses Enter, as the tech's taps would. */
 public final class Typing {
     private Typing() {

@@ -2,8 +2,8 @@ package app.latentledger.ui.export;
 
 import app.latentledger.bundle.Bundles;
 import app.latentledger.store.Ledger;
-import app.latentledger.ui.AppSession;
 import app.latentledger.ui.TestSessions;
+import app.latentledger.ui.session.AppSession;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

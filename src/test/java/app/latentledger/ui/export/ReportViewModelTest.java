@@ -1,9 +1,9 @@
 package app.latentledger.ui.export;
 
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.AppSession;
-import app.latentledger.ui.Background;
 import app.latentledger.ui.TestSessions;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Background;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
@@ -104,5 +104,22 @@ class ReportViewModelTest {
             assertFalse(vm.busyProperty().get());
             assertTrue(vm.statusProperty().get().startsWith("Saved the report"), vm.statusProperty().get());
         }
+    }
+
+    @Test
+    void anUnexpectedFailureIsASentenceNotAClassName() {
+        Path file = Path.of("heron-report.pdf");
+        String shown = ReportViewModel.failure("report", file, Path.of("reports"),
+                new IllegalStateException("page tree index 3 out of bounds"));
+        assertTrue(shown.startsWith("No report written (heron-report.pdf): something went wrong"), shown);
+        assertFalse(shown.contains("Exception") || shown.contains("java.") || shown.contains("out of bounds"), shown);
+        String disk = ReportViewModel.failure("report", file, Path.of("reports"),
+                new java.io.IOException("No space left on device"));
+        assertFalse(disk.contains("IOException"), disk);
+        assertTrue(disk.contains("could not be written"), disk);
+        // the report's own refusals are written for the tech already and are shown as they are
+        assertEquals("No report written (heron-report.pdf): cannot write x: it is a folder; give a file name",
+                ReportViewModel.failure("report", file, Path.of("reports"),
+                        new app.latentledger.report.ReportRefusedException("cannot write x: it is a folder; give a file name")));
     }
 }

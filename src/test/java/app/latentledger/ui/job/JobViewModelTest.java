@@ -1,9 +1,9 @@
 package app.latentledger.ui.job;
 
 import app.latentledger.core.records.VisitPurpose;
-import app.latentledger.ui.AppSession;
-import app.latentledger.ui.Screen;
 import app.latentledger.ui.TestSessions;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Screen;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

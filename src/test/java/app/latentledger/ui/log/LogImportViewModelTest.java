@@ -3,10 +3,11 @@ package app.latentledger.ui.log;
 import app.latentledger.core.records.VisitPurpose;
 import app.latentledger.core.settings.SettingsCatalogue;
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.AppSession;
-import app.latentledger.ui.Background;
-import app.latentledger.ui.results.FindingCard;
-import app.latentledger.ui.results.Row;
+import app.latentledger.ui.present.FindingCard;
+import app.latentledger.ui.present.Row;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Background;
+import app.latentledger.ui.session.LogAnalysisService;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

@@ -1,6 +1,6 @@
 package app.latentledger.ui.render;
 
-import app.latentledger.cli.Cli;
+import app.latentledger.Main;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -39,7 +39,7 @@ class ScreensCommandTest {
     void everyScreenIsDrawnInBothOrientations() throws Exception {
         ByteArrayOutputStream o = new ByteArrayOutputStream();
         ByteArrayOutputStream e = new ByteArrayOutputStream();
-        int code = Cli.standard().run(List.of("--data-dir", data.resolve("new").toString(), "screens", "--out",
+        int code = Main.commandLine().run(List.of("--data-dir", data.resolve("new").toString(), "screens", "--out",
                 out.toString()), new PrintStream(o, true, StandardCharsets.UTF_8), new PrintStream(e, true, StandardCharsets.UTF_8));
         assertEquals(0, code, e.toString(StandardCharsets.UTF_8));
         for (String screen : List.of("job", "readings", "results", "logs", "compare", "export", "settings")) {
@@ -65,7 +65,7 @@ class ScreensCommandTest {
     @Test
     void withoutOutTheCommandIsRefused() {
         ByteArrayOutputStream e = new ByteArrayOutputStream();
-        int code = Cli.standard().run(List.of("--data-dir", data.toString(), "screens"),
+        int code = Main.commandLine().run(List.of("--data-dir", data.toString(), "screens"),
                 new PrintStream(new ByteArrayOutputStream()), new PrintStream(e, true, StandardCharsets.UTF_8));
         assertEquals(2, code);
         assertTrue(e.toString(StandardCharsets.UTF_8).contains("screens needs --out DIR"));

@@ -9,12 +9,12 @@ import app.latentledger.core.settings.SettingsCatalogue;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.core.visit.ReadingSetCheck;
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.AppSession;
 import app.latentledger.ui.TestSessions;
 import app.latentledger.ui.chart.PsychroChartViewModel;
 import app.latentledger.ui.compare.CompareViewModel;
 import app.latentledger.ui.entry.EntryViewModel;
-import app.latentledger.ui.entry.Slot;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Slot;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

@@ -4,10 +4,12 @@ import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.visit.ReadingSetCheck;
 import app.latentledger.store.DemoScenario;
-import app.latentledger.ui.AppSession;
 import app.latentledger.ui.TestSessions;
 import app.latentledger.ui.entry.EntryViewModel;
-import app.latentledger.ui.entry.Slot;
+import app.latentledger.ui.present.ResultSheet;
+import app.latentledger.ui.present.VisitResults;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Slot;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -20,7 +22,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The results screen's view model without a window. The verdicts expected are those of the coil
- * check's three-way rule (CoilVerdict, domain-practice.md §5.4) on the demo's readings, whose story
+ * check's three-way rule (CoilVerdict, docs/methods.md §9.7) on the demo's readings, whose story
  * (DemoScenario) was worked out with the core: "before" cools without drying, "after" dries.
  */
 class ResultsViewModelTest {

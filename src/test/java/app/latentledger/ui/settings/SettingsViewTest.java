@@ -14,6 +14,7 @@ import javafx.scene.control.Label;
 import javafx.scene.control.Labeled;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextField;
+import javafx.scene.image.PixelReader;
 import javafx.scene.image.WritableImage;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
@@ -127,9 +128,14 @@ class SettingsViewTest {
         }
     }
 
+    /**
+     * Saves snapshots to target/screens for a person to look at, and checks what a person would see
+     * first: the light page is light and the dark theme really turns the page dark (mean relative
+     * luminance, ITU-R BT.709 weights, over a grid of pixels).
+     */
     @Test
     void screenshotsForAPersonToLookAt(FxRobot robot) throws IOException {
-        save(robot, "settings-light");
+        WritableImage light = save(robot, "settings-light");
         type(robot, "setting-" + HIGH, "700");
         robot.interact(() -> ((ScrollPane) ((javafx.scene.layout.BorderPane) stage.getScene().getRoot()).getCenter())
                 .setVvalue(0.25));
@@ -140,10 +146,28 @@ class SettingsViewTest {
         robot.interact(() -> robot.lookup("#choice-theme-dark").queryAs(ButtonBase.class).fire());
         robot.interact(() -> ((ScrollPane) ((javafx.scene.layout.BorderPane) stage.getScene().getRoot()).getCenter())
                 .setVvalue(0));
-        save(robot, "settings-dark");
+        WritableImage dark = save(robot, "settings-dark");
+        double l = meanLuminance(light);
+        double d = meanLuminance(dark);
+        assertTrue(l > 0.6, "the light page is mostly light: " + l);
+        assertTrue(d < 0.4, "the dark theme turns the page dark: " + d);
     }
 
-    private void save(FxRobot robot, String name) throws IOException {
+    private static double meanLuminance(WritableImage img) {
+        PixelReader px = img.getPixelReader();
+        double sum = 0;
+        int n = 0;
+        for (int y = 0; y < (int) img.getHeight(); y += 8) {
+            for (int x = 0; x < (int) img.getWidth(); x += 8) {
+                javafx.scene.paint.Color c = px.getColor(x, y);
+                sum += 0.2126 * c.getRed() + 0.7152 * c.getGreen() + 0.0722 * c.getBlue();
+                n++;
+            }
+        }
+        return sum / n;
+    }
+
+    private WritableImage save(FxRobot robot, String name) throws IOException {
         AtomicReference<WritableImage> img = new AtomicReference<>();
         robot.interact(() -> {
             stage.getScene().getRoot().layout();
@@ -154,5 +178,6 @@ class SettingsViewTest {
         ImageIO.write(SwingFXUtils.fromFXImage(img.get(), null), "png", new File(out, name + ".png"));
         assertEquals(1280, (int) img.get().getWidth());
         assertEquals(800, (int) img.get().getHeight());
+        return img.get();
     }
 }

@@ -1,0 +1,131 @@
+package app.latentledger.ui.present;
+
+import app.latentledger.core.coil.CoilProcess;
+import app.latentledger.core.coil.CoilResult;
+import app.latentledger.core.coil.CoilVerdict;
+import app.latentledger.core.coil.Measurand;
+import app.latentledger.core.findings.Cautions;
+import app.latentledger.core.findings.Evidence;
+import app.latentledger.core.findings.Finding;
+import app.latentledger.core.psychro.MoistAirState;
+import app.latentledger.core.units.DisplayNumber;
+import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.UnitSystem;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A coil check worded for the screen: the results sheet, the verdict's headline and the finding
+ * cards the results, compare and log screens share. The check itself comes from the session (the
+ * same adapter the commands and the report use, so the screen shows their numbers); nothing here
+ * computes beyond unit conversion for display.
+ */
+public final class VisitResults {
+    private VisitResults() {
+    }
+
+    /** The sheet while the coil check still waits for readings, named as a tech names them. */
+    public static ResultSheet waiting(List<String> readings) {
+        return incomplete("Waiting for " + String.join(", ", readings),
+                "Results appear as soon as these readings are in.");
+    }
+
+    /** The sheet when the record or the coil check refused the readings, with the reason. */
+    public static ResultSheet refused(String why) {
+        return incomplete("Readings refused", why);
+    }
+
+    /** The sheet of a finished coil check. */
+    public static ResultSheet of(CoilResult r, UnitSystem units) {
+        List<FindingCard> cards = new ArrayList<>();
+        for (Finding f : r.findings()) {
+            cards.add(card(f, units));
+        }
+        return new ResultSheet(r.verdict(), headline(r.verdict()), explanation(r.verdict()),
+                state(r.entering(), units, "entering"), state(r.leaving(), units, "leaving"),
+                performance(r, units), cards, Cautions.SAFETY_LINE);
+    }
+
+    public static String headline(CoilVerdict v) {
+        return switch (v) {
+            case DEHUMIDIFYING -> "Dehumidifying";
+            case NOT_DEHUMIDIFYING -> "Not dehumidifying";
+            case CANT_TELL -> "Can't tell from these readings";
+        };
+    }
+
+    private static String explanation(CoilVerdict v) {
+        return switch (v) {
+            case DEHUMIDIFYING -> "The coil is colder than the return dew point and the air leaves drier.";
+            case NOT_DEHUMIDIFYING -> "The coil cools the air but does not take water out of it.";
+            case CANT_TELL -> "The margin or the moisture drop is within what the instruments can resolve.";
+        };
+    }
+
+    private static ResultSheet incomplete(String headline, String why) {
+        return new ResultSheet(null, headline, why, List.of(), List.of(), List.of(), List.of(), Cautions.SAFETY_LINE);
+    }
+
+    private static List<Row> state(MoistAirState s, UnitSystem u, String prefix) {
+        String t = Quantity.TEMPERATURE.symbol(u);
+        return List.of(
+                new Row(prefix + "-dry-bulb", "Dry bulb", Shown.of(Quantity.TEMPERATURE, u, s.dryBulbC()), t),
+                new Row(prefix + "-wet-bulb", "Wet bulb", Shown.of(Quantity.TEMPERATURE, u, s.wetBulbC()), t),
+                new Row(prefix + "-dew-point", "Dew point", Shown.of(Quantity.TEMPERATURE, u, s.dewPointC()), t),
+                new Row(prefix + "-rh", "Relative humidity", Shown.of(Quantity.RELATIVE_HUMIDITY, u,
+                        s.relativeHumidityPct()), Quantity.RELATIVE_HUMIDITY.symbol(u)),
+                new Row(prefix + "-humidity-ratio", "Moisture", Shown.of(Quantity.HUMIDITY_RATIO_FINE, u,
+                        s.humidityRatio()), Quantity.HUMIDITY_RATIO_FINE.symbol(u)),
+                new Row(prefix + "-enthalpy", "Enthalpy", Shown.of(Quantity.ENTHALPY, u, s.enthalpyJPerKg()),
+                        Quantity.ENTHALPY.symbol(u)));
+    }
+
+    private static List<Row> performance(CoilResult r, UnitSystem u) {
+        CoilProcess p = r.process();
+        List<Row> rows = new ArrayList<>();
+        rows.add(row(r, u, "total", "Total capacity", Measurand.TOTAL, Quantity.POWER));
+        rows.add(new Row("total-large", "Total capacity", Shown.of(Quantity.POWER_LARGE, u, p.totalW()),
+                Quantity.POWER_LARGE.symbol(u)));
+        rows.add(row(r, u, "sensible", "Sensible", Measurand.SENSIBLE, Quantity.POWER));
+        rows.add(row(r, u, "latent", "Latent", Measurand.LATENT, Quantity.POWER));
+        rows.add(row(r, u, "shr", "Sensible heat ratio", Measurand.SHR, Quantity.DIMENSIONLESS));
+        rows.add(row(r, u, "moisture-removal", "Water removed", Measurand.MOISTURE_REMOVAL, Quantity.WATER_RATE));
+        rows.add(new Row("moisture-removal-daily", "Water removed per day",
+                Shown.of(Quantity.WATER_RATE_DAILY, u, p.moistureRemovalKgPerS()), Quantity.WATER_RATE_DAILY.symbol(u)));
+        rows.add(row(r, u, "latent-per-airflow", "Latent per airflow", Measurand.LATENT_PER_AIRFLOW,
+                Quantity.POWER_PER_AIRFLOW));
+        rows.add(row(r, u, "humidity-drop", "Moisture drop", Measurand.HUMIDITY_RATIO_DROP,
+                Quantity.HUMIDITY_RATIO_FINE));
+        rows.add(row(r, u, "dew-point-margin", "Dew point minus coil", Measurand.DEW_POINT_MARGIN,
+                Quantity.TEMPERATURE_DIFFERENCE));
+        rows.add(new Row("coil-temperature", "Coil temperature (" + coilSource(r) + ")",
+                Shown.of(Quantity.TEMPERATURE, u, r.coilTemperatureC()), Quantity.TEMPERATURE.symbol(u)));
+        rows.add(new Row("airflow-per-nominal", "Airflow per nominal size",
+                Shown.of(Quantity.AIRFLOW_PER_CAPACITY, u, r.airflowPerNominalCapacity()),
+                Quantity.AIRFLOW_PER_CAPACITY.symbol(u)));
+        return rows;
+    }
+
+    private static String coilSource(CoilResult r) {
+        return switch (r.coilTemperatureSource()) {
+            case CoilResult.SOURCE_MEASURED -> "measured";
+            case CoilResult.SOURCE_ADP -> "apparatus dew point";
+            default -> "none";
+        };
+    }
+
+    private static Row row(CoilResult r, UnitSystem u, String key, String label, Measurand m, Quantity q) {
+        return new Row(key, label, Shown.of(q, u, r.estimate(m)), q.symbol(u));
+    }
+
+    /** A core finding worded for the screen. */
+    public static FindingCard card(Finding f, UnitSystem u) {
+        List<String> evidence = new ArrayList<>();
+        for (Evidence e : f.evidence()) {
+            // worded as the PDF words it: the same value prints the same string on screen and paper
+            evidence.add(e.label() + ": " + DisplayNumber.withSpread(e.quantity(), u, e.valueSi(), e.uncertaintySi()));
+        }
+        return new FindingCard(f.code().key(), f.severity(), f.message(), f.technical(), evidence, f.nextChecks());
+    }
+}
