@@ -11,7 +11,9 @@ import java.util.HexFormat;
 final class BundleFormat {
     static final String NAME = "latent-ledger-bundle";
     /** Bumped when a reader of the previous version could misread a new bundle. */
-    static final int VERSION = 1;
+    static final int VERSION = 2;
+    /** The oldest version this build still imports (version 1 had no paperwork or deletions). */
+    static final int OLDEST_READ = 1;
 
     static final String MANIFEST = "manifest.json";
     static final String SITE = "site.json";
@@ -19,6 +21,10 @@ final class BundleFormat {
     static final String VISITS = "visits.json";
     static final String LOGS = "logs.json";
     static final String SNAPSHOTS = "snapshots.json";
+    /** Since version 2. */
+    static final String INSTRUMENTS = "instruments.json";
+    static final String PAPERWORK = "paperwork.json";
+    static final String DELETIONS = "deletions.json";
 
     /*
      * Import limits (docs/bundle-format.md, "Limits"). The manifest is read first and every size it

@@ -96,10 +96,10 @@ public final class BundleReader {
                     + "; nothing was imported");
         }
         int version = manifest.integer("formatVersion");
-        if (version != BundleFormat.VERSION) {
-            throw new BundleException("bundle format version " + version + " is not one this app reads (it reads version "
-                    + BundleFormat.VERSION + ")" + (version > BundleFormat.VERSION ? "; update the app" : "")
-                    + "; nothing was imported");
+        if (version < BundleFormat.OLDEST_READ || version > BundleFormat.VERSION) {
+            throw new BundleException("bundle format version " + version + " is not one this app reads (it reads versions "
+                    + BundleFormat.OLDEST_READ + " to " + BundleFormat.VERSION + ")"
+                    + (version > BundleFormat.VERSION ? "; update the app" : "") + "; nothing was imported");
         }
         Map<String, Listed> listed = listed(manifest, inZip);
         BundleScope scope = scope(manifest.text("scope"));
@@ -126,7 +126,8 @@ public final class BundleReader {
                 logEntries.add(f.text("samples"));
             }
             for (String name : listed.keySet()) {
-                if (!isRecordEntry(name) && !logEntries.contains(name)) {
+                boolean held = isRecordEntry(name) && (version >= 2 || !isPaperworkEntry(name));
+                if (!held && !logEntries.contains(name)) {
                     throw new BundleException("bundle entry " + TerminalText.escape(name) + " is not one this format"
                             + " holds (no log names it); nothing was imported");
                 }
@@ -140,7 +141,27 @@ public final class BundleReader {
             for (JsonFields f : snapshotList) {
                 snapshots.add(RecordsJson.snapshot(f));
             }
-            BundleContent content = new BundleContent(scope, site, systems, visits, readings, logs, snapshots);
+            List<app.latentledger.core.records.Instrument> instruments = new ArrayList<>();
+            List<BundleContent.InstrumentUse> uses = new ArrayList<>();
+            List<app.latentledger.core.records.VisitPaperwork> paperwork = new ArrayList<>();
+            List<app.latentledger.core.records.BinEntry> deletions = new ArrayList<>();
+            if (version >= 2) {
+                for (JsonFields f : array(zip, inZip, listed, BundleFormat.INSTRUMENTS)) {
+                    app.latentledger.core.records.Instrument i = PaperworkJson.instrument(f);
+                    instruments.add(i);
+                    for (String set : f.texts("usedOn")) {
+                        uses.add(new BundleContent.InstrumentUse(set, i.id()));
+                    }
+                }
+                for (JsonFields f : array(zip, inZip, listed, BundleFormat.PAPERWORK)) {
+                    paperwork.add(PaperworkJson.paperwork(f));
+                }
+                for (JsonFields f : array(zip, inZip, listed, BundleFormat.DELETIONS)) {
+                    deletions.add(PaperworkJson.deletion(f));
+                }
+            }
+            BundleContent content = new BundleContent(scope, site, systems, visits, readings, logs, snapshots,
+                    instruments, uses, paperwork, deletions);
             content.checkConsistent();
             checkReadings(content, readingLines);
             return content;
@@ -223,7 +244,14 @@ public final class BundleReader {
 
     private static boolean isRecordEntry(String name) {
         return name.equals(BundleFormat.SITE) || name.equals(BundleFormat.SYSTEMS) || name.equals(BundleFormat.VISITS)
-                || name.equals(BundleFormat.LOGS) || name.equals(BundleFormat.SNAPSHOTS) || name.equals(ReadingsCsv.ENTRY);
+                || name.equals(BundleFormat.LOGS) || name.equals(BundleFormat.SNAPSHOTS) || name.equals(ReadingsCsv.ENTRY)
+                || isPaperworkEntry(name);
+    }
+
+    /** The record entries format 2 added; a format 1 bundle does not hold them. */
+    private static boolean isPaperworkEntry(String name) {
+        return name.equals(BundleFormat.INSTRUMENTS) || name.equals(BundleFormat.PAPERWORK)
+                || name.equals(BundleFormat.DELETIONS);
     }
 
     /** A record entry's bytes, inflated no further than declared and matching its size and SHA-256. */

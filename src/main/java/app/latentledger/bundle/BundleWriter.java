@@ -54,6 +54,23 @@ public final class BundleWriter {
             snapshots.add(RecordsJson.snapshot(s));
         }
         entries.put(BundleFormat.SNAPSHOTS, json(snapshots));
+        JsonArray instruments = new JsonArray();
+        for (app.latentledger.core.records.Instrument i : content.instruments()) {
+            java.util.List<String> usedOn = new java.util.ArrayList<>();
+            for (BundleContent.InstrumentUse u : content.instrumentUses()) {
+                if (u.instrumentId().equals(i.id())) {
+                    usedOn.add(u.readingSetId());
+                }
+            }
+            instruments.add(PaperworkJson.instrument(i, usedOn));
+        }
+        entries.put(BundleFormat.INSTRUMENTS, json(instruments));
+        JsonArray paperwork = new JsonArray();
+        content.paperwork().forEach(w -> paperwork.add(PaperworkJson.paperwork(w)));
+        entries.put(BundleFormat.PAPERWORK, json(paperwork));
+        JsonArray deletions = new JsonArray();
+        content.deletions().forEach(d -> deletions.add(PaperworkJson.deletion(d)));
+        entries.put(BundleFormat.DELETIONS, json(deletions));
 
         JsonObject manifest = new JsonObject();
         manifest.addProperty("format", BundleFormat.NAME);

@@ -1,6 +1,10 @@
 package app.latentledger.bundle;
 
+import app.latentledger.core.records.BinEntry;
 import app.latentledger.core.records.HvacSystem;
+import app.latentledger.core.records.Instrument;
+import app.latentledger.core.records.RecordKind;
+import app.latentledger.core.records.VisitPaperwork;
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.ResultsSnapshot;
@@ -20,32 +24,60 @@ public final class Bundles {
     private Bundles() {
     }
 
-    /** A visit with its site, its system, its readings, logs and snapshots. */
+    /** A visit with its site, its system, its readings, logs, snapshots, instruments and paperwork. */
     public static BundleContent ofVisit(Ledger ledger, String visitId) {
+        return ofVisit(ledger, visitId, false);
+    }
+
+    /**
+     * A visit as {@link #ofVisit(Ledger, String)}; with {@code withDeletions}, also the reading sets
+     * and logs deleted from it that are still in the recycle bin, so the receiving ledger deletes
+     * them too.
+     */
+    public static BundleContent ofVisit(Ledger ledger, String visitId, boolean withDeletions) {
         Visit v = ledger.visits().find(visitId)
                 .orElseThrow(() -> new IllegalArgumentException("no visit with id " + visitId));
         Site site = ledger.sites().find(v.siteId()).orElseThrow();
         HvacSystem system = ledger.systems().find(v.systemId()).orElseThrow();
-        return collect(ledger, BundleScope.VISIT, site, List.of(system), List.of(v));
+        List<BinEntry> deletions = !withDeletions ? List.of() : ledger.recycleBin().forSite(site.id()).stream()
+                .filter(e -> e.visitId().equals(visitId) && e.kind() != RecordKind.VISIT).toList();
+        return collect(ledger, BundleScope.VISIT, site, List.of(system), List.of(v), deletions);
     }
 
     /** A site with every system and visit at it. */
     public static BundleContent ofSite(Ledger ledger, String siteId) {
+        return ofSite(ledger, siteId, false);
+    }
+
+    /**
+     * A site as {@link #ofSite(Ledger, String)}; with {@code withDeletions}, also every system,
+     * visit, reading set and log deleted at it that is still in the recycle bin.
+     */
+    public static BundleContent ofSite(Ledger ledger, String siteId, boolean withDeletions) {
         Site site = ledger.sites().find(siteId)
                 .orElseThrow(() -> new IllegalArgumentException("no site with id " + siteId));
         List<Visit> visits = new ArrayList<>(ledger.visits().forSite(siteId));
         java.util.Collections.reverse(visits); // oldest first reads naturally in a bundle
-        return collect(ledger, BundleScope.SITE, site, ledger.systems().forSite(siteId), visits);
+        List<BinEntry> deletions = withDeletions ? ledger.recycleBin().forSite(siteId) : List.of();
+        return collect(ledger, BundleScope.SITE, site, ledger.systems().forSite(siteId), visits, deletions);
     }
 
     private static BundleContent collect(Ledger ledger, BundleScope scope, Site site, List<HvacSystem> systems,
-                                         List<Visit> visits) {
+                                         List<Visit> visits, List<BinEntry> deletions) {
+        List<Instrument> instruments = new ArrayList<>();
+        List<BundleContent.InstrumentUse> uses = new ArrayList<>();
+        List<VisitPaperwork> paperwork = new ArrayList<>();
         List<ReadingSet> readings = new ArrayList<>();
         List<ImportedLog> logs = new ArrayList<>();
         List<ResultsSnapshot> snapshots = new ArrayList<>();
         for (Visit v : visits) {
+            instruments.addAll(ledger.instruments().forVisit(v.id()));
+            ledger.paperwork().find(v.id()).ifPresent(paperwork::add);
             for (ReadingSet r : ledger.readings().forVisit(v.id())) {
                 readings.add(r);
+                for (Instrument i : ledger.instruments().usedOn(r.id())) {
+                    uses.add(new BundleContent.InstrumentUse(r.id(), i.id()));
+                }
                 snapshots.addAll(ledger.snapshots().forSubject(SnapshotSubject.READING_SET, r.id()));
             }
             for (ImportedLog l : ledger.logs().forVisit(v.id())) {
@@ -53,19 +85,89 @@ public final class Bundles {
                 snapshots.addAll(ledger.snapshots().forSubject(SnapshotSubject.LOG, l.id()));
             }
         }
-        return new BundleContent(scope, site, systems, visits, readings, logs, snapshots);
+        return new BundleContent(scope, site, systems, visits, readings, logs, snapshots, instruments, uses, paperwork,
+                deletions);
     }
 
     public static void exportVisit(Ledger ledger, String visitId, Path file) throws IOException {
-        BundleWriter.write(ofVisit(ledger, visitId), visitId, file);
+        exportVisit(ledger, visitId, file, false);
+    }
+
+    /** Writes a visit bundle; deletions travel only when {@code withDeletions}. */
+    public static void exportVisit(Ledger ledger, String visitId, Path file, boolean withDeletions) throws IOException {
+        BundleWriter.write(ofVisit(ledger, visitId, withDeletions), visitId, file);
     }
 
     public static void exportSite(Ledger ledger, String siteId, Path file) throws IOException {
-        BundleWriter.write(ofSite(ledger, siteId), siteId, file);
+        exportSite(ledger, siteId, file, false);
     }
 
-    /** What an import did. */
-    public record ImportSummary(int added, int alreadyPresent, List<String> visitIds) {
+    /** Writes a site bundle; deletions travel only when {@code withDeletions}. */
+    public static void exportSite(Ledger ledger, String siteId, Path file, boolean withDeletions) throws IOException {
+        BundleWriter.write(ofSite(ledger, siteId, withDeletions), siteId, file);
+    }
+
+    /**
+     * What an import did (or, from {@link #preview}, would do).
+     *
+     * @param added          records not in the ledger before
+     * @param alreadyPresent records already there with the same content
+     * @param visitIds       the bundle's visits
+     * @param deleted        records the bundle's deletions moved to this ledger's recycle bin
+     * @param conflicts      for a preview: records whose copy here differs (an import would be refused)
+     * @param addedByKind    added records by kind ("site", "system", "visit", "reading set", "log",
+     *                       "snapshot", "instrument", "paperwork", "instrument choice")
+     */
+    public record ImportSummary(int added, int alreadyPresent, List<String> visitIds, int deleted,
+                                List<String> conflicts, java.util.Map<String, Integer> addedByKind) {
+        public ImportSummary(int added, int alreadyPresent, List<String> visitIds) {
+            this(added, alreadyPresent, visitIds, 0, List.of(), java.util.Map.of());
+        }
+
+        private static final List<String> ORDER = List.of("site", "system", "visit", "reading set", "log",
+                "instrument", "instrument choice", "paperwork", "snapshot");
+
+        /**
+         * What the import adds, leaves and deletes in words a tech reads before confirming, e.g.
+         * "Adds 1 site, 1 system, 1 visit, 2 reading sets. 0 already here. Moves 1 record to the recycle bin."
+         */
+        public String plainWords() {
+            List<String> parts = new ArrayList<>();
+            for (String kind : ORDER) {
+                int n = addedByKind.getOrDefault(kind, 0);
+                if (n > 0) {
+                    String noun = kind.equals("paperwork") ? "visit's paperwork" : kind;
+                    parts.add(n + " " + noun + (n == 1 || kind.equals("paperwork") ? "" : "s"));
+                }
+            }
+            StringBuilder b = new StringBuilder(parts.isEmpty() ? "Adds nothing new." : "Adds " + String.join(", ", parts) + ".");
+            b.append(' ').append(alreadyPresent).append(alreadyPresent == 1 ? " record is" : " records are")
+                    .append(" already here and stay as they are.");
+            if (deleted > 0) {
+                b.append(" Moves ").append(deleted).append(deleted == 1 ? " record" : " records")
+                        .append(" to the recycle bin, as deleted where the bundle was made.");
+            }
+            if (!conflicts.isEmpty()) {
+                b.append(" Cannot be imported: ").append(String.join("; ", conflicts))
+                        .append(" from the copy already here.");
+            }
+            return b.toString();
+        }
+    }
+
+    /**
+     * Reads and checks a bundle and says what importing it would add, leave and delete, changing
+     * nothing: what a screen shows before the tech confirms.
+     */
+    public static ImportSummary preview(Ledger ledger, Path file) throws BundleException {
+        BundleContent content = BundleReader.read(file);
+        Tally tally = new Tally(false);
+        List<String> conflicts = new ArrayList<>();
+        ledger.database().read(c -> {
+            compare(ledger, content, tally, conflicts);
+            return null;
+        });
+        return tally.summary(content, conflicts);
     }
 
     /**
@@ -75,54 +177,111 @@ public final class Bundles {
      */
     public static ImportSummary importBundle(Ledger ledger, Path file) throws BundleException {
         BundleContent content = BundleReader.read(file);
-        int[] counts = new int[2];
+        Tally tally = new Tally(true);
         try {
-            importContent(ledger, content, counts);
+            ledger.inTransaction(() -> {
+                List<String> conflicts = new ArrayList<>();
+                compare(ledger, content, tally, conflicts);
+                if (!conflicts.isEmpty()) {
+                    // thrown inside the transaction: everything above is rolled back
+                    throw new ImportConflict(conflicts);
+                }
+            });
         } catch (ImportConflict e) {
             throw new BundleException("bundle refused: " + String.join("; ", e.conflicts)
                     + " from the copy already in this ledger (same id, other content); nothing was imported");
         }
-        List<String> visitIds = new ArrayList<>();
-        content.visits().forEach(v -> visitIds.add(v.id()));
-        return new ImportSummary(counts[0], counts[1], visitIds);
+        return tally.summary(content, List.of());
     }
 
-    private static void importContent(Ledger ledger, BundleContent content, int[] counts) {
-        List<String> conflicts = new ArrayList<>();
-        ledger.inTransaction(() -> {
-            put(ledger.sites().find(content.site().id()), content.site(), "site " + content.site().id(), counts, conflicts,
-                    () -> ledger.sites().save(content.site()));
-            for (HvacSystem s : content.systems()) {
-                put(ledger.systems().find(s.id()), s, "system " + s.id(), counts, conflicts, () -> ledger.systems().save(s));
-            }
-            for (Visit v : content.visits()) {
-                put(ledger.visits().find(v.id()), v, "visit " + v.id(), counts, conflicts, () -> ledger.visits().save(v));
-            }
-            for (ReadingSet r : content.readings()) {
-                put(ledger.readings().find(r.id()), r, "reading set " + r.id(), counts, conflicts, () -> ledger.readings().save(r));
-            }
-            for (ImportedLog l : content.logs()) {
-                put(ledger.logs().find(l.id()), l, "log " + l.id(), counts, conflicts, () -> ledger.logs().save(l));
-            }
-            for (ResultsSnapshot s : content.snapshots()) {
-                put(ledger.snapshots().find(s.id()), s, "snapshot " + s.id(), counts, conflicts, () -> ledger.snapshots().save(s));
-            }
-            if (!conflicts.isEmpty()) {
-                // thrown inside the transaction: everything above is rolled back
-                throw new ImportConflict(conflicts);
-            }
-        });
+    /** Counts, and saves when {@code save} is set. */
+    private static final class Tally {
+        final boolean save;
+        int added;
+        int present;
+        int deleted;
+        final java.util.Map<String, Integer> byKind = new java.util.LinkedHashMap<>();
+
+        Tally(boolean save) {
+            this.save = save;
+        }
+
+        ImportSummary summary(BundleContent content, List<String> conflicts) {
+            List<String> visitIds = new ArrayList<>();
+            content.visits().forEach(v -> visitIds.add(v.id()));
+            return new ImportSummary(added, present, visitIds, deleted, List.copyOf(conflicts), java.util.Map.copyOf(byKind));
+        }
     }
 
-    private static <T> void put(Optional<T> existing, T incoming, String what, int[] counts, List<String> conflicts,
-                                Runnable save) {
+    private static void compare(Ledger ledger, BundleContent content, Tally t, List<String> conflicts) {
+        put(ledger.sites().find(content.site().id()), content.site(), "site", content.site().id(), t, conflicts,
+                () -> ledger.sites().save(content.site()));
+        for (HvacSystem s : content.systems()) {
+            put(ledger.systems().find(s.id()), s, "system", s.id(), t, conflicts, () -> ledger.systems().save(s));
+        }
+        for (Visit v : content.visits()) {
+            put(ledger.visits().find(v.id()), v, "visit", v.id(), t, conflicts, () -> ledger.visits().save(v));
+        }
+        for (ReadingSet r : content.readings()) {
+            put(ledger.readings().find(r.id()), r, "reading set", r.id(), t, conflicts, () -> ledger.readings().save(r));
+        }
+        for (ImportedLog l : content.logs()) {
+            put(ledger.logs().find(l.id()), l, "log", l.id(), t, conflicts, () -> ledger.logs().save(l));
+        }
+        for (ResultsSnapshot s : content.snapshots()) {
+            put(ledger.snapshots().find(s.id()), s, "snapshot", s.id(), t, conflicts, () -> ledger.snapshots().save(s));
+        }
+        for (Instrument i : content.instruments()) {
+            put(ledger.instruments().find(i.id()), i, "instrument", i.id(), t, conflicts, () -> ledger.instruments().save(i));
+        }
+        java.util.Map<String, java.util.TreeSet<String>> uses = new java.util.LinkedHashMap<>();
+        for (BundleContent.InstrumentUse u : content.instrumentUses()) {
+            uses.computeIfAbsent(u.readingSetId(), k -> new java.util.TreeSet<>()).add(u.instrumentId());
+        }
+        for (var e : uses.entrySet()) {
+            java.util.TreeSet<String> here = new java.util.TreeSet<>();
+            ledger.instruments().usedOn(e.getKey()).forEach(i -> here.add(i.id()));
+            put(here.isEmpty() ? Optional.empty() : Optional.of(here), e.getValue(), "instrument choice", e.getKey(), t,
+                    conflicts, () -> ledger.instruments().useOn(e.getKey(), List.copyOf(e.getValue())));
+        }
+        for (VisitPaperwork w : content.paperwork()) {
+            put(ledger.paperwork().find(w.visitId()), w, "paperwork", w.visitId(), t, conflicts,
+                    () -> ledger.paperwork().save(w));
+        }
+        for (BinEntry d : content.deletions()) {
+            if (live(ledger, d)) {
+                if (t.save) {
+                    ledger.recycleBin().delete(d.kind(), d.recordId(), d.deletedAt());
+                }
+                t.deleted++;
+            }
+        }
+    }
+
+    /** True when the deleted record is still live here (logs checked by id, without reading their samples). */
+    private static boolean live(Ledger ledger, BinEntry d) {
+        String id = d.recordId();
+        return switch (d.kind()) {
+            case SITE -> ledger.sites().find(id).isPresent();
+            case SYSTEM -> ledger.systems().find(id).isPresent();
+            case VISIT -> ledger.visits().find(id).isPresent();
+            case READINGS -> ledger.readings().find(id).isPresent();
+            case LOG -> ledger.logs().idsForVisit(d.visitId()).contains(id);
+        };
+    }
+
+    private static <T> void put(Optional<T> existing, T incoming, String kind, String id, Tally t,
+                                List<String> conflicts, Runnable save) {
         if (existing.isEmpty()) {
-            save.run();
-            counts[0]++;
+            if (t.save) {
+                save.run();
+            }
+            t.added++;
+            t.byKind.merge(kind, 1, Integer::sum);
         } else if (existing.get().equals(incoming)) {
-            counts[1]++;
+            t.present++;
         } else {
-            conflicts.add(what + " differs");
+            conflicts.add(kind + " " + id + " differs");
         }
     }
 

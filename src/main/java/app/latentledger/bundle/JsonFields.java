@@ -44,6 +44,34 @@ final class JsonFields {
         return e.getAsDouble();
     }
 
+    /** A number that may be absent or null — null then. */
+    Double optionalNumber(String name) throws BundleException {
+        JsonElement e = object.get(name);
+        return e == null || e.isJsonNull() ? null : number(name);
+    }
+
+    /** A nested object that may be absent or null — null then. */
+    JsonFields optionalObject(String name) throws BundleException {
+        JsonElement e = object.get(name);
+        return e == null || e.isJsonNull() ? null : new JsonFields(e, where + " " + name);
+    }
+
+    /** A list of texts. */
+    java.util.List<String> texts(String name) throws BundleException {
+        JsonElement e = element(name);
+        if (!e.isJsonArray()) {
+            throw new BundleException(where + ": field \"" + name + "\" must be a list");
+        }
+        java.util.List<String> out = new java.util.ArrayList<>();
+        for (JsonElement item : e.getAsJsonArray()) {
+            if (!item.isJsonPrimitive() || !item.getAsJsonPrimitive().isString()) {
+                throw new BundleException(where + ": field \"" + name + "\" must hold only text");
+            }
+            out.add(item.getAsString());
+        }
+        return out;
+    }
+
     int integer(String name) throws BundleException {
         double v = number(name);
         if (v != Math.rint(v) || v < 0 || v > Integer.MAX_VALUE) {

@@ -41,6 +41,8 @@ final class RecordsJson {
         o.addProperty("blowerType", s.blowerType());
         o.addProperty("fanSetting", s.fanSetting());
         o.addProperty("thermostatNotes", s.thermostatNotes());
+        o.addProperty("meteringDevice", s.meteringDevice());
+        o.addProperty("filter", s.filter());
         return o;
     }
 
@@ -48,7 +50,7 @@ final class RecordsJson {
         return new HvacSystem(f.text("id"), f.text("siteId"), f.text("label"),
                 SystemType.parse("system type", f.text("type")), f.number("nominalCapacityW"),
                 f.optionalText("refrigerant"), f.optionalText("blowerType"), f.optionalText("fanSetting"),
-                f.optionalText("thermostatNotes"));
+                f.optionalText("thermostatNotes"), f.optionalText("meteringDevice"), f.optionalText("filter"));
     }
 
     static JsonObject visit(Visit v) {

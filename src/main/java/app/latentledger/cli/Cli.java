@@ -33,7 +33,10 @@ public final class Cli {
     /** The commands that need no display; {@code Main} adds the ones that draw the app. */
     public static List<Command> standardCommands() {
         return List.of(new StateCommand(), new CoilCommand(), new LogCommand(), new VisitsCommand(),
-                new ReportCommand(), new DataCommand(), new SettingsCommand());
+                new ReportCommand(), new DataCommand(), new SettingsCommand(),
+                // recording from the command line
+                new SitesCommand(), new SystemsCommand(), new ReadingsCommand(), DeleteCommand.delete(),
+                DeleteCommand.restore(), new RecycleBinCommand());
     }
 
     /** The display-free commands alone (tests and tools that never draw). */
@@ -72,7 +75,8 @@ public final class Cli {
                 out.print(command.usage());
                 return OK;
             }
-            Args args = Args.parse(rest, Set.of("json", "help", "repair", Args.DECIMAL_COMMA));
+            Args args = Args.parse(rest, Set.of("json", "help", "repair", Args.DECIMAL_COMMA, "yes", "with-deletions",
+                    "dry-run"));
             return command.run(args, new CliContext(out, err, dataDir));
         } catch (UsageException e) {
             err.println("latent-ledger: " + e.getMessage());
@@ -129,7 +133,7 @@ public final class Cli {
         StringBuilder b = new StringBuilder("usage: latent-ledger [--data-dir DIR] COMMAND [options]\n"
                 + "       latent-ledger            (no command: opens the tablet app)\ncommands:\n");
         for (Command c : commands.values()) {
-            b.append(String.format("  %-8s %s%n", c.name(), c.summary()));
+            b.append(String.format("  %-11s %s%n", c.name(), c.summary()));
         }
         return b.append("Each command takes --help.\n").toString();
     }

@@ -42,6 +42,8 @@ final class RecordsView {
         m.put("blowerType", s.blowerType());
         m.put("fanSetting", s.fanSetting());
         m.put("thermostatNotes", s.thermostatNotes());
+        m.put("meteringDevice", s.meteringDevice());
+        m.put("filter", s.filter());
         return m;
     }
 
@@ -193,6 +195,12 @@ final class RecordsView {
         }
         if (!system.thermostatNotes().isEmpty()) {
             b.append(line("thermostat", system.thermostatNotes()));
+        }
+        if (!system.meteringDevice().isEmpty()) {
+            b.append(line("metering", system.meteringDevice()));
+        }
+        if (!system.filter().isEmpty()) {
+            b.append(line("filter", system.filter()));
         }
         if (!v.notes().isEmpty()) {
             b.append(line("notes", v.notes()));

@@ -41,14 +41,18 @@ public final class VisitsCommand implements Command {
     public String usage() {
         return "usage: latent-ledger [--data-dir DIR] visits list [--json]\n"
                 + "       latent-ledger [--data-dir DIR] visits show ID [--units ip|si] [--json]\n"
-                + "       latent-ledger [--data-dir DIR] visits export ID FILE [--json]\n"
-                + "       latent-ledger [--data-dir DIR] visits export-site SITE_ID FILE [--json]\n"
-                + "       latent-ledger [--data-dir DIR] visits import FILE [--json]\n"
+                + "       latent-ledger [--data-dir DIR] visits export ID FILE [--with-deletions] [--json]\n"
+                + "       latent-ledger [--data-dir DIR] visits export-site SITE_ID FILE [--with-deletions] [--json]\n"
+                + "       latent-ledger [--data-dir DIR] visits import FILE [--dry-run] [--json]\n"
                 + "       latent-ledger [--data-dir DIR] visits check [--repair] [--json]\n"
+                + VisitRecords.usage()
                 + "  ID: a visit id or its first characters (at least 4) as 'visits list' shows them\n"
                 + "  export writes one visit with its site, system, readings, logs and snapshots;\n"
                 + "  export-site writes a site with all its systems and visits (SITE_ID as in 'visits list --json')\n"
-                + "  import checks the whole bundle first and changes nothing when it refuses it\n"
+                + "  --with-deletions: also carry what was deleted there (still in the recycle bin), so the importing\n"
+                + "  ledger moves the same records to its own bin\n"
+                + "  import checks the whole bundle first and changes nothing when it refuses it; --dry-run only says\n"
+                + "  what it would add, leave and delete\n"
                 + "  check lists stored reading sets and logs that fail today's checks; --repair makes failing\n"
                 + "      optional values missing (a record that cannot be repaired so is listed for removal)\n"
                 + "  data folder: --data-dir, else $" + DataLocation.ENV + ", else the app's private storage\n";
@@ -58,10 +62,16 @@ public final class VisitsCommand implements Command {
     public int run(Args args, CliContext context) throws IOException {
         List<String> words = args.positionals();
         if (words.isEmpty()) {
-            throw new UsageException("visits needs a subcommand: list, show, export, export-site, import or check\n" + usage());
+            throw new UsageException("visits needs a subcommand: list, show, export, export-site, import, check, "
+                    + String.join(", ", VisitRecords.SUBCOMMANDS) + "\n" + usage());
         }
         String sub = words.get(0);
+        if (VisitRecords.SUBCOMMANDS.contains(sub)) {
+            return VisitRecords.run(sub, args, context);
+        }
         boolean json = args.flag("json");
+        boolean withDeletions = args.flag("with-deletions");
+        boolean dryRun = args.flag("dry-run");
         UnitSystem units = sub.equals("show") ? UnitOptions.units(args) : UnitSystem.IP;
         boolean repair = sub.equals("check") && args.flag("repair");
         args.rejectUnknown();
@@ -108,7 +118,7 @@ public final class VisitsCommand implements Command {
                     Visit v = Visits.find(ledger, words.get(1));
                     Path file = exportTarget(words.get(2));
                     try {
-                        Bundles.exportVisit(ledger, v.id(), file);
+                        Bundles.exportVisit(ledger, v.id(), file, withDeletions);
                     } catch (IOException e) {
                         throw new UsageException("cannot write " + file + ": " + e.getMessage());
                     }
@@ -122,7 +132,7 @@ public final class VisitsCommand implements Command {
                             new UsageException("no site with id '" + siteId + "' (see: visits list --json, field siteId)"));
                     Path file = exportTarget(words.get(2));
                     try {
-                        Bundles.exportSite(ledger, site.id(), file);
+                        Bundles.exportSite(ledger, site.id(), file, withDeletions);
                     } catch (IOException e) {
                         throw new UsageException("cannot write " + file + ": " + e.getMessage());
                     }
@@ -141,7 +151,7 @@ public final class VisitsCommand implements Command {
                     Path file = Path.of(words.get(1));
                     Bundles.ImportSummary s;
                     try {
-                        s = Bundles.importBundle(ledger, file);
+                        s = dryRun ? Bundles.preview(ledger, file) : Bundles.importBundle(ledger, file);
                     } catch (BundleException e) {
                         throw new UsageException(e.getMessage());
                     }
@@ -150,9 +160,17 @@ public final class VisitsCommand implements Command {
                     m.put("added", s.added());
                     m.put("alreadyPresent", s.alreadyPresent());
                     m.put("visits", s.visitIds());
+                    m.put("deleted", s.deleted());
+                    m.put("addedByKind", s.addedByKind());
+                    if (dryRun) {
+                        m.put("conflicts", s.conflicts());
+                    }
                     result = m;
-                    text = "Imported " + file + ": " + s.added() + " records added, " + s.alreadyPresent()
-                            + " already present; visits " + String.join(", ", s.visitIds()) + "\n";
+                    text = (dryRun ? "Would import " : "Imported ") + file + ": " + s.added() + " records "
+                            + (dryRun ? "to add" : "added") + " " + s.addedByKind() + ", " + s.alreadyPresent()
+                            + " already present" + (s.deleted() > 0 ? ", " + s.deleted() + (dryRun ? " to delete" : " deleted")
+                            + " (into the recycle bin)" : "") + "; visits " + String.join(", ", s.visitIds()) + "\n"
+                            + (s.conflicts().isEmpty() ? "" : "Refused as it stands: " + String.join("; ", s.conflicts()) + "\n");
                 }
             }
             context.out().print(json ? Json.print(result) + "\n" : text);
@@ -183,18 +201,40 @@ public final class VisitsCommand implements Command {
             m.put("technician", v.technician());
             m.put("readingSets", ledger.readings().forVisit(v.id()).size());
             m.put("logs", ledger.logs().idsForVisit(v.id()).size());
+            m.put("latestVerdict", latestVerdict(ledger, v, site, system));
             rows.add(m);
         }
         return rows;
     }
 
+    /**
+     * The verdict of the visit's latest reading set, worked out as the app shows it
+     * ({@link app.latentledger.core.visit.ReadingSetCheck}); "incomplete" when it lacks what the coil
+     * check needs, "" when the visit has no reading set.
+     */
+    private static String latestVerdict(Ledger ledger, Visit v, Site site, HvacSystem system) {
+        List<ReadingSet> sets = ledger.readings().forVisit(v.id());
+        if (sets.isEmpty()) {
+            return "";
+        }
+        ReadingSet latest = sets.get(sets.size() - 1);
+        if (!app.latentledger.core.visit.ReadingSetCheck.missing(latest).isEmpty()) {
+            return "incomplete";
+        }
+        var settings = ledger.settings().load();
+        return app.latentledger.core.visit.ReadingSetCheck.run(latest, system, site, settings.thresholds(),
+                settings.units()).verdict().key();
+    }
+
     private static String listTable(List<Map<String, Object>> rows, DataLocation location) {
         StringBuilder b = new StringBuilder();
-        b.append(String.format("%-8s  %-22s  %-13s  %-28s  %-24s  %s%n", "id", "date", "purpose", "site", "system", "readings"));
+        b.append(String.format("%-8s  %-22s  %-13s  %-28s  %-24s  %-8s  %s%n", "id", "date", "purpose", "site", "system",
+                "readings", "latest verdict"));
         for (Map<String, Object> r : rows) {
-            b.append(String.format("%-8s  %-22s  %-13s  %-28s  %-24s  %s%n", Visits.shortId((String) r.get("id")),
+            b.append(String.format("%-8s  %-22s  %-13s  %-28s  %-24s  %-8s  %s%n", Visits.shortId((String) r.get("id")),
                     Visits.when(java.time.OffsetDateTime.parse((String) r.get("date"))), r.get("purpose"),
-                    clip((String) r.get("site"), 28), clip((String) r.get("system"), 24), r.get("readingSets")));
+                    clip((String) r.get("site"), 28), clip((String) r.get("system"), 24), r.get("readingSets"),
+                    r.get("latestVerdict")));
         }
         b.append(rows.size()).append(rows.size() == 1 ? " visit" : " visits").append(" in ").append(location).append('\n');
         return b.toString();
@@ -234,6 +274,16 @@ public final class VisitsCommand implements Command {
             logs.add(lm);
         }
         m.put("logs", logs);
+        var w = ledger.paperwork().forVisit(v.id());
+        Map<String, Object> pm = new LinkedHashMap<>();
+        pm.put("customerWords", w.customerWords());
+        pm.put("workDone", w.workDone());
+        pm.put("technicianSignOff", w.technician() == null ? null : w.technician().name());
+        pm.put("customerSignOff", w.customer() == null ? null : w.customer().name());
+        m.put("paperwork", pm);
+        List<Object> instruments = new ArrayList<>();
+        ledger.instruments().forVisit(v.id()).forEach(i -> instruments.add(VisitRecords.instrumentJson(i, units)));
+        m.put("instruments", instruments);
         m.put("safety", Cautions.SAFETY_LINE);
         return m;
     }
@@ -252,6 +302,24 @@ public final class VisitsCommand implements Command {
         for (ImportedLog l : ledger.logs().forVisit(v.id())) {
             b.append(String.format("  log %s  %s: %d samples, %s%n", Visits.shortId(l.id()), l.sourceFileName(),
                     l.samples().size(), String.join(", ", l.samples().channelNames())));
+        }
+        for (var i : ledger.instruments().forVisit(v.id())) {
+            b.append("  instrument ").append(i.describe()).append(VisitRecords.accuracyText(i.accuracy(), units)).append('\n');
+        }
+        var w = ledger.paperwork().forVisit(v.id());
+        if (!w.customerWords().isEmpty()) {
+            b.append("  customer's words: ").append(w.customerWords()).append('\n');
+        }
+        if (!w.workDone().isEmpty()) {
+            b.append("  work done: ").append(w.workDone()).append('\n');
+        }
+        if (w.technician() != null) {
+            b.append("  signed by the technician: ").append(w.technician().name()).append(", ")
+                    .append(Visits.when(w.technician().signedAt())).append('\n');
+        }
+        if (w.customer() != null) {
+            b.append("  signed by the customer: ").append(w.customer().name()).append(", ")
+                    .append(Visits.when(w.customer().signedAt())).append('\n');
         }
         return b.append(Cautions.SAFETY_LINE).append('\n').toString();
     }

@@ -43,13 +43,32 @@ final class ClosingSection {
         double gap = 18;
         double w = (f.width() - gap) / 2;
         double top = f.y();
-        String tech = data.latest().visit().technician();
-        box(f, f.left(), top, w, boxHeight, "Technician", tech);
-        box(f, f.left() + w + gap, top, w, boxHeight, "Customer or commissioning authority", "");
+        var paperwork = data.paperwork().of(data.latest().visit().id());
+        var techSigned = paperwork.technician();
+        var customerSigned = paperwork.customer();
+        String tech = techSigned != null ? techSigned.name() : data.latest().visit().technician();
+        box(f, f.left(), top, w, boxHeight, "Technician", tech, signedText(techSigned));
+        box(f, f.left() + w + gap, top, w, boxHeight, "Customer or commissioning authority",
+                customerSigned == null ? "" : customerSigned.name(), signedText(customerSigned));
         f.advance(boxHeight + 8);
+        if (techSigned != null && !techSigned.remark().isEmpty()) {
+            t.paragraph("Technician's remark: " + techSigned.remark(), Ink.SMALL, 0);
+        }
+        if (customerSigned != null && !customerSigned.remark().isEmpty()) {
+            t.paragraph("Customer's remark: " + customerSigned.remark(), Ink.SMALL, 0);
+        }
     }
 
-    private static void box(PageFlow f, double x, double y, double w, double h, String role, String name) {
+    /** "Signed on the tablet 16 July 2026, 10:05 (−04:00)" for a recorded sign-off, else "". */
+    private static String signedText(app.latentledger.core.records.SignOff s) {
+        if (s == null) {
+            return "";
+        }
+        return "Signed on the tablet " + PlainWords.dateTime(s.signedAt());
+    }
+
+    private static void box(PageFlow f, double x, double y, double w, double h, String role, String name,
+                            String signed) {
         var p = f.painter();
         p.rect(x, y, w, h, null, Stroke.solid(Ink.RULE, 0.8));
         p.text(x + 8, y + 14, role, Ink.LABEL.emphasised());
@@ -60,6 +79,14 @@ final class ClosingSection {
             p.text(x + 44, line1 - 4, name, Ink.BODY);
         }
         p.line(x + 42, line1, x + w - 8, line1, Stroke.solid(Ink.MUTED, 0.5));
+        if (!signed.isEmpty()) {
+            // one line inside the box: a long remark is cut with an ellipsis
+            String shown = signed;
+            while (shown.length() > 1 && f.fonts().width(shown, Ink.SMALL.size(), false) > w - 16) {
+                shown = shown.substring(0, shown.length() - 2) + "…";
+            }
+            p.text(x + 8, line1 + 14, shown, Ink.SMALL);
+        }
         p.text(x + 8, line2 - 3, "Signature", Ink.SMALL);
         p.line(x + 50, line2, x + w * 0.62, line2, Stroke.solid(Ink.MUTED, 0.5));
         p.text(x + w * 0.62 + 6, line2 - 3, "Date", Ink.SMALL);

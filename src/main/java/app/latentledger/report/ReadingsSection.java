@@ -115,9 +115,15 @@ final class ReadingsSection {
                 s.condensate().volume().toleranceSi()) + " in "
                 + DisplayNumber.withSpread(Quantity.DURATION_MINUTES, units, s.condensate().seconds().valueSi(),
                 s.condensate().seconds().toleranceSi()));
-        row(tb, sets, "Instruments", s -> s.instrument().isEmpty() ? "not recorded" : s.instrument());
+        row(tb, sets, "Instruments", this::instruments);
         row(tb, sets, "Notes", s -> s.notes().isEmpty() ? "—" : s.notes());
         return tb;
+    }
+
+    /** The instruments chosen for the set by name, else what was typed, else "not recorded". */
+    private String instruments(ReadingSet s) {
+        List<String> names = data.paperwork().usedOn(s.id()).stream().map(i -> i.name()).toList();
+        return !names.isEmpty() ? String.join(", ", names) : s.instrument().isEmpty() ? "not recorded" : s.instrument();
     }
 
     private Table results(List<CheckedReadings> sets) {

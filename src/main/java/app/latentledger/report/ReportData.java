@@ -18,10 +18,17 @@ import java.util.List;
  * @param units  display units
  * @param visits the visit, or the two visits in time order
  * @param pair   before and after, or null
+ * @param paperwork the visits' notes, sign-offs and instruments
  */
-public record ReportData(UnitSystem units, List<VisitEvidence> visits, BeforeAfter pair) {
+public record ReportData(UnitSystem units, List<VisitEvidence> visits, BeforeAfter pair, ReportPaperwork paperwork) {
     public ReportData {
         visits = List.copyOf(visits);
+        paperwork = paperwork == null ? ReportPaperwork.NONE : paperwork;
+    }
+
+    /** A report without paperwork. */
+    public ReportData(UnitSystem units, List<VisitEvidence> visits, BeforeAfter pair) {
+        this(units, visits, pair, ReportPaperwork.NONE);
     }
 
     /**
@@ -31,7 +38,8 @@ public record ReportData(UnitSystem units, List<VisitEvidence> visits, BeforeAft
     public static ReportData load(Ledger ledger, String visitId, String compareVisitId, UnitSystem units) {
         VisitEvidence main = VisitEvidence.load(ledger, visitId, units);
         if (compareVisitId == null) {
-            return new ReportData(units, List.of(main), BeforeAfter.within(main));
+            return new ReportData(units, List.of(main), BeforeAfter.within(main),
+                    ReportPaperwork.load(ledger, List.of(main)));
         }
         if (compareVisitId.equals(visitId)) {
             throw new ReportRefusedException("a visit cannot be compared with itself; its own before and after"
@@ -40,7 +48,7 @@ public record ReportData(UnitSystem units, List<VisitEvidence> visits, BeforeAft
         VisitEvidence other = VisitEvidence.load(ledger, compareVisitId, units);
         List<VisitEvidence> both = new ArrayList<>(List.of(main, other));
         both.sort((a, b) -> a.visit().startedAt().toInstant().compareTo(b.visit().startedAt().toInstant()));
-        return new ReportData(units, both, BeforeAfter.across(both.get(0), both.get(1)));
+        return new ReportData(units, both, BeforeAfter.across(both.get(0), both.get(1)), ReportPaperwork.load(ledger, both));
     }
 
     public boolean comparesVisits() {

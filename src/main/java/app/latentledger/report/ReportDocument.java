@@ -40,6 +40,7 @@ final class ReportDocument {
                 ChartSection charts = new ChartSection(data);
                 charts.psychro(t);
                 new ReadingsSection(data).write(t);
+                new PaperworkSection(data).write(t);
                 TechnicalSection technical = new TechnicalSection(data, charts);
                 technical.findings(t);
                 technical.logs(t);

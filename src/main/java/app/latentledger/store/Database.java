@@ -12,7 +12,6 @@ import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
-import java.util.List;
 
 /**
  * The ledger's SQLite file. One connection, used by one thread at a time.
@@ -133,8 +132,10 @@ public final class Database implements AutoCloseable {
         if (current > Migration.latestVersion()) {
             throw newerSchema(current);
         }
-        List<Migration> all = Migration.all();
-        for (Migration m : all.subList(current, Math.min(target, all.size()))) {
+        for (Migration m : Migration.all()) {
+            if (m.version() <= current || m.version() > target) {
+                continue;
+            }
             // one transaction per step: a kill mid-step leaves the previous version intact; another
             // program may have applied the step meanwhile, so it is checked again under the lock
             write(c -> {

@@ -18,6 +18,9 @@ public final class Ledger implements AutoCloseable {
     private final LogRepository logs;
     private final SnapshotRepository snapshots;
     private final SettingsRepository settings;
+    private final InstrumentRepository instruments;
+    private final PaperworkRepository paperwork;
+    private final RecycleBin recycleBin;
 
     public Ledger(Database db) {
         this.db = db;
@@ -28,6 +31,9 @@ public final class Ledger implements AutoCloseable {
         this.logs = new LogRepository(db);
         this.snapshots = new SnapshotRepository(db);
         this.settings = new SettingsRepository(db);
+        this.instruments = new InstrumentRepository(db);
+        this.paperwork = new PaperworkRepository(db);
+        this.recycleBin = new RecycleBin(db);
     }
 
     /** What a ledger that holds no site yet (its first run) is given. */
@@ -54,6 +60,7 @@ public final class Ledger implements AutoCloseable {
             if (firstRun == FirstRun.SEED_DEMO) {
                 DemoScenario.seedIfEmpty(ledger);
             }
+            ledger.recycleBin().purgeOlderThan(java.time.OffsetDateTime.now().minus(RecycleBin.KEEP));
         } catch (RuntimeException e) {
             ledger.close();
             throw e;
@@ -92,6 +99,24 @@ public final class Ledger implements AutoCloseable {
     /** The tech's settings (units, tolerances, thresholds, theme, paper). */
     public SettingsRepository settings() {
         return settings;
+    }
+
+    /** Instruments used on visits and which took each reading set. */
+    public InstrumentRepository instruments() {
+        return instruments;
+    }
+
+    /** Each visit's customer words, work done and sign-offs. */
+    public PaperworkRepository paperwork() {
+        return paperwork;
+    }
+
+    /**
+     * The one recycle bin: delete, restore, list, empty. Every deletion in the product goes
+     * through it, so nothing is lost to a wrong tap for {@link RecycleBin#KEEP}.
+     */
+    public RecycleBin recycleBin() {
+        return recycleBin;
     }
 
     /** Runs {@code work} as one transaction: every save inside it commits together or not at all. */

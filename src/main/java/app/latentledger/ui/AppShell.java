@@ -68,6 +68,7 @@ public final class AppShell extends BorderPane {
     /** True once the first frame is up and the charts may be built. */
     private boolean chartsAttached;
     private final Map<Screen, Parent> views = new EnumMap<>(Screen.class);
+    private app.latentledger.ui.paperwork.VisitRecordModel record;
     private final Pane rail = new VBox();
     private final Pane bar = new HBox();
     private final Map<Screen, ToggleButton> navButtons = new EnumMap<>(Screen.class);
@@ -167,6 +168,14 @@ public final class AppShell extends BorderPane {
         return compare;
     }
 
+    /** The Record screen's state: paperwork, instruments, set label, deleting, recycle bin, bundle import. */
+    public app.latentledger.ui.paperwork.VisitRecordModel record() {
+        if (record == null) {
+            record = new app.latentledger.ui.paperwork.VisitRecordModel(session, work, fx);
+        }
+        return record;
+    }
+
     public ExportViewModel export() {
         if (export == null) {
             export = new ExportViewModel(session, reports());
@@ -229,7 +238,7 @@ public final class AppShell extends BorderPane {
 
     /** Builds the screens not shown yet, one per pulse, so the first switch to each is instant. */
     public void prepareOtherScreens() {
-        for (Screen s : shell.screens()) {
+        for (Screen s : Screen.values()) {
             Platform.runLater(() -> view(s));
         }
     }
@@ -246,6 +255,7 @@ public final class AppShell extends BorderPane {
                 case RESULTS -> new ResultsView(results());
                 case LOGS -> new LogView(logs());
                 case COMPARE -> new CompareView(compare());
+                case RECORD -> new app.latentledger.ui.paperwork.VisitRecordView(record());
                 case EXPORT -> new ExportView(export());
                 case SETTINGS -> new ReflowingSettings(new SettingsView(settings()));
             };
@@ -290,7 +300,8 @@ public final class AppShell extends BorderPane {
 
     private void show(Screen s) {
         setCenter(view(s));
-        navButtons.get(s).setSelected(true);
+        // a screen opened from another (Record, from Export) lights its way in: Export
+        navButtons.get(navButtons.containsKey(s) ? s : Screen.EXPORT).setSelected(true);
     }
 
     private HBox header() {
@@ -323,6 +334,7 @@ public final class AppShell extends BorderPane {
             case READINGS -> Icons.READINGS;
             case RESULTS -> Icons.RESULTS;
             case LOGS -> Icons.LOGS;
+            case RECORD -> Icons.NOTE;
             case COMPARE -> Icons.COMPARE;
             case EXPORT -> Icons.EXPORT;
             case SETTINGS -> Icons.SETTINGS;

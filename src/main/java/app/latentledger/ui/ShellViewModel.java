@@ -32,9 +32,13 @@ public final class ShellViewModel {
         return context;
     }
 
-    /** Every main screen, in the order a visit walks through them. */
+    /**
+     * The screens on the navigation, in the order a visit walks through them. The Record screen
+     * (notes, instruments, sign-off, deleting, recycle bin) is opened from Export, so the bar at
+     * the bottom of an upright tablet keeps room for its buttons.
+     */
     public List<Screen> screens() {
-        return List.of(Screen.values());
+        return java.util.Arrays.stream(Screen.values()).filter(s -> s != Screen.RECORD).toList();
     }
 
     public ReadOnlyObjectProperty<Screen> screenProperty() {

@@ -150,9 +150,9 @@ class BundleTest {
     @Test
     void anUnknownFormatVersionIsRefused() throws Exception {
         Path file = rewritten(entries -> entries.put("manifest.json", new String(entries.get("manifest.json"),
-                StandardCharsets.UTF_8).replace("\"formatVersion\": 1", "\"formatVersion\": 2").getBytes(StandardCharsets.UTF_8)));
+                StandardCharsets.UTF_8).replace("\"formatVersion\": 2", "\"formatVersion\": 3").getBytes(StandardCharsets.UTF_8)));
         BundleException e = assertThrows(BundleException.class, () -> Bundles.importBundle(target, file));
-        assertTrue(e.getMessage().contains("format version 2 is not one this app reads"), e.getMessage());
+        assertTrue(e.getMessage().contains("format version 3 is not one this app reads"), e.getMessage());
         assertTrue(e.getMessage().contains("update the app"), e.getMessage());
 
         Path other = rewritten(entries -> entries.put("manifest.json", new String(entries.get("manifest.json"),

@@ -33,7 +33,7 @@ class MigrationsTest {
     Path dir;
 
     @ParameterizedTest(name = "database made at schema version {0}")
-    @ValueSource(ints = {1, 2, 3})
+    @ValueSource(ints = {1, 2, 3, 4})
     void opensADatabaseMadeByAnEarlierVersion(int version) throws Exception {
         assertTrue(version < Migration.latestVersion(), "list every earlier version here");
         Path file = dir.resolve("v" + version + ".db");
@@ -75,7 +75,14 @@ class MigrationsTest {
             Settings changed = Settings.DEFAULTS.withChoice("units", "si");
             ledger.settings().save(changed);
             assertEquals(changed, ledger.settings().load());
-            assertEquals(appliedSteps(ledger.database()), List.of(1, 2, 3, 4));
+            assertEquals(appliedSteps(ledger.database()), Migration.all().stream().map(Migration::version).toList());
+            // V7: systems from before it have no metering device or filter; the paperwork tables work
+            assertEquals("", ledger.systems().find("y").orElseThrow().meteringDevice());
+            ledger.paperwork().save(app.latentledger.core.records.VisitPaperwork.blank("v").withNotes("words", "done"));
+            assertEquals("done", ledger.paperwork().forVisit("v").workDone());
+            ledger.recycleBin().delete(app.latentledger.core.records.RecordKind.VISIT, "v");
+            ledger.recycleBin().restore(app.latentledger.core.records.RecordKind.VISIT, "v");
+            assertEquals("ok", ledger.database().integrityCheck());
         }
     }
 
@@ -109,7 +116,7 @@ class MigrationsTest {
                         java.security.MessageDigest.getInstance("SHA-256").digest(in.readAllBytes())), e.getKey());
             }
         }
-        assertEquals(released.size(), Migration.FILES.size());
+        assertTrue(Migration.FILES.containsAll(released.keySet()), "a released step is never dropped");
     }
 
     @Test

@@ -14,11 +14,14 @@ import app.latentledger.core.units.Quantity;
  *                           residential or light-commercial unit)
  * @param refrigerant        e.g. "R-410A"; free text
  * @param blowerType         e.g. "ECM constant torque", "PSC"; free text
- * @param fanSetting         thermostat fan mode and blower speed tap as found, free text
+ * @param fanSetting         blower setting: thermostat fan mode and speed tap or ECM profile as found, free text
  * @param thermostatNotes    set point, dehumidify setting, fan-off delay as found
+ * @param meteringDevice     e.g. "TXV", "fixed orifice (piston)", "EEV"; free text
+ * @param filter             filter size, type and condition as found, e.g. "16x25x1 pleated, dirty"
  */
 public record HvacSystem(String id, String siteId, String label, SystemType type, double nominalCapacityW,
-                         String refrigerant, String blowerType, String fanSetting, String thermostatNotes) {
+                         String refrigerant, String blowerType, String fanSetting, String thermostatNotes,
+                         String meteringDevice, String filter) {
     public static final double MIN_CAPACITY_W = 500;
     public static final double MAX_CAPACITY_W = 200_000;
 
@@ -32,5 +35,13 @@ public record HvacSystem(String id, String siteId, String label, SystemType type
         blowerType = Check.optionalText("system blower type", blowerType, 200);
         fanSetting = Check.optionalText("system fan setting", fanSetting, 200);
         thermostatNotes = Check.optionalText("system thermostat notes", thermostatNotes, 2000);
+        meteringDevice = Check.optionalText("system metering device", meteringDevice, 200);
+        filter = Check.optionalText("system filter", filter, 500);
+    }
+
+    /** A system with no metering device or filter recorded (as systems were before those details). */
+    public HvacSystem(String id, String siteId, String label, SystemType type, double nominalCapacityW,
+                      String refrigerant, String blowerType, String fanSetting, String thermostatNotes) {
+        this(id, siteId, label, type, nominalCapacityW, refrigerant, blowerType, fanSetting, thermostatNotes, "", "");
     }
 }

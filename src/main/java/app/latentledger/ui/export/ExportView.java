@@ -56,8 +56,12 @@ public final class ExportView extends VBox implements Reflowing {
                         + " uncertainty, the chart, the findings in plain words and, when the visit has them,"
                         + " its before and after readings compared. The data export is the same numbers as"
                         + " CSV or JSON for a spreadsheet.", "muted"),
-                reportButtons, reportStatus, Ui.wrapped("Reports are written to " + reports.folder(), "muted"));
-        getChildren().add(Ui.scroll(new VBox(12, report, bundle)));
+                reportButtons, reportStatus, shareBar(reports),
+                Ui.wrapped("Reports are written to " + reports.folder(), "muted"));
+        javafx.scene.control.Button record = Ui.button("open-record", "Notes, instruments, sign-off, recycle bin",
+                Icons.NOTE, viewModel::openRecord);
+        getChildren().add(Ui.scroll(new VBox(12, Ui.panel(8, Ui.label("The visit's record", "heading"), record),
+                report, bundle)));
     }
 
     public ExportViewModel viewModel() {
@@ -67,5 +71,17 @@ public final class ExportView extends VBox implements Reflowing {
     @Override
     public void setPortrait(boolean portrait) {
         // a single column already
+    }
+
+    /** Open, print or share the file just written, as far as this device offers. */
+    private app.latentledger.ui.share.ShareBar shareBar(ReportViewModel reports) {
+        app.latentledger.ui.share.ShareViewModel share = new app.latentledger.ui.share.ShareViewModel(
+                app.latentledger.handoff.HandOffs.forThisDevice(), app.latentledger.ui.session.Background.worker(),
+                app.latentledger.ui.session.Background.fx());
+        share.fileProperty().bind(reports.lastFileProperty());
+        share.titleProperty().bind(javafx.beans.binding.Bindings.createStringBinding(() ->
+                reports.lastFileProperty().get() == null ? "Report" : reports.lastFileProperty().get().getFileName()
+                        .toString(), reports.lastFileProperty()));
+        return new app.latentledger.ui.share.ShareBar(share);
     }
 }

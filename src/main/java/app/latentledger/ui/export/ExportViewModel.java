@@ -30,6 +30,11 @@ public final class ExportViewModel {
     }
 
     /** The visit's PDF report and its CSV/JSON data, beside the bundle. */
+    /** Opens the Record screen: the customer's words, work done, instruments, sign-off, recycle bin. */
+    public void openRecord() {
+        session.screenProperty().set(app.latentledger.ui.session.Screen.RECORD);
+    }
+
     public ReportViewModel reports() {
         return reports;
     }

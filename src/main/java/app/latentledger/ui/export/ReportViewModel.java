@@ -33,6 +33,7 @@ public final class ReportViewModel {
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
     private final ReadOnlyBooleanWrapper busy = new ReadOnlyBooleanWrapper(false);
     private final ReadOnlyBooleanWrapper failed = new ReadOnlyBooleanWrapper(false);
+    private final javafx.beans.property.ReadOnlyObjectWrapper<Path> lastFile = new javafx.beans.property.ReadOnlyObjectWrapper<>();
 
     public ReportViewModel(AppSession session) {
         this(session, Background.worker(), Background.fx());
@@ -52,6 +53,11 @@ public final class ReportViewModel {
     /** True while a file is being written (the buttons wait). */
     public ReadOnlyBooleanProperty busyProperty() {
         return busy.getReadOnlyProperty();
+    }
+
+    /** The last file written (report or data), for the open, print and share buttons; null before any. */
+    public javafx.beans.property.ReadOnlyObjectProperty<Path> lastFileProperty() {
+        return lastFile.getReadOnlyProperty();
     }
 
     /** True when the last job wrote nothing. */
@@ -133,9 +139,11 @@ public final class ReportViewModel {
         work.execute(() -> {
             String message;
             boolean bad;
+            Path done = null;
             try {
                 Files.createDirectories(folder());
                 Path written = job.call();
+                done = written;
                 message = "Saved the " + what + ": " + written.getFileName() + " in " + folder();
                 bad = false;
             } catch (Exception e) {
@@ -144,7 +152,11 @@ public final class ReportViewModel {
             }
             String shown = message;
             boolean refused = bad;
+            Path writtenFile = done;
             fx.execute(() -> {
+                if (writtenFile != null) {
+                    lastFile.set(writtenFile);
+                }
                 status.set(shown);
                 failed.set(refused);
                 busy.set(false);

@@ -7,6 +7,7 @@ public enum Screen {
     RESULTS("results", "Results"),
     LOGS("logs", "Logs"),
     COMPARE("compare", "Compare"),
+    RECORD("record", "Record"),
     EXPORT("export", "Export"),
     SETTINGS("settings", "Settings");
 

@@ -1,0 +1,88 @@
+package app.latentledger.cli;
+
+import app.latentledger.core.records.Ids;
+import app.latentledger.core.records.Site;
+import app.latentledger.core.settings.Settings;
+import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.UnitSystem;
+import app.latentledger.store.Ledger;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/** {@code sites}: add a site, or list them with their ids. */
+public final class SitesCommand implements Command {
+    @Override
+    public String name() {
+        return "sites";
+    }
+
+    @Override
+    public String summary() {
+        return "record a site (add) or list the sites with their ids";
+    }
+
+    @Override
+    public String usage() {
+        return "usage: latent-ledger [--data-dir DIR] sites add --name NAME [--address TEXT] [--elevation FT|M]\n"
+                + "                                              [--notes TEXT] [--units ip|si] [--json]\n"
+                + "       latent-ledger [--data-dir DIR] sites list [--json]\n"
+                + "  --elevation sets the standard-atmosphere pressure of every reading set at the site\n"
+                + "  (default: the stored default elevation, 'settings show'); prints the new site's id\n";
+    }
+
+    @Override
+    public int run(Args args, CliContext context) {
+        List<String> words = args.positionals();
+        String sub = words.isEmpty() ? "" : words.get(0);
+        boolean json = args.flag("json");
+        try (Ledger ledger = LedgerRecords.open(context)) {
+            Settings settings = ledger.settings().load();
+            UnitSystem units = UnitOptions.units(args, settings.units());
+            switch (sub) {
+                case "add": {
+                    String name = args.value("name");
+                    String address = args.value("address");
+                    Double elevation = UnitOptions.si(args, "elevation", Quantity.ELEVATION, units);
+                    String notes = args.value("notes");
+                    args.rejectUnknown();
+                    expect(words, 1);
+                    if (name == null) {
+                        throw new UsageException("sites add needs --name NAME");
+                    }
+                    Site site = LedgerRecords.refusing(units, "--elevation", () -> {
+                        Site s = new Site(Ids.newId(), name, address, elevation == null
+                                ? settings.defaultElevationM() : elevation, notes);
+                        ledger.sites().save(s);
+                        return s;
+                    });
+                    Map<String, Object> m = LedgerRecords.made(site.id(), "site");
+                    m.put("name", site.name());
+                    context.out().print(json ? Json.print(m) + "\n" : "Added site " + site.name() + ": " + site.id() + "\n");
+                    return Cli.OK;
+                }
+                case "list": {
+                    args.rejectUnknown();
+                    expect(words, 1);
+                    List<Map<String, Object>> rows = new ArrayList<>();
+                    StringBuilder b = new StringBuilder();
+                    for (Site s : ledger.sites().all()) {
+                        rows.add(RecordsView.site(s, units));
+                        b.append(String.format("%-36s  %-28s  %s%n", s.id(), s.name(), s.address()));
+                    }
+                    context.out().print(json ? Json.print(rows) + "\n" : b.toString());
+                    return Cli.OK;
+                }
+                default:
+                    throw new UsageException("sites needs a subcommand: add or list\n" + usage());
+            }
+        }
+    }
+
+    private static void expect(List<String> words, int count) {
+        if (words.size() != count) {
+            throw new UsageException("unexpected words after the subcommand: " + words.subList(1, words.size()));
+        }
+    }
+}

@@ -1,0 +1,73 @@
+package app.latentledger.ui.paperwork;
+
+import app.latentledger.core.records.SetLabel;
+import app.latentledger.ui.bin.RecycleBinView;
+import app.latentledger.ui.look.Columns;
+import app.latentledger.ui.look.Icons;
+import app.latentledger.ui.look.Reflowing;
+import app.latentledger.ui.look.Ui;
+import app.latentledger.ui.share.BundleImportPanel;
+import javafx.scene.control.Label;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.layout.FlowPane;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+
+/**
+ * The Record screen: the visit's paperwork and instruments; this set's label; deleting the set or
+ * the visit (asked first); the recycle bin; importing a bundle. Binds only.
+ */
+public final class VisitRecordView extends VBox implements Reflowing {
+    private final VisitRecordModel model;
+    private final PaperworkView paperworkView;
+    private final Columns columns;
+
+    public VisitRecordView(VisitRecordModel model) {
+        super(12);
+        this.model = model;
+        getStyleClass().add("screen");
+        setId("screen-record");
+        paperworkView = new PaperworkView(model.paperwork(), model.instruments());
+        VBox.setVgrow(paperworkView, Priority.ALWAYS);
+
+        ToggleGroup group = new ToggleGroup();
+        FlowPane labels = new FlowPane(8, 8);
+        for (SetLabel l : SetLabel.values()) {
+            ToggleButton b = new ToggleButton(Character.toUpperCase(l.key().charAt(0)) + l.key().substring(1));
+            b.setId("set-label-" + l.key());
+            b.setMinHeight(Ui.MIN_TARGET_PX);
+            b.setToggleGroup(group);
+            b.setOnAction(e -> model.label(l));
+            labels.getChildren().add(b);
+        }
+        model.setLabelProperty().addListener((o, was, now) -> select(group, now));
+        select(group, model.setLabelProperty().get());
+        Label setMessage = Ui.wrapped("", "message");
+        setMessage.textProperty().bind(model.setMessageProperty());
+        VBox thisSet = Ui.panel(8, Ui.label("This reading set", "heading"),
+                Ui.wrapped("Label the set on the pad so the report pairs before with after.", "figure-label"),
+                labels, setMessage,
+                new FlowPane(8, 8, Ui.button("delete-set", "Delete this set", Icons.FIX, model::askDeleteSet),
+                        Ui.button("delete-visit", "Delete this visit", Icons.FIX, model::askDeleteVisit)));
+        RecycleBinView bin = new RecycleBinView(model.bin());
+        bin.setMinHeight(360);
+        BundleImportPanel importer = new BundleImportPanel(model.importer());
+        columns = new Columns(12, paperworkView, Ui.scroll(new VBox(12, thisSet, bin, importer)));
+        VBox.setVgrow(columns, Priority.ALWAYS);
+        getChildren().add(columns);
+    }
+
+    private static void select(ToggleGroup group, String key) {
+        group.getToggles().forEach(t -> t.setSelected(((ToggleButton) t).getId().equals("set-label-" + key)));
+    }
+
+    @Override
+    public void setPortrait(boolean portrait) {
+        columns.setPortrait(portrait);
+    }
+
+    public VisitRecordModel model() {
+        return model;
+    }
+}
