@@ -43,6 +43,7 @@ public final class ScreensCommand implements Command {
     public int run(Args args, CliContext context) throws Exception {
         String out = args.value("out");
         args.rejectUnknown();
+        args.noPositionals();
         if (out == null || out.isBlank()) {
             throw new UsageException("screens needs --out DIR\n" + usage());
         }

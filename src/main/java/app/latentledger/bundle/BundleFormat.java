@@ -26,8 +26,23 @@ final class BundleFormat {
     static final String PAPERWORK = "paperwork.json";
     static final String DELETIONS = "deletions.json";
 
-    /** Refuse entries larger than this: 256 MiB is far above a month of 1 Hz logging. */
+    /*
+     * Import limits (docs/bundle-format.md, "Limits"). The manifest is read first and every size it
+     * declares is checked against these before any other entry is inflated; an entry is then read
+     * only up to its declared size, so a bundle cannot make the reader hold more than it declared.
+     */
+    /** Entries in one zip: a site bundle holds 7 fixed entries and one per log. */
+    static final int MAX_ENTRIES = 2_000;
+    /** The manifest itself: a list of up to 2 000 names and checksums. */
+    static final long MAX_MANIFEST_BYTES = 1L << 20;
+    /** A record entry (site, systems, visits, logs, snapshots JSON; readings CSV). */
+    static final long MAX_RECORD_ENTRY_BYTES = 32L << 20;
+    /** One log's samples CSV: 256 MiB is far above a month of 1 Hz logging (about 140 MB). */
     static final long MAX_ENTRY_BYTES = 256L << 20;
+    /** All entries together, inflated. */
+    static final long MAX_TOTAL_BYTES = 2L << 30;
+    /** Longest line of a log CSV: a time and 64 channels of 25 characters each fit in 2 KiB. */
+    static final int MAX_LOG_LINE_CHARS = 16 * 1024;
 
     static final Gson GSON = new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().serializeNulls().create();
 

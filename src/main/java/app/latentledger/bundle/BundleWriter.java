@@ -89,9 +89,17 @@ public final class BundleWriter {
         }
         manifest.add("entries", list);
 
-        Path folder = target.toAbsolutePath().getParent();
+        Path absolute = target.toAbsolutePath();
+        Path folder = absolute.getParent();
+        if (folder == null || absolute.getFileName() == null) {
+            throw new IOException(target + " is a folder; give a file name for the bundle");
+        }
         Files.createDirectories(folder);
-        SafeFiles.writeAtomically(target, file -> {
+        if (Files.isDirectory(absolute)) {
+            throw new IOException(target + " is a folder; give a file name for the bundle");
+        }
+        // private (rw-------) and written whole: SafeFiles names the temporary for this process
+        SafeFiles.writeAtomically(absolute, file -> {
             ZipOutputStream zip = new ZipOutputStream(file);
             put(zip, BundleFormat.MANIFEST, json(manifest));
             for (Map.Entry<String, byte[]> e : entries.entrySet()) {

@@ -94,7 +94,11 @@ final class ReadingsCsv {
         measurement(row, h == null ? null : h.value());
     }
 
-    static List<ReadingSet> read(String csv) throws BundleException {
+    /**
+     * @param wheres receives, for each reading set returned, where it is ("readings.csv line 3"),
+     *               so a later check can name the line
+     */
+    static List<ReadingSet> read(String csv, List<String> wheres) throws BundleException {
         List<ReadingSet> out = new ArrayList<>();
         try (CSVParser parser = CSVParser.parse(new StringReader(csv),
                 CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get())) {
@@ -103,10 +107,14 @@ final class ReadingsCsv {
                     throw new BundleException(ENTRY + ": column " + column + " missing");
                 }
             }
+            long lineBefore = parser.getCurrentLineNumber();
             for (CSVRecord row : parser) {
-                String where = ENTRY + " line " + parser.getCurrentLineNumber();
+                // the line the row starts on (a quoted note may span several)
+                String where = ENTRY + " line " + (lineBefore + 1);
+                lineBefore = parser.getCurrentLineNumber();
                 try {
                     out.add(row(row, where));
+                    wheres.add(where);
                 } catch (IllegalArgumentException e) {
                     throw new BundleException(where + ": " + e.getMessage(), e);
                 }
@@ -164,6 +172,12 @@ final class ReadingsCsv {
     }
 
     private static double number(String text, String column, String where) throws BundleException {
+        for (int k = 0; k < text.length(); k++) {
+            char c = text.charAt(k);
+            if (!(c >= '0' && c <= '9' || c == '.' || c == 'E' || c == 'e' || c == '-' || c == '+')) {
+                throw new BundleException(where + ": " + column + " '" + text + "' is not a number");
+            }
+        }
         try {
             return Double.parseDouble(text);
         } catch (NumberFormatException e) {

@@ -1,6 +1,7 @@
 package app.latentledger.cli;
 
 import app.latentledger.core.InvalidInputException;
+import app.latentledger.store.StoreException;
 
 import java.io.PrintStream;
 import java.nio.file.Path;
@@ -45,7 +46,10 @@ public final class Cli {
         return new Cli(standardCommands());
     }
 
-    public int run(List<String> words, PrintStream out, PrintStream err) {
+    public int run(List<String> words, PrintStream rawOut, PrintStream rawErr) {
+        // text from records (a bundle's site name, notes) never reaches the terminal as control codes
+        PrintStream out = TerminalSafe.wrap(rawOut);
+        PrintStream err = TerminalSafe.wrap(rawErr);
         List<String> rest = new ArrayList<>(words);
         Path dataDir = null;
         try {
@@ -53,7 +57,7 @@ public final class Cli {
                 String opt = rest.remove(0);
                 if (opt.equals("--data-dir") || opt.startsWith("--data-dir=")) {
                     String v = opt.contains("=") ? opt.substring(opt.indexOf('=') + 1) : next(rest, opt);
-                    dataDir = Path.of(v);
+                    dataDir = dataDir(v);
                 } else if (opt.equals("--help")) {
                     out.print(overview());
                     return OK;
@@ -73,13 +77,26 @@ public final class Cli {
                 out.print(command.usage());
                 return OK;
             }
-            Args args = Args.parse(rest, Set.of("json", "help", "yes", "with-deletions", "dry-run", "same-probe"));
+            Args args = Args.parse(rest, Set.of("json", "help", "repair", Args.DECIMAL_COMMA, "yes", "with-deletions",
+                    "dry-run", "same-probe"));
             return command.run(args, new CliContext(out, err, dataDir));
         } catch (UsageException e) {
             err.println("latent-ledger: " + e.getMessage());
             return REFUSED;
         } catch (InvalidInputException e) {
             err.println("latent-ledger: " + e.getMessage());
+            return REFUSED;
+        } catch (StoreException e) {
+            if (e.kind() == StoreException.Kind.FAILED) {
+                err.println("latent-ledger: the ledger could not do it: " + e.getMessage());
+                return FAILED;
+            }
+            // busy (try again) or a data folder that cannot hold a ledger: the tech can act on both
+            err.println("latent-ledger: " + e.getMessage());
+            return REFUSED;
+        } catch (OutOfMemoryError e) {
+            err.println("latent-ledger: refused: this needs more memory than the app has ("
+                    + (Runtime.getRuntime().maxMemory() >> 20) + " MiB); nothing was changed");
             return REFUSED;
         } catch (Exception e) {
             // the tech reads a sentence; the class name and stack go to the log (java.util.logging, level FINE)
@@ -88,6 +105,23 @@ public final class Cli {
                     ? "the command stopped before it finished; nothing saved was changed" : e.getMessage()));
             return FAILED;
         }
+    }
+
+    /** The {@code --data-dir} value: refused when empty or an existing file (a folder is needed). */
+    private static Path dataDir(String value) {
+        if (value.isBlank()) {
+            throw new UsageException("--data-dir is empty: give the folder that holds (or will hold) the ledger");
+        }
+        Path p;
+        try {
+            p = Path.of(value);
+        } catch (java.nio.file.InvalidPathException e) {
+            throw new UsageException("--data-dir '" + value + "' is not a usable folder name: " + e.getReason());
+        }
+        if (java.nio.file.Files.exists(p) && !java.nio.file.Files.isDirectory(p)) {
+            throw new UsageException("--data-dir " + value + " is a file, not a folder; give a folder");
+        }
+        return p;
     }
 
     private static String next(List<String> rest, String opt) {

@@ -78,6 +78,7 @@ public final class CoilCommand implements Command {
         ThresholdSettings thresholds = thresholds(args, settings);
         boolean json = args.flag("json");
         args.rejectUnknown();
+        args.noPositionals();
         CoilResult result = CoilCheck.run(readings, thresholds, units);
         context.out().print(json ? Json.print(CoilJson.of(result, units)) + "\n" : table(result, site, units));
         return Cli.OK;

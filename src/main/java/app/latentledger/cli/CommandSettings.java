@@ -8,8 +8,8 @@ import app.latentledger.store.StoredSettings;
 /**
  * The tech's stored settings for a calculation command ({@code coil}, {@code log}): read from the
  * data folder {@code visits} uses, without creating a ledger (no ledger means the defaults). A
- * ledger that cannot be read does not stop a calculation: it runs on the defaults and says so on
- * standard error, so the tech knows their own thresholds were not used.
+ * ledger that exists but cannot be read stops the calculation with the reason: running on the
+ * defaults instead would give a verdict on thresholds the tech did not choose.
  */
 final class CommandSettings {
     private CommandSettings() {
@@ -20,9 +20,9 @@ final class CommandSettings {
         try {
             return StoredSettings.read(location);
         } catch (StoreException e) {
-            context.err().println("latent-ledger: settings not read from " + location + " (" + e.getMessage()
-                    + "); using the defaults");
-            return Settings.DEFAULTS;
+            throw new StoreException(e.kind() == StoreException.Kind.FAILED ? StoreException.Kind.UNAVAILABLE : e.kind(),
+                    "settings not read from " + location + " (" + e.getMessage() + "); nothing was worked out on"
+                    + " the defaults instead", e);
         }
     }
 }

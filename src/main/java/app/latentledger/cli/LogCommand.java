@@ -96,6 +96,11 @@ public final class LogCommand implements Command {
                     context.err()));
         } catch (LogProblem e) {
             throw new UsageException(e.getMessage());
+        } catch (IllegalArgumentException e) {
+            // sample times so far apart that, counted from the first, they no longer differ in a
+            // double (e.g. -1e308 and 60): the time axis cannot be read, which is a refusal
+            throw new UsageException(file + " refused: its sample times cannot be read as one increasing time"
+                    + " axis (" + e.getMessage() + "); check the time column");
         }
         LogConditions conditions;
         try {

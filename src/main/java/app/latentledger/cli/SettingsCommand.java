@@ -76,8 +76,10 @@ public final class SettingsCommand implements Command {
     private int change(DataLocation location, CliContext context, boolean json,
                        java.util.function.UnaryOperator<Settings> change, String key) {
         try (Ledger ledger = Ledger.open(location.folder())) {
-            Settings next = change.apply(ledger.settings().load());
-            ledger.settings().save(next);
+            // the change is applied to what was loaded and saved against that version: a change
+            // another program made meanwhile to another key is kept, to the same key refused
+            var base = ledger.settings().loadStamped();
+            Settings next = ledger.settings().save(base, change.apply(base.settings())).settings();
             if (json) {
                 context.out().print(Json.print(key == null ? showJson(next) : row(next, key)) + "\n");
             } else if (key == null) {

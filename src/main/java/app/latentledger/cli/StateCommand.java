@@ -42,6 +42,7 @@ public final class StateCommand implements Command {
         MoistAirState state = read(args, units, site.pressurePa(), "");
         boolean json = args.flag("json");
         args.rejectUnknown();
+        args.noPositionals();
         context.out().print(json ? Json.print(StateJson.of(state, units)) + "\n" : table(state, site, units));
         return Cli.OK;
     }

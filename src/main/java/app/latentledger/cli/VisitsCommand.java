@@ -44,6 +44,7 @@ public final class VisitsCommand implements Command {
                 + "       latent-ledger [--data-dir DIR] visits export ID FILE [--with-deletions] [--json]\n"
                 + "       latent-ledger [--data-dir DIR] visits export-site SITE_ID FILE [--with-deletions] [--json]\n"
                 + "       latent-ledger [--data-dir DIR] visits import FILE [--dry-run] [--json]\n"
+                + "       latent-ledger [--data-dir DIR] visits check [--repair] [--json]\n"
                 + VisitRecords.usage()
                 + "  ID: a visit id or its first characters (at least 4) as 'visits list' shows them\n"
                 + "  export writes one visit with its site, system, readings, logs and snapshots;\n"
@@ -52,6 +53,8 @@ public final class VisitsCommand implements Command {
                 + "  ledger moves the same records to its own bin\n"
                 + "  import checks the whole bundle first and changes nothing when it refuses it; --dry-run only says\n"
                 + "  what it would add, leave and delete\n"
+                + "  check lists stored reading sets and logs that fail today's checks; --repair makes failing\n"
+                + "      optional values missing (a record that cannot be repaired so is listed for removal)\n"
                 + "  data folder: --data-dir, else $" + DataLocation.ENV + ", else the app's private storage\n";
     }
 
@@ -59,7 +62,7 @@ public final class VisitsCommand implements Command {
     public int run(Args args, CliContext context) throws IOException {
         List<String> words = args.positionals();
         if (words.isEmpty()) {
-            throw new UsageException("visits needs a subcommand: list, show, export, export-site, import, "
+            throw new UsageException("visits needs a subcommand: list, show, export, export-site, import, check, "
                     + String.join(", ", VisitRecords.SUBCOMMANDS) + "\n" + usage());
         }
         String sub = words.get(0);
@@ -70,6 +73,7 @@ public final class VisitsCommand implements Command {
         boolean withDeletions = args.flag("with-deletions");
         boolean dryRun = args.flag("dry-run");
         UnitSystem units = sub.equals("show") ? UnitOptions.units(args) : UnitSystem.IP;
+        boolean repair = sub.equals("check") && args.flag("repair");
         args.rejectUnknown();
         switch (sub) {
             case "list":
@@ -86,6 +90,9 @@ public final class VisitsCommand implements Command {
                 break;
             case "import":
                 expect(words, 2, "visits import FILE");
+                break;
+            case "check":
+                expect(words, 1, "visits check [--repair]");
                 break;
             default:
                 throw new UsageException("unknown visits subcommand '" + sub + "'\n" + usage());
@@ -109,8 +116,12 @@ public final class VisitsCommand implements Command {
                 }
                 case "export": {
                     Visit v = Visits.find(ledger, words.get(1));
-                    Path file = Path.of(words.get(2));
-                    Bundles.exportVisit(ledger, v.id(), file, withDeletions);
+                    Path file = exportTarget(words.get(2));
+                    try {
+                        Bundles.exportVisit(ledger, v.id(), file, withDeletions);
+                    } catch (IOException e) {
+                        throw new UsageException("cannot write " + file + ": " + e.getMessage());
+                    }
                     result = exported(file, "visit", v.id());
                     text = "Exported visit " + v.id() + " to " + file + " (" + Files.size(file) + " bytes)\n";
                     break;
@@ -119,11 +130,21 @@ public final class VisitsCommand implements Command {
                     String siteId = words.get(1);
                     Site site = ledger.sites().find(siteId).orElseThrow(() ->
                             new UsageException("no site with id '" + siteId + "' (see: visits list --json, field siteId)"));
-                    Path file = Path.of(words.get(2));
-                    Bundles.exportSite(ledger, site.id(), file, withDeletions);
+                    Path file = exportTarget(words.get(2));
+                    try {
+                        Bundles.exportSite(ledger, site.id(), file, withDeletions);
+                    } catch (IOException e) {
+                        throw new UsageException("cannot write " + file + ": " + e.getMessage());
+                    }
                     result = exported(file, "site", site.id());
                     text = "Exported site " + site.name() + " (" + site.id() + ") to " + file + " ("
                             + Files.size(file) + " bytes)\n";
+                    break;
+                }
+                case "check": {
+                    List<VisitsCheck.Finding> found = VisitsCheck.run(ledger, repair);
+                    result = VisitsCheck.json(found);
+                    text = VisitsCheck.table(found);
                     break;
                 }
                 default: {
@@ -301,6 +322,39 @@ public final class VisitsCommand implements Command {
                     .append(Visits.when(w.customer().signedAt())).append('\n');
         }
         return b.append(Cautions.SAFETY_LINE).append('\n').toString();
+    }
+
+    /**
+     * Where an export may go: a file name (not a folder) in a folder that exists or whose parent
+     * does (one new folder is made; a mistyped path never makes a whole tree).
+     */
+    private static Path exportTarget(String word) {
+        if (word.isBlank()) {
+            throw new UsageException("the bundle file name is empty; give a file such as visit.zip");
+        }
+        Path file;
+        try {
+            file = Path.of(word);
+        } catch (java.nio.file.InvalidPathException e) {
+            throw new UsageException("'" + word + "' is not a usable file name: " + e.getReason());
+        }
+        Path absolute = file.toAbsolutePath().normalize();
+        Path folder = absolute.getParent();
+        if (folder == null || Files.isDirectory(absolute)) {
+            throw new UsageException("cannot write " + word + ": it is a folder; give a file name such as visit.zip");
+        }
+        if (Files.exists(folder) && !Files.isDirectory(folder)) {
+            throw new UsageException("cannot write " + word + ": " + folder + " is a file, not a folder");
+        }
+        Path above = folder.getParent();
+        if (!Files.isDirectory(folder) && (above == null || !Files.isDirectory(above))) {
+            // one new folder is made for the bundle, never a whole tree from a mistyped path
+            throw new UsageException("cannot write " + word + ": folder " + above + " does not exist");
+        }
+        if (Files.isDirectory(folder) && !Files.isWritable(folder)) {
+            throw new UsageException("cannot write " + word + ": no permission to create files in " + folder);
+        }
+        return file;
     }
 
     private static Map<String, Object> exported(Path file, String scope, String id) throws IOException {

@@ -8,7 +8,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
-import java.nio.file.attribute.PosixFilePermissions;
 
 /**
  * The one way the app writes a file it must never leave half-written: the draft the tech is
@@ -46,7 +45,9 @@ public final class SafeFiles {
 
     /**
      * Writes {@code body} to {@code target}, replacing it whole. The folder must exist. The file is
-     * readable by others (rw-r--r-- where permissions are POSIX), like a document the tech saves.
+     * readable by the tech's account only (rw------- where permissions are POSIX): drafts, reports,
+     * exports and bundles hold customer names, addresses and notes. The temporary file is named for
+     * this process, so a killed run's leftover is removed by the next write ({@link TempFiles}).
      *
      * @return the absolute target
      * @throws IOException when the folder cannot take the file; the old file is then unchanged
@@ -54,12 +55,9 @@ public final class SafeFiles {
     public static Path writeAtomically(Path target, Body body, Durability durability) throws IOException {
         Path absolute = target.toAbsolutePath().normalize();
         Path folder = absolute.getParent();
-        Path temp = Files.createTempFile(folder, "." + absolute.getFileName() + "-", ".part");
+        Path temp = TempFiles.beside(absolute);
         boolean moved = false;
         try {
-            if (temp.getFileSystem().supportedFileAttributeViews().contains("posix")) {
-                Files.setPosixFilePermissions(temp, PosixFilePermissions.fromString("rw-r--r--"));
-            }
             try (OutputStream out = Files.newOutputStream(temp)) {
                 body.write(out);
             }

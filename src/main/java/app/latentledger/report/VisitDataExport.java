@@ -78,13 +78,27 @@ public final class VisitDataExport {
         StringWriter w = new StringWriter();
         try (CSVPrinter p = new CSVPrinter(w, CSVFormat.RFC4180.builder().setHeader(DataRow.COLUMNS).get())) {
             for (DataRow r : rows) {
-                p.printRecord(r.visitId(), r.source(), r.sourceId(), r.sourceLabel(), r.record(), r.key(), r.label(),
-                        number(r.value()), r.unit(), number(r.plusMinus()), r.plusMinusKind(), r.findingCode(), r.text());
+                p.printRecord(cell(r.visitId()), cell(r.source()), cell(r.sourceId()), cell(r.sourceLabel()),
+                        cell(r.record()), cell(r.key()), cell(r.label()), number(r.value()), cell(r.unit()),
+                        number(r.plusMinus()), cell(r.plusMinusKind()), cell(r.findingCode()), cell(r.text()));
             }
         } catch (IOException e) {
             throw new IllegalStateException("writing to a string cannot fail", e);
         }
         return w.toString();
+    }
+
+    /**
+     * A text cell a spreadsheet will not run: one starting with {@code = + - @}, a tab or a carriage
+     * return is written with a leading apostrophe, which spreadsheets show as text (OWASP, "CSV
+     * Injection"). Number cells are written by {@link #number} and never changed.
+     */
+    static String cell(String text) {
+        if (text == null || text.isEmpty()) {
+            return text;
+        }
+        char c = text.charAt(0);
+        return c == '=' || c == '+' || c == '-' || c == '@' || c == '\t' || c == '\r' ? "'" + text : text;
     }
 
     private static String number(double v) {

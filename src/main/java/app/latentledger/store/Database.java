@@ -26,6 +26,11 @@ public final class Database implements AutoCloseable {
     /** Waiting this long for another program's write to finish before giving up. */
     static final int BUSY_TIMEOUT_MS = 10_000;
 
+    /** The busy timeout in force: {@link #BUSY_TIMEOUT_MS}, shortened only by tests (system property). */
+    static int busyTimeoutMs() {
+        return Integer.getInteger("latentledger.busyTimeoutMs", BUSY_TIMEOUT_MS);
+    }
+
     private final Path file;
     private final Connection connection;
     private final boolean created;
@@ -50,8 +55,9 @@ public final class Database implements AutoCloseable {
             if (parent != null) {
                 Files.createDirectories(parent);
             }
-        } catch (IOException e) {
-            throw new StoreException("cannot create the folder for " + file + ": " + e.getMessage(), e);
+        } catch (IOException | SecurityException e) {
+            throw new StoreException(StoreException.Kind.UNAVAILABLE, "cannot create the folder for " + file + ": "
+                    + e.getMessage(), e);
         }
         Connection c;
         try {
@@ -59,15 +65,22 @@ public final class Database implements AutoCloseable {
             config.setJournalMode(SQLiteConfig.JournalMode.WAL);
             config.setSynchronous(SQLiteConfig.SynchronousMode.FULL);
             config.enforceForeignKeys(true);
-            config.setBusyTimeout(BUSY_TIMEOUT_MS);
+            config.setBusyTimeout(busyTimeoutMs());
             c = config.createConnection("jdbc:sqlite:" + file.toAbsolutePath());
         } catch (SQLException e) {
-            throw new StoreException("cannot open " + file + ": " + e.getMessage(), e);
+            throw new StoreException(StoreException.Kind.UNAVAILABLE, "cannot open " + file + ": " + e.getMessage(), e);
         }
         Database db = new Database(file, c, created);
         try {
             db.checkPragmas();
             db.migrate(version);
+        } catch (StoreException e) {
+            db.close();
+            // a file that is not a database, or a folder we may not write, is a place the ledger cannot be
+            String m = String.valueOf(e.getMessage());
+            boolean unusable = e.kind() == StoreException.Kind.FAILED && (m.contains("not a database")
+                    || m.contains("readonly") || m.contains("unable to open") || m.contains("journal mode"));
+            throw unusable ? new StoreException(StoreException.Kind.UNAVAILABLE, m, e) : e;
         } catch (RuntimeException e) {
             db.close();
             throw e;
@@ -95,7 +108,19 @@ public final class Database implements AutoCloseable {
         }
     }
 
+    /**
+     * Brings the schema up to {@code target}. A ledger already at this build's schema is only read
+     * (a read transaction, which in WAL mode never waits for a writer), so a command that only
+     * reads never queues behind an import; the write lock is taken only when a step is missing.
+     */
     private void migrate(int target) {
+        int stored = read(c -> hasSchemaTable(c) ? versionIn(c) : -1);
+        if (stored > Migration.latestVersion()) {
+            throw newerSchema(stored);
+        }
+        if (stored >= Math.min(target, Migration.all().size())) {
+            return;
+        }
         write(c -> {
             try (Statement s = c.createStatement()) {
                 s.executeUpdate("CREATE TABLE IF NOT EXISTS schema_version ("
@@ -105,15 +130,18 @@ public final class Database implements AutoCloseable {
         });
         int current = schemaVersion();
         if (current > Migration.latestVersion()) {
-            throw new StoreException(file + " was written by a newer version of the app (schema " + current
-                    + "; this build knows up to " + Migration.latestVersion() + "); update the app");
+            throw newerSchema(current);
         }
         for (Migration m : Migration.all()) {
             if (m.version() <= current || m.version() > target) {
                 continue;
             }
-            // one transaction per step: a kill mid-step leaves the previous version intact
+            // one transaction per step: a kill mid-step leaves the previous version intact; another
+            // program may have applied the step meanwhile, so it is checked again under the lock
             write(c -> {
+                if (versionIn(c) >= m.version()) {
+                    return null;
+                }
                 try (Statement s = c.createStatement()) {
                     for (String sql : m.statements()) {
                         s.executeUpdate(sql);
@@ -131,15 +159,30 @@ public final class Database implements AutoCloseable {
         }
     }
 
+    private StoreException newerSchema(int version) {
+        return new StoreException(StoreException.Kind.UNAVAILABLE, file + " was written by a newer version of the app"
+                + " (schema " + version + "; this build knows up to " + Migration.latestVersion() + "); update the app",
+                null);
+    }
+
+    private static boolean hasSchemaTable(Connection c) throws SQLException {
+        try (Statement s = c.createStatement(); ResultSet r = s.executeQuery(
+                "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'schema_version'")) {
+            return r.next();
+        }
+    }
+
+    private static int versionIn(Connection c) throws SQLException {
+        try (Statement s = c.createStatement();
+             ResultSet r = s.executeQuery("SELECT COALESCE(MAX(version), 0) FROM schema_version")) {
+            r.next();
+            return r.getInt(1);
+        }
+    }
+
     /** The highest schema step applied to this file. */
     public int schemaVersion() {
-        return read(c -> {
-            try (Statement s = c.createStatement();
-                 ResultSet r = s.executeQuery("SELECT COALESCE(MAX(version), 0) FROM schema_version")) {
-                r.next();
-                return r.getInt(1);
-            }
-        });
+        return read(Database::versionIn);
     }
 
     /** True when this open created the file. */
@@ -172,7 +215,7 @@ public final class Database implements AutoCloseable {
         try {
             exec(begin);
         } catch (SQLException e) {
-            throw new StoreException("cannot start a transaction on " + file + ": " + e.getMessage(), e);
+            throw failure("cannot start a transaction on " + file, e);
         }
         depth++;
         boolean done = false;
@@ -182,7 +225,7 @@ public final class Database implements AutoCloseable {
             done = true;
             return result;
         } catch (SQLException e) {
-            throw new StoreException("database " + file + ": " + e.getMessage(), e);
+            throw failure("database " + file, e);
         } finally {
             depth--;
             if (!done) {
@@ -195,9 +238,26 @@ public final class Database implements AutoCloseable {
         try {
             return work.run(connection);
         } catch (SQLException e) {
-            throw new StoreException("database " + file + ": " + e.getMessage(), e);
+            throw failure("database " + file, e);
         }
     }
+
+    /** SQLITE_BUSY and SQLITE_LOCKED (primary result codes 5 and 6): another program holds the lock. */
+    private static boolean busy(SQLException e) {
+        int primary = e.getErrorCode() & 0xFF;
+        return primary == 5 || primary == 6 || String.valueOf(e.getMessage()).contains("database is locked");
+    }
+
+    private StoreException failure(String what, SQLException e) {
+        if (busy(e)) {
+            return new StoreException(StoreException.Kind.BUSY, BUSY_MESSAGE + " (waited "
+                    + busyTimeoutMs() / 1000.0 + " s for " + file + ")", e);
+        }
+        return new StoreException(what + ": " + e.getMessage(), e);
+    }
+
+    /** What a tech reads when another program (an import, the app) holds the write lock too long. */
+    public static final String BUSY_MESSAGE = "the ledger is busy: another import is running; try again in a moment";
 
     private void exec(String sql) throws SQLException {
         try (Statement s = connection.createStatement()) {

@@ -2,6 +2,7 @@ package app.latentledger.store;
 
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.InvalidRecordException;
+import app.latentledger.core.visit.RecordRules;
 import app.latentledger.core.records.LogChannel;
 import app.latentledger.core.records.LogSamples;
 import app.latentledger.core.records.TimeBase;
@@ -22,8 +23,17 @@ public final class LogRepository {
         this.db = db;
     }
 
-    /** Saves a log and all its samples in one transaction, replacing an earlier save of the same id. */
+    /**
+     * Saves a log and all its samples in one transaction, replacing an earlier save of the same id.
+     * Whatever path it came by, a log is stored only when it passes {@link RecordRules#log}.
+     */
     public void save(ImportedLog log) {
+        RecordRules.log(log.samples());
+        saveUnchecked(log);
+    }
+
+    /** Saves without today's log rules, as an older build did; for tests of {@code visits check}. */
+    void saveUnchecked(ImportedLog log) {
         db.write(c -> {
             if (VisitRepository.find(c, log.visitId()).isEmpty()) {
                 throw new InvalidRecordException("log visit", "no visit with id " + log.visitId() + " in this ledger");

@@ -198,6 +198,13 @@ public final class RecycleBin {
 
     /** Deletes for good the entries deleted before {@code cutoff}. @return how many went */
     public int purgeOlderThan(OffsetDateTime cutoff) {
+        // every open purges: look first without the write lock, so a read-only command never waits
+        // for another program's import when there is nothing to purge
+        int expired = db.read(c -> countEntries(c, "SELECT COUNT(*) FROM recycle_bin WHERE deleted_epoch_s < ?",
+                cutoff.toEpochSecond()));
+        if (expired == 0) {
+            return 0;
+        }
         return db.write(c -> {
             int n = countEntries(c, "SELECT COUNT(*) FROM recycle_bin WHERE deleted_epoch_s < ?", cutoff.toEpochSecond());
             try (PreparedStatement p = c.prepareStatement("DELETE FROM recycle_bin WHERE deleted_epoch_s < ?")) {

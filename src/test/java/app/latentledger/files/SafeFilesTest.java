@@ -41,6 +41,14 @@ class SafeFilesTest {
         assertEquals(1, count());
     }
 
+    @Test
+    void theFileIsReadableByTheOwnerOnly() throws IOException {
+        // drafts, reports and bundles hold customer names and addresses (common practice, no source)
+        org.junit.jupiter.api.Assumptions.assumeTrue(dir.getFileSystem().supportedFileAttributeViews().contains("posix"));
+        Path f = SafeFiles.writeAtomically(dir.resolve("visit.zip"), out -> out.write(1), SafeFiles.Durability.ON_DISK);
+        assertEquals("rw-------", java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(f)));
+    }
+
     private long count() throws IOException {
         try (Stream<Path> s = Files.list(dir)) {
             return s.count();

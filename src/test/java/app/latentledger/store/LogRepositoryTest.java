@@ -23,7 +23,9 @@ class LogRepositoryTest {
             ledger.sites().save(TestRecords.site("s"));
             ledger.systems().save(TestRecords.system("y", "s"));
             ledger.visits().save(TestRecords.visit("v", "s", "y"));
-            for (int n : new int[] {0, 1, SampleChunks.CHUNK - 1, SampleChunks.CHUNK, 2 * SampleChunks.CHUNK + 5}) {
+            // a log needs two sample times (RecordRules), so the smallest stored log has two
+            for (int n : new int[] {2, SampleChunks.CHUNK - 1, SampleChunks.CHUNK, SampleChunks.CHUNK + 1,
+                    2 * SampleChunks.CHUNK + 5}) {
                 ImportedLog log = TestRecords.log("log-" + n, "v", n);
                 ledger.logs().save(log);
                 ImportedLog back = ledger.logs().find("log-" + n).orElseThrow();
@@ -48,7 +50,9 @@ class LogRepositoryTest {
             assertEquals(Optional.of(shorter), ledger.logs().find("l"));
             assertEquals(List.of(shorter), ledger.logs().forVisit("v"));
             assertEquals("log visit", assertThrows(InvalidRecordException.class,
-                    () -> ledger.logs().save(TestRecords.log("m", "nowhere", 1))).field());
+                    () -> ledger.logs().save(TestRecords.log("m", "nowhere", 2))).field());
+            assertEquals("log time", assertThrows(InvalidRecordException.class,
+                    () -> ledger.logs().save(TestRecords.log("one", "v", 1))).field(), "one sample time is not a log");
         }
     }
 }

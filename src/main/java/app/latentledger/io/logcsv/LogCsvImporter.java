@@ -128,13 +128,14 @@ public final class LogCsvImporter {
             IsoTimes.Parsed parsed = new IsoTimes.Parsed();
             Boolean offsetMode = null;
             while (true) {
-                long lineBefore = parser.getCurrentLineNumber();
                 if (!it.hasNext()) {
                     break;
                 }
+                // hasNext() has read the record: the parser's count of physical lines (blank ones
+                // skipped by the format included) now ends on the record's own line
+                long line = parser.getCurrentLineNumber();
                 CSVRecord rec = it.next();
                 rowsRead++;
-                long line = lineBefore + 1;
                 if ((rowsRead & 8191) == 0 && totalChars > 0) {
                     progress.progress(Math.min(1.0, rec.getCharacterPosition() / (double) totalChars));
                 }

@@ -15,6 +15,8 @@ import app.latentledger.core.settings.SettingsCatalogue;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.core.visit.ReadingSetCheck;
 import app.latentledger.store.Ledger;
+import app.latentledger.store.SettingsConflictException;
+import app.latentledger.store.SettingsRepository;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
@@ -49,6 +51,7 @@ public final class AppSession implements AutoCloseable {
     private final DraftStore drafts;
     private final LogAnalysisService logAnalysis;
     private final ReadOnlyObjectWrapper<Settings> settings = new ReadOnlyObjectWrapper<>();
+    private SettingsRepository.Stamped settingsBase;
     private final ReadOnlyObjectWrapper<UnitSystem> units = new ReadOnlyObjectWrapper<>();
     /** The app opens on what the system in hand is doing; Job and Readings are one tap away. */
     private final ObjectProperty<Screen> screen = new SimpleObjectProperty<>(Screen.RESULTS);
@@ -78,7 +81,8 @@ public final class AppSession implements AutoCloseable {
         this.drafts = new FileDraftStore(dataFolder);
         this.logAnalysis = logAnalysis;
         this.checker = checker;
-        Settings stored = ledger.settings().load();
+        settingsBase = ledger.settings().loadStamped();
+        Settings stored = settingsBase.settings();
         settings.set(stored);
         units.set(stored.units());
         dark.set(stored.theme() == DisplayTheme.DARK);
@@ -99,7 +103,24 @@ public final class AppSession implements AutoCloseable {
                 saveSettings(settings.get().withChoice(SettingsCatalogue.THEME, wanted.key()));
             }
         });
+        // another program (the command line) may change settings while the app runs: look on every screen change
+        screen.addListener((o, a, b) -> reloadSettingsIfChanged());
         openLatestVisit();
+    }
+
+    /**
+     * Takes the stored settings again when another program changed them since they were loaded or
+     * saved here, so the screens show them and the next save starts from them.
+     *
+     * @return true when they had changed
+     */
+    public boolean reloadSettingsIfChanged() {
+        if (ledger.settings().version().equals(settingsBase.version())) {
+            return false;
+        }
+        settingsBase = ledger.settings().loadStamped();
+        settings.set(settingsBase.settings());
+        return true;
     }
 
     /** Opens the ledger in {@code dataFolder} (seeding the demo when empty) with its stored settings. */
@@ -109,8 +130,15 @@ public final class AppSession implements AutoCloseable {
 
     /** Stores changed settings and applies them to every screen. */
     public void saveSettings(Settings changed) {
-        ledger.settings().save(changed);
-        settings.set(changed);
+        try {
+            // only what changed here is written; changes saved elsewhere meanwhile are kept
+            settingsBase = ledger.settings().save(settingsBase, changed);
+        } catch (SettingsConflictException e) {
+            settingsBase = ledger.settings().loadStamped();
+            settings.set(settingsBase.settings());
+            throw e;
+        }
+        settings.set(settingsBase.settings());
     }
 
     /**

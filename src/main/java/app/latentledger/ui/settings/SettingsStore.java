@@ -12,14 +12,18 @@ public interface SettingsStore {
     /** The ledger's settings table. */
     static SettingsStore of(SettingsRepository repository) {
         return new SettingsStore() {
+            /** What this screen loaded: saves merge with changes made elsewhere since. */
+            private SettingsRepository.Stamped base;
+
             @Override
             public Settings load() {
-                return repository.load();
+                base = repository.loadStamped();
+                return base.settings();
             }
 
             @Override
             public void save(Settings settings) {
-                repository.save(settings);
+                base = repository.save(base == null ? repository.loadStamped() : base, settings);
             }
         };
     }

@@ -161,7 +161,8 @@ public final class SettingsViewModel {
             showAll();
             return false;
         }
-        saved.set(next);
+        // what the store now holds: the change merged with any made elsewhere meanwhile
+        saved.set(store.load());
         showAll();
         if (what != null) {
             status.set("Saved " + what);
