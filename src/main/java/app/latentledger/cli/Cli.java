@@ -77,7 +77,7 @@ public final class Cli {
                 out.print(command.usage());
                 return OK;
             }
-            Args args = Args.parse(rest, Set.of("json", "help", "repair", Args.DECIMAL_COMMA, "yes", "with-deletions",
+            Args args = Args.parse(rest, Set.of("json", "help", "repair", "remove", Args.DECIMAL_COMMA, "yes", "with-deletions",
                     "dry-run", "same-probe"));
             return command.run(args, new CliContext(out, err, dataDir));
         } catch (UsageException e) {

@@ -6,6 +6,7 @@ import app.latentledger.core.records.LogSamples;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.Site;
 import app.latentledger.core.records.Visit;
+import app.latentledger.core.records.RecordKind;
 import app.latentledger.core.visit.RecordRepair;
 import app.latentledger.core.visit.RecordRules;
 import app.latentledger.store.Ledger;
@@ -16,10 +17,10 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * {@code visits check [--repair]}: every stored reading set and log checked against today's
+ * {@code visits check [--repair] [--remove]}: every stored reading set and log checked against today's
  * rules ({@link RecordRules}, the same as for a new record), for records kept by an older build or
  * imported before the rules applied. {@code --repair} makes failing optional values missing
- * ({@link RecordRepair}) in one transaction; a record that cannot be repaired is listed for removal.
+ * ({@link RecordRepair}) in one transaction; a record that cannot be repaired is listed, and {@code --remove} moves it to the recycle bin.
  */
 final class VisitsCheck {
     private VisitsCheck() {
@@ -29,9 +30,10 @@ final class VisitsCheck {
     record Finding(String record, String id, String visitId, String problem, String outcome) {
     }
 
-    static List<Finding> run(Ledger ledger, boolean repair) {
+    static List<Finding> run(Ledger ledger, boolean repair, boolean remove) {
         List<Finding> found = new ArrayList<>();
         List<Runnable> repairs = new ArrayList<>();
+        List<Runnable> removals = new ArrayList<>();
         for (Visit v : ledger.visits().all()) {
             Site site = ledger.sites().find(v.siteId()).orElseThrow();
             HvacSystem system = ledger.systems().find(v.systemId()).orElseThrow();
@@ -40,9 +42,12 @@ final class VisitsCheck {
                     RecordRules.readingSet(rs, system, site);
                 } catch (IllegalArgumentException e) {
                     RecordRepair.Outcome<ReadingSet> o = RecordRepair.readingSet(rs, system, site);
-                    found.add(new Finding("reading set", rs.id(), v.id(), e.getMessage(), outcome(o, repair)));
+                    found.add(new Finding("reading set", rs.id(), v.id(), e.getMessage(),
+                            outcome(o, repair, remove, RecordKind.READINGS, rs.id())));
                     if (repair && o.repaired() != null) {
                         repairs.add(() -> ledger.readings().save(o.repaired()));
+                    } else if (remove && o.repaired() == null) {
+                        removals.add(() -> ledger.recycleBin().delete(RecordKind.READINGS, rs.id()));
                     }
                 }
             }
@@ -53,7 +58,11 @@ final class VisitsCheck {
                 }
                 RecordRepair.Outcome<LogSamples> o = RecordRepair.log(log.samples());
                 String where = p.sample() >= 0 ? "sample " + (p.sample() + 1) + ": " : "";
-                found.add(new Finding("log", log.id(), v.id(), where + p.message(), outcome(o, repair)));
+                found.add(new Finding("log", log.id(), v.id(), where + p.message(),
+                        outcome(o, repair, remove, RecordKind.LOG, log.id())));
+                if (remove && o.repaired() == null) {
+                    removals.add(() -> ledger.recycleBin().delete(RecordKind.LOG, log.id()));
+                }
                 if (repair && o.repaired() != null) {
                     repairs.add(() -> ledger.logs().save(new ImportedLog(log.id(), log.visitId(), log.sourceFileName(),
                             log.columnMapping(), log.importedAt(), o.repaired())));
@@ -63,12 +72,19 @@ final class VisitsCheck {
         if (!repairs.isEmpty()) {
             ledger.inTransaction(() -> repairs.forEach(Runnable::run));
         }
+        // each removal is its own transaction in the bin; a record moved there can be restored, and a
+        // restored record is checked again like any new input
+        removals.forEach(Runnable::run);
         return found;
     }
 
-    private static String outcome(RecordRepair.Outcome<?> o, boolean repair) {
+    private static String outcome(RecordRepair.Outcome<?> o, boolean repair, boolean remove, RecordKind kind,
+                                  String id) {
         if (o.repaired() == null) {
-            return "cannot be repaired without inventing readings; remove it (the recycle bin is not in this build yet)";
+            return remove ? "cannot be repaired without inventing readings; moved to the recycle bin (restore "
+                    + kind.key() + " " + id + " brings it back)"
+                    : "cannot be repaired without inventing readings; move it to the recycle bin with --remove"
+                    + " (or: delete " + kind.key() + " " + id + ")";
         }
         return (repair ? "repaired: " : "repairable with --repair: ") + String.join("; ", o.changes());
     }

@@ -44,7 +44,7 @@ public final class VisitsCommand implements Command {
                 + "       latent-ledger [--data-dir DIR] visits export ID FILE [--with-deletions] [--json]\n"
                 + "       latent-ledger [--data-dir DIR] visits export-site SITE_ID FILE [--with-deletions] [--json]\n"
                 + "       latent-ledger [--data-dir DIR] visits import FILE [--dry-run] [--json]\n"
-                + "       latent-ledger [--data-dir DIR] visits check [--repair] [--json]\n"
+                + "       latent-ledger [--data-dir DIR] visits check [--repair] [--remove] [--json]\n"
                 + VisitRecords.usage()
                 + "  ID: a visit id or its first characters (at least 4) as 'visits list' shows them\n"
                 + "  export writes one visit with its site, system, readings, logs and snapshots;\n"
@@ -54,7 +54,7 @@ public final class VisitsCommand implements Command {
                 + "  import checks the whole bundle first and changes nothing when it refuses it; --dry-run only says\n"
                 + "  what it would add, leave and delete\n"
                 + "  check lists stored reading sets and logs that fail today's checks; --repair makes failing\n"
-                + "      optional values missing (a record that cannot be repaired so is listed for removal)\n"
+                + "      optional values missing; --remove moves a record that cannot be repaired so to the recycle bin\n"
                 + "  data folder: --data-dir, else $" + DataLocation.ENV + ", else the app's private storage\n";
     }
 
@@ -74,6 +74,7 @@ public final class VisitsCommand implements Command {
         boolean dryRun = args.flag("dry-run");
         UnitSystem units = sub.equals("show") ? UnitOptions.units(args) : UnitSystem.IP;
         boolean repair = sub.equals("check") && args.flag("repair");
+        boolean remove = sub.equals("check") && args.flag("remove");
         args.rejectUnknown();
         switch (sub) {
             case "list":
@@ -92,7 +93,7 @@ public final class VisitsCommand implements Command {
                 expect(words, 2, "visits import FILE");
                 break;
             case "check":
-                expect(words, 1, "visits check [--repair]");
+                expect(words, 1, "visits check [--repair] [--remove]");
                 break;
             default:
                 throw new UsageException("unknown visits subcommand '" + sub + "'\n" + usage());
@@ -142,7 +143,7 @@ public final class VisitsCommand implements Command {
                     break;
                 }
                 case "check": {
-                    List<VisitsCheck.Finding> found = VisitsCheck.run(ledger, repair);
+                    List<VisitsCheck.Finding> found = VisitsCheck.run(ledger, repair, remove);
                     result = VisitsCheck.json(found);
                     text = VisitsCheck.table(found);
                     break;

@@ -72,6 +72,16 @@ class VisitsCheckTest {
         }
         JsonObject after = json(run(data, "visits", "check", "--json"));
         assertEquals(1, after.get("failing").getAsInt(), "only the log that cannot be repaired is left: " + after);
+
+        String removed = run(data, "visits", "check", "--remove");
+        assertTrue(removed.contains("moved to the recycle bin"), removed);
+        assertEquals(0, json(run(data, "visits", "check", "--json")).get("failing").getAsInt(), "nothing failing is left");
+        try (Ledger ledger = Ledger.open(data)) {
+            assertTrue(ledger.logs().find("flat-log").isEmpty(), "the log left the live tables");
+            assertTrue(ledger.recycleBin().list().stream().anyMatch(e -> e.recordId().equals("flat-log")),
+                    "and waits in the recycle bin");
+            assertEquals("ok", ledger.database().integrityCheck());
+        }
     }
 
     private static JsonObject json(String out) {
