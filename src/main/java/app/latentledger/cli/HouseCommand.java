@@ -12,12 +12,14 @@ import app.latentledger.core.house.HouseBudget;
 import app.latentledger.core.house.HouseFacts;
 import app.latentledger.core.house.HouseInputs;
 import app.latentledger.core.house.HouseReadings;
+import app.latentledger.core.house.HouseVisitReadings;
 import app.latentledger.core.house.InternalMoisture;
 import app.latentledger.core.house.MoistureBudget;
 import app.latentledger.core.house.ScenarioResult;
 import app.latentledger.core.house.SystemRemoval;
 import app.latentledger.core.house.WhatIfRequest;
 import app.latentledger.core.psychro.SitePressure;
+import app.latentledger.core.psychro.StandardAtmosphere;
 import app.latentledger.core.settings.Settings;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
@@ -58,7 +60,8 @@ public final class HouseCommand implements Command {
                 + "                          [--units ip|si] [--elevation FT|M | --pressure PSIA|KPA] [--json]\n"
                 + "  SYSTEM   the coil command's options: --return-* --supply-* --airflow ... [--nominal-tons T]\n"
                 + "           (see: latent-ledger coil --help); in house, --outdoor-* is the weather, not mixed air\n"
-                + "  --visit  a stored visit: its house facts and readings, its latest reading set labelled after\n"
+                + "  --visit  a stored visit: its house facts and readings (HOUSE, WEATHER and LEAK options typed\n"
+                + "           with it are stored with its site and visit), its latest reading set labelled after\n"
                 + "           (else its latest), its kept log; give WHAT-IF and --runtime-fraction to override\n"
                 + "  HOUSE    --floor-area FT2|M2 --bedrooms N [--ceiling-height FT|M (8 ft)] [--stories 1-3]\n"
                 + "           [--occupants N (bedrooms + 1)] [--cfm50 CFM|L/S | --ach50 N] [--shelter-class 1-5]\n"
@@ -87,7 +90,9 @@ public final class HouseCommand implements Command {
         HouseInputs in;
         String source;
         if (visitId != null) {
-            args.rejectUnknown();
+            // house facts and readings typed beside --visit are stored with its site and visit, as the
+            // House screen stores what is typed there, so the report and the next run see them
+            HouseFacts typedFacts = args.has("floor-area") ? HouseOptions.facts(args, units) : null;
             DataLocation location = DataLocation.resolve(context.dataDir());
             try (Ledger ledger = Ledger.open(location.folder(), Ledger.FirstRun.SEED_DEMO)) {
                 VisitEvidence ev;
@@ -95,6 +100,21 @@ public final class HouseCommand implements Command {
                     ev = VisitEvidence.load(ledger, Visits.find(ledger, visitId).id(), units);
                 } catch (ReportRefusedException e) {
                     throw new UsageException(e.getMessage());
+                }
+                double p = StandardAtmosphere.pressurePa(ev.site().elevationM());
+                HouseVisitReadings stored = ledger.houses().readings(ev.visit().id());
+                HouseVisitReadings typed = new HouseVisitReadings(
+                        or(HouseOptions.air(args, units, p, "outdoor", settings.tolerances(), false), stored.outdoor()),
+                        or(HouseOptions.air(args, units, p, "grille", settings.tolerances(), false), stored.grille()),
+                        or(HouseOptions.air(args, units, p, "plenum", settings.tolerances(), false), stored.plenum()),
+                        or(HouseOptions.air(args, units, p, "space", settings.tolerances(), false), stored.space()),
+                        stored.runtimeFraction());
+                args.rejectUnknown();
+                if (typedFacts != null) {
+                    ledger.houses().saveFacts(ev.site().id(), typedFacts);
+                }
+                if (!typed.equals(stored)) {
+                    ledger.houses().saveReadings(ev.visit().id(), typed);
                 }
                 HouseEvidence house = HouseEvidence.of(ledger, ev, ledger.settings().load().thresholds(), typedRtf);
                 if (!house.ready()) {
@@ -175,6 +195,10 @@ public final class HouseCommand implements Command {
      * The kept log's analysis, by the same import and analysis path (and defaults) as {@code log}.
      * One adapter, so a change to how logs are read stays here.
      */
+    private static AirReading or(AirReading typed, AirReading stored) {
+        return typed != null ? typed : stored;
+    }
+
     /** The log read and analysed exactly as {@code log} reads it (one service: {@link VisitLogs}). */
     static RunCycleReport analyseLog(Path file, UnitSystem units, Map<String, String> maps, double pressurePa,
                                      double airflowM3PerS, Settings settings) {

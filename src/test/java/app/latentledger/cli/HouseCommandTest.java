@@ -174,4 +174,23 @@ class HouseCommandTest {
         assertEquals(2, none.code());
         assertTrue(none.err().contains("no visit"), none.err());
     }
+
+    @Test
+    void factsAndWeatherTypedWithAVisitAreKeptForTheNextRun() {
+        String visit = DemoScenario.VISIT_COMMISSIONING;
+        CoilCommandTest.Run typed = run("house --visit " + visit
+                + " --floor-area 1500 --bedrooms 2 --ach50 6 --outdoor-db 88 --outdoor-dew-point 70"
+                + " --runtime-fraction 50");
+        assertEquals(0, typed.code(), typed.err());
+        // the second run types nothing: the facts and the weather came back from the ledger
+        JsonObject again = json("house --visit " + visit + " --runtime-fraction 50");
+        JsonObject first = json("house --visit " + visit + " --runtime-fraction 50");
+        assertEquals(v(first.getAsJsonObject("gains"), "total"), v(again.getAsJsonObject("gains"), "total"), 1e-9);
+        assertTrue(v(again.getAsJsonObject("gains"), "infiltration") > 0, again.toString());
+        // a refused fact stores nothing
+        CoilCommandTest.Run bad = run("house --visit " + visit + " --floor-area 50 --bedrooms 2 --runtime-fraction 50");
+        assertEquals(2, bad.code());
+        assertEquals(v(first.getAsJsonObject("gains"), "total"),
+                v(json("house --visit " + visit + " --runtime-fraction 50").getAsJsonObject("gains"), "total"), 1e-9);
+    }
 }
