@@ -83,6 +83,19 @@ class EntryViewModelTest {
     }
 
     @Test
+    void aRefusedAirflowNamesItsRangeAtTheShownPrecision() {
+        try (AppSession s = TestSessions.withNewVisit(dir)) {
+            EntryViewModel vm = new EntryViewModel(s);
+            type(vm, Slot.AIRFLOW, "0");
+            String m = vm.messageProperty().get();
+            // the limits convert to 19.9175 and 52972.0001 cfm; airflow is shown in whole cfm, and the
+            // ends are rounded inwards so the shown ends are themselves accepted
+            assertTrue(m.endsWith("accepted range 20 to 52972 cfm"), m);
+            assertEquals("", vm.pad().text(), "a refusal empties the pad");
+        }
+    }
+
+    @Test
     void aToleranceIsTypedSeparatelyAndKept() {
         try (AppSession s = TestSessions.withNewVisit(dir)) {
             EntryViewModel vm = new EntryViewModel(s);
