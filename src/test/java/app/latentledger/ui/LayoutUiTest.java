@@ -78,6 +78,25 @@ class LayoutUiTest {
         assertTrue(problems.isEmpty(), String.join("\n", problems));
     }
 
+    @Test
+    void resultsPutTheVerdictMarginAndWaterFirstAndGiveTheChartHalfTheWidth(FxRobot robot) {
+        robot.interact(() -> session.screenProperty().set(Screen.RESULTS));
+        var margin = scene(robot, "#key-dew-point-margin");
+        var water = scene(robot, "#key-moisture-removal");
+        var verdict = scene(robot, "#verdict");
+        var chart = scene(robot, "#" + app.latentledger.ui.results.ResultsView.CHART_SLOT_ID);
+        var screen = scene(robot, "#screen-results");
+        assertTrue(margin.getMinY() >= verdict.getMaxY() && margin.getMaxY() <= chart.getMinY() + 1,
+                "margin right under the verdict, above the chart: " + margin + " " + chart);
+        assertTrue(water.getMaxY() <= chart.getMinY() + 1, "water removed above the chart");
+        assertTrue(chart.getWidth() >= screen.getWidth() / 2, "chart " + chart.getWidth() + " of " + screen.getWidth());
+    }
+
+    private static javafx.geometry.Bounds scene(FxRobot robot, String id) {
+        Node n = robot.lookup(id).query();
+        return n.localToScene(n.getLayoutBounds());
+    }
+
     private List<String> walk(FxRobot robot) {
         List<String> problems = new ArrayList<>();
         for (Screen s : Screen.values()) {
