@@ -61,6 +61,12 @@ public final class BundleReader {
         String shown = TerminalText.escape(String.valueOf(file.getFileName()));
         try (ZipFile zip = new ZipFile(file.toFile())) {
             return read(zip, shown);
+        } catch (BundleException e) {
+            // every refusal says that the ledger was left as it was, whichever check refused first
+            if (e.getMessage().endsWith("nothing was imported")) {
+                throw e;
+            }
+            throw new BundleException("bundle refused: " + e.getMessage() + "; nothing was imported", e);
         } catch (ZipException e) {
             throw new BundleException("bundle " + shown + " is not a complete zip (truncated or damaged: "
                     + e.getMessage() + "); export it again; nothing was imported", e);

@@ -76,7 +76,7 @@ public final class InvalidInputException extends IllegalArgumentException {
                                  String reason, UnitSystem units) {
         String unit = q.symbol(units);
         String shown = Double.isNaN(value) ? "not a number" : number(q.toDisplay(units, value)) + " " + unit;
-        String range = number(q.toDisplay(units, min)) + " to " + number(q.toDisplay(units, max)) + " " + unit;
+        String range = range(q, units, min, max) + " " + unit;
         StringBuilder b = new StringBuilder(field).append(' ').append(shown).append(" refused: ");
         if (reason != null) {
             b.append(reason).append("; ");
@@ -86,5 +86,23 @@ public final class InvalidInputException extends IllegalArgumentException {
 
     private static String number(double v) {
         return DisplayNumber.exact(v);
+    }
+
+    /**
+     * The accepted range at the precision the value is shown with, rounded inwards so every number
+     * it shows is itself accepted: 0.00944 m³/s is "20 cfm", not "19.9175 cfm". A range too narrow
+     * for that precision keeps its exact ends.
+     */
+    private static String range(Quantity q, UnitSystem units, double minSi, double maxSi) {
+        double min = q.toDisplay(units, minSi);
+        double max = q.toDisplay(units, maxSi);
+        double step = Math.pow(10, -DisplayNumber.decimals(q, units));
+        // a hair of slack so a limit that is a round number after conversion (−58 °F) stays itself
+        double lo = Math.ceil(min / step - 1e-6) * step;
+        double hi = Math.floor(max / step + 1e-6) * step;
+        if (!(lo <= hi) || Double.isInfinite(min) || Double.isInfinite(max)) {
+            return number(min) + " to " + number(max);
+        }
+        return number(lo) + " to " + number(hi);
     }
 }

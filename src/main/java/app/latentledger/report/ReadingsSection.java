@@ -151,7 +151,7 @@ final class ReadingsSection {
         est(tb, sets, Measurand.SHR, "Sensible heat ratio");
         rowResult(tb, sets, "Moisture removal", r -> Numbers.estimate(Quantity.WATER_RATE, units,
                 r.estimate(Measurand.MOISTURE_REMOVAL)) + " ("
-                + DisplayNumber.withUnit(Quantity.WATER_RATE_DAILY, units, r.process().moistureRemovalKgPerS()) + ")");
+                + DisplayNumber.withUnit(Quantity.WATER_RATE_DAILY, units, r.process().moistureRemovalKgPerS()) + " if it ran all day)");
         est(tb, sets, Measurand.LATENT_PER_AIRFLOW, "Latent capacity per airflow");
         est(tb, sets, Measurand.AIRFLOW_PER_CAPACITY, "Airflow per measured capacity");
         rowResult(tb, sets, "Airflow per nominal capacity", r -> DisplayNumber.withUnit(Quantity.AIRFLOW_PER_CAPACITY, units,

@@ -178,11 +178,11 @@ final class SummarySection {
         t.gap(2);
     }
 
-    /** "about 235 pints over a day of running": the rate a homeowner can picture. */
+    /** "about 235 pints if it ran all day": the rate a homeowner can picture. */
     private String daily(CoilResult r) {
         double perDay = Quantity.WATER_RATE_DAILY.toDisplay(units, r.process().moistureRemovalKgPerS());
         return "about " + DisplayNumber.number(perDay, 0) + " " + Quantity.WATER_RATE_DAILY.symbol(units).replace("/day", "")
-                + " over a day of running";
+                + " if it ran all day";
     }
 
     private void changes(Typeset t) {

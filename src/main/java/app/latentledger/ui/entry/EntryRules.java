@@ -1,5 +1,6 @@
 package app.latentledger.ui.entry;
 
+import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.coil.AirReading;
 import app.latentledger.core.coil.CoilReadings;
 import app.latentledger.core.measure.FieldLimits;
@@ -34,14 +35,46 @@ public final class EntryRules {
      * @throws app.latentledger.core.InvalidInputException naming field, value and accepted range
      */
     public static void check(Draft candidate, Slot slot, Site site) {
-        SlotValue v = candidate.value(slot);
+        checkRange(candidate, slot);
+        conflict(candidate, site).ifPresent(c -> {
+            throw c.why();
+        });
+    }
+
+    /**
+     * Refuses the value in {@code slot} when it is outside its box's own range, whatever the other
+     * boxes hold.
+     *
+     * @throws app.latentledger.core.InvalidInputException naming field, value and accepted range
+     */
+    public static void checkRange(Draft candidate, Slot slot) {
         String choice = candidate.choice(slot);
         String field = slot.title(choice).toLowerCase(java.util.Locale.ROOT).replace("rh", "RH");
-        range(field, slot, choice, v);
+        range(field, slot, choice, candidate.value(slot));
+    }
+
+    /**
+     * Two boxes of one air stream that cannot both be right (a wet bulb or dew point above its dry
+     * bulb): each value alone is in range, the pair is not a state of moist air.
+     *
+     * @param dryBulb  the stream's dry-bulb box
+     * @param humidity the stream's humidity box
+     * @param why      the core's refusal of the pair
+     */
+    public record Conflict(Slot dryBulb, Slot humidity, InvalidInputException why) {
+    }
+
+    /** The first air stream of {@code candidate} whose two boxes disagree, if any. */
+    public static java.util.Optional<Conflict> conflict(Draft candidate, Site site) {
         double pressurePa = CurrentCheck.pressurePa(candidate, site);
-        stream(candidate, Slot.RETURN_DRY_BULB, Slot.RETURN_HUMIDITY, "return", pressurePa);
-        stream(candidate, Slot.SUPPLY_DRY_BULB, Slot.SUPPLY_HUMIDITY, "supply", pressurePa);
-        stream(candidate, Slot.OUTDOOR_DRY_BULB, Slot.OUTDOOR_HUMIDITY, "outdoor", pressurePa);
+        for (Slot hum : java.util.List.of(Slot.RETURN_HUMIDITY, Slot.SUPPLY_HUMIDITY, Slot.OUTDOOR_HUMIDITY)) {
+            try {
+                stream(candidate, hum.dryBulb(), hum, hum.where().toLowerCase(java.util.Locale.ROOT), pressurePa);
+            } catch (InvalidInputException e) {
+                return java.util.Optional.of(new Conflict(hum.dryBulb(), hum, e));
+            }
+        }
+        return java.util.Optional.empty();
     }
 
     /** Refuses a nameplate size outside what a system record and the coil check accept. */

@@ -17,6 +17,7 @@ import javafx.beans.binding.StringBinding;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
@@ -47,6 +48,17 @@ public final class EntryViewModel {
     private final StringBinding padUnit;
     private final javafx.collections.ObservableList<SetChoice> sets = javafx.collections.FXCollections.observableArrayList();
     private final ObjectProperty<SetChoice> currentSet = new SimpleObjectProperty<>();
+    /** A kind picked in the selected humidity box whose first value is not typed yet. */
+    private final ObjectProperty<String> pendingChoice = new SimpleObjectProperty<>();
+    /** Typed values that disagree with a saved one: held until the set agrees again, never stored. */
+    private final ObjectProperty<Draft> held = new SimpleObjectProperty<>();
+    private final ObjectProperty<EntryRules.Conflict> conflict = new SimpleObjectProperty<>();
+    private final ReadOnlyStringWrapper undoText = new ReadOnlyStringWrapper("");
+    private Runnable undo;
+    /** The order a tech reads the boxes in, as the screen lays them out. */
+    static final List<Slot> READING_ORDER = List.of(Slot.RETURN_DRY_BULB, Slot.RETURN_HUMIDITY,
+            Slot.SUPPLY_DRY_BULB, Slot.SUPPLY_HUMIDITY, Slot.OUTDOOR_DRY_BULB, Slot.OUTDOOR_HUMIDITY,
+            Slot.COIL_TEMPERATURE, Slot.NOMINAL_TONS, Slot.AIRFLOW, Slot.CONDENSATE_VOLUME, Slot.CONDENSATE_MINUTES);
 
     /**
      * A reading set of the visit as the picker names it.
@@ -65,6 +77,7 @@ public final class EntryViewModel {
         this.session = session;
         selected.addListener((o, a, b) -> {
             pad.clear();
+            pendingChoice.set(null);
             toleranceMode.set(false);
             refused.set(false);
             message.set(b == Slot.COIL_TEMPERATURE ? Cautions.BEFORE_COIL_READINGS : "");
@@ -72,20 +85,27 @@ public final class EntryViewModel {
         toleranceMode.addListener((o, a, b) -> pad.clear());
         padTitle = Bindings.createStringBinding(() -> {
             Slot sel = selected.get();
-            return toleranceMode.get() ? "Tolerance of " + title(sel).toLowerCase(java.util.Locale.ROOT) : title(sel);
-        }, selected, toleranceMode, session.draftProperty(), session.unitsProperty());
+            String t = sel.title(padChoice(sel));
+            return toleranceMode.get() ? "± of " + t.toLowerCase(java.util.Locale.ROOT).replace("rh", "RH") : t;
+        }, selected, toleranceMode, session.draftProperty(), session.unitsProperty(), pendingChoice);
         padDisplay = Bindings.createStringBinding(() -> {
             if (!pad.text().isEmpty()) {
                 return pad.text();
             }
             Slot sel = selected.get();
+            if (pendingChoice.get() != null) {
+                return Shown.NONE;
+            }
             return toleranceMode.get() ? shownTolerance(sel).replaceFirst("^± ", "").replaceFirst(" \\S+$", "")
                     : shownValue(sel);
         }, pad.textProperty(), selected, toleranceMode, session.draftProperty(), session.systemProperty(),
-                session.unitsProperty());
+                session.unitsProperty(), pendingChoice, held);
         padUnit = Bindings.createStringBinding(this::unit, selected, toleranceMode, session.draftProperty(),
-                session.unitsProperty());
+                session.unitsProperty(), pendingChoice);
         session.draftProperty().addListener((o, a, b) -> {
+            if (a == null || b == null || !a.readingSetId().equals(b.readingSetId())) {
+                startOver();
+            }
             if (a == null || b == null || !a.readingSetId().equals(b.readingSetId()) || a.takenAt() != b.takenAt()) {
                 loadSets();
             }
@@ -171,18 +191,71 @@ public final class EntryViewModel {
     /** The value in a box as shown, "—" when empty. */
     public StringBinding valueText(Slot s) {
         return valueTexts.computeIfAbsent(s, k -> Bindings.createStringBinding(() -> shownValue(k),
-                session.draftProperty(), session.systemProperty(), session.unitsProperty()));
+                session.draftProperty(), session.systemProperty(), session.unitsProperty(), held));
     }
 
     /** "± 0.5 °F" for a box with a value, "" otherwise. */
     public StringBinding toleranceText(Slot s) {
-        return toleranceTexts.computeIfAbsent(s, k -> Bindings.createStringBinding(() -> shownTolerance(k),
-                session.draftProperty(), session.unitsProperty()));
+        return toleranceTexts.computeIfAbsent(s, k -> Bindings.createStringBinding(() -> {
+            if (isHeld(k)) {
+                return "not saved yet";
+            }
+            return inConflict(k) ? "disagrees" : shownTolerance(k);
+        }, session.draftProperty(), session.unitsProperty(), held, conflict));
+    }
+
+    /** The two boxes that disagree while a typed value is held, else null. */
+    public ReadOnlyObjectProperty<EntryRules.Conflict> conflictProperty() {
+        return conflict;
+    }
+
+    /** True when the box is one of the two that disagree. */
+    public boolean inConflict(Slot s) {
+        EntryRules.Conflict c = conflict.get();
+        return c != null && (c.dryBulb() == s || c.humidity() == s);
+    }
+
+    /** True when the box shows a typed value that is held, not stored. */
+    public boolean isHeld(Slot s) {
+        Draft h = held.get();
+        Draft d = session.draft();
+        return h != null && d != null && h.value(s) != null && !h.value(s).equals(d.value(s));
+    }
+
+    /** "Undo return dry bulb 76.0 °F" while the last save can be taken back, else "". */
+    public ReadOnlyStringProperty undoTextProperty() {
+        return undoText.getReadOnlyProperty();
+    }
+
+    /** Takes back the last save (or drops a held value): one step, until the next entry. */
+    public void undo() {
+        Runnable u = undo;
+        clearUndo();
+        if (u != null) {
+            u.run();
+        }
+    }
+
+    /** The kind the pad is typing in: a newly picked one, else the box's saved kind. */
+    public String padChoice(Slot s) {
+        String p = pendingChoice.get();
+        return p != null && s == selected.get() ? p : choice(s);
+    }
+
+    /** The kind picked in the selected box that waits for its first value, or null. */
+    public ReadOnlyObjectProperty<String> pendingChoiceProperty() {
+        return pendingChoice;
     }
 
     /** The box's current choice (e.g. "wet-bulb"). */
     public String choice(Slot s) {
-        return session.draft().choice(s);
+        return shownDraft().choice(s);
+    }
+
+    /** The draft the boxes show: with the held values, if any. */
+    private Draft shownDraft() {
+        Draft h = held.get();
+        return h != null ? h : session.draft();
     }
 
     public String title(Slot s) {
@@ -192,22 +265,41 @@ public final class EntryViewModel {
     /** Unit shown beside the pad for what is being typed. */
     public String unit() {
         Slot s = selected.get();
-        return toleranceMode.get() ? s.toleranceSymbol(units(), choice(s)) : s.symbol(units(), choice(s));
+        String c = padChoice(s);
+        return toleranceMode.get() ? s.toleranceSymbol(units(), c) : s.symbol(units(), c);
     }
 
     public void select(Slot s) {
         selected.set(s);
     }
 
-    /** Picks another choice in the selected box and keeps it; refused when the value no longer fits. */
+    /**
+     * Picks another kind in the selected box. The pad is always emptied (65 °F is not 65 %). An
+     * empty box takes the kind at once; a humidity box with a saved value keeps that value, shown in
+     * its own kind, until a value of the new kind is entered, so a tap never erases a reading.
+     */
     public void choose(String choice) {
         Slot s = selected.get();
+        pad.clear();
+        toleranceMode.set(false);
         if (choice.equals(choice(s))) {
+            pendingChoice.set(null);
             return;
         }
-        Draft candidate = session.draft().withChoice(s, choice);
-        if (tryKeep(candidate, s)) {
-            message.set(s == Slot.COIL_TEMPERATURE ? Cautions.BEFORE_COIL_READINGS : "Saved: " + title(s));
+        Draft d = shownDraft();
+        if (s.isHumidity() && d.has(s)) {
+            pendingChoice.set(choice);
+            refused.set(false);
+            message.set("Type the " + s.title(choice).toLowerCase(java.util.Locale.ROOT).replace("rh", "RH")
+                    + ". The saved " + Slot.choiceLabel(choice(s)).toLowerCase(java.util.Locale.ROOT).replace("rh", "RH")
+                    + " " + shownValue(s) + " " + s.symbol(units(), choice(s)) + " stays until you press Enter.");
+            return;
+        }
+        pendingChoice.set(null);
+        Draft before = session.draft();
+        if (tryKeep(session.draft().withChoice(s, choice), s)) {
+            offerUndo("Undo " + title(s).toLowerCase(java.util.Locale.ROOT), before, null, s);
+            message.set(s == Slot.COIL_TEMPERATURE ? Cautions.BEFORE_COIL_READINGS : "Now typing: " + title(s));
         }
     }
 
@@ -216,38 +308,60 @@ public final class EntryViewModel {
         Slot s = selected.get();
         OptionalDouble typed = pad.value();
         if (typed.isEmpty()) {
-            refuse("Type a number for " + title(s).toLowerCase(java.util.Locale.ROOT) + " first.");
+            refuse("Type a number for " + s.title(padChoice(s)).toLowerCase(java.util.Locale.ROOT) + " first.");
             return false;
         }
-        boolean ok = s == Slot.NOMINAL_TONS ? keepNominal(typed.getAsDouble()) : keepReading(s, typed.getAsDouble());
-        if (ok) {
-            pad.clear();
-            toleranceMode.set(false);
-            message.set("Saved: " + title(s) + " " + shownValue(s) + " " + s.symbol(units(), choice(s))
-                    + (s.hasTolerance() ? " " + shownTolerance(s) : ""));
+        if (s == Slot.NOMINAL_TONS) {
+            HvacSystem before = session.system();
+            if (!keepNominal(typed.getAsDouble())) {
+                return false;
+            }
+            saved(s);
+            offerUndo(null, null, before, s);
+            return true;
         }
-        return ok;
+        return keepReading(s, typed.getAsDouble());
+    }
+
+    private void saved(Slot s) {
+        pad.clear();
+        toleranceMode.set(false);
+        message.set("Saved: " + title(s) + " " + shownValue(s) + " " + s.symbol(units(), choice(s))
+                + (s.hasTolerance() ? " " + shownTolerance(s) : ""));
     }
 
     /**
-     * Enter, then move to the next box, the way a tech reads down the list. A tolerance entry stays
-     * on its box: the value usually comes next.
+     * Enter, then move to the next box in reading order. A tolerance entry stays on its box (the
+     * value usually comes next); a held value moves to the box it disagrees with, the one to check.
      */
     public boolean enterAndAdvance() {
         Slot s = selected.get();
         boolean tolerance = toleranceMode.get();
-        if (!enter()) {
-            return false;
+        boolean ok = enter();
+        EntryRules.Conflict c = conflict.get();
+        if (c != null && isHeld(s)) {
+            move(s == c.dryBulb() ? c.humidity() : c.dryBulb());
+            return ok;
         }
-        if (!tolerance) {
-            String saved = message.get();
-            List<Slot> order = List.of(Slot.values());
-            selected.set(order.get((order.indexOf(s) + 1) % order.size()));
-            if (selected.get() != Slot.COIL_TEMPERATURE) {
-                message.set(saved);
-            }
+        if (!ok || tolerance) {
+            return ok;
+        }
+        int i = READING_ORDER.indexOf(s);
+        if (i + 1 < READING_ORDER.size()) {
+            move(READING_ORDER.get(i + 1));
         }
         return true;
+    }
+
+    /** Selects another box and keeps the message about the entry just made beside the pad. */
+    private void move(Slot next) {
+        String m = message.get();
+        boolean r = refused.get();
+        selected.set(next);
+        if (next != Slot.COIL_TEMPERATURE || !m.startsWith("Saved")) {
+            message.set(m);
+            refused.set(r);
+        }
     }
 
     /** Keeps what the pad holds if it is an acceptable value (the app is being paused). */
@@ -257,14 +371,28 @@ public final class EntryViewModel {
         }
     }
 
+    /** A new or another reading set: the pad starts at the first box, empty, with nothing stale. */
+    private void startOver() {
+        held.set(null);
+        conflict.set(null);
+        clearUndo();
+        selected.set(READING_ORDER.get(0));
+        pad.clear();
+        pendingChoice.set(null);
+        toleranceMode.set(false);
+        refused.set(false);
+        message.set("");
+    }
+
     private boolean keepReading(Slot s, double shown) {
-        Draft d = session.draft();
-        String c = d.choice(s);
-        SlotValue old = d.value(s);
+        Draft base = shownDraft();
+        String c = padChoice(s);
+        boolean sameKind = java.util.Objects.equals(c, base.choice(s));
+        SlotValue old = sameKind ? base.value(s) : null;
         SlotValue v;
         if (toleranceMode.get()) {
             if (old == null) {
-                refuse("Enter the " + title(s).toLowerCase(java.util.Locale.ROOT) + " before its tolerance.");
+                refuse("Enter the " + s.title(c).toLowerCase(java.util.Locale.ROOT) + " before its tolerance.");
                 return false;
             }
             v = new SlotValue(old.valueSi(), s.toleranceFromDisplay(units(), c, Math.abs(shown)));
@@ -277,7 +405,118 @@ public final class EntryViewModel {
                 return false;
             }
         }
-        return tryKeep(d.with(s, v), s);
+        Draft candidate = (sameKind ? base : base.withChoice(s, c)).with(s, v);
+        try {
+            EntryRules.checkRange(candidate, s);
+        } catch (InvalidInputException e) {
+            refuse(e.message(units()));
+            return false;
+        }
+        Draft before = session.draft();
+        java.util.Optional<EntryRules.Conflict> disagree = EntryRules.conflict(candidate, session.site());
+        if (disagree.isPresent()) {
+            // the stored set stays a valid one: this value is held, and whatever else in it agrees is kept
+            Draft alone = (java.util.Objects.equals(c, before.choice(s)) ? before : before.withChoice(s, c)).with(s, v);
+            boolean keptAlone = held.get() != null && EntryRules.conflict(alone, session.site()).isEmpty()
+                    && keepQuietly(alone);
+            held.set(candidate);
+            conflict.set(disagree.get());
+            pendingChoice.set(null);
+            pad.clear();
+            toleranceMode.set(false);
+            refused.set(false);
+            message.set(heldMessage(s, disagree.get(), keptAlone));
+            if (keptAlone) {
+                offerUndo(null, before, null, s);
+            } else {
+                undoText.set("Drop the held " + s.title(c).toLowerCase(java.util.Locale.ROOT).replace("rh", "RH"));
+                undo = this::dropHeld;
+            }
+            return false;
+        }
+        if (!tryKeep(candidate, s)) {
+            return false;
+        }
+        boolean wasHeld = held.get() != null;
+        held.set(null);
+        conflict.set(null);
+        pendingChoice.set(null);
+        saved(s);
+        if (wasHeld) {
+            message.set(message.get() + " (the held value is saved with it)");
+        }
+        offerUndo(null, before, null, s);
+        return true;
+    }
+
+    private boolean keepQuietly(Draft d) {
+        try {
+            session.keep(d);
+            return true;
+        } catch (InvalidInputException | InvalidRecordException e) {
+            return false;
+        }
+    }
+
+    private String heldMessage(Slot typed, EntryRules.Conflict c, boolean keptAlone) {
+        String start = keptAlone ? "Saved: " + named(typed) + " " + shown(typed) + ". Still held: " : "Held, not saved yet: ";
+        Slot first = typed == c.humidity() ? c.humidity() : c.dryBulb();
+        Slot other = first == c.dryBulb() ? c.humidity() : c.dryBulb();
+        return start + named(first) + " " + shown(first) + " and " + named(other) + " " + shown(other)
+                + " cannot both be right. Enter the right " + named(other) + " (or change the " + named(first)
+                + "): both are saved as soon as they agree.";
+    }
+
+    private String named(Slot s) {
+        return title(s).toLowerCase(java.util.Locale.ROOT).replace("rh", "RH");
+    }
+
+    private String shown(Slot s) {
+        return shownValue(s) + " " + s.symbol(units(), choice(s));
+    }
+
+    private void dropHeld() {
+        held.set(null);
+        conflict.set(null);
+        refused.set(false);
+        message.set("Dropped the held value; the saved readings are unchanged.");
+    }
+
+    private void offerUndo(String label, Draft before, HvacSystem systemBefore, Slot s) {
+        Draft now = session.draft();
+        boolean storedAlready = before != null && session.ledger().readings().find(before.readingSetId()).isPresent();
+        if (before != null && storedAlready && !app.latentledger.ui.session.DraftRecords.complete(before)) {
+            // the stored set cannot go back to being incomplete: correct the value instead
+            clearUndo();
+            return;
+        }
+        String what = label != null ? label : "Undo " + title(s).toLowerCase(java.util.Locale.ROOT).replace("rh", "RH")
+                + " " + shownValue(s) + " " + s.symbol(units(), choice(s));
+        undoText.set(what);
+        undo = () -> {
+            try {
+                if (systemBefore != null) {
+                    session.keep(systemBefore);
+                } else if (now == session.draft()) {
+                    session.keep(before);
+                }
+                held.set(null);
+                conflict.set(null);
+                pad.clear();
+                selected.set(s);
+                refused.set(false);
+                message.set("Undone: " + title(s) + " is " + shownValue(s) + " again.");
+            } catch (InvalidInputException e) {
+                refuse(e.message(units()));
+            } catch (InvalidRecordException e) {
+                refuse(e.getMessage());
+            }
+        };
+    }
+
+    private void clearUndo() {
+        undo = null;
+        undoText.set("");
     }
 
     private boolean keepNominal(double tons) {
@@ -313,7 +552,9 @@ public final class EntryViewModel {
         return false;
     }
 
+    /** A refusal empties the pad: the next digits start a new number, never "80120". */
     private void refuse(String why) {
+        pad.clear();
         refused.set(true);
         message.set("Not saved: " + why);
     }
@@ -323,7 +564,7 @@ public final class EntryViewModel {
             HvacSystem sys = session.system();
             return sys == null ? Shown.NONE : Shown.of(Quantity.POWER_LARGE, units(), sys.nominalCapacityW());
         }
-        Draft d = session.draft();
+        Draft d = session.draft() == null ? null : shownDraft();
         SlotValue v = d == null ? null : d.value(s);
         if (v == null) {
             return Shown.NONE;

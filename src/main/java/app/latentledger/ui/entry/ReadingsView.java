@@ -74,6 +74,7 @@ public final class ReadingsView extends VBox implements Reflowing {
             getStyleClass().add("portrait");
         }
         fillBoxes(2);
+        pad.setPortrait(upright);
         landscape.getChildren().clear();
         portrait.getChildren().clear();
         Node body;

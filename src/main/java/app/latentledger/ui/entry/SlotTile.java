@@ -11,6 +11,7 @@ import javafx.scene.layout.VBox;
 /** One reading box: its title, value with unit and tolerance; a tap selects it for the pad. */
 final class SlotTile extends Button {
     private static final PseudoClass SELECTED = PseudoClass.getPseudoClass("selected");
+    private static final PseudoClass CONFLICT = PseudoClass.getPseudoClass("conflict");
 
     SlotTile(EntryViewModel vm, Slot slot) {
         setId("slot-" + slot.key());
@@ -39,6 +40,9 @@ final class SlotTile extends Button {
         setMaxWidth(Double.MAX_VALUE);
         pseudoClassStateChanged(SELECTED, vm.selectedProperty().get() == slot);
         vm.selectedProperty().addListener((o, a, b) -> pseudoClassStateChanged(SELECTED, b == slot));
+        // both boxes of a pair that disagree are marked, the held one and the saved one
+        pseudoClassStateChanged(CONFLICT, vm.inConflict(slot));
+        vm.conflictProperty().addListener((o, a, b) -> pseudoClassStateChanged(CONFLICT, vm.inConflict(slot)));
         setOnAction(e -> vm.select(slot));
     }
 }

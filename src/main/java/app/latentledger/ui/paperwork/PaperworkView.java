@@ -13,6 +13,7 @@ import javafx.scene.control.TextArea;
 import javafx.scene.control.TextField;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
 /**
@@ -63,16 +64,16 @@ public final class PaperworkView extends VBox implements Reflowing {
         form.setHgap(8);
         form.setVgap(8);
         int r = 0;
-        form.addRow(r++, Ui.label("Name", "figure-label"), field("instrument-name", instruments.nameProperty()));
-        form.addRow(r++, Ui.label("Serial", "figure-label"), field("instrument-serial", instruments.serialProperty()));
-        form.addRow(r++, Ui.label("Calibrated (YYYY-MM-DD)", "figure-label"),
+        form.addRow(r++, formLabel("Name"), field("instrument-name", instruments.nameProperty()));
+        form.addRow(r++, formLabel("Serial"), field("instrument-serial", instruments.serialProperty()));
+        form.addRow(r++, formLabel("Calibrated (YYYY-MM-DD)"),
                 field("instrument-calibrated", instruments.calibratedProperty()));
-        form.addRow(r++, Ui.label("Stated ± dry bulb", "figure-label"), field("instrument-acc-db", instruments.dryBulbProperty()));
-        form.addRow(r++, Ui.label("Stated ± RH, %", "figure-label"), field("instrument-acc-rh", instruments.relativeHumidityProperty()));
-        form.addRow(r++, Ui.label("Stated ± wet bulb", "figure-label"), field("instrument-acc-wb", instruments.wetBulbProperty()));
-        form.addRow(r++, Ui.label("Stated ± dew point", "figure-label"), field("instrument-acc-dp", instruments.dewPointProperty()));
-        form.addRow(r++, Ui.label("Stated ± coil probe", "figure-label"), field("instrument-acc-coil", instruments.coilProperty()));
-        form.addRow(r, Ui.label("Stated ± airflow, %", "figure-label"), field("instrument-acc-airflow", instruments.airflowPctProperty()));
+        form.addRow(r++, formLabel("Stated ± dry bulb"), field("instrument-acc-db", instruments.dryBulbProperty()));
+        form.addRow(r++, formLabel("Stated ± RH, %"), field("instrument-acc-rh", instruments.relativeHumidityProperty()));
+        form.addRow(r++, formLabel("Stated ± wet bulb"), field("instrument-acc-wb", instruments.wetBulbProperty()));
+        form.addRow(r++, formLabel("Stated ± dew point"), field("instrument-acc-dp", instruments.dewPointProperty()));
+        form.addRow(r++, formLabel("Stated ± coil probe"), field("instrument-acc-coil", instruments.coilProperty()));
+        form.addRow(r, formLabel("Stated ± airflow, %"), field("instrument-acc-airflow", instruments.airflowPctProperty()));
         VBox instrumentsPanel = Ui.panel(8, Ui.label("Instruments", "heading"),
                 Ui.wrapped("Tick the instruments that took the readings on the pad; the report lists them with"
                         + " the set.", "figure-label"),
@@ -83,16 +84,30 @@ public final class PaperworkView extends VBox implements Reflowing {
                 Ui.label("Technician", "figure-label"), field("tech-sign-name", paperwork.technicianNameProperty()),
                 field("tech-sign-remark", paperwork.technicianRemarkProperty(), "Licence or certification (optional)"),
                 bound(paperwork.technicianSignedProperty()),
-                Ui.button("sign-technician", "Sign as technician", Icons.CHECK, paperwork::signAsTechnician),
+                whole(Ui.button("sign-technician", "Sign as technician", Icons.CHECK, paperwork::signAsTechnician)),
                 Ui.label("Customer", "figure-label"), field("customer-sign-name", paperwork.customerNameProperty()),
                 field("customer-sign-remark", paperwork.customerRemarkProperty(), "Remark (optional)"),
                 bound(paperwork.customerSignedProperty()),
-                Ui.button("sign-customer", "Sign as customer", Icons.CHECK, paperwork::signAsCustomer),
+                whole(Ui.button("sign-customer", "Sign as customer", Icons.CHECK, paperwork::signAsCustomer)),
                 message(paperwork.signMessageProperty()));
 
         columns = new Columns(12, Ui.scroll(new VBox(12, notes, signOffs)), Ui.scroll(instrumentsPanel));
         VBox.setVgrow(columns, Priority.ALWAYS);
         getChildren().add(columns);
+    }
+
+    /** A form label never shortened to an ellipsis: the field beside it gives way instead. */
+    private static javafx.scene.control.Label formLabel(String text) {
+        javafx.scene.control.Label l = Ui.label(text, "figure-label");
+        l.setMinWidth(Region.USE_PREF_SIZE);
+        return l;
+    }
+
+    /** A button that keeps its whole label. */
+    private static javafx.scene.control.Button whole(javafx.scene.control.Button b) {
+        b.setWrapText(true);
+        b.setMaxWidth(Double.MAX_VALUE);
+        return b;
     }
 
     @Override
@@ -119,6 +134,7 @@ public final class PaperworkView extends VBox implements Reflowing {
         f.setId(id);
         f.setPromptText(prompt);
         f.setMinHeight(Ui.MIN_TARGET_PX);
+        f.setMinWidth(140);
         f.textProperty().bindBidirectional(p);
         return f;
     }

@@ -91,7 +91,7 @@ public final class VisitResults {
         rows.add(row(r, u, "latent", "Latent", Measurand.LATENT, Quantity.POWER));
         rows.add(row(r, u, "shr", "Sensible heat ratio", Measurand.SHR, Quantity.DIMENSIONLESS));
         rows.add(row(r, u, "moisture-removal", "Water removed", Measurand.MOISTURE_REMOVAL, Quantity.WATER_RATE));
-        rows.add(new Row("moisture-removal-daily", "Water removed per day",
+        rows.add(new Row("moisture-removal-daily", "Water removed if it ran all day",
                 Shown.of(Quantity.WATER_RATE_DAILY, u, p.moistureRemovalKgPerS()), Quantity.WATER_RATE_DAILY.symbol(u)));
         rows.add(row(r, u, "latent-per-airflow", "Latent per airflow", Measurand.LATENT_PER_AIRFLOW,
                 Quantity.POWER_PER_AIRFLOW));

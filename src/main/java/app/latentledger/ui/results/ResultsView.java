@@ -26,6 +26,8 @@ public final class ResultsView extends VBox implements Reflowing {
     private final VBox enteringPanel;
     private final VBox leavingPanel;
     private final FindingsList findings;
+    /** The two numbers that answer a humidity call, read at a glance right under the verdict. */
+    private final HBox keyFigures = new HBox(24);
 
     public ResultsView(ResultsViewModel viewModel) {
         super(12);
@@ -43,7 +45,8 @@ public final class ResultsView extends VBox implements Reflowing {
         chartSlot.getChildren().add(Ui.wrapped("Drawing the psychrometric chart…", "muted"));
         figures = new VBox(12, new HBox(16, enteringPanel, leavingPanel), Ui.panel(6, performance));
         findings = new FindingsList(viewModel.sheetProperty());
-        getChildren().addAll(banner, new VBox());
+        getChildren().addAll(banner, keyFigures, new VBox());
+        keyFigures.setId("key-figures");
         viewModel.sheetProperty().addListener((o, a, b) -> show(b));
         show(viewModel.sheet());
         setPortrait(false);
@@ -76,7 +79,7 @@ public final class ResultsView extends VBox implements Reflowing {
             body = new HBox(16, left, chartSlot);
         }
         VBox.setVgrow(body, Priority.ALWAYS);
-        getChildren().set(1, body);
+        getChildren().set(2, body);
     }
 
     private void show(ResultSheet s) {
@@ -86,8 +89,22 @@ public final class ResultsView extends VBox implements Reflowing {
         entering.show("Return (entering)", s.entering());
         leaving.show("Supply (leaving)", s.leaving());
         performance.show("What the coil does", s.performance());
+        keyFigures.getChildren().clear();
+        keyFigure(s, "dew-point-margin", "Return dew point above the coil");
+        keyFigure(s, "moisture-removal", "Water removed");
         if (s.performance().isEmpty()) {
             performance.add(new Label(s.explanation()), 0, 1, 3, 1);
         }
+    }
+
+    private void keyFigure(ResultSheet s, String key, String name) {
+        app.latentledger.ui.present.Row r = s.performance(key);
+        if (r == null) {
+            return;
+        }
+        Label value = Ui.label(r.value() + " " + r.unit(), "key-figure-value");
+        value.setId("key-" + key);
+        value.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        keyFigures.getChildren().add(Ui.panel(2, Ui.wrapped(name, "muted"), value));
     }
 }

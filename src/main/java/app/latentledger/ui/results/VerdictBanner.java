@@ -33,7 +33,12 @@ public final class VerdictBanner extends HBox {
         key.setId(compact ? "live-verdict-key" : "verdict-key");
         key.setManaged(false);
         key.setVisible(false);
+        // "Waiting for …" names every missing reading: the headline wraps, never ends in "..."
+        word.setWrapText(true);
+        word.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
         VBox words = new VBox(2, word, why);
+        words.setMinWidth(0);
+        javafx.scene.layout.HBox.setHgrow(words, javafx.scene.layout.Priority.ALWAYS);
         getChildren().addAll(icon, words, key);
         Runnable show = () -> {
             ResultSheet s = sheet.getValue();

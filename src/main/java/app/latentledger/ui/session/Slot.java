@@ -161,7 +161,7 @@ public enum Slot {
             return choiceLabel(choice);
         }
         return switch (this) {
-            case COIL_TEMPERATURE -> "evaporator-saturation".equals(choice) ? "Coil (saturation)" : "Coil (probe)";
+            case COIL_TEMPERATURE -> "evaporator-saturation".equals(choice) ? "Coil (gauges)" : "Coil (probe)";
             case AIRFLOW -> "entering".equals(choice) ? "Airflow (return side)" : "Airflow (supply side)";
             case CONDENSATE_MINUTES -> "Collection time";
             default -> label;

@@ -105,8 +105,8 @@ class SettingsTest {
         InvalidInputException tol = assertThrows(InvalidInputException.class,
                 () -> Settings.DEFAULTS.withTyped(SettingsCatalogue.TOL_DRY_BULB, -0.1, UnitSystem.IP));
         assertEquals("dry-bulb probe tolerance -0.1 °F refused: accepted range 0 to 5 °F", tol.message(UnitSystem.IP));
-        // 5 °F = 2.7778 K (÷ 1.8)
-        assertEquals("dry-bulb probe tolerance -0.0556 K refused: accepted range 0 to 2.7778 K", tol.message(UnitSystem.SI));
+        // 5 °F = 2.7778 K (÷ 1.8), shown inwards at the 0.1 K a temperature difference is shown with
+        assertEquals("dry-bulb probe tolerance -0.0556 K refused: accepted range 0 to 2.7 K", tol.message(UnitSystem.SI));
         InvalidInputException elev = assertThrows(InvalidInputException.class,
                 () -> Settings.DEFAULTS.withTyped(SettingsCatalogue.DEFAULT_ELEVATION, 5000, UnitSystem.SI));
         assertTrue(elev.message(UnitSystem.SI).contains("default site elevation 5000 m refused: accepted range -450 to 4500 m"),

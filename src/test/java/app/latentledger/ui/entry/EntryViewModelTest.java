@@ -68,15 +68,30 @@ class EntryViewModelTest {
     }
 
     @Test
-    void aWetBulbAboveTheDryBulbIsRefusedAndSaysWhy() {
+    void aWetBulbAboveTheDryBulbIsHeldNotStoredAndSaysWhichPairDisagrees() {
         try (AppSession s = TestSessions.withNewVisit(dir)) {
             EntryViewModel vm = new EntryViewModel(s);
             type(vm, Slot.RETURN_DRY_BULB, "75");
             type(vm, Slot.RETURN_HUMIDITY, "80");
-            assertTrue(vm.refusedProperty().get());
+            assertFalse(vm.refusedProperty().get());
             String m = vm.messageProperty().get();
-            assertTrue(m.contains("return wet bulb 80 °F refused: a wet bulb cannot be above the dry bulb"), m);
-            assertFalse(s.draft().has(Slot.RETURN_HUMIDITY));
+            assertTrue(m.contains("return wet bulb 80.0 °F and return dry bulb 75.0 °F cannot both be right"), m);
+            assertFalse(s.draft().has(Slot.RETURN_HUMIDITY), "the stored set stays a valid one");
+            assertTrue(vm.isHeld(Slot.RETURN_HUMIDITY));
+            assertTrue(vm.inConflict(Slot.RETURN_DRY_BULB) && vm.inConflict(Slot.RETURN_HUMIDITY));
+        }
+    }
+
+    @Test
+    void aRefusedAirflowNamesItsRangeAtTheShownPrecision() {
+        try (AppSession s = TestSessions.withNewVisit(dir)) {
+            EntryViewModel vm = new EntryViewModel(s);
+            type(vm, Slot.AIRFLOW, "0");
+            String m = vm.messageProperty().get();
+            // the limits convert to 19.9175 and 52972.0001 cfm; airflow is shown in whole cfm, and the
+            // ends are rounded inwards so the shown ends are themselves accepted
+            assertTrue(m.endsWith("accepted range 20 to 52972 cfm"), m);
+            assertEquals("", vm.pad().text(), "a refusal empties the pad");
         }
     }
 
@@ -96,17 +111,20 @@ class EntryViewModelTest {
     }
 
     @Test
-    void switchingAHumidityBoxToRhDropsItsTemperatureValue() {
+    void switchingAHumidityBoxToRhKeepsTheWetBulbUntilAnRhIsEntered() {
         try (AppSession s = TestSessions.withNewVisit(dir)) {
             EntryViewModel vm = new EntryViewModel(s);
             type(vm, Slot.RETURN_DRY_BULB, "75");
             type(vm, Slot.RETURN_HUMIDITY, "65");
             vm.select(Slot.RETURN_HUMIDITY);
             vm.choose("rh");
-            assertFalse(s.draft().has(Slot.RETURN_HUMIDITY), "65 °F wet bulb is not 65 % RH");
-            assertEquals("%", vm.unit());
+            assertEquals("wet-bulb", s.draft().choice(Slot.RETURN_HUMIDITY), "a tap erases nothing");
+            // 65 °F = 18.333… °C (°C = (°F − 32) / 1.8)
+            assertEquals((65 - 32) / 1.8, s.draft().value(Slot.RETURN_HUMIDITY).valueSi(), 1e-9);
+            assertEquals("%", vm.unit(), "the pad types the new kind: 65 °F wet bulb is not 65 % RH");
             type(vm, Slot.RETURN_HUMIDITY, "55");
             assertEquals("rh", s.draft().choice(Slot.RETURN_HUMIDITY));
+            assertEquals(55, s.draft().value(Slot.RETURN_HUMIDITY).valueSi(), 1e-9);
         }
     }
 

@@ -78,6 +78,9 @@ class ResultsViewModelTest {
             assertEquals("60.8", sheet.entering().stream().filter(r -> r.key().equals("entering-dew-point"))
                     .findFirst().orElseThrow().value());
             assertTrue(sheet.performance("dew-point-margin").value().contains("±"), "margin with its uncertainty");
+            // a per-day figure from a running rate is not a rating: it says so beside it
+            assertTrue(sheet.performance("moisture-removal-daily").label().contains("if it ran all day"),
+                    sheet.performance("moisture-removal-daily").label());
         }
     }
 }

@@ -1,0 +1,151 @@
+package app.latentledger.ui;
+
+import app.latentledger.store.DemoScenario;
+import app.latentledger.ui.log.CycleLogAnalysis;
+import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.session.Background;
+import app.latentledger.ui.session.Screen;
+import javafx.geometry.Orientation;
+import javafx.scene.Node;
+import javafx.scene.Parent;
+import javafx.scene.control.ButtonBase;
+import javafx.scene.control.ComboBoxBase;
+import javafx.scene.control.Labeled;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ScrollBar;
+import javafx.scene.text.Text;
+import javafx.stage.Stage;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * Every screen at 1280 × 800 and upright at 800 × 1280, on the demo visit: each button, toggle,
+ * key, drop-down and list row is at least 48 px both ways (a gloved fingertip, about 8 mm at
+ * 150 px/in; common practice, no source), each scroll bar at least 16 px thick, and no label cuts
+ * its text to an ellipsis.
+ */
+@ExtendWith(ApplicationExtension.class)
+class LayoutUiTest {
+    @TempDir
+    static Path dir;
+
+    private AppSession session;
+    private Stage stage;
+
+    @Start
+    void start(Stage stage) {
+        this.stage = stage;
+        session = AppSession.open(dir, new CycleLogAnalysis());
+        session.openVisit(session.ledger().visits().find(DemoScenario.VISIT_COMPLAINT).orElseThrow());
+        show(1280, 800);
+        stage.show();
+    }
+
+    private void show(int w, int h) {
+        AppShell shell = new AppShell(session, Background.DIRECT, Background.DIRECT);
+        shell.attachCharts();
+        stage.setScene(shell.scene(w, h));
+        stage.setWidth(w);
+        stage.setHeight(h);
+    }
+
+    @AfterEach
+    void close() {
+        session.close();
+    }
+
+    @Test
+    void landscapeEveryScreenHasGloveSizedTargetsAndNoCutText(FxRobot robot) {
+        List<String> problems = walk(robot);
+        assertTrue(problems.isEmpty(), String.join("\n", problems));
+    }
+
+    @Test
+    void uprightEveryScreenHasGloveSizedTargetsAndNoCutText(FxRobot robot) {
+        robot.interact(() -> show(800, 1280));
+        List<String> problems = walk(robot);
+        assertTrue(problems.isEmpty(), String.join("\n", problems));
+    }
+
+    @Test
+    void resultsPutTheVerdictMarginAndWaterFirstAndGiveTheChartHalfTheWidth(FxRobot robot) {
+        robot.interact(() -> session.screenProperty().set(Screen.RESULTS));
+        var margin = scene(robot, "#key-dew-point-margin");
+        var water = scene(robot, "#key-moisture-removal");
+        var verdict = scene(robot, "#verdict");
+        var chart = scene(robot, "#" + app.latentledger.ui.results.ResultsView.CHART_SLOT_ID);
+        var screen = scene(robot, "#screen-results");
+        assertTrue(margin.getMinY() >= verdict.getMaxY() && margin.getMaxY() <= chart.getMinY() + 1,
+                "margin right under the verdict, above the chart: " + margin + " " + chart);
+        assertTrue(water.getMaxY() <= chart.getMinY() + 1, "water removed above the chart");
+        assertTrue(chart.getWidth() >= screen.getWidth() / 2, "chart " + chart.getWidth() + " of " + screen.getWidth());
+    }
+
+    private static javafx.geometry.Bounds scene(FxRobot robot, String id) {
+        Node n = robot.lookup(id).query();
+        return n.localToScene(n.getLayoutBounds());
+    }
+
+    private List<String> walk(FxRobot robot) {
+        List<String> problems = new ArrayList<>();
+        for (Screen s : Screen.values()) {
+            robot.interact(() -> session.screenProperty().set(s));
+            robot.interact(() -> check(s, stage.getScene().getRoot(), problems));
+        }
+        return problems;
+    }
+
+    /** A drop-down's shown row is part of the drop-down, which is the target measured. */
+    private static boolean insideDropDown(Node n) {
+        for (Node p = n.getParent(); p != null; p = p.getParent()) {
+            if (p instanceof ComboBoxBase) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static void check(Screen s, Node n, List<String> problems) {
+        if (!n.isVisible()) {
+            return;
+        }
+        var b = n.getLayoutBounds();
+        String name = s + " " + n.getClass().getSimpleName() + (n.getId() == null ? "" : " #" + n.getId());
+        if (n instanceof ButtonBase || n instanceof ComboBoxBase || (n instanceof ListCell<?> c && !c.isEmpty() && !insideDropDown(c))) {
+            if (b.getWidth() < 48 || b.getHeight() < 48) {
+                problems.add(name + " is " + b.getWidth() + " × " + b.getHeight()
+                        + (n instanceof Labeled l ? " '" + l.getText() + "'" : ""));
+            }
+        }
+        if (n instanceof ScrollBar bar) {
+            double thick = bar.getOrientation() == Orientation.VERTICAL ? b.getWidth() : b.getHeight();
+            if (thick < 16) {
+                problems.add(name + " scroll bar is " + thick + " px thick");
+            }
+        }
+        if (n instanceof Labeled l && l.getText() != null && !l.getText().isEmpty()) {
+            for (Node child : l.getChildrenUnmodifiable()) {
+                if (child instanceof Text t && t.getText() != null && !t.getText().equals(l.getText())
+                        && (t.getText().endsWith("...") || t.getText().endsWith("…"))) {
+                    problems.add(name + " shows '" + t.getText() + "' for '" + l.getText() + "'");
+                }
+            }
+        }
+        if (n instanceof Parent p) {
+            for (Node c : p.getChildrenUnmodifiable()) {
+                check(s, c, problems);
+            }
+        }
+    }
+}
