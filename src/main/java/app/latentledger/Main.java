@@ -20,7 +20,6 @@ public final class Main {
 
     public static void main(String[] argv) {
         List<String> words = Arrays.asList(argv);
-        nativeLibraryOnce(argv);
         if (!hasCommand(words)) {
             requireDisplay("the app");
             try {
@@ -40,23 +39,6 @@ public final class Main {
         int code = commandLine().run(words, System.out, System.err);
         System.out.flush();
         System.exit(code);
-    }
-
-    /**
-     * SQLite's native library is unpacked once into the data folder's {@code native/} folder rather
-     * than into the temporary folder on every start (a killed run would leave its copy there).
-     */
-    private static void nativeLibraryOnce(String[] argv) {
-        try {
-            java.nio.file.Path dataDir = app.latentledger.store.DataLocation.dataDirOption(argv);
-            if (dataDir != null && dataDir.toString().isBlank()) {
-                return; // refused with a message by the command line
-            }
-            app.latentledger.store.NativeLibrary.useAppFolder(
-                    app.latentledger.store.DataLocation.resolve(dataDir).folder());
-        } catch (RuntimeException e) {
-            // the driver unpacks it itself as before
-        }
     }
 
     /** Every command of this build: the display-free ones and {@code screens}. */

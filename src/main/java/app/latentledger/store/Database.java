@@ -54,6 +54,9 @@ public final class Database implements AutoCloseable {
             Path parent = file.toAbsolutePath().getParent();
             if (parent != null) {
                 Files.createDirectories(parent);
+                // the first open of this process points the driver at the ledger folder's own copy of
+                // its native library; commands that never open a ledger never pay for it
+                NativeLibrary.useAppFolder(parent);
             }
         } catch (IOException | SecurityException e) {
             throw new StoreException(StoreException.Kind.UNAVAILABLE, "cannot create the folder for " + file + ": "
