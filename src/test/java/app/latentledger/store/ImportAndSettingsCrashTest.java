@@ -2,26 +2,18 @@ package app.latentledger.store;
 
 import app.latentledger.bundle.Bundles;
 import app.latentledger.core.settings.Settings;
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-import java.io.BufferedReader;
-import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.util.ArrayList;
-import java.util.Collections;
+import java.time.Duration;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
 import java.util.Set;
-import java.util.concurrent.TimeUnit;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -62,25 +54,21 @@ class ImportAndSettingsCrashTest {
         Set<Integer> acknowledged = new HashSet<>();
         int inFlight = 0;
         for (int kill = 0; kill < KILLS; kill++) {
-            List<String> printed = Collections.synchronizedList(new ArrayList<>());
-            Process child = start(printed, "import", data.toString(), template.toString(), idsFile.toString(),
-                    String.valueOf(kill * 100));
+            ChildJvm child = ChildJvm.start(dir, CrashChild.class, "import", data.toString(), template.toString(),
+                    idsFile.toString(), String.valueOf(kill * 100));
             if (kill % 5 == 0) {
                 Thread.sleep(random.nextInt(800));
             } else {
                 int begins = 1 + random.nextInt(2);
-                waitFor(child, () -> count(printed, "begin") >= begins);
+                child.await(lines -> count(lines, "begin ") >= begins, Duration.ofSeconds(30));
                 Thread.sleep(random.nextInt(60));
             }
-            kill(child);
             Set<Integer> begun = new HashSet<>();
-            synchronized (printed) {
-                for (String line : printed) {
-                    if (line.startsWith("begin ")) {
-                        begun.add(Integer.parseInt(line.substring(6)));
-                    } else if (line.startsWith("ok ")) {
-                        acknowledged.add(Integer.parseInt(line.substring(3)));
-                    }
+            for (String line : child.kill()) {
+                if (line.startsWith("begin ")) {
+                    begun.add(Integer.parseInt(line.substring(6)));
+                } else if (line.startsWith("ok ")) {
+                    acknowledged.add(Integer.parseInt(line.substring(3)));
                 }
             }
             try (Ledger l = new Ledger(Database.open(data.resolve(Ledger.FILE_NAME)))) {
@@ -110,52 +98,44 @@ class ImportAndSettingsCrashTest {
         return n;
     }
 
+    /**
+     * The children's output is the record of what they began and what they were told was saved.
+     * It is complete (every line written before the kill is read; {@link ChildJvm}) and in order,
+     * and a child writes "begin" before its save starts and "ok" only after it returned, one save at
+     * a time. So after a kill each setting holds either the value of its last acknowledged save
+     * (or, without one, the value found at the previous check) or the value of the one save in flight,
+     * and nothing else.
+     */
     @Test
-    @Disabled("Open defect: in one full-suite run on a loaded machine, after kill 47 the stored tolDewPoint was"
-            + " 1.15 while the children's output allowed only 1.55 (a value no save had begun since the last"
-            + " check). It passes alone and passed in three other full runs. Until the cause (a lost"
-            + " acknowledged save, or a gap in how this test reads the children's output) is found, it must not"
-            + " decide whether a build lands; run it by hand with -Dtest=ImportAndSettingsCrashTest"
-            + " -Djunit.jupiter.conditions.deactivate=org.junit.*DisabledCondition")
     void killedSettingsSavesLoseNoAcknowledgedValue() throws Exception {
         Path data = dir.resolve("data");
         Ledger.open(data).close();
         Random random = new Random(7_2026L);
-        Map<String, Set<Double>> allowed = new HashMap<>();
-        Settings defaults = Settings.DEFAULTS;
+        Map<String, Double> found = new HashMap<>();
         for (String k : CrashChild.KEYS) {
-            allowed.put(k, new HashSet<>(Set.of(defaults.numberSi(k))));
+            found.put(k, Settings.DEFAULTS.numberSi(k));
         }
         int saves = 0;
         int killedInSave = 0;
         for (int kill = 0; kill < KILLS; kill++) {
-            List<String> printed = Collections.synchronizedList(new ArrayList<>());
-            Process child = start(printed, "settings", data.toString(), String.valueOf(kill));
+            ChildJvm child = ChildJvm.start(dir, CrashChild.class, "settings", data.toString(), String.valueOf(kill));
             int oks = 1 + random.nextInt(12);
-            waitFor(child, () -> count(printed, "ok") >= oks);
+            child.await(lines -> count(lines, "ok ") >= oks, Duration.ofSeconds(30));
             Thread.sleep(random.nextInt(3));
-            kill(child);
-            synchronized (printed) {
-                for (String line : printed) {
-                    String[] w = line.split(" ");
-                    if (w[0].equals("begin")) {
-                        allowed.get(w[1]).add(Double.parseDouble(w[2]));
-                    } else if (w[0].equals("ok")) {
-                        allowed.put(w[1], new HashSet<>(Set.of(Double.parseDouble(w[2]))));
-                        saves++;
-                    }
-                }
-                if (!printed.isEmpty() && printed.get(printed.size() - 1).startsWith("begin")) {
-                    killedInSave++;
-                }
-            }
+            SaveRecord record = SaveRecord.of(child.kill(), kill);
+            saves += record.acknowledged();
+            killedInSave += record.inFlight() != null ? 1 : 0;
             try (Ledger l = new Ledger(Database.open(data.resolve(Ledger.FILE_NAME)))) {
                 assertEquals("ok", l.database().integrityCheck(), "after kill " + kill);
                 Settings stored = l.settings().load();
                 for (String k : CrashChild.KEYS) {
                     double v = stored.numberSi(k);
-                    assertTrue(allowed.get(k).contains(v), k + " = " + v + " after kill " + kill + ", allowed " + allowed.get(k));
-                    allowed.put(k, new HashSet<>(Set.of(v)));
+                    double last = record.lastAcknowledged().getOrDefault(k, found.get(k));
+                    boolean inFlight = record.inFlight() != null && record.inFlight().key().equals(k)
+                            && Double.compare(record.inFlight().value(), v) == 0;
+                    assertTrue(Double.compare(last, v) == 0 || inFlight, k + " = " + v + " after kill " + kill
+                            + "; the last acknowledged value is " + last + ", the save in flight " + record.inFlight());
+                    found.put(k, v);
                 }
             }
         }
@@ -163,86 +143,44 @@ class ImportAndSettingsCrashTest {
         assertTrue(killedInSave > 0, "some kills should land inside a save");
     }
 
-    private static int count(List<String> printed, String prefix) {
-        synchronized (printed) {
-            return (int) printed.stream().filter(s -> s.startsWith(prefix)).count();
-        }
+    /** One setting saved by a child: its key and value (SI). */
+    record Save(String key, double value) {
     }
 
-    private static void waitFor(Process child, java.util.function.BooleanSupplier done) throws InterruptedException {
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(30);
-        while (!done.getAsBoolean() && child.isAlive() && System.nanoTime() < deadline) {
-            Thread.sleep(1);
-        }
-    }
-
-    private Process start(List<String> printed, String... args) throws Exception {
-        List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC", "-Xshare:auto", "-cp", System.getProperty("java.class.path"),
-                "-Djava.io.tmpdir=" + Files.createDirectories(dir.resolve("tmp")), "-Duser.home=" + dir.resolve("home")));
-        Path nativeDir = nativeLibraryFolder();
-        if (nativeDir != null) {
-            command.add("-Dorg.sqlite.lib.path=" + nativeDir);
-            command.add("-Dorg.sqlite.lib.name=libsqlitejdbc.so");
-        }
-        command.add(CrashChild.class.getName());
-        command.addAll(List.of(args));
-        Process child = new ProcessBuilder(command).redirectError(ProcessBuilder.Redirect.appendTo(dir.resolve("child.err").toFile()))
-                .start();
-        Thread reader = new Thread(() -> read(child.getInputStream(), printed));
-        reader.setDaemon(true);
-        reader.start();
-        readers.put(child, reader);
-        return child;
-    }
-
-    private void kill(Process child) throws Exception {
-        child.destroyForcibly();
-        assertTrue(child.waitFor(20, TimeUnit.SECONDS), "child did not die");
-        assertEquals(137, child.exitValue(), () -> "child must end by SIGKILL, not by itself: " + stderr());
-        // every line the child printed before it died is read before the ledger is checked
-        Thread reader = readers.remove(child);
-        reader.join(10_000);
-        assertTrue(!reader.isAlive(), "the child's output was read to its end");
-    }
-
-    private final Map<Process, Thread> readers = new HashMap<>();
-
-    private String stderr() {
-        try {
-            return Files.readString(dir.resolve("child.err"));
-        } catch (java.io.IOException e) {
-            return "(none)";
-        }
-    }
-
-    private static void read(InputStream in, List<String> into) {
-        try (BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8))) {
-            for (String line = r.readLine(); line != null; line = r.readLine()) {
-                into.add(line);
+    /**
+     * What one child's output says: the last acknowledged value of each key it saved, how many saves
+     * were acknowledged, and the save begun but not acknowledged when it was killed (null if none).
+     * A record that breaks the child's order (an "ok" without its "begin", a "begin" while another
+     * save is open) is refused: it would mean lines were lost, and the check would blame the ledger.
+     */
+    record SaveRecord(Map<String, Double> lastAcknowledged, int acknowledged, Save inFlight) {
+        static SaveRecord of(List<String> lines, int kill) {
+            Map<String, Double> last = new HashMap<>();
+            int acknowledged = 0;
+            Save open = null;
+            for (String line : lines) {
+                String[] w = line.split(" ");
+                boolean begin = w[0].equals("begin");
+                if (!begin && !w[0].equals("ok")) {
+                    continue; // "ready", or a notice of the JVM's own
+                }
+                assertEquals(3, w.length, "kill " + kill + ": a save line has a key and a value: " + line);
+                Save save = new Save(w[1], Double.parseDouble(w[2]));
+                if (begin) {
+                    assertEquals(null, open, "kill " + kill + ": " + line + " began while a save was open; lines lost");
+                    open = save;
+                } else {
+                    assertEquals(open, save, "kill " + kill + ": " + line + " acknowledged a save not begun; lines lost");
+                    last.put(save.key(), save.value());
+                    acknowledged++;
+                    open = null;
+                }
             }
-        } catch (java.io.IOException ignored) {
-            // the pipe breaks when the child is killed
+            return new SaveRecord(last, acknowledged, open);
         }
     }
 
-    private Path nativeFolder;
-
-    /** sqlite-jdbc's native library unpacked once for all children (as CrashSafetyTest does). */
-    private Path nativeLibraryFolder() throws Exception {
-        if (nativeFolder != null) {
-            return nativeFolder;
-        }
-        String resource = "/org/sqlite/native/" + org.sqlite.util.OSInfo.getNativeLibFolderPathForCurrentOS()
-                + "/libsqlitejdbc.so";
-        try (InputStream in = org.sqlite.SQLiteJDBCLoader.class.getResourceAsStream(resource)) {
-            if (in == null) {
-                return null;
-            }
-            Path folder = Files.createDirectories(dir.resolve("native"));
-            Files.copy(in, folder.resolve("libsqlitejdbc.so"), StandardCopyOption.REPLACE_EXISTING);
-            nativeFolder = folder;
-            return folder;
-        }
+    private static long count(List<String> lines, String prefix) {
+        return lines.stream().filter(s -> s.startsWith(prefix)).count();
     }
 }
