@@ -5,36 +5,15 @@ import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.house.HouseFacts;
 import app.latentledger.core.house.HouseVisitReadings;
 import app.latentledger.core.house.VentilationType;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
-import java.nio.file.Path;
 import java.util.Optional;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 /** House facts with the site and house readings with the visit read back as saved, NaN and null kept. */
-class HouseRepositoryTest {
-    @TempDir
-    Path dir;
-    Ledger ledger;
-
-    @BeforeEach
-    void open() {
-        ledger = new Ledger(Database.open(dir.resolve("t.db")));
-        ledger.sites().save(TestRecords.site("s1"));
-        ledger.systems().save(TestRecords.system("y1", "s1"));
-        ledger.visits().save(TestRecords.visit("v1", "s1", "y1"));
-    }
-
-    @AfterEach
-    void close() {
-        ledger.close();
-    }
-
+class HouseRepositoryTest extends OneVisitLedger {
     @Test
     void factsReadBackEqual() {
         HouseFacts f = new HouseFacts(185.8, 2.44, 2, 3, 0, 0.62926, Double.NaN, 3, Double.NaN, VentilationType.ERV,

@@ -8,12 +8,8 @@ import app.latentledger.core.records.Site;
 import app.latentledger.core.records.SnapshotSubject;
 import app.latentledger.core.records.SystemType;
 import app.latentledger.core.records.Visit;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
-import java.nio.file.Path;
 import java.sql.PreparedStatement;
 import java.util.List;
 import java.util.Optional;
@@ -22,24 +18,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-class RepositoryTest {
-    @TempDir
-    Path dir;
-    Ledger ledger;
-
-    @BeforeEach
-    void open() {
-        ledger = new Ledger(Database.open(dir.resolve("t.db")));
-        ledger.sites().save(TestRecords.site("s1"));
-        ledger.systems().save(TestRecords.system("y1", "s1"));
-        ledger.visits().save(TestRecords.visit("v1", "s1", "y1"));
-    }
-
-    @AfterEach
-    void close() {
-        ledger.close();
-    }
-
+class RepositoryTest extends OneVisitLedger {
     @Test
     void durabilitySettingsAreInForce() throws Exception {
         // the settings docs/methods.md §4 relies on, read back from SQLite itself
