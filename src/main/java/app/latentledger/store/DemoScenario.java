@@ -139,7 +139,7 @@ public final class DemoScenario {
         return new HumidityReading(HumidityKind.WET_BULB, f(fahrenheit));
     }
 
-    /** From suction pressure; ±3.5 psi is about ±1.8 °F for R-410A near 40 °F (domain notes §1.4). */
+    /** From suction pressure; ±3.5 psi is about ±1.8 °F for R-410A near 40 °F; R-410A saturation table, from memory. */
     private static CoilTemperature saturation(double fahrenheit) {
         return new CoilTemperature(CoilTemperatureKind.EVAPORATOR_SATURATION, new Measurement(c(fahrenheit), k(1.8)));
     }

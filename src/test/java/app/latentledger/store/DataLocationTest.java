@@ -40,7 +40,7 @@ class DataLocationTest {
     @Test
     void onThisDesktopAttachGivesDotGluonUnderTheTestHome() {
         // surefire sets user.home to target/test-home; Attach's desktop storage is ${user.home}/.gluon
-        // (stack-probe notes §3). Only meaningful when the variable is not set in the environment.
+        // (seen on this stack; Gluon Attach desktop storage). Only meaningful when the variable is not set in the environment.
         if (System.getenv(DataLocation.ENV) == null) {
             Path folder = DataLocation.resolve(null).folder();
             assertEquals(Path.of(System.getProperty("user.home"), ".gluon", "latent-ledger").toAbsolutePath(), folder);

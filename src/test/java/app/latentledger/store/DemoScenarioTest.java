@@ -21,7 +21,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * The invented demo tells the story it claims. Checked with the project's moist-air core
  * (ASHRAE Handbook—Fundamentals ch. 1 equations, tested against the handbook elsewhere); the
  * thresholds are the trade's: coil below the entering dew point dehumidifies, 350–400 cfm/ton is
- * usual design airflow and above 450 cfm/ton is high (domain notes §1.6, common practice).
+ * usual design airflow and above 450 cfm/ton is high (common practice, no source).
  */
 class DemoScenarioTest {
     @TempDir
