@@ -39,15 +39,15 @@ import java.util.concurrent.CopyOnWriteArrayList;
  * records in a push, a child before its parent in one push, a hash that is not {@link WireHash}'s,
  * a chunk above 1 MiB or at an offset other than the bytes received.
  */
-final class StubOffice implements AutoCloseable {
-    static final String COMPANY = "Saltreed Comfort Co.";
+public final class StubOffice implements AutoCloseable {
+    public static final String COMPANY = "Saltreed Comfort Co.";
 
     /** One stored revision. */
     record Revision(long seq, WireRecord record, String device) {
     }
 
     private final HttpServer server;
-    final List<String> violations = new CopyOnWriteArrayList<>();
+    public final List<String> violations = new CopyOnWriteArrayList<>();
     final List<Integer> pushSizes = new CopyOnWriteArrayList<>();
     /** "logId@offset+bytes" of every chunk received, in order. */
     final List<String> chunks = new CopyOnWriteArrayList<>();
@@ -64,17 +64,17 @@ final class StubOffice implements AutoCloseable {
     int failChunksAfter;
     private int chunkPuts;
 
-    StubOffice() throws IOException {
+    public StubOffice() throws IOException {
         server = HttpServer.create(new InetSocketAddress(InetAddress.getLoopbackAddress(), 0), 0);
         server.createContext("/", this::handle);
         server.start();
     }
 
-    String url() {
+    public String url() {
         return "http://127.0.0.1:" + server.getAddress().getPort();
     }
 
-    synchronized String newCode() {
+    public synchronized String newCode() {
         String code = "SALT-" + String.format("%04d", codes.size() + 1) + "-REED";
         codes.put(code, "open");
         return code;
