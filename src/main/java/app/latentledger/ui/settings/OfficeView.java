@@ -31,11 +31,11 @@ public final class OfficeView extends VBox {
         Label office = bound("office-status", viewModel.officeProperty().getValue());
         office.textProperty().bind(viewModel.officeProperty());
 
-        TextField server = field("office-server", "https://office.example", 360);
+        TextField server = field("office-server", "https://office.example", 380);
         server.textProperty().bindBidirectional(viewModel.serverProperty());
-        TextField code = field("office-code", "ABCD-EFGH-JKLM", 220);
+        TextField code = field("office-code", "ABCD-EFGH-JKLM", 240);
         code.textProperty().bindBidirectional(viewModel.codeProperty());
-        TextField device = field("office-device", "Tablet 3", 180);
+        TextField device = field("office-device", "Tablet 3", 200);
         device.textProperty().bindBidirectional(viewModel.deviceNameProperty());
         Button enrol = Ui.button("office-enrol", "Enrol", null, viewModel::enrol);
         enrol.setMinWidth(120);
@@ -63,6 +63,10 @@ public final class OfficeView extends VBox {
         refused.visibleProperty().bind(refused.managedProperty());
         Label message = bound("office-message", "");
         message.textProperty().bind(viewModel.messageProperty());
+        for (Label l : new Label[] {last, message}) {
+            l.managedProperty().bind(l.textProperty().isNotEmpty());
+            l.visibleProperty().bind(l.managedProperty());
+        }
         Label note = Ui.wrapped("Records stay on this tablet and work without a network; a sync sends what changed"
                 + " here and fetches what changed at the office.", "source");
 
@@ -85,7 +89,8 @@ public final class OfficeView extends VBox {
         f.setId(id);
         f.setPromptText(prompt);
         f.setMinHeight(48);
-        f.setPrefWidth(width);
+        // the settings sheet sizes its number fields narrow and right-aligned; words read from the left
+        f.setStyle("-fx-pref-width: " + width + "px; -fx-alignment: center-left;");
         return f;
     }
 
