@@ -146,51 +146,27 @@ public final class WireCodec {
     // ---- reading bodies back ------------------------------------------------------------------
 
     public static Site site(JsonObject body) {
-        try {
-            return BundleObjects.site(body);
-        } catch (BundleException e) {
-            throw refused(e);
-        }
+        return bundle(() -> BundleObjects.site(body));
     }
 
     public static HvacSystem system(JsonObject body) {
-        try {
-            return BundleObjects.system(body);
-        } catch (BundleException e) {
-            throw refused(e);
-        }
+        return bundle(() -> BundleObjects.system(body));
     }
 
     public static Visit visit(JsonObject body) {
-        try {
-            return BundleObjects.visit(body);
-        } catch (BundleException e) {
-            throw refused(e);
-        }
+        return bundle(() -> BundleObjects.visit(body));
     }
 
     public static ReadingSet readingSet(JsonObject body) {
-        try {
-            return BundleObjects.readingSet(body);
-        } catch (BundleException e) {
-            throw refused(e);
-        }
+        return bundle(() -> BundleObjects.readingSet(body));
     }
 
     public static BundleObjects.InstrumentObject instrument(JsonObject body) {
-        try {
-            return BundleObjects.instrument(body);
-        } catch (BundleException e) {
-            throw refused(e);
-        }
+        return bundle(() -> BundleObjects.instrument(body));
     }
 
     public static VisitPaperwork paperwork(JsonObject body) {
-        try {
-            return BundleObjects.paperwork(body);
-        } catch (BundleException e) {
-            throw refused(e);
-        }
+        return bundle(() -> BundleObjects.paperwork(body));
     }
 
     /** What a log body declares about its samples, checked without them. */
@@ -367,6 +343,20 @@ public final class WireCodec {
     }
 
     // ---- small readers ------------------------------------------------------------------------
+
+    /** Reading a bundle object, which may refuse with a {@link BundleException}. */
+    @FunctionalInterface
+    private interface BundleRead<T> {
+        T read() throws BundleException;
+    }
+
+    private static <T> T bundle(BundleRead<T> read) {
+        try {
+            return read.read();
+        } catch (BundleException e) {
+            throw refused(e);
+        }
+    }
 
     private static WireException refused(BundleException e) {
         if (e.getCause() instanceof IllegalArgumentException core && !(core instanceof WireException)) {
