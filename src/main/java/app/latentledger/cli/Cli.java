@@ -38,7 +38,9 @@ public final class Cli {
                 new SitesCommand(), new SystemsCommand(), new ReadingsCommand(), DeleteCommand.delete(),
                 DeleteCommand.restore(), new RecycleBinCommand(),
                 // the house around the system
-                new HouseCommand());
+                new HouseCommand(),
+                // syncing with the office server
+                new OfficeCommand());
     }
 
     /** The display-free commands alone (tests and tools that never draw). */

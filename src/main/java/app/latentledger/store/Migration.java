@@ -29,7 +29,8 @@ record Migration(int version, String name, List<String> statements) {
             "V5__airflow_basis_and_probes.sql",
             "V6__log_conditions.sql",
             "V7__paperwork_and_recycle_bin.sql",
-            "V9__house_facts.sql");
+            "V9__house_facts.sql",
+            "V10__office_sync.sql");
 
     static List<Migration> all() {
         List<Migration> all = new ArrayList<>();

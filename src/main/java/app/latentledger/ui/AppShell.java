@@ -65,6 +65,7 @@ public final class AppShell extends BorderPane {
     private CompareViewModel compare;
     private ExportViewModel export;
     private SettingsViewModel settings;
+    private app.latentledger.ui.settings.OfficeViewModel office;
     /** True once the first frame is up and the charts may be built. */
     private boolean chartsAttached;
     private final Map<Screen, Parent> views = new EnumMap<>(Screen.class);
@@ -190,6 +191,16 @@ public final class AppShell extends BorderPane {
         return reports;
     }
 
+    /** Settings → Office: syncing this tablet's ledger with the office server, off the screen's thread. */
+    public app.latentledger.ui.settings.OfficeViewModel office() {
+        if (office == null) {
+            office = new app.latentledger.ui.settings.OfficeViewModel(
+                    () -> new app.latentledger.sync.OfficeSync(session.ledger()),
+                    work == Background.DIRECT ? work : app.latentledger.ui.settings.OfficeViewModel.officeThread(), fx);
+        }
+        return office;
+    }
+
     /** The settings screen's view model, saving through the session so every screen follows. */
     public SettingsViewModel settings() {
         if (settings == null) {
@@ -257,7 +268,8 @@ public final class AppShell extends BorderPane {
                 case COMPARE -> new CompareView(compare());
                 case RECORD -> new app.latentledger.ui.paperwork.VisitRecordView(record());
                 case EXPORT -> new ExportView(export());
-                case SETTINGS -> new ReflowingSettings(new SettingsView(settings()));
+                case SETTINGS -> new ReflowingSettings(new SettingsView(settings()).withSection(
+                        new app.latentledger.ui.settings.OfficeView(office())));
             };
             if (laidOut) {
                 ((Reflowing) v).setPortrait(portrait);

@@ -120,7 +120,8 @@ class MigrationsTest {
                 "V5__airflow_basis_and_probes.sql", "4260386c78970defa1e3922918850cdec89999f0a42426b7280088ef47d8c257",
                 "V6__log_conditions.sql", "1696abc12866c2c22da55c21732391e8bcaa5e62f4b6ccafa998893a8ba11194",
                 "V7__paperwork_and_recycle_bin.sql", "315109d0f711683fafeafb5c713728291c54a68b24972d8bbf7307d4102f5c4e",
-                "V9__house_facts.sql", "b265b23ce40679f4a3c3c62f270a85fb5f3c2fb6ae6b152ca5691c521b204874");
+                "V9__house_facts.sql", "b265b23ce40679f4a3c3c62f270a85fb5f3c2fb6ae6b152ca5691c521b204874",
+                "V10__office_sync.sql", "e00cf6afc6973b57b4909a1df69b91e34a83bf13135a98fc0e5afdf1554826bf");
 
         for (Map.Entry<String, String> e : released.entrySet()) {
             try (InputStream in = Migration.class.getResourceAsStream("migrations/" + e.getKey())) {

@@ -14,6 +14,8 @@ public final class SettingsScreen {
      * whose {@code savedProperty()} tells the shell when units or theme change.
      */
     public static Parent create(Ledger ledger) {
-        return new SettingsView(new SettingsViewModel(SettingsStore.of(ledger.settings())));
+        return new SettingsView(new SettingsViewModel(SettingsStore.of(ledger.settings())))
+                .withSection(new OfficeView(new OfficeViewModel(() -> new app.latentledger.sync.OfficeSync(ledger),
+                        OfficeViewModel.officeThread(), javafx.application.Platform::runLater)));
     }
 }

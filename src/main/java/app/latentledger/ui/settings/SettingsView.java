@@ -26,6 +26,7 @@ public final class SettingsView extends BorderPane {
     private static final String STYLESHEET = SettingsView.class.getResource("settings.css").toExternalForm();
 
     private final SettingsViewModel viewModel;
+    private final VBox groups = new VBox(18);
 
     public SettingsView(SettingsViewModel viewModel) {
         this.viewModel = viewModel;
@@ -43,7 +44,6 @@ public final class SettingsView extends BorderPane {
         header.setPadding(new Insets(20, 28, 12, 28));
         setTop(header);
 
-        VBox groups = new VBox(18);
         groups.setPadding(new Insets(4, 28, 28, 28));
         for (SettingGroup g : SettingGroup.values()) {
             groups.getChildren().add(group(g));
@@ -60,6 +60,12 @@ public final class SettingsView extends BorderPane {
 
     public SettingsViewModel viewModel() {
         return viewModel;
+    }
+
+    /** Adds a card below the settings' own groups (Settings → Office); returns this view. */
+    public SettingsView withSection(javafx.scene.Node card) {
+        groups.getChildren().add(card);
+        return this;
     }
 
     private void applyTheme(DisplayTheme theme) {

@@ -143,6 +143,9 @@ class SettingsViewTest {
         robot.interact(() -> ((ScrollPane) ((javafx.scene.layout.BorderPane) stage.getScene().getRoot()).getCenter())
                 .setVvalue(0.6));
         save(robot, "settings-thresholds");
+        robot.interact(() -> ((ScrollPane) ((javafx.scene.layout.BorderPane) stage.getScene().getRoot()).getCenter())
+                .setVvalue(1));
+        save(robot, "settings-office");
         robot.interact(() -> robot.lookup("#choice-theme-dark").queryAs(ButtonBase.class).fire());
         robot.interact(() -> ((ScrollPane) ((javafx.scene.layout.BorderPane) stage.getScene().getRoot()).getCenter())
                 .setVvalue(0));
