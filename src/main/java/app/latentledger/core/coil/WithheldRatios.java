@@ -36,7 +36,7 @@ public final class WithheldRatios {
     /** The bypass factor, or why it is not measurable. */
     public static Ratio bypassFactor(CoilResult r) {
         if (!r.adp().found()) {
-            return new Ratio(Double.NaN, "no apparatus dew point: " + r.adp().explanation());
+            return new Ratio(Double.NaN, r.adp().explanation());
         }
         return ratio(r.estimate(Measurand.BYPASS_FACTOR),
                 "the entering air is not clearly warmer than the apparatus dew point");
