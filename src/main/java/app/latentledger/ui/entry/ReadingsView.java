@@ -30,6 +30,7 @@ public final class ReadingsView extends VBox implements Reflowing {
     private final HBox landscape = new HBox(16);
     private final VBox portrait = new VBox(12);
     private final VBox boxesColumn;
+    private final javafx.scene.control.ScrollPane uprightBoxes = Ui.scroll(null);
 
     public ReadingsView(EntryViewModel viewModel, ResultsViewModel results) {
         super(12);
@@ -79,9 +80,13 @@ public final class ReadingsView extends VBox implements Reflowing {
         portrait.getChildren().clear();
         Node body;
         if (upright) {
-            portrait.getChildren().addAll(boxesColumn, pad);
+            // upright the pad keeps its fixed size below and the boxes scroll above it when they are
+            // more than the height left (the probe row made them so): nothing is squeezed or pushed off
+            uprightBoxes.setContent(boxesColumn);
+            portrait.getChildren().addAll(uprightBoxes, pad);
             body = portrait;
         } else {
+            uprightBoxes.setContent(null);
             landscape.getChildren().addAll(boxesColumn, pad);
             body = landscape;
         }

@@ -115,6 +115,17 @@ public final class VisitResults {
             rows.add(ratioRow(r, u, "shr-from-condensate", "Sensible heat ratio from the water caught",
                     Measurand.SHR_FROM_CONDENSATE, WithheldRatios.shrFromCondensate(r)));
         }
+        // what the tech switched on the pad, beside the figures it changes
+        rows.add(new Row("airflow", "Airflow as read (" + (r.readings().airflowAt().key().equals("entering")
+                ? "return side" : "supply side") + ")", Shown.of(Quantity.AIRFLOW, u, r.readings().airflowM3PerS()),
+                r.readings().airflowBasis().label() + " " + Quantity.AIRFLOW.symbol(u)));
+        rows.add(new Row("probes", "Humidity probes", r.readings().probes().sameInstrument() ? "one instrument"
+                : "two probes", ""));
+        if (r.readings().probes().hasOffset()) {
+            rows.add(new Row("supply-dew-point-offset", "Supply probe offset taken off",
+                    Shown.of(Quantity.TEMPERATURE_DIFFERENCE, u, r.readings().probes().supplyDewPointOffsetK()),
+                    Quantity.TEMPERATURE_DIFFERENCE.symbol(u)));
+        }
         String perTonWhyNot = WithheldRatios.airflowPerNominalWhyNot(r);
         rows.add(perTonWhyNot.isEmpty() ? new Row("airflow-per-nominal", "Airflow per nominal size",
                 Shown.of(Quantity.AIRFLOW_PER_CAPACITY, u, r.airflowPerNominalCapacity()),

@@ -75,6 +75,12 @@ class AirflowBasisAndProbesAppPathTest {
             assertTrue(vm.sameProbeProperty().get());
             assertEquals("Return, standard", vm.tileTitle(Slot.AIRFLOW));
             assertTrue(again.currentCheck().checked(), again.currentCheck().refusal());
+            // the results screen shows what was switched, beside the figures it changes
+            var sheet = again.currentCheck().sheet();
+            assertEquals("standard cfm", sheet.performance("airflow").unit());
+            assertEquals("1,200", sheet.performance("airflow").value());
+            assertEquals("one instrument", sheet.performance("probes").value());
+            assertEquals("1.0", sheet.performance("supply-dew-point-offset").value());
         }
     }
 
