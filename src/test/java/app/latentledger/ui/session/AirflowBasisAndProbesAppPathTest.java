@@ -85,6 +85,30 @@ class AirflowBasisAndProbesAppPathTest {
     }
 
     @Test
+    void aVisitBundleCarriesTheSwitchesAndTheOffsetToAnotherTablet() throws Exception {
+        Path bundle = dir.resolve("visit.zip");
+        ReadingSet made;
+        try (AppSession s = TestSessions.withNewVisit(dir.resolve("tablet-a"))) {
+            EntryViewModel vm = new EntryViewModel(s);
+            vm.standardAirflowProperty().set(true);
+            vm.sameProbeProperty().set(true);
+            fillSet(vm);
+            type(vm, Slot.SUPPLY_DEW_POINT_OFFSET, "-0.5");
+            made = s.ledger().readings().find(s.draft().readingSetId()).orElseThrow();
+            app.latentledger.bundle.Bundles.exportVisit(s.ledger(), s.visit().id(), bundle);
+        }
+        try (app.latentledger.store.Ledger other = app.latentledger.store.Ledger.open(dir.resolve("tablet-b"),
+                app.latentledger.store.Ledger.FirstRun.NOTHING)) {
+            app.latentledger.bundle.Bundles.importBundle(other, bundle);
+            ReadingSet arrived = other.readings().find(made.id()).orElseThrow();
+            assertEquals(AirflowBasis.STANDARD, arrived.airflow().basis());
+            assertTrue(arrived.probes().sameInstrument());
+            assertEquals(made.probes().supplyDewPointOffsetK(), arrived.probes().supplyDewPointOffsetK(), 1e-12);
+            assertEquals(made, arrived);
+        }
+    }
+
+    @Test
     void standardCfmIsAMassFlowAtStandardAirDensity() {
         try (AppSession s = TestSessions.withNewVisit(dir)) {
             EntryViewModel vm = new EntryViewModel(s);
