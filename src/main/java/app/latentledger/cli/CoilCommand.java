@@ -8,6 +8,7 @@ import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.Estimate;
 import app.latentledger.core.coil.Measurand;
 import app.latentledger.core.coil.ShortcutFigures;
+import app.latentledger.core.coil.WithheldRatios;
 import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.findings.ThresholdSettings;
@@ -239,7 +240,14 @@ public final class CoilCommand implements Command {
     private static String est(String label, Measurand m, CoilResult r, UnitSystem units, int decimals) {
         Estimate e = r.estimate(m);
         if (!e.exists()) {
-            return "  " + label + ": " + Ratio.NOT_MEASURABLE + "\n";
+            // the same words as the app and the report: "not measurable (why)"
+            String why = switch (m) {
+                case SHR -> WithheldRatios.shr(r).reason();
+                case SHR_FROM_CONDENSATE -> WithheldRatios.shrFromCondensate(r).reason();
+                case BYPASS_FACTOR -> WithheldRatios.bypassFactor(r).reason();
+                default -> "";
+            };
+            return "  " + label + ": " + Ratio.notMeasurable(why) + "\n";
         }
         String u = Double.isFinite(e.expandedSi())
                 ? "± " + Format.fixed(m.uncertaintyQuantity().toDisplay(units, e.expandedSi()), decimals) : "";

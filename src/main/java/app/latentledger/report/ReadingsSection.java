@@ -4,6 +4,8 @@ import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.CoilTemperatureSource;
 import app.latentledger.core.coil.Estimate;
 import app.latentledger.core.coil.Measurand;
+import app.latentledger.core.coil.WithheldRatios;
+import app.latentledger.core.measure.ProbeMatch;
 import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.Airflow;
@@ -12,6 +14,7 @@ import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.Ratio;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.report.pdf.Ink;
 import app.latentledger.report.pdf.Table;
@@ -111,6 +114,7 @@ final class ReadingsSection {
         row(tb, sets, "Coil temperature", s -> s.coilTemperature() == null ? "not measured"
                 : temperature(s.coilTemperature().value()) + " (" + s.coilTemperature().kind().key().replace('-', ' ') + ")");
         row(tb, sets, "Airflow", this::airflow);
+        row(tb, sets, "Humidity probes", this::probes);
         rowChecked(tb, sets, "Pressure used", this::pressure);
         row(tb, sets, "Condensate caught", s -> s.condensate() == null ? "not caught"
                 : DisplayNumber.withSpread(Quantity.WATER_VOLUME, units, s.condensate().volume().valueSi(),
@@ -148,19 +152,19 @@ final class ReadingsSection {
         est(tb, sets, Measurand.LATENT, "Latent capacity");
         rowResult(tb, sets, "Total capacity", r -> Numbers.estimate(Quantity.POWER, units, r.estimate(Measurand.TOTAL))
                 + " (" + DisplayNumber.withUnit(Quantity.POWER_LARGE, units, r.process().totalW()) + ")");
-        est(tb, sets, Measurand.SHR, "Sensible heat ratio");
+        rowResult(tb, sets, "Sensible heat ratio", r -> ratio(r, Measurand.SHR, WithheldRatios.shr(r)));
         rowResult(tb, sets, "Moisture removal", r -> Numbers.estimate(Quantity.WATER_RATE, units,
                 r.estimate(Measurand.MOISTURE_REMOVAL)) + " ("
                 + DisplayNumber.withUnit(Quantity.WATER_RATE_DAILY, units, r.process().moistureRemovalKgPerS()) + " if it ran all day)");
         est(tb, sets, Measurand.LATENT_PER_AIRFLOW, "Latent capacity per airflow");
         est(tb, sets, Measurand.AIRFLOW_PER_CAPACITY, "Airflow per measured capacity");
-        rowResult(tb, sets, "Airflow per nominal capacity", r -> DisplayNumber.withUnit(Quantity.AIRFLOW_PER_CAPACITY, units,
-                r.airflowPerNominalCapacity()));
+        rowResult(tb, sets, "Airflow per nominal capacity", r -> r.readings().hasNominalCapacity()
+                ? DisplayNumber.withUnit(Quantity.AIRFLOW_PER_CAPACITY, units, r.airflowPerNominalCapacity())
+                : Ratio.notMeasurable(WithheldRatios.airflowPerNominalWhyNot(r)));
         rowResult(tb, sets, "Apparatus dew point", r -> r.adp().found()
                 ? Numbers.estimate(Quantity.TEMPERATURE, units, r.estimate(Measurand.APPARATUS_DEW_POINT))
-                : r.adp().explanation());
-        rowResult(tb, sets, "Bypass factor", r -> r.adp().found()
-                ? Numbers.estimate(Quantity.DIMENSIONLESS, units, r.estimate(Measurand.BYPASS_FACTOR)) : "—");
+                : Ratio.notMeasurable(WithheldRatios.apparatusDewPointWhyNot(r)));
+        rowResult(tb, sets, "Bypass factor", r -> ratio(r, Measurand.BYPASS_FACTOR, WithheldRatios.bypassFactor(r)));
         rowResult(tb, sets, "Coil temperature compared", r -> Double.isFinite(r.coilTemperatureC())
                 ? Numbers.estimate(Quantity.TEMPERATURE, units, r.estimate(Measurand.COIL_TEMPERATURE)) + " ("
                 + (r.coilTemperatureSource() == CoilTemperatureSource.MEASURED ? "measured" : "apparatus dew point")
@@ -170,7 +174,20 @@ final class ReadingsSection {
             est(tb, sets, Measurand.CONDENSATE_RATE, "Condensate caught per hour");
             est(tb, sets, Measurand.CONDENSATE_MINUS_AIRSIDE, "Condensate minus air-side removal");
         }
+        if (sets.stream().anyMatch(c -> c.checked() && c.result().condensate() != null && c.result().condensate().usable())) {
+            rowResult(tb, sets, "Latent from the water caught", r -> r.condensate() != null && r.condensate().usable()
+                    ? Numbers.estimate(Quantity.POWER, units, r.estimate(Measurand.LATENT_FROM_CONDENSATE))
+                    : Ratio.notMeasurable(WithheldRatios.shrFromCondensate(r).reason()));
+            rowResult(tb, sets, "Sensible heat ratio from the water caught",
+                    r -> ratio(r, Measurand.SHR_FROM_CONDENSATE, WithheldRatios.shrFromCondensate(r)));
+        }
         return tb;
+    }
+
+    /** A ratio with its U, or "not measurable (why)": never NaN, a bare dash or a misleading 0. */
+    private String ratio(CoilResult r, Measurand m, Ratio ratio) {
+        return ratio.measurable() ? Numbers.estimate(m.quantity(), units, r.estimate(m))
+                : Ratio.notMeasurable(ratio.reason());
     }
 
     private void est(Table tb, List<CheckedReadings> sets, Measurand m, String label) {
@@ -227,6 +244,15 @@ final class ReadingsSection {
                 + (a.basis() == AirflowBasis.STANDARD ? " (standard air)" : "") + " at the "
                 + (a.point().key().equals("entering") ? "return (entering)" : "supply (leaving)") + " side"
                 + (a.method().isEmpty() ? "" : "; " + a.method());
+    }
+
+    /** Whether one instrument read return and supply, and the supply probe's offset taken off. */
+    private String probes(ReadingSet s) {
+        ProbeMatch p = s.probes();
+        String how = p.sameInstrument() ? "one instrument (or compared side by side) for return and supply"
+                : "separate probes for return and supply";
+        return p.hasOffset() ? how + "; supply dew point corrected by "
+                + DisplayNumber.withUnit(Quantity.TEMPERATURE_DIFFERENCE, units, -p.supplyDewPointOffsetK()) : how;
     }
 
     private String pressure(CheckedReadings c) {

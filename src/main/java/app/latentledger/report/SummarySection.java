@@ -198,13 +198,22 @@ final class SummarySection {
             if (!all && !i.onSummary()) {
                 continue;
             }
-            tb.row(i.label(),
-                    DisplayNumber.withSpread(i.quantity(), units, i.before().valueSi(), i.before().expandedSi(), i.decimals()),
-                    DisplayNumber.withSpread(i.quantity(), units, i.after().valueSi(), i.after().expandedSi(), i.decimals()),
+            tb.row(i.label(), figure(i, i.before(), pair.before().result(), units),
+                    figure(i, i.after(), pair.after().result(), units),
                     DisplayNumber.change(i.quantity(), units, i.changeSi(), i.changeUncertaintySi(), i.decimals()),
                     i.verdict());
         }
         return tb;
+    }
+
+    /** One side of a change: the figure with its U, or for a withheld SHR "not measurable (why)". */
+    private static String figure(Improvement i, app.latentledger.core.coil.Estimate e,
+                                 app.latentledger.core.coil.CoilResult r, UnitSystem units) {
+        if (!e.exists() && i.key().equals("shr")) {
+            return app.latentledger.core.units.Ratio.notMeasurable(
+                    app.latentledger.core.coil.WithheldRatios.shr(r).reason());
+        }
+        return DisplayNumber.withSpread(i.quantity(), units, e.valueSi(), e.expandedSi(), i.decimals());
     }
 
     private void found(Typeset t) {

@@ -34,6 +34,17 @@ public record InstrumentTolerances(double dryBulbK, double relativeHumidityPct, 
     }
 
     /**
+     * The tolerance a humidity reading of {@code kind} with value {@code valueSi} gets when the tech
+     * types none: {@link #humidity(HumidityKind)}, and for RH outside 10–90 % one %-point more
+     * ({@link Tolerances#relativeHumidityPct}: capacitive sensors are slower and less sure near
+     * saturation, where a supply probe reads). The one rule the app's pad and {@code coil} share.
+     */
+    public double humidity(HumidityKind kind, double valueSi) {
+        return kind == HumidityKind.RELATIVE_HUMIDITY ? Tolerances.relativeHumidityPct(valueSi, relativeHumidityPct)
+                : humidity(kind);
+    }
+
+    /**
      * The tolerance a fresh coil temperature of {@code kind} gets, K: the surface probe's from these
      * settings, a gauge saturation reading's from the one table ({@link Tolerances#coil}).
      */

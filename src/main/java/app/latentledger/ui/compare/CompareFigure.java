@@ -22,7 +22,8 @@ enum CompareFigure {
     TOTAL("Total capacity", Quantity.POWER, r -> r.process().totalW()),
     SENSIBLE("Sensible", Quantity.POWER, r -> r.process().sensibleW()),
     LATENT("Latent", Quantity.POWER, r -> r.process().latentW()),
-    SHR("Sensible heat ratio", Quantity.DIMENSIONLESS, r -> r.process().sensibleHeatRatio()),
+    /** Withheld as the results screen withholds it: only when the total is clearly above zero. */
+    SHR("Sensible heat ratio", Quantity.DIMENSIONLESS, r -> r.estimate(Measurand.SHR).valueSi()),
     WATER("Water removed", Quantity.WATER_RATE, r -> r.process().moistureRemovalKgPerS()),
     LATENT_PER_AIRFLOW("Latent per airflow", Quantity.POWER_PER_AIRFLOW, r -> r.process().latentPerAirflow());
 

@@ -169,11 +169,15 @@ public final class CompareViewModel {
             int decimals = DisplayNumber.decimals(f.quantity, u);
             String change = Double.isFinite(x) && Double.isFinite(y)
                     ? DisplayNumber.signed(f.quantity.toDisplay(u, y) - f.quantity.toDisplay(u, x), decimals) : Shown.NONE;
-            rows.add(new CompareRow(f.key(), f.label, Shown.of(f.quantity, u, x), Shown.of(f.quantity, u, y), change,
-                    f.quantity.symbol(u)));
+            rows.add(new CompareRow(f.key(), f.label, shown(f, u, x), shown(f, u, y), change, f.quantity.symbol(u)));
         }
         verdicts.set(VisitResults.headline(a.verdict()) + "  →  " + VisitResults.headline(b.verdict()));
         status.set("Before: " + describe(before) + ".  After: the reading set on this visit.");
     }
 
+    /** A figure as shown; a withheld ratio reads "not measurable", never a bare dash. */
+    private static String shown(CompareFigure f, UnitSystem u, double si) {
+        return f == CompareFigure.SHR && !Double.isFinite(si) ? app.latentledger.core.units.Ratio.NOT_MEASURABLE
+                : Shown.of(f.quantity, u, si);
+    }
 }

@@ -105,6 +105,7 @@ public final class EntryRules {
                         v.valueSi() / 2, null);
             }
             case NOMINAL_TONS -> checkNominal(v.valueSi());
+            case SUPPLY_DEW_POINT_OFFSET -> FieldLimits.SUPPLY_DEW_POINT_OFFSET.check(field, v.valueSi());
             default -> {
                 if (q == Quantity.RELATIVE_HUMIDITY) {
                     FieldLimits.RELATIVE_HUMIDITY.check(field, v.valueSi());

@@ -2,6 +2,7 @@ package app.latentledger.ui.entry;
 
 import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.findings.Cautions;
+import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.InvalidRecordException;
 import app.latentledger.core.units.DisplayNumber;
@@ -58,7 +59,14 @@ public final class EntryViewModel {
     /** The order a tech reads the boxes in, as the screen lays them out. */
     static final List<Slot> READING_ORDER = List.of(Slot.RETURN_DRY_BULB, Slot.RETURN_HUMIDITY,
             Slot.SUPPLY_DRY_BULB, Slot.SUPPLY_HUMIDITY, Slot.OUTDOOR_DRY_BULB, Slot.OUTDOOR_HUMIDITY,
-            Slot.COIL_TEMPERATURE, Slot.NOMINAL_TONS, Slot.AIRFLOW, Slot.CONDENSATE_VOLUME, Slot.CONDENSATE_MINUTES);
+            Slot.COIL_TEMPERATURE, Slot.NOMINAL_TONS, Slot.AIRFLOW, Slot.CONDENSATE_VOLUME, Slot.CONDENSATE_MINUTES,
+            Slot.SUPPLY_DEW_POINT_OFFSET);
+    /** The airflow switch: on when the number is standard cfm (0.075 lb/ft³), off for an actual volume. */
+    private final BooleanProperty standardAirflow = new SimpleBooleanProperty(false);
+    /** The probe switch: on when one instrument read return and supply, or the probes were compared. */
+    private final BooleanProperty sameProbe = new SimpleBooleanProperty(false);
+    /** True while the switches are being set from the draft (not a tap). */
+    private boolean syncingSwitches;
 
     /**
      * A reading set of the visit as the picker names it.
@@ -110,12 +118,78 @@ public final class EntryViewModel {
                 loadSets();
             }
         });
+        session.draftProperty().addListener((o, a, b) -> syncSwitches());
+        standardAirflow.addListener((o, a, b) -> {
+            if (!syncingSwitches) {
+                keepSwitch(session.draft().withAirflowBasis(b ? AirflowBasis.STANDARD : AirflowBasis.ACTUAL),
+                        b ? "Airflow read as standard cfm (at 0.075 lb/ft³, as most flow hoods and flow grids give it)."
+                                : "Airflow read as an actual volume (at the air's own temperature and pressure).");
+            }
+        });
+        sameProbe.addListener((o, a, b) -> {
+            if (!syncingSwitches) {
+                keepSwitch(session.draft().withSameProbe(b), b
+                        ? "Return and supply read with one instrument (or probes compared side by side): their offsets"
+                                + " cancel in the moisture drop."
+                        : "Return and supply read with two separate probes.");
+            }
+        });
+        syncSwitches();
         currentSet.addListener((o, a, b) -> {
             if (b != null && session.draft() != null && !b.id().equals(session.draft().readingSetId())) {
                 session.openReadingSet(b.id());
             }
         });
         loadSets();
+    }
+
+    /** On when the airflow is standard cfm, off for an actual volume; a tap keeps the change at once. */
+    public BooleanProperty standardAirflowProperty() {
+        return standardAirflow;
+    }
+
+    /** On when return and supply were read with one instrument; a tap keeps the change at once. */
+    public BooleanProperty sameProbeProperty() {
+        return sameProbe;
+    }
+
+    /** The switches show the draft in hand (another set opened, an undo, a refused tap). */
+    private void syncSwitches() {
+        Draft d = session.draft();
+        syncingSwitches = true;
+        try {
+            standardAirflow.set(d != null && d.airflowBasis() == AirflowBasis.STANDARD);
+            sameProbe.set(d != null && d.sameProbe());
+        } finally {
+            syncingSwitches = false;
+        }
+    }
+
+    private void keepSwitch(Draft changed, String said) {
+        try {
+            session.keep(changed);
+            refused.set(false);
+            message.set(said);
+        } catch (InvalidInputException e) {
+            refuse(e.message(units()));
+        } catch (InvalidRecordException e) {
+            refuse(e.getMessage());
+        }
+        syncSwitches();
+    }
+
+    /**
+     * A box's title on its tile, under its group's heading: the airflow box says where it was read
+     * and what its number means ("Return, standard"), the probe offset is the supply's.
+     */
+    public String tileTitle(Slot s) {
+        if (s == Slot.AIRFLOW) {
+            return ("entering".equals(choice(s)) ? "Return, " : "Supply, ") + shownDraft().airflowBasis().label();
+        }
+        if (s == Slot.SUPPLY_DEW_POINT_OFFSET) {
+            return "Supply offset";
+        }
+        return s.shortTitle(choice(s));
     }
 
     /** The visit's reading sets, the one being entered included. */
@@ -397,15 +471,19 @@ public final class EntryViewModel {
             }
             v = new SlotValue(old.valueSi(), s.toleranceFromDisplay(units(), c, Math.abs(shown)));
         } else {
-            double tol = old != null ? old.toleranceSi() : session.defaultToleranceSi(s, c);
             try {
-                v = new SlotValue(s.fromDisplay(units(), c, shown), tol);
+                double si = s.fromDisplay(units(), c, shown);
+                // a ± the tech typed stays with the box; otherwise the one rule gives it for this value
+                double tol = old != null && base.toleranceTyped(s) ? old.toleranceSi()
+                        : session.defaultToleranceSi(s, c, si);
+                v = new SlotValue(si, tol);
             } catch (IllegalArgumentException e) {
                 refuse(e.getMessage());
                 return false;
             }
         }
-        Draft candidate = (sameKind ? base : base.withChoice(s, c)).with(s, v);
+        Draft kind = sameKind ? base : base.withChoice(s, c);
+        Draft candidate = toleranceMode.get() ? kind.withTypedTolerance(s, v) : kind.with(s, v);
         try {
             EntryRules.checkRange(candidate, s);
         } catch (InvalidInputException e) {
@@ -416,7 +494,8 @@ public final class EntryViewModel {
         java.util.Optional<EntryRules.Conflict> disagree = EntryRules.conflict(candidate, session.site());
         if (disagree.isPresent()) {
             // the stored set stays a valid one: this value is held, and whatever else in it agrees is kept
-            Draft alone = (java.util.Objects.equals(c, before.choice(s)) ? before : before.withChoice(s, c)).with(s, v);
+            Draft beforeKind = java.util.Objects.equals(c, before.choice(s)) ? before : before.withChoice(s, c);
+            Draft alone = toleranceMode.get() ? beforeKind.withTypedTolerance(s, v) : beforeKind.with(s, v);
             boolean keptAlone = held.get() != null && EntryRules.conflict(alone, session.site()).isEmpty()
                     && keepQuietly(alone);
             held.set(candidate);

@@ -30,6 +30,7 @@ public final class ReadingsView extends VBox implements Reflowing {
     private final HBox landscape = new HBox(16);
     private final VBox portrait = new VBox(12);
     private final VBox boxesColumn;
+    private final javafx.scene.control.ScrollPane uprightBoxes = Ui.scroll(null);
 
     public ReadingsView(EntryViewModel viewModel, ResultsViewModel results) {
         super(12);
@@ -79,14 +80,44 @@ public final class ReadingsView extends VBox implements Reflowing {
         portrait.getChildren().clear();
         Node body;
         if (upright) {
-            portrait.getChildren().addAll(boxesColumn, pad);
+            // upright the pad keeps its fixed size below and the boxes scroll above it when they are
+            // more than the height left (the probe row made them so): nothing is squeezed or pushed off
+            uprightBoxes.setContent(boxesColumn);
+            portrait.getChildren().addAll(uprightBoxes, pad);
             body = portrait;
         } else {
+            uprightBoxes.setContent(null);
             landscape.getChildren().addAll(boxesColumn, pad);
             body = landscape;
         }
         VBox.setVgrow(body, Priority.ALWAYS);
         getChildren().set(0, body);
+    }
+
+    /** Beside the airflow box: on for standard cfm (most flow hoods and grids), off for an actual volume. */
+    private javafx.scene.control.ToggleButton airflowSwitch() {
+        javafx.scene.control.ToggleButton b = switchButton("airflow-standard", "Standard air (flow hood, grid)");
+        b.selectedProperty().bindBidirectional(viewModel.standardAirflowProperty());
+        return b;
+    }
+
+    /** Beside the probe offset: on when one instrument read return and supply (or both were compared). */
+    private javafx.scene.control.ToggleButton probeSwitch() {
+        javafx.scene.control.ToggleButton b = switchButton("same-probe", "Same instrument both sides");
+        b.selectedProperty().bindBidirectional(viewModel.sameProbeProperty());
+        return b;
+    }
+
+    private static javafx.scene.control.ToggleButton switchButton(String id, String text) {
+        javafx.scene.control.ToggleButton b = new javafx.scene.control.ToggleButton(text);
+        b.setId(id);
+        b.getStyleClass().add("switch-box");
+        b.setWrapText(true);
+        b.setMaxWidth(Double.MAX_VALUE);
+        b.setMaxHeight(Double.MAX_VALUE);
+        b.setMinHeight(48);
+        b.setFocusTraversable(false);
+        return b;
     }
 
     private void fillBoxes(int groupsPerRow) {
@@ -99,15 +130,18 @@ public final class ReadingsView extends VBox implements Reflowing {
             c.setFillWidth(true);
             boxes.getColumnConstraints().add(c);
         }
-        List<List<Slot>> groups = List.of(
+        // a null box is the group's switch: beside the airflow, what its number means; beside the
+        // probe offset, whether one instrument read both sides
+        List<List<Slot>> groups = java.util.Arrays.asList(
                 List.of(Slot.RETURN_DRY_BULB, Slot.RETURN_HUMIDITY),
                 List.of(Slot.SUPPLY_DRY_BULB, Slot.SUPPLY_HUMIDITY),
                 List.of(Slot.OUTDOOR_DRY_BULB, Slot.OUTDOOR_HUMIDITY),
                 List.of(Slot.COIL_TEMPERATURE, Slot.NOMINAL_TONS),
-                List.of(Slot.AIRFLOW),
-                List.of(Slot.CONDENSATE_VOLUME, Slot.CONDENSATE_MINUTES));
+                java.util.Arrays.asList(Slot.AIRFLOW, null),
+                List.of(Slot.CONDENSATE_VOLUME, Slot.CONDENSATE_MINUTES),
+                java.util.Arrays.asList(null, Slot.SUPPLY_DEW_POINT_OFFSET));
         List<String> names = List.of("Return air", "Supply air", "Outdoor (optional)", "Coil and system",
-                "Airflow", "Condensate (optional)");
+                "Airflow", "Condensate (optional)", "Humidity probes");
         int row = 0;
         for (int g = 0; g < groups.size(); g++) {
             int col = (g % groupsPerRow) * 2;
@@ -118,8 +152,9 @@ public final class ReadingsView extends VBox implements Reflowing {
             boxes.add(name, col, row, 2, 1);
             List<Slot> slots = groups.get(g);
             for (int i = 0; i < slots.size(); i++) {
-                SlotTile t = new SlotTile(viewModel, slots.get(i));
-                boxes.add(t, col + i, row + 1, slots.size() == 1 ? 2 : 1, 1);
+                Node box = slots.get(i) != null ? new SlotTile(viewModel, slots.get(i))
+                        : slots.contains(Slot.AIRFLOW) ? airflowSwitch() : probeSwitch();
+                boxes.add(box, col + i, row + 1, slots.size() == 1 ? 2 : 1, 1);
             }
         }
         boxes.setAlignment(Pos.TOP_LEFT);

@@ -26,8 +26,8 @@ final class SlotTile extends Button {
         Label tolerance = new Label();
         tolerance.getStyleClass().add("slot-tolerance");
         tolerance.setId("tolerance-" + slot.key());
-        title.textProperty().bind(Bindings.createStringBinding(() -> slot.shortTitle(vm.choice(slot)),
-                vm.valueText(slot)));
+        title.textProperty().bind(Bindings.createStringBinding(() -> vm.tileTitle(slot), vm.valueText(slot),
+                vm.standardAirflowProperty()));
         value.textProperty().bind(vm.valueText(slot));
         unit.textProperty().bind(Bindings.createStringBinding(() -> slot.symbol(vm.units(), vm.choice(slot)),
                 vm.valueText(slot)));

@@ -24,8 +24,9 @@ import java.util.List;
 /**
  * The instruments of the open visit: the list, a form to add one (name, serial, calibration date,
  * stated accuracy in the tech's units), and which of them took the reading set on the pad.
- * {@link #tolerances} gives what the chosen instruments state, for the pad to start from (not yet
- * wired into the pad, whose ± comes from the settings).
+ * {@link #tolerances} gives what the chosen instruments state; the pad takes the same figures
+ * through the session's one tolerance rule ({@code ui.session.Tolerancing}) when the tech comes back
+ * to it.
  */
 public final class InstrumentsViewModel {
     /** One instrument as the list shows it, with whether it took the current set. */

@@ -4,12 +4,14 @@ import app.latentledger.core.coil.CoilProcess;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.CoilVerdict;
 import app.latentledger.core.coil.Measurand;
+import app.latentledger.core.coil.WithheldRatios;
 import app.latentledger.core.findings.Cautions;
 import app.latentledger.core.findings.Evidence;
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.psychro.MoistAirState;
 import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.Ratio;
 import app.latentledger.core.units.UnitSystem;
 
 import java.util.ArrayList;
@@ -89,7 +91,7 @@ public final class VisitResults {
                 Quantity.POWER_LARGE.symbol(u)));
         rows.add(row(r, u, "sensible", "Sensible", Measurand.SENSIBLE, Quantity.POWER));
         rows.add(row(r, u, "latent", "Latent", Measurand.LATENT, Quantity.POWER));
-        rows.add(row(r, u, "shr", "Sensible heat ratio", Measurand.SHR, Quantity.DIMENSIONLESS));
+        rows.add(ratioRow(r, u, "shr", "Sensible heat ratio", Measurand.SHR, WithheldRatios.shr(r)));
         rows.add(row(r, u, "moisture-removal", "Water removed", Measurand.MOISTURE_REMOVAL, Quantity.WATER_RATE));
         rows.add(new Row("moisture-removal-daily", "Water removed if it ran all day",
                 Shown.of(Quantity.WATER_RATE_DAILY, u, p.moistureRemovalKgPerS()), Quantity.WATER_RATE_DAILY.symbol(u)));
@@ -101,10 +103,41 @@ public final class VisitResults {
                 Quantity.TEMPERATURE_DIFFERENCE));
         rows.add(new Row("coil-temperature", "Coil temperature (" + coilSource(r) + ")",
                 Shown.of(Quantity.TEMPERATURE, u, r.coilTemperatureC()), Quantity.TEMPERATURE.symbol(u)));
-        rows.add(new Row("airflow-per-nominal", "Airflow per nominal size",
+        String adpWhyNot = WithheldRatios.apparatusDewPointWhyNot(r);
+        rows.add(adpWhyNot.isEmpty() ? row(r, u, "apparatus-dew-point", "Apparatus dew point",
+                Measurand.APPARATUS_DEW_POINT, Quantity.TEMPERATURE)
+                : new Row("apparatus-dew-point", "Apparatus dew point", Ratio.notMeasurable(adpWhyNot), ""));
+        rows.add(ratioRow(r, u, "bypass-factor", "Bypass factor", Measurand.BYPASS_FACTOR, WithheldRatios.bypassFactor(r)));
+        if (r.condensate() != null && r.condensate().usable()) {
+            // a steady catch more certain than the air side gives the latent and SHR beside the air-side figures
+            rows.add(row(r, u, "latent-from-condensate", "Latent from the water caught",
+                    Measurand.LATENT_FROM_CONDENSATE, Quantity.POWER));
+            rows.add(ratioRow(r, u, "shr-from-condensate", "Sensible heat ratio from the water caught",
+                    Measurand.SHR_FROM_CONDENSATE, WithheldRatios.shrFromCondensate(r)));
+        }
+        // what the tech switched on the pad, beside the figures it changes
+        rows.add(new Row("airflow", "Airflow as read (" + (r.readings().airflowAt().key().equals("entering")
+                ? "return side" : "supply side") + ")", Shown.of(Quantity.AIRFLOW, u, r.readings().airflowM3PerS()),
+                r.readings().airflowBasis().label() + " " + Quantity.AIRFLOW.symbol(u)));
+        rows.add(new Row("probes", "Humidity probes", r.readings().probes().sameInstrument() ? "one instrument"
+                : "two probes", ""));
+        if (r.readings().probes().hasOffset()) {
+            rows.add(new Row("supply-dew-point-offset", "Supply probe offset taken off",
+                    Shown.of(Quantity.TEMPERATURE_DIFFERENCE, u, r.readings().probes().supplyDewPointOffsetK()),
+                    Quantity.TEMPERATURE_DIFFERENCE.symbol(u)));
+        }
+        String perTonWhyNot = WithheldRatios.airflowPerNominalWhyNot(r);
+        rows.add(perTonWhyNot.isEmpty() ? new Row("airflow-per-nominal", "Airflow per nominal size",
                 Shown.of(Quantity.AIRFLOW_PER_CAPACITY, u, r.airflowPerNominalCapacity()),
-                Quantity.AIRFLOW_PER_CAPACITY.symbol(u)));
+                Quantity.AIRFLOW_PER_CAPACITY.symbol(u))
+                : new Row("airflow-per-nominal", "Airflow per nominal size", Ratio.notMeasurable(perTonWhyNot), ""));
         return rows;
+    }
+
+    /** A ratio with its uncertainty, or "not measurable (why)" with no unit: never NaN, a bare dash or 0. */
+    private static Row ratioRow(CoilResult r, UnitSystem u, String key, String label, Measurand m, Ratio ratio) {
+        return ratio.measurable() ? row(r, u, key, label, m, m.quantity())
+                : new Row(key, label, Ratio.notMeasurable(ratio.reason()), "");
     }
 
     private static String coilSource(CoilResult r) {

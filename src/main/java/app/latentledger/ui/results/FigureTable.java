@@ -24,11 +24,17 @@ final class FigureTable extends GridPane {
         add(Ui.label(title, "subheading"), 0, 0, 3, 1);
         int r = 1;
         for (Row row : rows) {
-            Label v = Ui.label(row.value(), "figure-value");
+            boolean words = row.value().startsWith(app.latentledger.core.units.Ratio.NOT_MEASURABLE);
+            // a withheld ratio says why in words, which wrap in the value column instead of widening it
+            Label v = words ? Ui.wrapped(row.value(), "figure-words") : Ui.label(row.value(), "figure-value");
             v.setId("figure-" + row.key());
             add(Ui.wrapped(row.label(), "figure-label"), 0, r);
             Label unit = Ui.label(row.unit(), "muted");
-            v.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+            if (words) {
+                v.setMaxWidth(220);
+            } else {
+                v.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+            }
             unit.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
             add(v, 1, r);
             add(unit, 2, r);

@@ -95,6 +95,9 @@ public final class AppSession implements AutoCloseable {
                 storedChecks.clear();
                 workOut();
             }
+            if (!Objects.equals(a.tolerances(), b.tolerances())) {
+                applyToleranceRule();
+            }
         });
         // the header's theme switch is a setting too: keep it for the next start
         dark.addListener((o, a, b) -> {
@@ -104,7 +107,11 @@ public final class AppSession implements AutoCloseable {
             }
         });
         // another program (the command line) may change settings while the app runs: look on every screen change
-        screen.addListener((o, a, b) -> reloadSettingsIfChanged());
+        screen.addListener((o, a, b) -> {
+            reloadSettingsIfChanged();
+            // instruments are ticked for a set on the Record screen: the readings' ± follow them
+            applyToleranceRule();
+        });
         openLatestVisit();
     }
 
@@ -142,25 +149,45 @@ public final class AppSession implements AutoCloseable {
     }
 
     /**
-     * The tolerance a freshly typed value gets: the tech's instrument tolerance from the settings
-     * where one applies, else the box's own default (coil saturation from a gauge, condensate, time).
+     * The ± a value freshly typed in {@code slot} gets: the one rule ({@link Tolerancing}), from the
+     * stated accuracy of the instruments ticked for the set in hand over the tech's instrument
+     * settings (which start from the one default table).
+     *
+     * @param valueSi the value typed, SI (an RH reading's ± depends on where it lies)
      */
-    public double defaultToleranceSi(Slot slot, String choice) {
-        InstrumentTolerances t = settings.get().tolerances();
-        if (slot.isHumidity()) {
-            return switch (choice == null ? "" : choice) {
-                case "rh" -> t.relativeHumidityPct();
-                case "wet-bulb" -> t.wetBulbK();
-                case "dew-point" -> t.dewPointK();
-                default -> slot.defaultToleranceSi(choice);
-            };
+    public double defaultToleranceSi(Slot slot, String choice, double valueSi) {
+        return Tolerancing.of(tolerancesOfSet(), slot, choice, valueSi);
+    }
+
+    /** The tolerances readings of the set in hand start from: its ticked instruments' over the settings'. */
+    public InstrumentTolerances tolerancesOfSet() {
+        Draft d = draft.get();
+        return d == null ? settings.get().tolerances() : tolerancesOf(d);
+    }
+
+    /**
+     * Gives every reading of the set in hand whose ± the tech did not type the rule's ± again (the
+     * instruments ticked for the set or the instrument settings changed), and keeps the draft when
+     * anything changed.
+     *
+     * @return true when a tolerance changed
+     */
+    public boolean applyToleranceRule() {
+        Draft d = draft.get();
+        if (d == null) {
+            return false;
         }
-        return switch (slot) {
-            case RETURN_DRY_BULB, SUPPLY_DRY_BULB, OUTDOOR_DRY_BULB -> t.dryBulbK();
-            case COIL_TEMPERATURE -> "coil-surface".equals(choice) ? t.coilK() : slot.defaultToleranceSi(choice);
-            case AIRFLOW -> t.airflowFraction();
-            default -> slot.defaultToleranceSi(choice);
-        };
+        Draft ruled = Tolerancing.apply(d, tolerancesOfSet());
+        if (ruled.equals(d)) {
+            return false;
+        }
+        try {
+            keep(ruled);
+            return true;
+        } catch (RuntimeException e) {
+            // a draft the rule's tolerances would make refused stays as it was; typing shows why
+            return false;
+        }
     }
 
     /** The visit with a draft in progress, else the newest visit. */
@@ -190,8 +217,7 @@ public final class AppSession implements AutoCloseable {
     public void openReadingSet(String readingSetId) {
         Optional<ReadingSet> stored = ledger.readings().find(readingSetId);
         Optional<Draft> kept = drafts.find(readingSetId);
-        Draft d = kept.map(k -> new Draft(k.readingSetId(), k.visitId(), k.values(), k.choices(),
-                        stored.orElse(null), k.takenAt()))
+        Draft d = kept.map(k -> k.onBase(stored.orElse(null)))
                 .orElseGet(() -> stored.map(DraftRecords::fromReadingSet)
                         .orElseGet(() -> Draft.empty(readingSetId, visit.get().id())));
         show(d);
@@ -225,7 +251,8 @@ public final class AppSession implements AutoCloseable {
      * @throws app.latentledger.core.records.InvalidRecordException when the record refuses it
      */
     public void keep(Draft d) {
-        Draft timed = DraftRecords.complete(d) && d.takenAt() == null ? d.takenAt(OffsetDateTime.now()) : d;
+        Draft ruled = Tolerancing.apply(d, tolerancesOf(d));
+        Draft timed = DraftRecords.complete(ruled) && ruled.takenAt() == null ? ruled.takenAt(OffsetDateTime.now()) : ruled;
         CurrentCheck c = workOut(timed, OffsetDateTime.now());
         if (c.refused()) {
             throw c.refusedBy();
@@ -236,6 +263,10 @@ public final class AppSession implements AutoCloseable {
         }
         draft.set(timed);
         currentCheck.set(c);
+    }
+
+    private InstrumentTolerances tolerancesOf(Draft d) {
+        return Tolerancing.forSet(settings.get().tolerances(), ledger.instruments().usedOn(d.readingSetId()));
     }
 
     /** Saves a changed system (e.g. its nominal size typed on the pad). */

@@ -5,6 +5,7 @@ import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.core.measure.AirflowPoint;
 import app.latentledger.core.records.CoilTemperature;
 import app.latentledger.core.measure.CoilTemperatureKind;
+import app.latentledger.core.measure.ProbeMatch;
 import app.latentledger.core.records.Condensate;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
@@ -52,7 +53,7 @@ public final class DraftRecords {
             airflow = new Airflow(new Measurement(a.valueSi(), a.valueSi() * a.toleranceSi()),
                     AirflowPoint.parse("airflow point", d.choice(Slot.AIRFLOW)),
                     b == null || b.airflow() == null ? "" : b.airflow().method(),
-                    b == null || b.airflow() == null ? AirflowBasis.ACTUAL : b.airflow().basis());
+                    d.airflowBasis());
         }
         Condensate condensate = d.has(Slot.CONDENSATE_VOLUME) && d.has(Slot.CONDENSATE_MINUTES)
                 ? new Condensate(m(d, Slot.CONDENSATE_VOLUME), m(d, Slot.CONDENSATE_MINUTES)) : null;
@@ -62,7 +63,18 @@ public final class DraftRecords {
                 m(d, Slot.RETURN_DRY_BULB), humidity(d, Slot.RETURN_HUMIDITY),
                 m(d, Slot.SUPPLY_DRY_BULB), humidity(d, Slot.SUPPLY_HUMIDITY),
                 outdoorDb, outdoorHum, coil, airflow, b == null ? null : b.stationPressurePa(), condensate,
-                b == null ? "" : b.notes(), b == null ? null : b.probes());
+                b == null ? "" : b.notes(), probes(d));
+    }
+
+    /**
+     * How the two humidity probes relate in this draft: the "same instrument" switch and the typed
+     * supply dew-point offset (none typed: no offset).
+     *
+     * @throws app.latentledger.core.InvalidInputException when the offset is out of its range
+     */
+    public static ProbeMatch probes(Draft d) {
+        SlotValue offset = d.value(Slot.SUPPLY_DEW_POINT_OFFSET);
+        return new ProbeMatch(d.sameProbe(), offset == null ? 0 : offset.valueSi());
     }
 
     /** The draft a stored reading set opens as. */
@@ -88,7 +100,13 @@ public final class DraftRecords {
             put(v, Slot.CONDENSATE_VOLUME, rs.condensate().volume());
             put(v, Slot.CONDENSATE_MINUTES, rs.condensate().seconds());
         }
-        return new Draft(rs.id(), rs.visitId(), v, c, rs, rs.takenAt());
+        if (rs.probes().hasOffset()) {
+            v.put(Slot.SUPPLY_DEW_POINT_OFFSET, new SlotValue(rs.probes().supplyDewPointOffsetK(), 0));
+        }
+        // a stored set keeps the tolerances it was saved with: opening it never changes a record
+        return new Draft(rs.id(), rs.visitId(), v, c, rs, rs.takenAt(),
+                rs.airflow() == null ? AirflowBasis.ACTUAL : rs.airflow().basis(), rs.probes().sameInstrument(),
+                v.keySet());
     }
 
     private static Measurement m(Draft d, Slot s) {

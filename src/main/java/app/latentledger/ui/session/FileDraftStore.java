@@ -1,5 +1,6 @@
 package app.latentledger.ui.session;
 
+import app.latentledger.core.measure.AirflowBasis;
 import app.latentledger.files.SafeFiles;
 import com.google.gson.Gson;
 import com.google.gson.JsonObject;
@@ -14,6 +15,8 @@ import java.time.OffsetDateTime;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.EnumMap;
+import java.util.EnumSet;
+import java.util.Set;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -56,6 +59,11 @@ public final class FileDraftStore implements DraftStore {
         JsonObject choices = new JsonObject();
         d.choices().forEach((slot, c) -> choices.addProperty(slot.key(), c));
         o.add("choices", choices);
+        o.addProperty("airflowBasis", d.airflowBasis().key());
+        o.addProperty("sameProbe", d.sameProbe());
+        com.google.gson.JsonArray typed = new com.google.gson.JsonArray();
+        d.typedTolerances().forEach(s -> typed.add(s.key()));
+        o.add("typedTolerances", typed);
         write(file(d.readingSetId()), GSON.toJson(o).getBytes(StandardCharsets.UTF_8));
     }
 
@@ -78,8 +86,19 @@ public final class FileDraftStore implements DraftStore {
                     choices.put(Slot.ofKey(e.getKey()), e.getValue().getAsString()));
             OffsetDateTime taken = o.has("takenAt") && !o.get("takenAt").isJsonNull()
                     ? OffsetDateTime.parse(o.get("takenAt").getAsString()) : null;
+            // a draft kept before the basis and probe switches existed: actual airflow, independent probes,
+            // and every tolerance as it was kept (nothing is changed under the tech's hands)
+            AirflowBasis basis = o.has("airflowBasis")
+                    ? AirflowBasis.parse("airflow basis", o.get("airflowBasis").getAsString()) : AirflowBasis.ACTUAL;
+            boolean sameProbe = o.has("sameProbe") && o.get("sameProbe").getAsBoolean();
+            Set<Slot> typed = EnumSet.noneOf(Slot.class);
+            if (o.has("typedTolerances")) {
+                o.getAsJsonArray("typedTolerances").forEach(k -> typed.add(Slot.ofKey(k.getAsString())));
+            } else {
+                typed.addAll(values.keySet());
+            }
             return Optional.of(new Draft(o.get("readingSetId").getAsString(), o.get("visitId").getAsString(),
-                    values, choices, null, taken));
+                    values, choices, null, taken, basis, sameProbe, typed));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read the draft " + f, e);
         } catch (JsonParseException | IllegalStateException | NullPointerException | IllegalArgumentException e) {

@@ -24,10 +24,15 @@ public enum Slot {
     AIRFLOW("airflow", "Airflow", "Airflow", Group.AIRFLOW, Tolerances.AIRFLOW_FRACTION),
     NOMINAL_TONS("nominal-tons", "System", "Nominal size", Group.AIRFLOW, 0),
     CONDENSATE_VOLUME("condensate-volume", "Condensate", "Water caught", Group.CONDENSATE, 20e-6),
-    CONDENSATE_MINUTES("condensate-minutes", "Condensate", "Collection time", Group.CONDENSATE, 5);
+    CONDENSATE_MINUTES("condensate-minutes", "Condensate", "Collection time", Group.CONDENSATE, 5),
+    /**
+     * The supply probe's dew point minus the return probe's, both read in the same air, K (a signed
+     * difference, no tolerance of its own): the check takes it off the supply reading.
+     */
+    SUPPLY_DEW_POINT_OFFSET("supply-dew-point-offset", "Supply", "Probe offset", Group.PROBES, 0);
 
     /** Where a box sits on the screen. */
-    public enum Group { RETURN, SUPPLY, OUTDOOR, COIL, AIRFLOW, CONDENSATE }
+    public enum Group { RETURN, SUPPLY, OUTDOOR, COIL, AIRFLOW, CONDENSATE, PROBES }
 
     /** Default tolerances: the one table, {@link Tolerances}. */
     private static final class K {
@@ -109,6 +114,7 @@ public enum Slot {
             case NOMINAL_TONS -> Quantity.POWER_LARGE;
             case CONDENSATE_VOLUME -> Quantity.WATER_VOLUME;
             case CONDENSATE_MINUTES -> Quantity.DURATION_MINUTES;
+            case SUPPLY_DEW_POINT_OFFSET -> Quantity.TEMPERATURE_DIFFERENCE;
             default -> Quantity.TEMPERATURE;
         };
     }
@@ -125,9 +131,9 @@ public enum Slot {
         return this == AIRFLOW ? Quantity.FRACTION_PERCENT : q;
     }
 
-    /** True when the box takes a tolerance at all (the nameplate size does not). */
+    /** True when the box takes a tolerance at all (the nameplate size and the probe offset do not). */
     public boolean hasTolerance() {
-        return this != NOMINAL_TONS;
+        return this != NOMINAL_TONS && this != SUPPLY_DEW_POINT_OFFSET;
     }
 
     /** The tolerance a fresh value gets, SI (airflow: a fraction of reading). */
@@ -164,6 +170,7 @@ public enum Slot {
             case COIL_TEMPERATURE -> "evaporator-saturation".equals(choice) ? "Coil (gauges)" : "Coil (probe)";
             case AIRFLOW -> "entering".equals(choice) ? "Airflow (return side)" : "Airflow (supply side)";
             case CONDENSATE_MINUTES -> "Collection time";
+            case SUPPLY_DEW_POINT_OFFSET -> "Supply probe offset (dew point)";
             default -> label;
         };
     }
@@ -173,6 +180,10 @@ public enum Slot {
      * temperature is a surface probe or the refrigerant's saturation, never a suction-line reading.
      */
     public String hint(String choice) {
+        if (this == SUPPLY_DEW_POINT_OFFSET) {
+            return "With both probes in the same air: the supply probe's dew point minus the return probe's."
+                    + " It is taken off the supply reading; 0 when they agree.";
+        }
         if (this != COIL_TEMPERATURE) {
             return "";
         }
@@ -187,6 +198,9 @@ public enum Slot {
     public String title(String choice) {
         if (isHumidity()) {
             return where + " " + choiceLabel(choice).toLowerCase(java.util.Locale.ROOT).replace("rh", "RH");
+        }
+        if (this == SUPPLY_DEW_POINT_OFFSET) {
+            return "Supply probe dew-point offset";
         }
         return group == Group.RETURN || group == Group.SUPPLY || group == Group.OUTDOOR
                 ? where + " " + label.toLowerCase(java.util.Locale.ROOT) : label;
