@@ -38,7 +38,8 @@ public final class Cli {
                 new SitesCommand(), new SystemsCommand(), new ReadingsCommand(), DeleteCommand.delete(),
                 DeleteCommand.restore(), new RecycleBinCommand(),
                 // the house around the system
-                new HouseCommand());
+                new HouseCommand(),
+                new BatchCommand());
     }
 
     /** The display-free commands alone (tests and tools that never draw). */
@@ -78,7 +79,7 @@ public final class Cli {
                 return OK;
             }
             Args args = Args.parse(rest, Set.of("json", "help", "repair", "remove", Args.DECIMAL_COMMA, "yes", "with-deletions",
-                    "dry-run", "same-probe"));
+                    "dry-run", "same-probe", "store", "template"));
             return command.run(args, new CliContext(out, err, dataDir));
         } catch (UsageException e) {
             err.println("latent-ledger: " + e.getMessage());
