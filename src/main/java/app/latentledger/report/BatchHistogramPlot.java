@@ -17,7 +17,7 @@ final class BatchHistogramPlot {
     static final double HEIGHT = 300;
     private static final double LEFT = 80;
     private static final double RIGHT = 20;
-    private static final double TOP = 14;
+    private static final double TOP = 34;
     private static final double BOTTOM = 44;
     private static final double TEXT = 18;
 

@@ -98,7 +98,7 @@ public final class BatchSummaryReport {
     }
 
     private static void plots(Typeset t, BatchSummary s) {
-        t.heading("How the systems spread", BatchHistogramPlot.HEIGHT * t.flow().width() / BatchHistogramPlot.WIDTH + 20);
+        t.heading("How the systems spread", BatchHistogramPlot.HEIGHT * t.flow().width() / BatchHistogramPlot.WIDTH + 70);
         t.paragraph("Each bar counts the systems whose figure falls in its range. Systems without a figure (no coil"
                 + " temperature, no nameplate size, or a figure that does not exist) are counted under the plot.",
                 Ink.SMALL, 0);
