@@ -377,4 +377,12 @@ class BatchCommandTest {
         assertTrue(s.getAsJsonObject("distributions").has("shr"));
         assertTrue(r.out().toLowerCase(Locale.ROOT).contains("2 checked"), r.out());
     }
+
+    @Test
+    void theBatchDocumentNamesEveryColumnTheBatchAccepts() throws Exception {
+        String doc = Files.readString(Path.of("docs", "batch.md"));
+        for (String c : BatchColumns.ALL.keySet()) {
+            assertTrue(doc.contains("| `" + c + "` |"), c + " in docs/batch.md");
+        }
+    }
 }
