@@ -89,6 +89,10 @@ final class BatchCsv {
             List<String> header = null;
             for (CSVRecord r : parser) {
                 int line = line(lineStarts, r.getCharacterPosition());
+                if (r.hasComment()) {
+                    // the record's position is where its comment lines begin
+                    line += r.getComment().split("\n", -1).length;
+                }
                 if (header == null) {
                     header = header(name, r, line);
                     continue;

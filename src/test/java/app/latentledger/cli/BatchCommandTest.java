@@ -385,4 +385,16 @@ class BatchCommandTest {
             assertTrue(doc.contains("| `" + c + "` |"), c + " in docs/batch.md");
         }
     }
+
+    @Test
+    void theBadRowsExampleIsRefusedAsItsReadmeSays() {
+        Run r = run("batch", Path.of("field-data-samples", "commissioning-batch-bad-rows.csv").toString(), "--json");
+        assertEquals(2, r.code());
+        JsonArray rows = r.json().getAsJsonArray("rows");
+        assertEquals(3, rows.size());
+        assertEquals(3, rows.get(0).getAsJsonObject().get("line").getAsInt(), "the comment line is counted, not read");
+        assertTrue(rows.get(0).getAsJsonObject().has("verdict"));
+        refusal(rows.get(1), 4, "return-rh", "155", "0 to 100 %");
+        refusal(rows.get(2), 5, "return-wb", "79.0", "-58 to 77 °F");
+    }
 }

@@ -181,6 +181,14 @@ class BatchStoreTest {
         Run r = ok(data, "batch", example.toString(), "--store", "--reports", reports.toString(), "--out",
                 dir.resolve("results.csv").toString());
         assertTrue(r.out().contains("Stored 10 visits"), r.out());
+        // what field-data-samples/README.md says the example gives
+        List<String> results = Files.readAllLines(dir.resolve("results.csv"));
+        assertEquals(11, results.size());
+        for (String line : results.subList(1, results.size())) {
+            String want = line.startsWith("4,") ? ",not-dehumidifying," : line.startsWith("11,") ? ",cant-tell,"
+                    : ",dehumidifying,";
+            assertTrue(line.contains(want), want + " in " + line);
+        }
         try (Ledger ledger = Ledger.open(data)) {
             assertEquals(10, ledger.visits().all().size());
             // two rows at Marsh Lane 14 and two at Tidewater Court 22 and Quay Street 9 share their site
