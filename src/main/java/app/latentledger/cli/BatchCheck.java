@@ -49,14 +49,20 @@ final class BatchCheck {
     private final String technician;
     private final boolean decimalComma;
     private final OffsetDateTime now;
+    private final boolean technicianRequired;
+
+    /** The visit's technician when a row is only checked (neither stored nor reported). */
+    static final String NO_TECHNICIAN = "not given";
 
     /**
      * @param inputUnits  units of a row without a {@code units} cell
      * @param outputUnits units the results and findings are said in
      * @param technician  technician of a row without a {@code technician} cell, or null
+     * @param technicianRequired whether a row needs a technician (its visit is stored or reported)
      */
     BatchCheck(UnitSystem inputUnits, UnitSystem outputUnits, double defaultElevationM, InstrumentTolerances tolerances,
-               ThresholdSettings thresholds, String technician, boolean decimalComma, OffsetDateTime now) {
+               ThresholdSettings thresholds, String technician, boolean decimalComma, OffsetDateTime now,
+               boolean technicianRequired) {
         this.inputUnits = inputUnits;
         this.outputUnits = outputUnits;
         this.defaultElevationM = defaultElevationM;
@@ -65,6 +71,7 @@ final class BatchCheck {
         this.technician = technician;
         this.decimalComma = decimalComma;
         this.now = now;
+        this.technicianRequired = technicianRequired;
     }
 
     /**
@@ -117,6 +124,9 @@ final class BatchCheck {
                     + " (or give nominal-kw)");
         }
         String tech = row.cell(BatchColumns.TECHNICIAN).isBlank() ? technician : row.cell(BatchColumns.TECHNICIAN);
+        if ((tech == null || tech.isBlank()) && !technicianRequired) {
+            tech = NO_TECHNICIAN; // a check alone keeps no visit; the placeholder is never stored or printed
+        }
         if (tech == null || tech.isBlank()) {
             throw new UsageException("--technician is required: give a technician cell or batch --technician NAME");
         }

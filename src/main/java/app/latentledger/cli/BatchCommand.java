@@ -97,7 +97,8 @@ public final class BatchCommand implements Command {
             UnitSystem units = unitsText == null ? settings.units() : UnitOptions.units(args, settings.units());
             PaperSize paper = paper(paperText, settings, units, paperText != null);
             BatchCheck check = new BatchCheck(units, units, settings.defaultElevationM(), settings.tolerances(),
-                    settings.thresholds(), technician, false, OffsetDateTime.now());
+                    settings.thresholds(), technician, false, OffsetDateTime.now(),
+                    store || reports != null);
             List<BatchCheck.Outcome> outcomes = run.check(rows, check, BatchProgress.onTerminal(!json, "checked",
                     rows.size()));
 

@@ -397,4 +397,17 @@ class BatchCommandTest {
         refusal(rows.get(1), 4, "return-rh", "155", "0 to 100 %");
         refusal(rows.get(2), 5, "return-wb", "79.0", "-58 to 77 °F");
     }
+
+    @Test
+    void aTechnicianIsNeededOnlyWhenVisitsAreStoredOrReported() throws Exception {
+        JsonObject c = reference("coil-cases.json").getAsJsonArray("cases").get(1).getAsJsonObject();
+        Map<String, String> m = coilRow(c, true);
+        m.remove("technician");
+        Path f = file("notech.csv", List.of(row(m)));
+        assertEquals(0, run("batch", f.toString()).code(), "a check alone needs no technician");
+        Run stored = run("batch", f.toString(), "--store", "--json");
+        assertEquals(2, stored.code());
+        refusal(stored.json().getAsJsonArray("rows").get(0), 2, "technician", "", "");
+        assertEquals(0, run("batch", f.toString(), "--store", "--technician", "R. Okafor").code());
+    }
 }
