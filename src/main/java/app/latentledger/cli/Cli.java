@@ -39,6 +39,7 @@ public final class Cli {
                 DeleteCommand.restore(), new RecycleBinCommand(),
                 // the house around the system
                 new HouseCommand(),
+                new BatchCommand(),
                 // syncing with the office server
                 new OfficeCommand());
     }
@@ -80,7 +81,7 @@ public final class Cli {
                 return OK;
             }
             Args args = Args.parse(rest, Set.of("json", "help", "repair", "remove", Args.DECIMAL_COMMA, "yes", "with-deletions",
-                    "dry-run", "same-probe"));
+                    "dry-run", "same-probe", "store", "template"));
             return command.run(args, new CliContext(out, err, dataDir));
         } catch (UsageException e) {
             err.println("latent-ledger: " + e.getMessage());

@@ -66,6 +66,8 @@ final class UnitOptions {
 
     /** The core's refusal, said in the tech's units and naming the option typed. */
     static UsageException refused(InvalidInputException e, UnitSystem units, String option) {
-        return new UsageException((option == null ? "" : option + ": ") + e.message(units));
+        UsageException u = new UsageException((option == null ? "" : option + ": ") + e.message(units));
+        u.initCause(e); // a batch row reports the field, value and range apart (BatchRefusal)
+        return u;
     }
 }
