@@ -27,7 +27,9 @@ import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.sli
  * <ol>
  *   <li>faces: the composition root ({@code Main}, {@code ScreensCommand}), {@code ui}, {@code cli},
  *       {@code server} (the office server, still to come);</li>
- *   <li>services the faces share: {@code report}, {@code bundle}, {@code visit};</li>
+ *   <li>services the faces share: {@code report}, {@code bundle}, {@code visit}, and {@code sync} (the
+ *       office sync: its wire codec reads and writes records as the bundle does, so it may use
+ *       {@code bundle});</li>
  *   <li>{@code chart}, {@code io}, {@code store};</li>
  *   <li>{@code files} (safe file writing, shared by every floor above);</li>
  *   <li>{@code core}: pure Java.</li>
@@ -43,6 +45,7 @@ class ArchitectureTest {
     private static final String REPORT = "Report";
     private static final String BUNDLE = "Bundle";
     private static final String VISIT = "Visit services";
+    private static final String SYNC = "Office sync";
     private static final String CHART = "Chart";
     private static final String IMPORT = "Import";
     private static final String STORE = "Store";
@@ -50,7 +53,7 @@ class ArchitectureTest {
     private static final String CORE = "Core";
 
     private static final String[] FACES = {ROOT, APP, COMMANDS, SERVER};
-    private static final String[] FACES_AND_SERVICES = {ROOT, APP, COMMANDS, SERVER, REPORT, BUNDLE, VISIT};
+    private static final String[] FACES_AND_SERVICES = {ROOT, APP, COMMANDS, SERVER, REPORT, BUNDLE, VISIT, SYNC};
 
     @ArchTest
     static final ArchRule floors = layeredArchitecture().consideringOnlyDependenciesInLayers()
@@ -62,6 +65,7 @@ class ArchitectureTest {
             .layer(REPORT).definedBy("app.latentledger.report..")
             .layer(BUNDLE).definedBy("app.latentledger.bundle..")
             .layer(VISIT).definedBy("app.latentledger.visit..")
+            .layer(SYNC).definedBy("app.latentledger.sync..")
             .layer(CHART).definedBy("app.latentledger.chart..")
             .layer(IMPORT).definedBy("app.latentledger.io..")
             .layer(STORE).definedBy("app.latentledger.store..")
@@ -74,12 +78,14 @@ class ArchitectureTest {
             .whereLayer(SERVER).mayOnlyBeAccessedByLayers(ROOT)
             // the report analyses a visit's logs through the visit services
             .whereLayer(REPORT).mayOnlyBeAccessedByLayers(FACES)
-            .whereLayer(BUNDLE).mayOnlyBeAccessedByLayers(FACES)
-            .whereLayer(VISIT).mayOnlyBeAccessedByLayers(ROOT, APP, COMMANDS, SERVER, REPORT, BUNDLE)
+            // the sync's wire codec writes records with the bundle's own objects
+            .whereLayer(BUNDLE).mayOnlyBeAccessedByLayers(ROOT, APP, COMMANDS, SERVER, SYNC)
+            .whereLayer(SYNC).mayOnlyBeAccessedByLayers(FACES)
+            .whereLayer(VISIT).mayOnlyBeAccessedByLayers(ROOT, APP, COMMANDS, SERVER, REPORT, BUNDLE, SYNC)
             .whereLayer(CHART).mayOnlyBeAccessedByLayers(FACES_AND_SERVICES)
             .whereLayer(IMPORT).mayOnlyBeAccessedByLayers(FACES_AND_SERVICES)
             .whereLayer(STORE).mayOnlyBeAccessedByLayers(FACES_AND_SERVICES)
-            .whereLayer(FILES).mayOnlyBeAccessedByLayers(ROOT, APP, COMMANDS, SERVER, REPORT, BUNDLE, VISIT,
+            .whereLayer(FILES).mayOnlyBeAccessedByLayers(ROOT, APP, COMMANDS, SERVER, REPORT, BUNDLE, VISIT, SYNC,
                     CHART, IMPORT, STORE)
             .because("each floor is used by the floors above it and never the reverse, and the two faces"
                     + " meet only in Main; the picture in DEVELOPERS.md shows the same floors");
@@ -142,6 +148,14 @@ class ArchitectureTest {
     static final ArchRule coreDependsOnNoOuterLayer = noClasses().that().resideInAPackage("app.latentledger.core..")
             .should().dependOnClassesThat().resideOutsideOfPackages("app.latentledger.core..", "java..")
             .because("storage, import/export, CLI and UI depend on the core, never the reverse");
+
+    @ArchTest
+    static final ArchRule wireCodecIsPlainData = noClasses().that().resideInAPackage("app.latentledger.sync.wire..")
+            .should().dependOnClassesThat().resideInAnyPackage("java.net..", "java.sql..", "javax.sql..", "javafx..",
+                    "app.latentledger.store..", "com.sun.net.httpserver..")
+            .orShould().dependOnClassesThat().resideInAPackage("app.latentledger.sync")
+            .because("the tablet and the office server share the wire codec: it turns records into JSON and back"
+                    + " and checks them, with no HTTP, database or display of either end");
 
     @ArchTest
     static final ArchRule commandLineNeedsNoJavaFx = noClasses().that().resideInAPackage("app.latentledger.cli..")

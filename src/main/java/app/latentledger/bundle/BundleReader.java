@@ -6,7 +6,6 @@ import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.RecordLimits;
 import app.latentledger.core.records.ResultsSnapshot;
 import app.latentledger.core.records.Site;
-import app.latentledger.core.records.TimeBase;
 import app.latentledger.core.records.Visit;
 import app.latentledger.core.text.TerminalText;
 import app.latentledger.core.visit.RecordRules;
@@ -319,19 +318,7 @@ public final class BundleReader {
             throw new BundleException(BundleFormat.LOGS + ": log " + TerminalText.escape(id) + " samples must be in "
                     + TerminalText.escape(LogCsv.entry(id)));
         }
-        JsonElement channelList = f.element("channels");
-        if (!channelList.isJsonArray()) {
-            throw new BundleException(BundleFormat.LOGS + ": log " + id + " channels must be a list");
-        }
-        List<String> names = new ArrayList<>();
-        List<String> units = new ArrayList<>();
-        for (JsonElement c : channelList.getAsJsonArray()) {
-            JsonFields ch = new JsonFields(c, BundleFormat.LOGS + " log " + id + " channel");
-            names.add(ch.text("name"));
-            units.add(ch.optionalText("unit"));
-        }
-        TimeBase base = TimeBase.parse("log time base", f.text("timeBase"));
-        int declared = f.integer("sampleCount");
+        LogJson.Meta meta = LogJson.meta(f, BundleFormat.LOGS);
         Listed l = listed.get(samplesEntry);
         if (l == null) {
             throw new BundleException("bundle is incomplete: " + TerminalText.escape(samplesEntry)
@@ -342,7 +329,8 @@ public final class BundleReader {
         try {
             BufferedReader text = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8.newDecoder()
                     .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT)), 1 << 16);
-            var samples = LogCsv.read(text, samplesEntry, base, names, units, declared, budget);
+            var samples = LogCsv.read(text, samplesEntry, meta.timeBase(), meta.names(), meta.units(),
+                    meta.sampleCount(), budget);
             in.drain();
             if (in.count() != l.bytes() || !in.sha256().equals(l.sha256())) {
                 throw new EntryStream.TooLarge("changed");

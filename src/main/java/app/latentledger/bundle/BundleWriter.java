@@ -2,7 +2,6 @@ package app.latentledger.bundle;
 
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.ImportedLog;
-import app.latentledger.core.records.LogChannel;
 import app.latentledger.core.records.ResultsSnapshot;
 import app.latentledger.core.records.Timestamps;
 import app.latentledger.core.records.Visit;
@@ -45,7 +44,7 @@ public final class BundleWriter {
         entries.put(ReadingsCsv.ENTRY, ReadingsCsv.write(content.readings()).getBytes(StandardCharsets.UTF_8));
         JsonArray logs = new JsonArray();
         for (ImportedLog l : content.logs()) {
-            logs.add(logJson(l));
+            logs.add(LogJson.write(l));
             entries.put(LogCsv.entry(l.id()), LogCsv.write(l.samples()).getBytes(StandardCharsets.UTF_8));
         }
         entries.put(BundleFormat.LOGS, json(logs));
@@ -107,27 +106,6 @@ public final class BundleWriter {
             }
             zip.finish();
         }, SafeFiles.Durability.REPLACE_WHOLE);
-    }
-
-    private static JsonObject logJson(ImportedLog l) {
-        JsonObject o = new JsonObject();
-        o.addProperty("id", l.id());
-        o.addProperty("visitId", l.visitId());
-        o.addProperty("sourceFileName", l.sourceFileName());
-        o.addProperty("columnMapping", l.columnMapping());
-        o.addProperty("importedAt", Timestamps.text(l.importedAt()));
-        o.addProperty("timeBase", l.samples().timeBase().key());
-        o.addProperty("sampleCount", l.samples().size());
-        JsonArray channels = new JsonArray();
-        for (LogChannel c : l.samples().channels()) {
-            JsonObject ch = new JsonObject();
-            ch.addProperty("name", c.name());
-            ch.addProperty("unit", c.unit());
-            channels.add(ch);
-        }
-        o.add("channels", channels);
-        o.addProperty("samples", LogCsv.entry(l.id()));
-        return o;
     }
 
     private static byte[] json(Object tree) {

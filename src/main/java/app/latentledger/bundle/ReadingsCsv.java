@@ -44,6 +44,11 @@ final class ReadingsCsv {
     /** Written since schema V5; a bundle without them reads as actual airflow and independent probes. */
     static final List<String> OPTIONAL = List.of("airflow_basis", "same_probe", "supply_dew_point_offset_k");
 
+    /** Columns that hold words, not numbers (every other column is an SI number or empty). */
+    static final java.util.Set<String> TEXT_COLUMNS = java.util.Set.of("id", "visit_id", "taken_at", "label",
+            "instrument", "return_hum_kind", "supply_hum_kind", "outdoor_hum_kind", "coil_kind", "airflow_point",
+            "airflow_method", "notes", "airflow_basis");
+
     private ReadingsCsv() {
     }
 
