@@ -167,7 +167,7 @@ public final class Accounts {
                     "the device name must have 1 to 100 characters");
         }
         String secret = Secrets.randomSecret();
-        String secretHash = Secrets.hash(secret);
+        String secretHash = Secrets.hashToken(secret);
         UUID deviceId = UUID.randomUUID();
         return Sql.inTransaction(db, c -> {
             UUID company;

@@ -28,13 +28,26 @@ public final class Secrets {
     private Secrets() {
     }
 
-    /** Argon2id hash of the secret, with a fresh 16-byte salt, as a PHC string. */
+    /** Argon2id hash of a password or enrol code, with a fresh 16-byte salt, as a PHC string. */
     public static String hash(String secret) {
+        return hash(secret, MEMORY_KIB, PASSES);
+    }
+
+    /**
+     * Argon2id hash of a device token's secret. The secret is 256 random bits, which no amount of
+     * guessing finds, so the hash need not be slow (its slowness protects guessable secrets); a light
+     * setting (1 MiB, 1 pass) keeps the first request of each device on each instance cheap.
+     */
+    public static String hashToken(String secret) {
+        return hash(secret, 1024, 1);
+    }
+
+    private static String hash(String secret, int memoryKib, int passes) {
         byte[] salt = new byte[16];
         RANDOM.nextBytes(salt);
-        byte[] h = argon2(secret, salt, MEMORY_KIB, PASSES, LANES);
+        byte[] h = argon2(secret, salt, memoryKib, passes, LANES);
         Base64.Encoder b64 = Base64.getEncoder().withoutPadding();
-        return "$argon2id$v=19$m=" + MEMORY_KIB + ",t=" + PASSES + ",p=" + LANES + "$" + b64.encodeToString(salt)
+        return "$argon2id$v=19$m=" + memoryKib + ",t=" + passes + ",p=" + LANES + "$" + b64.encodeToString(salt)
                 + "$" + b64.encodeToString(h);
     }
 
@@ -65,6 +78,9 @@ public final class Secrets {
             }
             byte[] salt = Base64.getDecoder().decode(parts[4]);
             byte[] expected = Base64.getDecoder().decode(parts[5]);
+            if (m < 8 || m > 1 << 21 || t < 1 || t > 16 || p != 1) {
+                return false; // not a setting this server writes: refuse rather than spend unbounded work
+            }
             return MessageDigest.isEqual(expected, argon2(secret, salt, m, t, p));
         } catch (IllegalArgumentException | StringIndexOutOfBoundsException e) {
             return false;
