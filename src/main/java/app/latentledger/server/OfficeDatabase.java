@@ -60,7 +60,7 @@ public final class OfficeDatabase implements AutoCloseable {
             flyway.migrate();
         } catch (RuntimeException e) {
             db.close();
-            throw new ConfigException("the database could not be prepared (" + config.databaseUrl() + "): "
+            throw new ConfigException("the database could not be prepared (" + config.databaseShown() + "): "
                     + rootMessage(e));
         }
         return db;

@@ -23,6 +23,16 @@ public final class ServeLauncher {
     public static final List<String> ADMIN_OPTIONS = List.of("name", "office-email", "office-password-file", "company",
             "technician", "role", "device");
 
+    /**
+     * The libraries' own INFO lines (pool started, schema validated) say nothing an office needs on
+     * every admin step; warnings and errors still show. Held here: java.util.logging keeps loggers
+     * only weakly, and a collected logger would forget its level.
+     */
+    private static final List<java.util.logging.Logger> QUIET = List.of(
+            java.util.logging.Logger.getLogger("com.zaxxer.hikari"),
+            java.util.logging.Logger.getLogger("org.flywaydb"),
+            java.util.logging.Logger.getLogger("org.eclipse.jetty"));
+
     private ServeLauncher() {
     }
 
@@ -53,6 +63,7 @@ public final class ServeLauncher {
 
     public static int run(List<String> words, Map<String, String> options, Map<String, String> env, PrintStream out,
                           PrintStream err) throws Exception {
+        QUIET.forEach(l -> l.setLevel(java.util.logging.Level.WARNING));
         if (words.isEmpty()) {
             for (String admin : ADMIN_OPTIONS) {
                 if (options.containsKey(admin)) {
@@ -132,7 +143,7 @@ public final class ServeLauncher {
             stopped.countDown();
         }, "office-stop"));
         err.println("latent-ledger: office server listening on " + (config.keystore() == null ? "http" : "https")
-                + "://" + config.listenHost() + ":" + server.port() + " (" + config.databaseUrl() + ")");
+                + "://" + config.listenHost() + ":" + server.port() + " (" + config.databaseShown() + ")");
         stopped.await();
         return OK;
     }

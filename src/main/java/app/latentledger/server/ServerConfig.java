@@ -137,10 +137,16 @@ public record ServerConfig(String listenHost, int listenPort, String databaseUrl
         throw new ConfigException(name + " '" + text + "' must be true or false");
     }
 
+    /** The database URL without its parameters (which may hold a password), for messages. */
+    public String databaseShown() {
+        int q = databaseUrl.indexOf('?');
+        return q < 0 ? databaseUrl : databaseUrl.substring(0, q) + "?…";
+    }
+
     @Override
     public String toString() {
         // never print the passwords
-        return "ServerConfig[listen=" + listenHost + ":" + listenPort + ", database=" + databaseUrl
+        return "ServerConfig[listen=" + listenHost + ":" + listenPort + ", database=" + databaseShown()
                 + ", tls=" + (keystore != null) + "]";
     }
 }

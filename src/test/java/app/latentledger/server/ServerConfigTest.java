@@ -33,6 +33,9 @@ class ServerConfigTest {
         assertEquals("::1", o.listenHost(), "the option wins over the environment");
         assertEquals(8781, o.listenPort());
         assertTrue(!o.toString().contains("pw"));
+        ServerConfig withPassword = ServerConfig.load(Map.of("database-url", URL + "?user=a&password=secret"), Map.of());
+        assertTrue(!withPassword.toString().contains("secret") && !withPassword.databaseShown().contains("secret"),
+                "a password in the URL is never shown");
     }
 
     @Test
