@@ -21,7 +21,7 @@ public final class ServeLauncher {
 
     /** Options beyond the server settings, by the step that reads them. */
     public static final List<String> ADMIN_OPTIONS = List.of("name", "office-email", "office-password-file", "company",
-            "technician", "role", "device");
+            "technician", "role", "device", "tablets", "kills", "kill-tablets");
 
     /**
      * The libraries' own INFO lines (pool started, schema validated) say nothing an office needs on
@@ -51,6 +51,7 @@ public final class ServeLauncher {
                 + "       latent-ledger serve admin create-company --name NAME --office-email E --office-password-file F\n"
                 + "       latent-ledger serve admin enrol-code --company NAME --technician \"NAME\" [--role office]\n"
                 + "       latent-ledger serve admin revoke-device --device ID\n"
+                + "       latent-ledger serve loadtest --database-url URL [--tablets 200] [--kills 20] [--kill-tablets 20]\n"
                 + "  Runs the office server (tablets sync to it) on PostgreSQL; see docs/office-server.md.\n"
                 + "  Defaults: --listen " + ServerConfig.DEFAULT_LISTEN + " (plain HTTP on loopback: put a TLS proxy"
                 + " in front, or give --keystore).\n"
@@ -71,6 +72,9 @@ public final class ServeLauncher {
                 }
             }
             return serve(ServerConfig.load(options, env), out, err);
+        }
+        if (words.equals(List.of("loadtest"))) {
+            return loadtest(options, env, out);
         }
         if (!words.get(0).equals("admin") || words.size() != 2) {
             throw new ConfigException("unexpected words '" + String.join(" ", words) + "'; serve takes none, or"
@@ -121,6 +125,35 @@ public final class ServeLauncher {
             default -> throw new ConfigException("unknown admin step '" + step
                     + "'; known: create-company, enrol-code, revoke-device");
         }
+    }
+
+    /** Simulated tablets against a server on loopback, in a schema of its own (see {@link LoadTest}). */
+    private static int loadtest(Map<String, String> options, Map<String, String> env, PrintStream out) throws Exception {
+        int tablets = whole(options, "tablets", 200, 1, 500);
+        int kills = whole(options, "kills", 20, 0, 50);
+        int killTablets = whole(options, "kill-tablets", 20, 1, 200);
+        Map<String, String> settings = new java.util.HashMap<>(options);
+        settings.keySet().removeAll(ADMIN_OPTIONS);
+        ServerConfig config = ServerConfig.load(settings, env);
+        LoadTest.Result r = new LoadTest(config.databaseUrl(), out).run(tablets, kills, killTablets);
+        out.println(Reply.GSON.toJson(r));
+        return r.lost() + r.duplicated() + r.killLost() + r.killDuplicated() == 0 ? OK : 1;
+    }
+
+    private static int whole(Map<String, String> o, String name, int fallback, int min, int max) {
+        String v = o.get(name);
+        if (v == null) {
+            return fallback;
+        }
+        try {
+            int n = Integer.parseInt(v.strip());
+            if (n >= min && n <= max) {
+                return n;
+            }
+        } catch (NumberFormatException e) {
+            // refused below
+        }
+        throw new ConfigException("--" + name + " '" + v + "' must be a whole number from " + min + " to " + max);
     }
 
     private static String need(Map<String, String> o, String name) {
