@@ -237,44 +237,41 @@ public final class Accounts {
         UUID id = deviceId;
         Caller caller;
         String storedHash;
-        try (Connection c = db.connection();
-             PreparedStatement ps = c.prepareStatement("select d.token_hash, d.person_id, d.company_id, p.role, co.name,"
-                     + " p.name from device d join person p on p.id = d.person_id join company co on co.id = d.company_id"
-                     + " where d.id = ? and d.revoked_at is null and d.expires_at > now() and p.disabled_at is null")) {
-            ps.setObject(1, id);
-            ResultSet rs = ps.executeQuery();
-            if (!rs.next()) {
-                throw ApiError.unauthorised("this device token is revoked, expired or unknown; enrol the device again");
+        // one connection for the look-up and the last-seen note: a request holds at most one at a time
+        try (Connection c = db.connection()) {
+            try (PreparedStatement ps = c.prepareStatement("select d.token_hash, d.person_id, d.company_id, p.role,"
+                    + " co.name, p.name from device d join person p on p.id = d.person_id join company co"
+                    + " on co.id = d.company_id where d.id = ? and d.revoked_at is null and d.expires_at > now()"
+                    + " and p.disabled_at is null")) {
+                ps.setObject(1, id);
+                ResultSet rs = ps.executeQuery();
+                if (!rs.next()) {
+                    throw ApiError.unauthorised("this device token is revoked, expired or unknown; enrol the device again");
+                }
+                storedHash = rs.getString(1);
+                caller = new Caller(id, rs.getObject(2, UUID.class), rs.getObject(3, UUID.class), rs.getString(4),
+                        rs.getString(5), rs.getString(6));
             }
-            storedHash = rs.getString(1);
-            caller = new Caller(id, rs.getObject(2, UUID.class), rs.getObject(3, UUID.class), rs.getString(4),
-                    rs.getString(5), rs.getString(6));
+            String key = Secrets.sha256(token.getBytes(StandardCharsets.UTF_8));
+            if (!storedHash.equals(verified.get(key))) {
+                if (!Secrets.matches(secret, storedHash)) {
+                    throw ApiError.unauthorised("this device token is revoked, expired or unknown; enrol the device again");
+                }
+                if (verified.size() > MAX_CACHE) {
+                    verified.clear();
+                }
+                verified.put(key, storedHash);
+            }
+            // when the device was last seen, at most once a minute (not a write per request)
+            try (PreparedStatement ps = c.prepareStatement("update device set last_seen = now() where id = ? and"
+                    + " (last_seen is null or last_seen < now() - interval '1 minute')")) {
+                ps.setObject(1, id);
+                ps.executeUpdate();
+            }
         } catch (SQLException e) {
             throw new IllegalStateException("database: " + e.getMessage(), e);
         }
-        String key = Secrets.sha256(token.getBytes(StandardCharsets.UTF_8));
-        if (!storedHash.equals(verified.get(key))) {
-            if (!Secrets.matches(secret, storedHash)) {
-                throw ApiError.unauthorised("this device token is revoked, expired or unknown; enrol the device again");
-            }
-            if (verified.size() > MAX_CACHE) {
-                verified.clear();
-            }
-            verified.put(key, storedHash);
-        }
-        touch(id);
         return caller;
-    }
-
-    /** Notes when the device was last seen, at most once a minute (not a write per request). */
-    private void touch(UUID device) {
-        try (Connection c = db.connection(); PreparedStatement ps = c.prepareStatement("update device set last_seen"
-                + " = now() where id = ? and (last_seen is null or last_seen < now() - interval '1 minute')")) {
-            ps.setObject(1, device);
-            ps.executeUpdate();
-        } catch (SQLException e) {
-            throw new IllegalStateException("database: " + e.getMessage(), e);
-        }
     }
 
     /**

@@ -51,11 +51,13 @@ import java.util.concurrent.atomic.AtomicInteger;
 public final class LoadTest {
     /** Figures of one run. */
     public record Result(int tablets, double syncP50Ms, double syncP99Ms, double healthP50Ms, double healthP99Ms,
-                         int acknowledged, int lost, int duplicated, int kills, int killAcknowledged, int killLost,
-                         int killDuplicated, int retried, double seconds) {
+                         int acknowledged, int lost, int duplicated, int busyRetried, int kills, int killAcknowledged,
+                         int killLost, int killDuplicated, int retried, double weekOfflineMs, int weekOfflineLost,
+                         double seconds) {
     }
 
     private final String databaseUrl;
+    private int busyInSync;
     private final PrintStream out;
     private final HttpClient http = HttpClient.newBuilder().connectTimeout(Duration.ofSeconds(5))
             .version(HttpClient.Version.HTTP_1_1).build();
@@ -93,15 +95,17 @@ public final class LoadTest {
                 sync = timed(tablets, i -> syncOnce(base, tokens.get(i), visits.get(i), acked));
                 counted = count(server.database(), acked, visits);
                 out.printf(Locale.ROOT, "loadtest: sync p50 %.0f ms, p99 %.0f ms; /health p50 %.0f ms, p99 %.0f ms;"
-                        + " %d records acknowledged, %d lost, %d duplicated%n", pct(sync, 50), pct(sync, 99),
-                        pct(health, 50), pct(health, 99), acked.size(), counted[0], counted[1]);
+                        + " %d records acknowledged, %d lost, %d duplicated; %d answers 'busy' retried%n", pct(sync, 50),
+                        pct(sync, 99), pct(health, 50), pct(health, 99), acked.size(), counted[0], counted[1], busy.get());
+                busyInSync = busy.get();
+                weekOffline(base, tokens.get(0), server.database());
             }
             int[] k = {0, 0, 0, 0};
             if (kills > 0) {
                 k = kills(url, tokens.subList(0, Math.min(killTablets, tokens.size())), kills);
             }
             return new Result(tablets, pct(sync, 50), pct(sync, 99), pct(health, 50), pct(health, 99),
-                    tablets * 6, counted[0], counted[1], kills, k[0], k[1], k[2], k[3],
+                    tablets * 6, counted[0], counted[1], busyInSync, kills, k[0], k[1], k[2], k[3], weekMs, weekLost,
                     (System.nanoTime() - t0) / 1e9);
         } finally {
             drop(schema);
@@ -209,11 +213,64 @@ public final class LoadTest {
         }
     }
 
+    /** Answers of 503 (every connection of the server busy) retried after Retry-After, as a tablet does. */
+    private final AtomicInteger busy = new AtomicInteger();
+
+    private double weekMs;
+    private int weekLost;
+
+    /**
+     * A tablet back after a week offline with 50 visits (each with its 24 h log): all its records in
+     * one push (300 of the 500 a push may carry), then the 50 logs' samples, then one pull.
+     */
+    private void weekOffline(String base, String token, OfficeDatabase db) throws Exception {
+        List<LoadTestVisit> week = new ArrayList<>();
+        com.google.gson.JsonArray all = new com.google.gson.JsonArray();
+        for (int i = 0; i < 50; i++) {
+            LoadTestVisit v = new LoadTestVisit(0, 100 + i);
+            week.add(v);
+            v.records.forEach(r -> all.add(app.latentledger.sync.wire.WireCodec.toJson(r)));
+        }
+        JsonObject push = new JsonObject();
+        push.add("records", all);
+        Set<String> acked = ConcurrentHashMap.newKeySet();
+        long t0 = System.nanoTime();
+        JsonObject pushed = json(send(HttpRequest.newBuilder(URI.create(base + "/api/v1/sync/push"))
+                .POST(HttpRequest.BodyPublishers.ofString(Reply.GSON.toJson(push))), token), 200);
+        pushed.getAsJsonArray("results").forEach(e -> acked.add(e.getAsJsonObject().get("kind").getAsString() + "/"
+                + e.getAsJsonObject().get("id").getAsString()));
+        for (LoadTestVisit v : week) {
+            json(send(HttpRequest.newBuilder(URI.create(base + "/api/v1/logs/" + v.logId + "/samples?offset=0"))
+                    .PUT(HttpRequest.BodyPublishers.ofByteArray(v.samples)), token), 200);
+        }
+        String cursor = "0";
+        boolean more = true;
+        while (more) {
+            JsonObject page = json(send(HttpRequest.newBuilder(URI.create(base + "/api/v1/sync/changes?after=" + cursor))
+                    .GET(), token), 200);
+            cursor = page.get("cursor").getAsString();
+            more = page.get("more").getAsBoolean();
+        }
+        weekMs = (System.nanoTime() - t0) / 1e6;
+        int[] counted = count(db, acked, week);
+        weekLost = acked.size() == 300 ? counted[0] + counted[1] : 300 - acked.size();
+        out.printf(Locale.ROOT, "loadtest: a week offline, 50 visits with 24 h logs: %d records in one push, synced in %.1f s;"
+                + " %d lost or duplicated%n", acked.size(), weekMs / 1000, weekLost);
+    }
+
     private HttpResponse<byte[]> send(HttpRequest.Builder b, String token) throws IOException, InterruptedException {
         if (token != null) {
             b.header("Authorization", "Bearer " + token);
         }
-        return http.send(b.timeout(Duration.ofSeconds(120)).build(), HttpResponse.BodyHandlers.ofByteArray());
+        HttpRequest request = b.timeout(Duration.ofSeconds(120)).build();
+        for (int attempt = 0; ; attempt++) {
+            HttpResponse<byte[]> r = http.send(request, HttpResponse.BodyHandlers.ofByteArray());
+            if (r.statusCode() != 503 || attempt >= 100) {
+                return r;
+            }
+            busy.incrementAndGet();
+            Thread.sleep(1000L * Long.parseLong(r.headers().firstValue("Retry-After").orElse("1")));
+        }
     }
 
     private static JsonObject json(HttpResponse<byte[]> r, int expected) {

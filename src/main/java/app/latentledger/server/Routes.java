@@ -50,9 +50,23 @@ final class Routes {
         } catch (ApiError e) {
             return e.reply();
         } catch (RuntimeException e) {
+            if (busy(e)) {
+                // every connection of this instance is taken: the tablet tries again shortly (nothing was kept)
+                return new ApiError(503, "busy", "the server is busy; try again in a few seconds")
+                        .header("Retry-After", "2").reply();
+            }
             LOG.log(System.Logger.Level.ERROR, "request failed: " + call.method() + " " + call.path(), e);
             return new ApiError(500, "server-error", "the server could not answer; nothing partial was kept").reply();
         }
+    }
+
+    private static boolean busy(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof java.sql.SQLTransientConnectionException) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private Reply route(HttpCall call, Consumer<String> deviceSeen) {

@@ -137,7 +137,7 @@ public final class ServeLauncher {
         ServerConfig config = ServerConfig.load(settings, env);
         LoadTest.Result r = new LoadTest(config.databaseUrl(), out).run(tablets, kills, killTablets);
         out.println(Reply.GSON.toJson(r));
-        return r.lost() + r.duplicated() + r.killLost() + r.killDuplicated() == 0 ? OK : 1;
+        return r.lost() + r.duplicated() + r.killLost() + r.killDuplicated() + r.weekOfflineLost() == 0 ? OK : 1;
     }
 
     private static int whole(Map<String, String> o, String name, int fallback, int min, int max) {

@@ -57,7 +57,6 @@ final class SyncService {
     /** One input record: read (or refused while reading) and, once decided, its result. */
     private static final class Item {
         WireRecord record;
-        Object decoded;
         Refusal refusal;
         String kindWord;
         String id;

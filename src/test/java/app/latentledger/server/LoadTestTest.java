@@ -11,7 +11,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The load and fault test in a shortened form: a few tablets sync a visit with a 24 h log each at
- * once; then a server in a child process is killed with SIGKILL twice mid-push and restarted.
+ * once, and one tablet back from a week offline sends 50 visits in one go; then a server in a child process is killed with SIGKILL twice mid-push and restarted.
  * Nothing acknowledged may be lost or stored twice. (The full run's figures: docs/performance.md.)
  */
 class LoadTestTest {
@@ -29,5 +29,6 @@ class LoadTestTest {
         assertTrue(r.killAcknowledged() >= 3 * 6, "each tablet got at least one visit through: " + text);
         assertEquals(0, r.killLost(), text);
         assertEquals(0, r.killDuplicated(), text);
+        assertEquals(0, r.weekOfflineLost(), "a week offline: 50 visits in one push, all there once: " + text);
     }
 }
