@@ -512,16 +512,15 @@ final class SyncService {
         }
     }
 
-    /** Every current revision of the company of one kind whose body names {@code field} = {@code value}. */
-    static List<Current> currentWhere(Connection c, UUID company, SyncKind kind, String field, String value)
-            throws SQLException {
+    /** Every current revision of the company of one kind that belongs to the visit (its body's visit id). */
+    static List<Current> currentOfVisit(Connection c, UUID company, SyncKind kind, String visitId) throws SQLException {
         List<Current> out = new ArrayList<>();
         try (PreparedStatement ps = c.prepareStatement("select " + CURRENT_COLUMNS + " where r.company_id = ?"
-                + " and r.kind = ? and r.current and r.body ->> ? = ? order by r.id")) {
+                + " and r.kind = ? and r.current and coalesce(r.body ->> 'visitId', r.body ->> 'visit_id') = ?"
+                + " order by r.id")) {
             ps.setObject(1, company);
             ps.setString(2, kind.wire());
-            ps.setString(3, field);
-            ps.setString(4, value);
+            ps.setString(3, visitId);
             ResultSet rs = ps.executeQuery();
             while (rs.next()) {
                 out.add(current(rs));

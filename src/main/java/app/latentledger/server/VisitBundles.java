@@ -58,13 +58,13 @@ final class VisitBundles {
         Site site = WireCodec.site(live(c, who, SyncKind.SITE, visit.siteId()).body());
         HvacSystem system = WireCodec.system(live(c, who, SyncKind.SYSTEM, visit.systemId()).body());
         List<ReadingSet> readings = new ArrayList<>();
-        for (SyncService.Current r : SyncService.currentWhere(c, who.companyId(), SyncKind.READINGS, "visit_id", visitId)) {
+        for (SyncService.Current r : SyncService.currentOfVisit(c, who.companyId(), SyncKind.READINGS, visitId)) {
             if (!r.deleted()) {
                 readings.add(WireCodec.readingSet(r.body()));
             }
         }
         List<ImportedLog> logs = new ArrayList<>();
-        for (SyncService.Current l : SyncService.currentWhere(c, who.companyId(), SyncKind.LOG, "visitId", visitId)) {
+        for (SyncService.Current l : SyncService.currentOfVisit(c, who.companyId(), SyncKind.LOG, visitId)) {
             if (!l.deleted()) {
                 byte[] samples = LogSamples.complete(c, who, l.id());
                 if (samples == null) {
@@ -76,7 +76,7 @@ final class VisitBundles {
         }
         List<Instrument> instruments = new ArrayList<>();
         List<BundleContent.InstrumentUse> uses = new ArrayList<>();
-        for (SyncService.Current i : SyncService.currentWhere(c, who.companyId(), SyncKind.INSTRUMENT, "visitId", visitId)) {
+        for (SyncService.Current i : SyncService.currentOfVisit(c, who.companyId(), SyncKind.INSTRUMENT, visitId)) {
             if (!i.deleted()) {
                 BundleObjects.InstrumentObject o = WireCodec.instrument(i.body());
                 instruments.add(o.instrument());

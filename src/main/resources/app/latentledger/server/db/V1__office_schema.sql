@@ -75,6 +75,9 @@ create table record_revision (
 );
 create unique index record_one_current on record_revision (company_id, kind, id) where current;
 create index record_changes on record_revision (company_id, change_seq) where current;
+-- a visit's readings, logs and instruments for its bundle: found by the parent id in the body
+create index record_by_visit on record_revision (company_id, kind, (coalesce(body ->> 'visitId', body ->> 'visit_id')))
+    where current;
 
 create table log_samples (
     company_id      uuid not null references company (id),
