@@ -41,10 +41,12 @@ public final class Main {
         System.exit(code);
     }
 
-    /** Every command of this build: the display-free ones and {@code screens}. */
+    /** Every command of this build: the display-free ones, {@code screens} and {@code serve}. */
     public static Cli commandLine() {
         List<Command> all = new ArrayList<>(Cli.standardCommands());
         all.add(new ScreensCommand());
+        // the office server: a face of its own, so it is registered here, not in the command line
+        all.add(new ServeCommand());
         return new Cli(all);
     }
 

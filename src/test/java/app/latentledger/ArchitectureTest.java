@@ -196,4 +196,11 @@ class ArchitectureTest {
             .and().haveSimpleNameEndingWith("ViewModel")
             .should().dependOnClassesThat().resideInAnyPackage("javafx.scene..", "javafx.stage..")
             .because("view models are tested without a window");
+
+    @ArchTest
+    static final ArchRule serverSharesOnlyTheWireCodec = noClasses().that().resideInAPackage("app.latentledger.server..")
+            .should().dependOnClassesThat().resideInAPackage("app.latentledger.sync")
+            .orShould().dependOnClassesThat().resideInAnyPackage("app.latentledger.ui..", "app.latentledger.cli..")
+            .because("the office server and the tablet share the wire codec (sync.wire) and nothing of the"
+                    + " tablet's sync client, screens or command line");
 }
