@@ -52,8 +52,11 @@ VERSION="${VERSION:-0.1.0}"
 # What the jars need, from `jdeps --print-module-deps` over the app and its libraries:
 # java.desktop (JavaFX, PDFBox images and fonts), java.sql (SQLite, Gson), java.management (start
 # timing), jdk.unsupported (JavaFX, SQLite), jdk.unsupported.desktop (javafx-swing), jdk.jfr
-# (JavaFX's optional flight-recorder events), jdk.zipfs (zip file systems for bundles).
-MODULES=java.base,java.desktop,java.logging,java.management,java.sql,java.xml,jdk.unsupported,jdk.unsupported.desktop,jdk.jfr,jdk.zipfs
+# (JavaFX's optional flight-recorder events), jdk.zipfs (zip file systems for bundles), java.net.http
+# (the tablet's office sync client), jdk.crypto.ec (TLS to an https office server: ECDHE and EC
+# certificates live outside java.base on Java 17), java.naming (the PostgreSQL driver and the
+# connection pool of `serve`).
+MODULES=java.base,java.desktop,java.logging,java.management,java.naming,java.net.http,java.sql,java.xml,jdk.crypto.ec,jdk.unsupported,jdk.unsupported.desktop,jdk.jfr,jdk.zipfs
 
 OUT="$TARGET/package"
 rm -rf "$OUT"
