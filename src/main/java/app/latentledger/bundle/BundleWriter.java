@@ -71,6 +71,8 @@ public final class BundleWriter {
         JsonArray deletions = new JsonArray();
         content.deletions().forEach(d -> deletions.add(PaperworkJson.deletion(d)));
         entries.put(BundleFormat.DELETIONS, json(deletions));
+        entries.put(BundleFormat.HOUSE, json(HouseJson.house(content.houseFacts(), content.site().id(),
+                content.houseReadings())));
 
         JsonObject manifest = new JsonObject();
         manifest.addProperty("format", BundleFormat.NAME);
@@ -127,6 +129,7 @@ public final class BundleWriter {
         }
         o.add("channels", channels);
         o.addProperty("samples", LogCsv.entry(l.id()));
+        o.add("kept", HouseJson.kept(l.kept()));
         return o;
     }
 
