@@ -33,12 +33,51 @@ public final class HouseViewModel {
     private final AppSession session;
     private final ReadOnlyObjectWrapper<HouseBudget> budget = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyStringWrapper refusal = new ReadOnlyStringWrapper("");
+    private final HouseEntryViewModel entry;
 
     public HouseViewModel(AppSession session) {
         this.session = session;
-        session.visitProperty().addListener((o, a, b) -> recompute());
-        session.unitsProperty().addListener((o, a, b) -> recompute());
+        entry = new HouseEntryViewModel(new HouseEntryViewModel.Source() {
+            @Override
+            public app.latentledger.core.units.UnitSystem units() {
+                return session.units();
+            }
+
+            @Override
+            public app.latentledger.core.records.Site site() {
+                return session.visit() == null ? null : session.site();
+            }
+
+            @Override
+            public app.latentledger.core.settings.InstrumentTolerances tolerances() {
+                return session.settings().tolerances();
+            }
+
+            @Override
+            public java.util.Optional<HouseFacts> facts() {
+                return session.visit() == null ? java.util.Optional.empty()
+                        : session.ledger().houses().facts(session.visit().siteId());
+            }
+
+            @Override
+            public HouseVisitReadings readings() {
+                return HouseViewModel.this.readings();
+            }
+        }, this::keep, this::keep);
+        session.visitProperty().addListener((o, a, b) -> {
+            entry.reset();
+            recompute();
+        });
+        session.unitsProperty().addListener((o, a, b) -> {
+            recompute();
+            entry.refresh();
+        });
         recompute();
+    }
+
+    /** Typing the house's facts and this visit's house readings on the number pad. */
+    public HouseEntryViewModel entry() {
+        return entry;
     }
 
     public ReadOnlyObjectProperty<HouseBudget> budgetProperty() {
