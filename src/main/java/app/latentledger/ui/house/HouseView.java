@@ -42,6 +42,7 @@ public final class HouseView extends HBox implements Reflowing {
     private final Canvas canvas = new Canvas(CHART_W_WIDE, CHART_H_WIDE);
     private final Label refusal = Ui.wrapped("", "muted");
     private final VBox rows = new VBox(8);
+    private final Label cautions = Ui.wrapped("", "safety");
     private final ToggleGroup fixGroup = new ToggleGroup();
     private final Map<HouseField, ToggleButton> boxes = new EnumMap<>(HouseField.class);
     private final VBox answer;
@@ -57,7 +58,9 @@ public final class HouseView extends HBox implements Reflowing {
         Label title = Ui.label("Where the water comes from", "heading");
         title.setWrapText(true);
         refusal.setId("house-refusal");
-        ScrollPane fixes = Ui.scroll(rows);
+        cautions.setId("house-cautions");
+        // the fixes suggest attic, duct and ventilation work: their cautions sit right under them
+        ScrollPane fixes = Ui.scroll(new VBox(12, rows, cautions));
         fixes.setMinHeight(120);
         answer = new VBox(12, title, refusal, canvas, Ui.label("Fixes compared — tap one", "subheading"), fixes);
         HBox.setHgrow(answer, Priority.ALWAYS);
@@ -125,6 +128,7 @@ public final class HouseView extends HBox implements Reflowing {
         refusal.setVisible(!refusal.getText().isEmpty());
         label();
         rows.getChildren().clear();
+        cautions.setText(String.join("\n", model.cautions()));
         if (b == null) {
             paint(null);
             return;

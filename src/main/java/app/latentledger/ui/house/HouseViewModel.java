@@ -111,6 +111,15 @@ public final class HouseViewModel {
         return session.visit() == null ? HouseVisitReadings.EMPTY : session.ledger().houses().readings(session.visit().id());
     }
 
+    /**
+     * The safety lines that go with the fixes compared (attic heat, mold, combustion appliances when
+     * a fix changes house pressure, licensed practice); empty without a budget.
+     */
+    public List<String> cautions() {
+        HouseBudget b = budget.get();
+        return b == null ? List.of() : b.cautions();
+    }
+
     /** The fix planner as table rows: as found first, then each candidate. */
     public List<FixRow> fixRows() {
         HouseBudget b = budget.get();

@@ -36,6 +36,9 @@ class HouseViewModelTest {
             assertNotNull(b, vm.refusalProperty().get());
             assertEquals("as-found", vm.fixRows().get(0).key());
             assertEquals(b.whatIfs().size() + 1, vm.fixRows().size());
+            assertTrue(vm.cautions().contains(app.latentledger.core.house.HouseFindings.COMBUSTION),
+                    "the demo's fixes change house pressure: the combustion-appliance caution is on screen");
+            assertTrue(vm.cautions().contains(app.latentledger.core.house.HouseFindings.ATTIC_HEAT));
 
             ByteArrayOutputStream out = new ByteArrayOutputStream();
             int code = Cli.standard().run(List.of("--data-dir", dir.toString(), "house", "--visit",
