@@ -108,7 +108,6 @@ public final class AppShell extends BorderPane {
         }
         // Settings sits in the header: one button fewer on the list keeps every word whole upright
         ToggleButton settingsButton = navButton(shell.headerScreen(), group, 24);
-        settingsButton.getStyleClass().add("header-nav");
         navButtons.put(shell.headerScreen(), settingsButton);
         headerButtons.getChildren().add(1, settingsButton);
         rail.getStyleClass().addAll("nav", "rail");
