@@ -72,7 +72,7 @@ final class HouseJson {
         JsonObject o = new JsonObject();
         o.addProperty("dryBulbC", a.dryBulbC());
         o.addProperty("dryBulbTolK", a.dryBulbTolK());
-        o.addProperty("humidityKind", kindKey(a.humidityKind()));
+        o.addProperty("humidityKind", a.humidityKind().key());
         o.addProperty("humidity", a.humiditySi());
         o.addProperty("humidityTol", a.humidityTolSi());
         return o;
@@ -167,21 +167,12 @@ final class HouseJson {
         return (int) v;
     }
 
-    private static String kindKey(HumidityKind k) {
-        return switch (k) {
-            case WET_BULB -> "wet-bulb";
-            case RELATIVE_HUMIDITY -> "rh";
-            case DEW_POINT -> "dew-point";
-        };
-    }
-
     private static HumidityKind kind(JsonFields f, String key) throws BundleException {
-        return switch (key) {
-            case "wet-bulb" -> HumidityKind.WET_BULB;
-            case "rh" -> HumidityKind.RELATIVE_HUMIDITY;
-            case "dew-point" -> HumidityKind.DEW_POINT;
-            default -> throw new BundleException(f.where() + ": field \"humidityKind\" '" + key
-                    + "' is not wet-bulb, rh or dew-point");
-        };
+        for (HumidityKind k : HumidityKind.values()) {
+            if (k.key().equals(key)) {
+                return k;
+            }
+        }
+        throw new BundleException(f.where() + ": field \"humidityKind\" '" + key + "' is not wet-bulb, rh or dew-point");
     }
 }
