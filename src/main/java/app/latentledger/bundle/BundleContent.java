@@ -1,5 +1,7 @@
 package app.latentledger.bundle;
 
+import app.latentledger.core.house.HouseFacts;
+import app.latentledger.core.house.HouseVisitReadings;
 import app.latentledger.core.records.BinEntry;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Instrument;
@@ -23,13 +25,20 @@ import java.util.Set;
  *
  * @param instrumentUses which instruments took which reading set
  * @param deletions      records deleted at the site (in the exporter's recycle bin); empty unless asked
+ * @param houseFacts     the site's house facts (floor area, people, blower door, ventilation), or null
+ * @param houseReadings  the house readings (weather, return-leak trio, runtime) of the visits that have any
  */
 public record BundleContent(BundleScope scope, Site site, List<HvacSystem> systems, List<Visit> visits,
                             List<ReadingSet> readings, List<ImportedLog> logs, List<ResultsSnapshot> snapshots,
                             List<Instrument> instruments, List<InstrumentUse> instrumentUses,
-                            List<VisitPaperwork> paperwork, List<BinEntry> deletions) {
+                            List<VisitPaperwork> paperwork, List<BinEntry> deletions,
+                            HouseFacts houseFacts, List<VisitHouse> houseReadings) {
     /** One instrument chosen for one reading set. */
     public record InstrumentUse(String readingSetId, String instrumentId) {
+    }
+
+    /** The house readings kept with one visit. */
+    public record VisitHouse(String visitId, HouseVisitReadings readings) {
     }
 
     public BundleContent {
@@ -42,6 +51,16 @@ public record BundleContent(BundleScope scope, Site site, List<HvacSystem> syste
         instrumentUses = List.copyOf(instrumentUses);
         paperwork = List.copyOf(paperwork);
         deletions = List.copyOf(deletions);
+        houseReadings = List.copyOf(houseReadings);
+    }
+
+    /** Content as format version 2 had it: no house facts or readings. */
+    public BundleContent(BundleScope scope, Site site, List<HvacSystem> systems, List<Visit> visits,
+                         List<ReadingSet> readings, List<ImportedLog> logs, List<ResultsSnapshot> snapshots,
+                         List<Instrument> instruments, List<InstrumentUse> instrumentUses,
+                         List<VisitPaperwork> paperwork, List<BinEntry> deletions) {
+        this(scope, site, systems, visits, readings, logs, snapshots, instruments, instrumentUses, paperwork, deletions,
+                null, List.of());
     }
 
     /** Content as format version 1 had it: no instruments, paperwork or deletions. */
@@ -102,6 +121,11 @@ public record BundleContent(BundleScope scope, Site site, List<HvacSystem> syste
         for (VisitPaperwork w : paperwork) {
             need(visitIds.contains(w.visitId()), "paperwork names visit " + w.visitId() + ", not in the bundle");
             need(paperworkVisits.add(w.visitId()), "paperwork of visit " + w.visitId() + " appears twice");
+        }
+        Set<String> houseVisits = new HashSet<>();
+        for (VisitHouse h : houseReadings) {
+            need(visitIds.contains(h.visitId()), "house readings name visit " + h.visitId() + ", not in the bundle");
+            need(houseVisits.add(h.visitId()), "house readings of visit " + h.visitId() + " appear twice");
         }
         for (BinEntry d : deletions) {
             need(d.siteId().equals(site.id()) && d.kind() != RecordKind.SITE, "deletion of " + d.kind().key() + " "

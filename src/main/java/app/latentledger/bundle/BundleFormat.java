@@ -11,8 +11,11 @@ import java.util.HexFormat;
 final class BundleFormat {
     static final String NAME = "latent-ledger-bundle";
     /** Bumped when a reader of the previous version could misread a new bundle. */
-    static final int VERSION = 2;
-    /** The oldest version this build still imports (version 1 had no paperwork or deletions). */
+    static final int VERSION = 3;
+    /**
+     * The oldest version this build still imports (version 1 had no paperwork or deletions, versions
+     * 1 and 2 no house data or stored log conditions).
+     */
     static final int OLDEST_READ = 1;
 
     static final String MANIFEST = "manifest.json";
@@ -25,13 +28,15 @@ final class BundleFormat {
     static final String INSTRUMENTS = "instruments.json";
     static final String PAPERWORK = "paperwork.json";
     static final String DELETIONS = "deletions.json";
+    /** Since version 3: the site's house facts and the visits' house readings. */
+    static final String HOUSE = "house.json";
 
     /*
      * Import limits (docs/bundle-format.md, "Limits"). The manifest is read first and every size it
      * declares is checked against these before any other entry is inflated; an entry is then read
      * only up to its declared size, so a bundle cannot make the reader hold more than it declared.
      */
-    /** Entries in one zip: a site bundle holds 7 fixed entries and one per log. */
+    /** Entries in one zip: a site bundle holds 11 fixed entries and one per log. */
     static final int MAX_ENTRIES = 2_000;
     /** The manifest itself: a list of up to 2 000 names and checksums. */
     static final long MAX_MANIFEST_BYTES = 1L << 20;

@@ -8,6 +8,7 @@ import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.Site;
 import app.latentledger.core.records.Visit;
 import app.latentledger.core.records.VisitPaperwork;
+import app.latentledger.core.visit.RecordRules;
 import com.google.gson.JsonElement;
 import com.google.gson.JsonNull;
 import com.google.gson.JsonObject;
@@ -113,8 +114,15 @@ public final class BundleObjects {
         } catch (IOException e) {
             throw new UncheckedIOException(e); // a string reader does not fail
         }
+        ImportedLog.KeptConditions kept;
+        try {
+            // the conditions the log was analysed with where it was made, checked as a bundle's are
+            kept = RecordRules.keptConditions(HouseJson.kept(f));
+        } catch (IllegalArgumentException e) {
+            throw new BundleException("log " + f.text("id") + " kept: " + e.getMessage(), e);
+        }
         return new ImportedLog(f.text("id"), f.text("visitId"), f.text("sourceFileName"),
-                f.optionalText("columnMapping"), f.time("importedAt"), samples);
+                f.optionalText("columnMapping"), f.time("importedAt"), samples, kept);
     }
 
     /** The metadata a log object declares about its samples, checked without them. */

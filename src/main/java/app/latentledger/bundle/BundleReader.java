@@ -1,5 +1,6 @@
 package app.latentledger.bundle;
 
+import app.latentledger.core.house.HouseFacts;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.ReadingSet;
@@ -131,7 +132,8 @@ public final class BundleReader {
                 logEntries.add(f.text("samples"));
             }
             for (String name : listed.keySet()) {
-                boolean held = isRecordEntry(name) && (version >= 2 || !isPaperworkEntry(name));
+                boolean held = isRecordEntry(name) && (version >= 2 || !isPaperworkEntry(name))
+                        && (version >= 3 || !name.equals(BundleFormat.HOUSE));
                 if (!held && !logEntries.contains(name)) {
                     throw new BundleException("bundle entry " + TerminalText.escape(name) + " is not one this format"
                             + " holds (no log names it); nothing was imported");
@@ -140,7 +142,7 @@ public final class BundleReader {
             long[] sampleBudget = {RecordLimits.BUNDLE_MAX_SAMPLES};
             List<ImportedLog> logs = new ArrayList<>();
             for (JsonFields f : logList) {
-                logs.add(log(f, zip, inZip, listed, sampleBudget));
+                logs.add(log(f, zip, inZip, listed, sampleBudget, version));
             }
             List<ResultsSnapshot> snapshots = new ArrayList<>();
             for (JsonFields f : snapshotList) {
@@ -165,10 +167,23 @@ public final class BundleReader {
                     deletions.add(PaperworkJson.deletion(f));
                 }
             }
+            HouseFacts houseFacts = null;
+            List<BundleContent.VisitHouse> houseReadings = List.of();
+            if (version >= 3) {
+                JsonFields house = new JsonFields(json(zip, inZip, listed, BundleFormat.HOUSE), BundleFormat.HOUSE);
+                String factsSite = HouseJson.factsSiteId(house);
+                if (factsSite != null && !factsSite.equals(site.id())) {
+                    throw new BundleException("bundle refused: " + BundleFormat.HOUSE + " facts name site "
+                            + TerminalText.escape(factsSite) + ", not " + site.id() + "; nothing was imported");
+                }
+                houseFacts = house(() -> HouseJson.facts(house), BundleFormat.HOUSE + " facts");
+                houseReadings = house(() -> HouseJson.readings(house), BundleFormat.HOUSE + " readings");
+            }
             BundleContent content = new BundleContent(scope, site, systems, visits, readings, logs, snapshots,
-                    instruments, uses, paperwork, deletions);
+                    instruments, uses, paperwork, deletions, houseFacts, houseReadings);
             content.checkConsistent();
             checkReadings(content, readingLines);
+            checkHouseReadings(content);
             return content;
         } catch (IllegalArgumentException e) {
             throw new BundleException("bundle refused: " + TerminalText.escape(e.getMessage())
@@ -250,7 +265,7 @@ public final class BundleReader {
     private static boolean isRecordEntry(String name) {
         return name.equals(BundleFormat.SITE) || name.equals(BundleFormat.SYSTEMS) || name.equals(BundleFormat.VISITS)
                 || name.equals(BundleFormat.LOGS) || name.equals(BundleFormat.SNAPSHOTS) || name.equals(ReadingsCsv.ENTRY)
-                || isPaperworkEntry(name);
+                || isPaperworkEntry(name) || name.equals(BundleFormat.HOUSE);
     }
 
     /** The record entries format 2 added; a format 1 bundle does not hold them. */
@@ -301,6 +316,33 @@ public final class BundleReader {
         }
     }
 
+    /** Something read from {@code house.json} that its record's own checks may refuse. */
+    private interface HousePart<T> {
+        T read() throws BundleException;
+    }
+
+    /** Reads a part of {@code house.json}, naming the entry and part in a refusal by the facts' own ranges. */
+    private static <T> T house(HousePart<T> part, String where) throws BundleException {
+        try {
+            return part.read();
+        } catch (IllegalArgumentException e) {
+            throw new BundleException("bundle refused: " + where + ": " + TerminalText.escape(e.getMessage())
+                    + "; nothing was imported", e);
+        }
+    }
+
+    /** Each visit's house readings checked as the House screen checks them: possible air at the site. */
+    private static void checkHouseReadings(BundleContent content) throws BundleException {
+        for (BundleContent.VisitHouse h : content.houseReadings()) {
+            try {
+                RecordRules.houseReadings(h.readings(), content.site());
+            } catch (IllegalArgumentException e) {
+                throw new BundleException("bundle refused: " + BundleFormat.HOUSE + " readings of visit " + h.visitId()
+                        + ": " + TerminalText.escape(e.getMessage()) + "; nothing was imported", e);
+            }
+        }
+    }
+
     private static BundleScope scope(String key) throws BundleException {
         for (BundleScope s : BundleScope.values()) {
             if (s.key().equals(key)) {
@@ -311,7 +353,7 @@ public final class BundleReader {
     }
 
     private static ImportedLog log(JsonFields f, ZipFile zip, Map<String, ZipEntry> inZip, Map<String, Listed> listed,
-                                   long[] budget) throws BundleException, IOException {
+                                   long[] budget, int version) throws BundleException, IOException {
         String id = f.text("id");
         String samplesEntry = f.text("samples");
         if (!samplesEntry.equals(LogCsv.entry(id))) {
@@ -319,6 +361,10 @@ public final class BundleReader {
                     + TerminalText.escape(LogCsv.entry(id)));
         }
         LogJson.Meta meta = LogJson.meta(f, BundleFormat.LOGS);
+        // what the log was analysed with where it was made (format 3), checked before its samples are read
+        ImportedLog.KeptConditions kept = version < 3 ? null
+                : house(() -> RecordRules.keptConditions(HouseJson.kept(f)), BundleFormat.LOGS + " log "
+                + TerminalText.escape(id) + " kept");
         Listed l = listed.get(samplesEntry);
         if (l == null) {
             throw new BundleException("bundle is incomplete: " + TerminalText.escape(samplesEntry)
@@ -336,7 +382,7 @@ public final class BundleReader {
                 throw new EntryStream.TooLarge("changed");
             }
             return new ImportedLog(id, f.text("visitId"), f.text("sourceFileName"), f.optionalText("columnMapping"),
-                    f.time("importedAt"), samples);
+                    f.time("importedAt"), samples, kept);
         } catch (BundleException | CharacterCodingException e) {
             // a tampered entry may fail to parse before its hash is known: say which it is
             if (!sameAsListed(in, l)) {

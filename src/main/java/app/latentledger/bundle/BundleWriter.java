@@ -70,6 +70,8 @@ public final class BundleWriter {
         JsonArray deletions = new JsonArray();
         content.deletions().forEach(d -> deletions.add(PaperworkJson.deletion(d)));
         entries.put(BundleFormat.DELETIONS, json(deletions));
+        entries.put(BundleFormat.HOUSE, json(HouseJson.house(content.houseFacts(), content.site().id(),
+                content.houseReadings())));
 
         JsonObject manifest = new JsonObject();
         manifest.addProperty("format", BundleFormat.NAME);

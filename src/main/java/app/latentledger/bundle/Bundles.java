@@ -85,8 +85,15 @@ public final class Bundles {
                 snapshots.addAll(ledger.snapshots().forSubject(SnapshotSubject.LOG, l.id()));
             }
         }
+        List<BundleContent.VisitHouse> house = new ArrayList<>();
+        for (Visit v : visits) {
+            app.latentledger.core.house.HouseVisitReadings h = ledger.houses().readings(v.id());
+            if (!h.equals(app.latentledger.core.house.HouseVisitReadings.EMPTY)) {
+                house.add(new BundleContent.VisitHouse(v.id(), h));
+            }
+        }
         return new BundleContent(scope, site, systems, visits, readings, logs, snapshots, instruments, uses, paperwork,
-                deletions);
+                deletions, ledger.houses().facts(site.id()).orElse(null), house);
     }
 
     public static void exportVisit(Ledger ledger, String visitId, Path file) throws IOException {
@@ -116,7 +123,8 @@ public final class Bundles {
      * @param deleted        records the bundle's deletions moved to this ledger's recycle bin
      * @param conflicts      for a preview: records whose copy here differs (an import would be refused)
      * @param addedByKind    added records by kind ("site", "system", "visit", "reading set", "log",
-     *                       "snapshot", "instrument", "paperwork", "instrument choice")
+     *                       "snapshot", "instrument", "paperwork", "instrument choice", "house",
+     *                       "house readings")
      */
     public record ImportSummary(int added, int alreadyPresent, List<String> visitIds, int deleted,
                                 List<String> conflicts, java.util.Map<String, Integer> addedByKind) {
@@ -125,7 +133,7 @@ public final class Bundles {
         }
 
         private static final List<String> ORDER = List.of("site", "system", "visit", "reading set", "log",
-                "instrument", "instrument choice", "paperwork", "snapshot");
+                "instrument", "instrument choice", "paperwork", "house", "house readings", "snapshot");
 
         /**
          * What the import adds, leaves and deletes in words a tech reads before confirming, e.g.
@@ -136,8 +144,14 @@ public final class Bundles {
             for (String kind : ORDER) {
                 int n = addedByKind.getOrDefault(kind, 0);
                 if (n > 0) {
-                    String noun = kind.equals("paperwork") ? "visit's paperwork" : kind;
-                    parts.add(n + " " + noun + (n == 1 || kind.equals("paperwork") ? "" : "s"));
+                    String noun = switch (kind) {
+                        case "paperwork" -> "visit's paperwork";
+                        case "house" -> "house's facts";
+                        case "house readings" -> "visit's house readings";
+                        default -> kind;
+                    };
+                    boolean noPlural = n == 1 || kind.equals("paperwork") || kind.startsWith("house");
+                    parts.add(n + " " + noun + (noPlural ? "" : "s"));
                 }
             }
             StringBuilder b = new StringBuilder(parts.isEmpty() ? "Adds nothing new." : "Adds " + String.join(", ", parts) + ".");
@@ -247,6 +261,16 @@ public final class Bundles {
         for (VisitPaperwork w : content.paperwork()) {
             put(ledger.paperwork().find(w.visitId()), w, "paperwork", w.visitId(), t, conflicts,
                     () -> ledger.paperwork().save(w));
+        }
+        if (content.houseFacts() != null) {
+            put(ledger.houses().facts(content.site().id()), content.houseFacts(), "house", content.site().id(), t,
+                    conflicts, () -> ledger.houses().saveFacts(content.site().id(), content.houseFacts()));
+        }
+        for (BundleContent.VisitHouse h : content.houseReadings()) {
+            app.latentledger.core.house.HouseVisitReadings here = ledger.houses().readings(h.visitId());
+            put(here.equals(app.latentledger.core.house.HouseVisitReadings.EMPTY) ? Optional.empty() : Optional.of(here),
+                    h.readings(), "house readings", h.visitId(), t, conflicts,
+                    () -> ledger.houses().saveReadings(h.visitId(), h.readings()));
         }
         for (BinEntry d : content.deletions()) {
             if (live(ledger, d)) {

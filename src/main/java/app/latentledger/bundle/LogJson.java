@@ -38,6 +38,7 @@ final class LogJson {
         }
         o.add("channels", channels);
         o.addProperty("samples", LogCsv.entry(l.id()));
+        o.add("kept", HouseJson.kept(l.kept()));
         return o;
     }
 

@@ -9,6 +9,8 @@ import app.latentledger.ui.entry.ReadingsView;
 import app.latentledger.ui.export.ExportView;
 import app.latentledger.ui.export.ExportViewModel;
 import app.latentledger.ui.export.ReportViewModel;
+import app.latentledger.ui.house.HouseView;
+import app.latentledger.ui.house.HouseViewModel;
 import app.latentledger.ui.job.JobView;
 import app.latentledger.ui.job.JobViewModel;
 import app.latentledger.ui.log.LogImportViewModel;
@@ -34,6 +36,7 @@ import javafx.scene.control.Label;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Pane;
 import javafx.scene.layout.Priority;
@@ -41,12 +44,14 @@ import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
 import java.util.EnumMap;
+import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Executor;
 
 /**
- * The frame around every screen: a header with the job in hand and the theme switch, the screen
- * list (a rail on the left in landscape, a bar at the bottom in portrait), and the screen itself,
+ * The frame around every screen: a header with the job in hand, Settings and the theme switch, the
+ * screen list (a rail on the left in landscape, a bar at the bottom in portrait that wraps to a
+ * second row rather than cut a word when the text is large), and the screen itself,
  * laid out over a {@link ShellViewModel}. It holds every view model for the life of the window
  * (views bind to them weakly).
  */
@@ -62,6 +67,7 @@ public final class AppShell extends BorderPane {
     private ResultsViewModel results;
     private JobViewModel job;
     private LogImportViewModel logs;
+    private HouseViewModel house;
     private CompareViewModel compare;
     private ExportViewModel export;
     private SettingsViewModel settings;
@@ -70,8 +76,13 @@ public final class AppShell extends BorderPane {
     private boolean chartsAttached;
     private final Map<Screen, Parent> views = new EnumMap<>(Screen.class);
     private app.latentledger.ui.paperwork.VisitRecordModel record;
+    /** The header's buttons: New set, Settings, the theme switch. */
+    private final HBox headerButtons = new HBox(8);
+    private final HBox headerRow = new HBox();
+    private Label headerTitle;
+    private Label headerContext;
     private final Pane rail = new VBox();
-    private final Pane bar = new HBox();
+    private final FlowPane bar = new FlowPane();
     private final Map<Screen, ToggleButton> navButtons = new EnumMap<>(Screen.class);
     private boolean portrait;
     private boolean laidOut;
@@ -94,17 +105,18 @@ public final class AppShell extends BorderPane {
         setTop(header());
         ToggleGroup group = new ToggleGroup();
         for (Screen s : shell.screens()) {
-            ToggleButton b = new ToggleButton(s.title());
-            b.setId("nav-" + s.key());
-            b.setGraphic(icon(s).node(28));
-            b.setToggleGroup(group);
-            b.setOnAction(e -> shell.show(s));
-            navButtons.put(s, b);
+            navButtons.put(s, navButton(s, group, 28));
         }
+        // Settings sits in the header: one button fewer on the list keeps every word whole upright
+        ToggleButton settingsButton = navButton(shell.headerScreen(), group, 24);
+        navButtons.put(shell.headerScreen(), settingsButton);
+        headerButtons.getChildren().add(1, settingsButton);
         rail.getStyleClass().addAll("nav", "rail");
         ((VBox) rail).setSpacing(8);
         bar.getStyleClass().addAll("nav", "bar");
-        ((HBox) bar).setAlignment(Pos.CENTER);
+        bar.setAlignment(Pos.CENTER);
+        bar.setHgap(8);
+        bar.setVgap(8);
         shell.screenProperty().addListener((o, a, b) -> show(b));
         sceneProperty().addListener((o, a, scene) -> {
             if (scene != null) {
@@ -153,6 +165,14 @@ public final class AppShell extends BorderPane {
             job = new JobViewModel(session);
         }
         return job;
+    }
+
+    /** The House screen's state: the visit's moisture budget, fixes, and the house facts and readings typed there. */
+    public HouseViewModel house() {
+        if (house == null) {
+            house = new HouseViewModel(session);
+        }
+        return house;
     }
 
     public LogImportViewModel logs() {
@@ -265,6 +285,7 @@ public final class AppShell extends BorderPane {
                 case READINGS -> new ReadingsView(entry(), results());
                 case RESULTS -> new ResultsView(results());
                 case LOGS -> new LogView(logs());
+                case HOUSE -> new HouseView(house());
                 case COMPARE -> new CompareView(compare());
                 case RECORD -> new app.latentledger.ui.paperwork.VisitRecordView(record());
                 case EXPORT -> new ExportView(export());
@@ -297,15 +318,17 @@ public final class AppShell extends BorderPane {
     }
 
     private void placeNav() {
+        placeHeader((VBox) getTop());
         rail.getChildren().clear();
         bar.getChildren().clear();
         setLeft(null);
         setBottom(null);
+        List<ToggleButton> list = shell.screens().stream().map(navButtons::get).toList();
         if (portrait) {
-            bar.getChildren().addAll(navButtons.values());
+            bar.getChildren().addAll(list);
             setBottom(bar);
         } else {
-            rail.getChildren().addAll(navButtons.values());
+            rail.getChildren().addAll(list);
             setLeft(rail);
         }
     }
@@ -313,10 +336,10 @@ public final class AppShell extends BorderPane {
     private void show(Screen s) {
         setCenter(view(s));
         // a screen opened from another (Record, from Export) lights its way in: Export
-        navButtons.get(navButtons.containsKey(s) ? s : Screen.EXPORT).setSelected(true);
+        navButtons.get(shell.lit(s)).setSelected(true);
     }
 
-    private HBox header() {
+    private VBox header() {
         Label title = Ui.label("Latent Ledger", "app-title");
         Label context = Ui.label("", "context");
         context.setId("context");
@@ -326,7 +349,8 @@ public final class AppShell extends BorderPane {
         theme.setId("theme-toggle");
         theme.setGraphic(Icons.THEME.node(24));
         theme.selectedProperty().bindBidirectional(shell.darkProperty());
-        HBox right = new HBox(8, newSet, theme);
+        HBox right = headerButtons;
+        right.getChildren().addAll(newSet, theme);
         right.setAlignment(Pos.CENTER_RIGHT);
         right.setMinWidth(Region.USE_PREF_SIZE);
         title.setMinWidth(Region.USE_PREF_SIZE);
@@ -334,10 +358,44 @@ public final class AppShell extends BorderPane {
         context.setMinWidth(0);
         HBox.setHgrow(context, Priority.ALWAYS);
         context.setMaxWidth(Double.MAX_VALUE);
-        HBox h = new HBox(16, title, context, right);
-        h.setAlignment(Pos.CENTER_LEFT);
+        headerTitle = title;
+        headerContext = context;
+        headerRow.setSpacing(16);
+        headerRow.setAlignment(Pos.CENTER_LEFT);
+        VBox h = new VBox(headerRow);
         h.getStyleClass().add("header");
+        placeHeader(h);
         return h;
+    }
+
+    /**
+     * Landscape: the app's name, the job in hand, then the buttons, on one row. Upright the name
+     * gives its room to the job in hand, so with Settings in the header the job's words still take
+     * at most two lines and the screen list stays on screen under the keypad.
+     */
+    private void placeHeader(VBox h) {
+        headerRow.getChildren().clear();
+        h.getChildren().setAll(headerRow);
+        if (portrait) {
+            headerRow.getChildren().addAll(headerContext, headerButtons);
+        } else {
+            headerRow.getChildren().addAll(headerTitle, headerContext, headerButtons);
+        }
+    }
+
+    private ToggleButton navButton(Screen s, ToggleGroup group, double iconPx) {
+        ToggleButton b = new ToggleButton(s.title());
+        b.setId("nav-" + s.key());
+        b.setGraphic(icon(s).node(iconPx));
+        b.setToggleGroup(group);
+        // whole words at any text size: a button never narrower than its label
+        b.setMinWidth(Region.USE_PREF_SIZE);
+        b.setOnAction(e -> {
+            // a tap on the lit button keeps it lit
+            b.setSelected(true);
+            shell.show(s);
+        });
+        return b;
     }
 
     private static Icons icon(Screen s) {
@@ -346,6 +404,7 @@ public final class AppShell extends BorderPane {
             case READINGS -> Icons.READINGS;
             case RESULTS -> Icons.RESULTS;
             case LOGS -> Icons.LOGS;
+            case HOUSE -> Icons.HOUSE;
             case RECORD -> Icons.NOTE;
             case COMPARE -> Icons.COMPARE;
             case EXPORT -> Icons.EXPORT;

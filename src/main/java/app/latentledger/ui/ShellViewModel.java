@@ -33,12 +33,31 @@ public final class ShellViewModel {
     }
 
     /**
-     * The screens on the navigation, in the order a visit walks through them. The Record screen
-     * (notes, instruments, sign-off, deleting, recycle bin) is opened from Export, so the bar at
-     * the bottom of an upright tablet keeps room for its buttons.
+     * The screens on the navigation, in the order a visit walks through them: job, readings,
+     * results, logs, house, compare, export — seven, so the bar at the bottom of an upright tablet
+     * keeps glove-sized buttons with whole words. The Record screen (notes, instruments, sign-off,
+     * deleting, recycle bin) is opened from Export; Settings, not a step of a visit, from the header
+     * ({@link #headerScreen()}).
      */
     public List<Screen> screens() {
-        return java.util.Arrays.stream(Screen.values()).filter(s -> s != Screen.RECORD).toList();
+        return java.util.Arrays.stream(Screen.values())
+                .filter(s -> s != Screen.RECORD && s != headerScreen()).toList();
+    }
+
+    /** The screen reached from the header beside the theme switch rather than from the screen list. */
+    public Screen headerScreen() {
+        return Screen.SETTINGS;
+    }
+
+    /**
+     * The button that lights while {@code s} is shown: its own (for Settings, the header's), or
+     * Export's for the Record screen opened from Export.
+     */
+    public Screen lit(Screen s) {
+        if (s == headerScreen()) {
+            return s;
+        }
+        return screens().contains(s) ? s : Screen.EXPORT;
     }
 
     public ReadOnlyObjectProperty<Screen> screenProperty() {

@@ -148,9 +148,9 @@ class BundlePaperworkTest {
         assertEquals("ok", target.database().integrityCheck());
     }
 
-    /** The bundle as format version 1 wrote it: no instrument, paperwork or deletion entries. */
+    /** The bundle as format version 1 wrote it: no instrument, paperwork, deletion or house entries. */
     private Path asVersionOne(Path v2) throws Exception {
-        Set<String> newer = Set.of("instruments.json", "paperwork.json", "deletions.json");
+        Set<String> newer = Set.of("instruments.json", "paperwork.json", "deletions.json", "house.json");
         Map<String, byte[]> entries = new LinkedHashMap<>();
         try (ZipFile zip = new ZipFile(v2.toFile())) {
             Enumeration<? extends ZipEntry> all = zip.entries();

@@ -69,8 +69,8 @@ class BundleTest {
         Path file = dir.resolve("visit.zip");
         Bundles.exportVisit(source, DemoScenario.VISIT_COMPLAINT, file);
         Bundles.ImportSummary s = Bundles.importBundle(target, file);
-        // site, system, visit, 2 reading sets, 1 log, 2 snapshots
-        assertEquals(8, s.added());
+        // site, system, visit, 2 reading sets, 1 log, 2 snapshots, the house's facts, the visit's house readings
+        assertEquals(10, s.added());
         assertEquals(List.of(DemoScenario.VISIT_COMPLAINT), s.visitIds());
         assertEquals(Bundles.ofVisit(source, DemoScenario.VISIT_COMPLAINT), Bundles.ofVisit(target, DemoScenario.VISIT_COMPLAINT));
         ImportedLog log = target.logs().find("log-1").orElseThrow();
@@ -88,7 +88,7 @@ class BundleTest {
         String before = dump(target);
         Bundles.ImportSummary again = Bundles.importBundle(target, file);
         assertEquals(0, again.added());
-        assertEquals(8, again.alreadyPresent());
+        assertEquals(10, again.alreadyPresent(), "8 records, the house's facts and the complaint visit's house readings");
         assertEquals(before, dump(target));
     }
 
@@ -150,9 +150,9 @@ class BundleTest {
     @Test
     void anUnknownFormatVersionIsRefused() throws Exception {
         Path file = rewritten(entries -> entries.put("manifest.json", new String(entries.get("manifest.json"),
-                StandardCharsets.UTF_8).replace("\"formatVersion\": 2", "\"formatVersion\": 3").getBytes(StandardCharsets.UTF_8)));
+                StandardCharsets.UTF_8).replace("\"formatVersion\": 3", "\"formatVersion\": 4").getBytes(StandardCharsets.UTF_8)));
         BundleException e = assertThrows(BundleException.class, () -> Bundles.importBundle(target, file));
-        assertTrue(e.getMessage().contains("format version 3 is not one this app reads"), e.getMessage());
+        assertTrue(e.getMessage().contains("format version 4 is not one this app reads"), e.getMessage());
         assertTrue(e.getMessage().contains("update the app"), e.getMessage());
 
         Path other = rewritten(entries -> entries.put("manifest.json", new String(entries.get("manifest.json"),

@@ -15,6 +15,7 @@ import org.junit.jupiter.api.io.TempDir;
 import java.nio.file.Path;
 import java.util.Locale;
 
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -41,6 +42,46 @@ class HouseSectionTest {
                     assertTrue(text.contains(want), want);
                 }
                 assertTrue(text.contains(HouseFindings.ATTIC_HEAT.substring(0, 40)));
+            }
+        }
+    }
+
+    /**
+     * The fixes the demo's planner compares include ventilation and tightness changes (its house has
+     * an exhaust fan and a blower-door result), so the report carries the depressurisation caution for
+     * combustion appliances beside the attic-heat and mold lines (common practice, no source: worst-case
+     * depressurisation testing after exhaust or tightness changes).
+     */
+    @Test
+    void fixesThatChangeHousePressureBringTheCombustionCaution() throws Exception {
+        Path out = dir.resolve("cautions.pdf");
+        try (Ledger ledger = Ledger.open(dir.resolve("data"), Ledger.FirstRun.SEED_DEMO)) {
+            VisitReport.write(ledger, DemoScenario.VISIT_COMPLAINT, null, PaperSize.LETTER, UnitSystem.IP, out);
+            HouseBudget b = HouseBudgets.of(ledger, ReportData.load(ledger, DemoScenario.VISIT_COMPLAINT, null,
+                    UnitSystem.IP));
+            assertNotNull(b);
+            assertTrue(b.whatIfs().stream().anyMatch(w -> w.scenario().key().equals("add-erv")
+                    || w.scenario().key().equals("reduce-ventilation") || w.scenario().key().equals("tighten-envelope")),
+                    "the demo's planner compares a pressure-changing fix");
+            try (PDDocument doc = ReportPdfs.open(out)) {
+                String text = ReportPdfs.text(doc).replaceAll("\\s+", " ");
+                for (String caution : new String[] {HouseFindings.ATTIC_HEAT, HouseFindings.MOLD,
+                        HouseFindings.COMBUSTION, HouseFindings.LICENSED}) {
+                    assertTrue(text.contains(caution.substring(0, 40)), caution);
+                }
+            }
+        }
+    }
+
+    /** A visit whose site has no house facts gets no budget section (nothing to build it from). */
+    @Test
+    void noHouseFactsNoSection() throws Exception {
+        Path out = dir.resolve("quay.pdf");
+        try (Ledger ledger = Ledger.open(dir.resolve("data"), Ledger.FirstRun.SEED_DEMO)) {
+            assertTrue(ledger.houses().facts(DemoScenario.SITE_QUAY).isEmpty());
+            VisitReport.write(ledger, DemoScenario.VISIT_COMMISSIONING, null, PaperSize.LETTER, UnitSystem.IP, out);
+            try (PDDocument doc = ReportPdfs.open(out)) {
+                assertFalse(ReportPdfs.text(doc).contains("Where the water comes from"));
             }
         }
     }

@@ -180,4 +180,40 @@ public final class RecordRules {
         }
         return null;
     }
+
+    /**
+     * Refuses house readings the House screen would refuse: each air reading (weather, return grille,
+     * return plenum, attic or crawlspace air) a possible moist-air state at the site's standard
+     * pressure (ASHRAE HoF 2017 ch. 1, eq. 3 for the pressure). The runtime fraction's range is its
+     * record's own check.
+     *
+     * @throws InvalidInputException naming the reading, the value and the accepted range
+     */
+    public static void houseReadings(app.latentledger.core.house.HouseVisitReadings h, Site site) {
+        double pressurePa = app.latentledger.core.psychro.StandardAtmosphere.pressurePa(site.elevationM());
+        for (AirReading a : new AirReading[] {h.outdoor(), h.grille(), h.plenum(), h.space()}) {
+            if (a != null) {
+                a.state(pressurePa, HandbookEdition.SI);
+            }
+        }
+    }
+
+    /**
+     * Refuses stored log conditions whose airflows lie outside the keypad's airflow range
+     * ({@link app.latentledger.core.measure.FieldLimits#AIRFLOW}); a missing airflow (NaN) passes.
+     *
+     * @return {@code kept}, for chaining; null stays null
+     */
+    public static app.latentledger.core.records.ImportedLog.KeptConditions keptConditions(
+            app.latentledger.core.records.ImportedLog.KeptConditions kept) {
+        if (kept != null) {
+            if (!Double.isNaN(kept.airflowM3PerS())) {
+                app.latentledger.core.measure.FieldLimits.AIRFLOW.check("log airflow", kept.airflowM3PerS());
+            }
+            if (!Double.isNaN(kept.fanAirflowM3PerS())) {
+                app.latentledger.core.measure.FieldLimits.AIRFLOW.check("log fan-only airflow", kept.fanAirflowM3PerS());
+            }
+        }
+        return kept;
+    }
 }

@@ -8,42 +8,127 @@ import app.latentledger.ui.chart.CanvasPainter;
 import app.latentledger.ui.chart.FxTextMeasurer;
 import app.latentledger.ui.look.Reflowing;
 import app.latentledger.ui.look.Ui;
+import javafx.geometry.Pos;
 import javafx.scene.canvas.Canvas;
 import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
+import javafx.scene.layout.ColumnConstraints;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
+import javafx.scene.text.TextAlignment;
+
+import java.util.EnumMap;
+import java.util.Map;
 
 /**
  * The House screen: the budget as one bar chart of gains against removal in pints/day (L/day) with
- * the equilibrium dew point, and the fix planner as rows to tap — the chart then shows that fix's
- * budget beside the as-found figures in its row. Binds to {@link HouseViewModel} only.
+ * the equilibrium dew point; the fix planner as rows to tap — the chart then shows that fix's
+ * budget beside the as-found figures in its row; and the house's facts and this visit's house
+ * readings as boxes typed on the number pad, each stored at once. Landscape: boxes and pad on the
+ * left, the answer on the right; upright: the answer above, boxes and pad below. Binds to
+ * {@link HouseViewModel} only.
  */
-public final class HouseView extends VBox implements Reflowing {
-    private static final double CHART_W = 760;
-    private static final double CHART_H = 380;
+public final class HouseView extends HBox implements Reflowing {
+    private static final double CHART_W_WIDE = 620;
+    private static final double CHART_H_WIDE = 340;
+    private static final double CHART_W_UPRIGHT = 740;
+    private static final double CHART_H_UPRIGHT = 300;
 
     private final HouseViewModel model; // strong reference: bindings hold their partner weakly
-    private final Canvas canvas = new Canvas(CHART_W, CHART_H);
+    private final Canvas canvas = new Canvas(CHART_W_WIDE, CHART_H_WIDE);
     private final Label refusal = Ui.wrapped("", "muted");
     private final VBox rows = new VBox(8);
-    private final ToggleGroup group = new ToggleGroup();
+    private final Label cautions = Ui.wrapped("", "safety");
+    private final ToggleGroup fixGroup = new ToggleGroup();
+    private final Map<HouseField, ToggleButton> boxes = new EnumMap<>(HouseField.class);
+    private final VBox answer;
+    private final ScrollPane boxScroll;
+    private final HousePadView pad;
+    private ScenarioResult painted;
 
     public HouseView(HouseViewModel model) {
         this.model = model;
         getStyleClass().add("screen");
         setId("house-screen");
-        setSpacing(12);
+        setSpacing(16);
         Label title = Ui.label("Where the water comes from", "heading");
-        getChildren().addAll(title, refusal, canvas, Ui.label("Fixes compared — tap one", "subheading"), Ui.scroll(rows));
+        title.setWrapText(true);
+        refusal.setId("house-refusal");
+        cautions.setId("house-cautions");
+        // the fixes suggest attic, duct and ventilation work: their cautions sit right under them
+        ScrollPane fixes = Ui.scroll(new VBox(12, rows, cautions));
+        fixes.setMinHeight(120);
+        answer = new VBox(12, title, refusal, canvas, Ui.label("Fixes compared — tap one", "subheading"), fixes);
+        HBox.setHgrow(answer, Priority.ALWAYS);
+
+        HouseEntryViewModel e = model.entry();
+        ToggleGroup boxGroup = new ToggleGroup();
+        GridPane grid = new GridPane();
+        grid.setHgap(8);
+        grid.setVgap(8);
+        for (int i = 0; i < 2; i++) {
+            ColumnConstraints c = new ColumnConstraints();
+            c.setPercentWidth(50);
+            grid.getColumnConstraints().add(c);
+        }
+        int at = 0;
+        for (HouseField f : HouseField.values()) {
+            ToggleButton b = new ToggleButton();
+            b.setId("house-box-" + f.key());
+            b.getStyleClass().add("house-box");
+            b.setToggleGroup(boxGroup);
+            b.setWrapText(true);
+            b.setAlignment(Pos.CENTER_LEFT);
+            b.setTextAlignment(TextAlignment.LEFT);
+            b.setMinHeight(Ui.MIN_TARGET_PX);
+            b.setMinWidth(Ui.MIN_TARGET_PX);
+            b.setMaxWidth(Double.MAX_VALUE);
+            b.setMaxHeight(Double.MAX_VALUE);
+            b.setOnAction(x -> {
+                b.setSelected(true);
+                e.selectedProperty().set(f);
+            });
+            boxes.put(f, b);
+            if (f == HouseField.OUTDOOR_DB) {
+                at += at % 2; // the visit's readings start on a row of their own
+            }
+            grid.add(b, at % 2, at / 2);
+            at++;
+        }
+        Label houseWords = Ui.wrapped("The house (kept with the site), then this visit's readings"
+                + " (kept with the visit): tap a box, type, Enter.", "muted");
+        boxScroll = Ui.scroll(new VBox(8, houseWords, grid));
+        boxScroll.setId("house-boxes");
+        boxScroll.setMinHeight(150);
+        pad = new HousePadView(e);
+        e.selectedProperty().addListener((o, a, b) -> boxes.get(b).setSelected(true));
+        e.revisionProperty().addListener((o, a, b) -> label());
+        boxes.get(e.selectedProperty().get()).setSelected(true);
+        label();
+
         model.budgetProperty().addListener((o, a, b) -> show());
         show();
+        setPortrait(false);
+    }
+
+    /** Each box's name and what it holds now. */
+    private void label() {
+        HouseEntryViewModel e = model.entry();
+        boxes.forEach((f, b) -> b.setText(f.title() + "\n" + e.valueText(f)));
     }
 
     private void show() {
         HouseBudget b = model.budgetProperty().get();
         refusal.setText(model.refusalProperty().get());
+        refusal.setManaged(!refusal.getText().isEmpty());
+        refusal.setVisible(!refusal.getText().isEmpty());
+        label();
         rows.getChildren().clear();
+        cautions.setText(String.join("\n", model.cautions()));
         if (b == null) {
             paint(null);
             return;
@@ -52,12 +137,17 @@ public final class HouseView extends VBox implements Reflowing {
             ToggleButton t = new ToggleButton(r.change() + "\nwater gained " + r.balance() + " · settles at " + r.dewPoint()
                     + " · SHR " + r.shr());
             t.setId("fix-" + r.key());
-            t.setToggleGroup(group);
+            t.setToggleGroup(fixGroup);
             t.setMinHeight(Ui.MIN_TARGET_PX);
             t.setMinWidth(Ui.MIN_TARGET_PX);
             t.setMaxWidth(Double.MAX_VALUE);
             t.setWrapText(true);
-            t.setOnAction(e -> paint(scenario(b, r.key())));
+            t.setAlignment(Pos.CENTER_LEFT);
+            t.setTextAlignment(TextAlignment.LEFT);
+            t.setOnAction(x -> {
+                t.setSelected(true);
+                paint(scenario(b, r.key()));
+            });
             rows.getChildren().add(t);
         }
         if (!rows.getChildren().isEmpty()) {
@@ -71,16 +161,40 @@ public final class HouseView extends VBox implements Reflowing {
     }
 
     private void paint(ScenarioResult s) {
+        painted = s;
         var g = canvas.getGraphicsContext2D();
-        g.clearRect(0, 0, CHART_W, CHART_H);
+        g.clearRect(0, 0, canvas.getWidth(), canvas.getHeight());
         if (s != null) {
             MoistureBudgetChart.of(s, model.units()).paint(new CanvasPainter(g, FxTextMeasurer.system()),
-                    Theme.LIGHT, CHART_W, CHART_H);
+                    Theme.LIGHT, canvas.getWidth(), canvas.getHeight());
         }
     }
 
     @Override
     public void setPortrait(boolean portrait) {
-        // one column in both orientations; the chart keeps its drawn size
+        canvas.setWidth(portrait ? CHART_W_UPRIGHT : CHART_W_WIDE);
+        canvas.setHeight(portrait ? CHART_H_UPRIGHT : CHART_H_WIDE);
+        getChildren().clear();
+        if (portrait) {
+            // the answer above; the boxes beside the pad below it
+            HBox below = new HBox(12, boxScroll, pad);
+            HBox.setHgrow(boxScroll, Priority.ALWAYS);
+            pad.setMinWidth(410);
+            pad.setMaxWidth(410);
+            VBox.setVgrow(answer, Priority.ALWAYS);
+            VBox upright = new VBox(12, answer, below);
+            HBox.setHgrow(upright, Priority.ALWAYS);
+            getChildren().add(upright);
+        } else {
+            // the boxes above the pad on the left; the answer takes the rest of the width
+            pad.setMinWidth(Double.NEGATIVE_INFINITY);
+            pad.setMaxWidth(Double.MAX_VALUE);
+            VBox left = new VBox(12, boxScroll, pad);
+            left.setMinWidth(440);
+            left.setPrefWidth(460);
+            left.setMaxWidth(460);
+            getChildren().addAll(left, answer);
+        }
+        paint(painted);
     }
 }

@@ -33,12 +33,59 @@ public final class HouseViewModel {
     private final AppSession session;
     private final ReadOnlyObjectWrapper<HouseBudget> budget = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyStringWrapper refusal = new ReadOnlyStringWrapper("");
+    private final HouseEntryViewModel entry;
+    /** The open visit's coil checks and analysed logs, read once per visit, units or screen showing. */
+    private VisitEvidence evidence;
 
     public HouseViewModel(AppSession session) {
         this.session = session;
-        session.visitProperty().addListener((o, a, b) -> recompute());
-        session.unitsProperty().addListener((o, a, b) -> recompute());
+        entry = new HouseEntryViewModel(new HouseEntryViewModel.Source() {
+            @Override
+            public app.latentledger.core.units.UnitSystem units() {
+                return session.units();
+            }
+
+            @Override
+            public app.latentledger.core.records.Site site() {
+                return session.visit() == null ? null : session.site();
+            }
+
+            @Override
+            public app.latentledger.core.settings.InstrumentTolerances tolerances() {
+                return session.settings().tolerances();
+            }
+
+            @Override
+            public java.util.Optional<HouseFacts> facts() {
+                return session.visit() == null ? java.util.Optional.empty()
+                        : session.ledger().houses().facts(session.visit().siteId());
+            }
+
+            @Override
+            public HouseVisitReadings readings() {
+                return HouseViewModel.this.readings();
+            }
+        }, this::keep, this::keep);
+        session.visitProperty().addListener((o, a, b) -> {
+            entry.reset();
+            recompute();
+        });
+        // readings or logs changed on another screen show up when the House screen is opened again
+        session.screenProperty().addListener((o, a, b) -> {
+            if (b == app.latentledger.ui.session.Screen.HOUSE && a != b) {
+                recompute();
+            }
+        });
+        session.unitsProperty().addListener((o, a, b) -> {
+            recompute();
+            entry.refresh();
+        });
         recompute();
+    }
+
+    /** Typing the house's facts and this visit's house readings on the number pad. */
+    public HouseEntryViewModel entry() {
+        return entry;
     }
 
     public ReadOnlyObjectProperty<HouseBudget> budgetProperty() {
@@ -53,13 +100,13 @@ public final class HouseViewModel {
     /** Stores the site's house facts at once and recomputes. */
     public void keep(HouseFacts facts) {
         session.ledger().houses().saveFacts(session.visit().siteId(), facts);
-        recompute();
+        rebudget(facts, readings());
     }
 
     /** Stores the visit's house readings at once and recomputes. */
     public void keep(HouseVisitReadings readings) {
         session.ledger().houses().saveReadings(session.visit().id(), readings);
-        recompute();
+        rebudget(session.ledger().houses().facts(session.visit().siteId()).orElse(null), readings);
     }
 
     /** The units the screen shows. */
@@ -70,6 +117,15 @@ public final class HouseViewModel {
     /** The open visit's stored house readings. */
     public HouseVisitReadings readings() {
         return session.visit() == null ? HouseVisitReadings.EMPTY : session.ledger().houses().readings(session.visit().id());
+    }
+
+    /**
+     * The safety lines that go with the fixes compared (attic heat, mold, combustion appliances when
+     * a fix changes house pressure, licensed practice); empty without a budget.
+     */
+    public List<String> cautions() {
+        HouseBudget b = budget.get();
+        return b == null ? List.of() : b.cautions();
     }
 
     /** The fix planner as table rows: as found first, then each candidate. */
@@ -93,15 +149,34 @@ public final class HouseViewModel {
                 DisplayNumber.number(s.shr().valueSi(), 3));
     }
 
-    /** Recomputes the budget of the open visit from what is stored. */
+    /**
+     * Recomputes the budget of the open visit from what is stored, reading its coil checks and logs
+     * again (another screen may have changed them).
+     */
     public void recompute() {
         if (session.visit() == null) {
+            evidence = null;
             budget.set(null);
             refusal.set("open a visit first");
             return;
         }
-        VisitEvidence ev = VisitEvidence.load(session.ledger(), session.visit().id(), session.units());
-        HouseEvidence e = HouseEvidence.of(session.ledger(), ev, session.thresholds(), Double.NaN);
+        evidence = VisitEvidence.load(session.ledger(), session.visit().id(), session.units());
+        apply(HouseEvidence.of(session.ledger(), evidence, session.thresholds(), Double.NaN));
+    }
+
+    /**
+     * After a keypad entry: the budget and every fix again from the house's facts and readings just
+     * stored, on the coil checks and logs already read — the path the budget benchmark times.
+     */
+    private void rebudget(HouseFacts facts, HouseVisitReadings readings) {
+        if (evidence == null || !evidence.visit().id().equals(session.visit().id())) {
+            recompute();
+            return;
+        }
+        apply(HouseEvidence.of(facts, readings, evidence, session.thresholds(), Double.NaN));
+    }
+
+    private void apply(HouseEvidence e) {
         if (!e.ready()) {
             budget.set(null);
             refusal.set(e.refusal());

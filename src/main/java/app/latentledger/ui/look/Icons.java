@@ -26,6 +26,8 @@ public enum Icons {
     LOGS("M2 12 L5 12 L7 6 L10 18 L13 8 L15 14 L17 12 L22 12"),
     COMPARE("M4 21 L4 9 L9 9 L9 21 M15 21 L15 4 L20 4 L20 21 M2 21 L22 21"),
     EXPORT("M4 13 L4 21 L20 21 L20 13 M12 3 L12 16 M7 8 L12 3 L17 8"),
+    /** The house's moisture budget: a house with a drop inside. */
+    HOUSE("M3 11 L12 3 L21 11 M5 9.5 L5 21 L19 21 L19 9.5 M12 10 C12 10 9 14 9 16 A3 3 0 0 0 15 16 C15 14 12 10 12 10 Z"),
     /** Settings: three sliders. */
     SETTINGS("M3 6 L21 6 M3 12 L21 12 M3 18 L21 18 M8 3.5 L8 8.5 M16 9.5 L16 14.5 M11 15.5 L11 20.5"),
     THEME("M12 3 A9 9 0 1 0 12.01 3 Z M12 3 L12 21 M12 7 L16 7 M12 11 L20 11 M12 15 L18 15"),

@@ -6,6 +6,8 @@ public enum Screen {
     READINGS("readings", "Readings"),
     RESULTS("results", "Results"),
     LOGS("logs", "Logs"),
+    /** Why the house is humid: its moisture budget and the fixes compared. */
+    HOUSE("house", "House"),
     COMPARE("compare", "Compare"),
     RECORD("record", "Record"),
     EXPORT("export", "Export"),

@@ -35,7 +35,17 @@ class HouseViewModelTest {
             HouseBudget b = vm.budgetProperty().get();
             assertNotNull(b, vm.refusalProperty().get());
             assertEquals("as-found", vm.fixRows().get(0).key());
+            // a new data folder shows the demo house with a plausible budget: the house settles where its
+            // gains meet removal, a dry-air-basis mass balance (ASHRAE HoF ch. 1) whose moisture lies between
+            // the coil's apparatus dew point (low 50s °F on the demo coil) and the demo's 74–75 °F outdoor
+            // and attic dew points, plus the internal sources
+            double dpF = Quantity.TEMPERATURE.toDisplay(UnitSystem.IP, b.asFound().equilibriumDewPointC().valueSi());
+            assertTrue(dpF > 50 && dpF < 75, "equilibrium dew point " + dpF + " °F");
+            assertTrue(b.asFound().gains().valueSi() > 0 && b.asFound().removal().valueSi() > 0);
             assertEquals(b.whatIfs().size() + 1, vm.fixRows().size());
+            assertTrue(vm.cautions().contains(app.latentledger.core.house.HouseFindings.COMBUSTION),
+                    "the demo's fixes change house pressure: the combustion-appliance caution is on screen");
+            assertTrue(vm.cautions().contains(app.latentledger.core.house.HouseFindings.ATTIC_HEAT));
 
             ByteArrayOutputStream out = new ByteArrayOutputStream();
             int code = Cli.standard().run(List.of("--data-dir", dir.toString(), "house", "--visit",

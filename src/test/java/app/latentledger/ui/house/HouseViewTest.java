@@ -47,8 +47,30 @@ class HouseViewTest {
     }
 
     @Test
+    void aFactTappedOnThePadIsStoredAtOnceAndShownAfterARestart(FxRobot robot) throws IOException {
+        tap(robot, "#house-box-bedrooms");
+        tap(robot, "#house-key-5");
+        tap(robot, "#house-key-enter");
+        assertEquals(5, session.ledger().houses().facts(DemoScenario.SITE_HERON).orElseThrow().bedrooms());
+        assertTrue(robot.lookup("#house-pad-message").queryAs(javafx.scene.control.Label.class).getText()
+                .contains("Bedrooms 5 saved"));
+        Path folder = session.dataFolder();
+        robot.interact(() -> session.close());
+        session = TestSessions.open(folder);
+        session.ledger().visits().find(DemoScenario.VISIT_COMPLAINT).ifPresent(session::openVisit);
+        HouseViewModel again = new HouseViewModel(session);
+        robot.interact(() -> robot.lookup("#house-screen").query().getScene().setRoot(new HouseView(again)));
+        assertTrue(robot.lookup("#house-box-bedrooms").queryAs(ToggleButton.class).getText().endsWith("\n5"));
+    }
+
+    private static void tap(FxRobot robot, String query) {
+        robot.interact(() -> robot.lookup(query).queryAs(javafx.scene.control.ButtonBase.class).fire());
+    }
+
+    @Test
     void everyFixIsATargetToTap(FxRobot robot) {
-        Set<Node> rows = robot.lookup(".toggle-button").queryAll();
+        Set<Node> rows = robot.lookup(".toggle-button").match(n -> n.getId() != null && n.getId().startsWith("fix-"))
+                .queryAll();
         assertEquals(model.fixRows().size(), rows.size());
         for (Node n : rows) {
             var b = n.getBoundsInLocal();
