@@ -90,7 +90,8 @@ public final class PsychroChart {
     }
 
     /** Paints the whole chart: frame, line families, axes, overlays, legend and title. */
-    public void paint(Painter p, Theme theme, PsychroChartLayout layout, ChartViewport vp) {
+    public void paint(Painter painter, Theme theme, PsychroChartLayout layout, ChartViewport vp) {
+        Painter p = theme.painter(painter);
         p.rect(0, 0, layout.width(), layout.height(), theme.background(), null);
         p.rect(vp.left(), vp.top(), vp.width(), vp.height(), theme.plotBackground(), null);
         LabelPlacer placer = new LabelPlacer(vp.left(), vp.top(), vp.left() + vp.width(), vp.top() + vp.height());
@@ -129,7 +130,8 @@ public final class PsychroChart {
     }
 
     /** A ring around the tapped state so the tech sees which one the readout describes. */
-    public void paintSelection(Painter p, Theme theme, ChartViewport vp, ChartPoint point) {
+    public void paintSelection(Painter painter, Theme theme, ChartViewport vp, ChartPoint point) {
+        Painter p = theme.painter(painter);
         p.beginGroup("selection");
         p.circle(vp.x(point.dryBulbC()), vp.y(point.humidityRatio()), MARKER_PX * 0.95, null,
                 Stroke.solid(theme.text(), 2.4));

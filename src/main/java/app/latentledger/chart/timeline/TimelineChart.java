@@ -64,7 +64,8 @@ public final class TimelineChart {
     }
 
     /** Paints everything; {@code selectedCycle} (−1 for none) is shaded across the panels. */
-    public void paint(Painter p, Theme theme, TimelineLayout layout, TimeViewport vp, int selectedCycle) {
+    public void paint(Painter painter, Theme theme, TimelineLayout layout, TimeViewport vp, int selectedCycle) {
+        Painter p = theme.painter(painter);
         UnitSystem u = data.units();
         p.rect(0, 0, layout.width(), layout.height(), theme.background(), null);
         paintTitle(p, theme, layout, vp);

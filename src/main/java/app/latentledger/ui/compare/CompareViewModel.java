@@ -67,7 +67,7 @@ public final class CompareViewModel {
         if (chart == null) {
             chart = new PsychroChartViewModel(CoilCharts.orEmpty(chartData.get(), session.units()));
             chart.themeProperty().bind(javafx.beans.binding.Bindings.createObjectBinding(
-                    () -> CoilCharts.theme(session.darkProperty().get()), session.darkProperty()));
+                    () -> CoilCharts.theme(session.themeProperty().get()), session.themeProperty()));
             chartData.addListener((o, a, b) -> chart.show(b));
         }
         return chart;

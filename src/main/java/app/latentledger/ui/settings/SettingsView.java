@@ -63,9 +63,11 @@ public final class SettingsView extends BorderPane {
     }
 
     private void applyTheme(DisplayTheme theme) {
-        getStyleClass().remove("dark");
+        getStyleClass().removeAll("dark", "outdoor");
         if (theme == DisplayTheme.DARK) {
             getStyleClass().add("dark");
+        } else if (theme == DisplayTheme.OUTDOOR) {
+            getStyleClass().add("outdoor");
         }
     }
 
