@@ -85,8 +85,15 @@ public final class PsychroChart {
      * vectors to the page, so type and line weights keep their proportions.
      */
     public void paintWhole(Painter p, Theme theme, double width, double height) {
-        PsychroChartLayout layout = PsychroChartLayout.forSize(width, height, theme);
+        PsychroChartLayout layout = layout(width, height, theme);
         paint(p, theme, layout, initialViewport(layout));
+    }
+
+    /** The layout of this chart in a {@code width} × {@code height} area, with room for its key below the plot. */
+    public PsychroChartLayout layout(double width, double height, Theme theme) {
+        double keyHeight = Legend.of(theme, data).height(PsychroChartLayout.legendWidth(width, theme));
+        // the key never takes more than a third of the chart; a tiny chart keeps its plot instead
+        return PsychroChartLayout.forSize(width, height, theme, keyHeight <= height / 3 ? keyHeight : 0);
     }
 
     /** Paints the whole chart: frame, line families, axes, overlays, legend and title. */
@@ -96,9 +103,6 @@ public final class PsychroChart {
         p.rect(vp.left(), vp.top(), vp.width(), vp.height(), theme.plotBackground(), null);
         LabelPlacer placer = new LabelPlacer(vp.left(), vp.top(), vp.left() + vp.width(), vp.top() + vp.height());
         Labels labels = new Labels(p, placer, theme.plotBackground());
-        Legend legend = new Legend(theme, data);
-        double[] legendBox = legend.box(p, vp);
-        placer.reserve(legendBox[0], legendBox[1], legendBox[2], legendBox[3]);
         reserveMarkers(placer, vp);
 
         List<ChartCurve> curves = lines.compute(vp.range(), vp.width());
@@ -125,7 +129,10 @@ public final class PsychroChart {
         paintFrame(p, theme, vp);
         paintDryBulbAxis(p, theme, vp);
         paintHumidityRatioAxis(p, theme, vp);
-        legend.paint(p, legendBox);
+        if (layout.legendHeight() > 0) {
+            Legend.of(theme, data).paint(p, vp.left(), layout.legendTop(), PsychroChartLayout.legendWidth(layout.width(),
+                    theme));
+        }
         paintTitle(p, theme, layout, vp);
     }
 
@@ -429,11 +436,21 @@ public final class PsychroChart {
         p.beginGroup("title");
         TextStyle title = TextStyle.of(theme.baseText() + 4, theme.text()).emphasised();
         p.text(vp.left(), vp.top() - theme.baseText() * 1.75, data.title(), title);
-        String pressure = String.format(Locale.ROOT, "Site pressure %s %s · %s · rectangular dry bulb–humidity ratio axes",
-                Format.pressure(data.units(), data.pressurePa()), Quantity.PRESSURE.symbol(data.units()),
-                data.units() == UnitSystem.IP ? "ASHRAE inch-pound equations" : "ASHRAE SI equations");
-        p.text(vp.left(), vp.top() - theme.baseText() * 0.5, pressure, TextStyle.of(theme.smallText(),
-                theme.mutedText()));
+        String site = String.format(Locale.ROOT, "Site pressure %s %s",
+                Format.pressure(data.units(), data.pressurePa()), Quantity.PRESSURE.symbol(data.units()));
+        String equations = data.units() == UnitSystem.IP ? "ASHRAE inch-pound equations" : "ASHRAE SI equations";
+        TextStyle sub = TextStyle.of(theme.smallText(), theme.mutedText());
+        // the longest subtitle that fits the chart's width: never cut mid-word
+        double room = layout.width() - vp.left() - 4;
+        String subtitle = site;
+        for (String candidate : List.of(site + " · " + equations + " · rectangular dry bulb–humidity ratio axes",
+                site + " · " + equations)) {
+            if (p.measurer().width(candidate, sub.size(), false) <= room) {
+                subtitle = candidate;
+                break;
+            }
+        }
+        p.text(vp.left(), vp.top() - theme.baseText() * 0.5, subtitle, sub);
         p.endGroup();
     }
 

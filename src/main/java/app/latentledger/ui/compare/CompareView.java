@@ -64,19 +64,29 @@ public final class CompareView extends VBox implements Reflowing {
         fill.run();
         var report = Ui.button("before-after-report", "Before/after report", app.latentledger.ui.look.Icons.EXPORT,
                 viewModel::beforeAfterReport);
-        report.disableProperty().bind(viewModel.chosenProperty().isNull().or(viewModel.reports().busyProperty()));
+        // not disabled while writing (a second tap is ignored): a disabled button drops its focus, and the
+        // focus moving on to the chart's buttons scrolled the page away from the report's own message
+        report.disableProperty().bind(viewModel.chosenProperty().isNull());
         Label reportStatus = Ui.wrapped("", "message");
         reportStatus.setId("compare-report-status");
         // takes room only when it has something to say
         reportStatus.managedProperty().bind(reportStatus.textProperty().isNotEmpty());
         reportStatus.visibleProperty().bind(reportStatus.managedProperty());
         reportStatus.textProperty().bind(viewModel.reports().statusProperty());
+        var share = app.latentledger.ui.share.ShareBar.forFile(viewModel.reports().lastFileProperty());
+        share.visibleProperty().bind(viewModel.reports().lastFileProperty().isNotNull());
+        share.managedProperty().bind(share.visibleProperty());
+        Label margins = Ui.wrapped("", "muted");
+        margins.setId("compare-margins");
+        margins.textProperty().bind(viewModel.marginNoteProperty());
+        margins.managedProperty().bind(margins.textProperty().isNotEmpty());
+        margins.visibleProperty().bind(margins.managedProperty());
         chartSlot.setId(CHART_SLOT_ID);
         chartSlot.getStyleClass().add("slot-placeholder");
         chartSlot.getChildren().add(Ui.wrapped("Drawing the before/after chart…", "muted"));
         VBox panel = Ui.panel(10, Ui.label("Compare with an earlier reading set", "heading"),
-                Ui.label("Earlier reading set of this system", "figure-label"), pick, verdicts, status,
-                report, reportStatus, table, chartSlot);
+                Ui.label("Earlier reading set of this system", "figure-label"), pick, verdicts, status, margins,
+                report, reportStatus, share, table, chartSlot);
         getChildren().add(Ui.scroll(panel));
     }
 

@@ -40,6 +40,7 @@ public final class CompareViewModel {
     private final ObservableList<CompareRow> rows = FXCollections.observableArrayList();
     private final ReadOnlyStringWrapper verdicts = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
+    private final ReadOnlyStringWrapper marginNote = new ReadOnlyStringWrapper("");
     private final ReadOnlyObjectWrapper<PsychroChartData> chartData = new ReadOnlyObjectWrapper<>();
     private final ReportViewModel reports;
     /** Built on first use, after the first frame. */
@@ -143,6 +144,7 @@ public final class CompareViewModel {
 
     private void recompute() {
         rows.clear();
+        marginNote.set("");
         verdicts.set("");
         ReadingSet before = chosen.get();
         CurrentCheck now = session.currentCheck();
@@ -169,11 +171,33 @@ public final class CompareViewModel {
             int decimals = DisplayNumber.decimals(f.quantity, u);
             String change = Double.isFinite(x) && Double.isFinite(y)
                     ? DisplayNumber.signed(f.quantity.toDisplay(u, y) - f.quantity.toDisplay(u, x), decimals) : Shown.NONE;
+            if (f == CompareFigure.MARGIN) {
+                // which side of the dew point, in the words Results and the report use; the change stays a
+                // number: positive is a colder coil, better at drying
+                rows.add(new CompareRow(f.key(), f.label, marginCell(u, x), marginCell(u, y), change,
+                        f.quantity.symbol(u)));
+                continue;
+            }
             rows.add(new CompareRow(f.key(), f.label, Shown.of(f.quantity, u, x), Shown.of(f.quantity, u, y), change,
                     f.quantity.symbol(u)));
         }
         verdicts.set(VisitResults.headline(a.verdict()) + "  →  " + VisitResults.headline(b.verdict()));
+        marginNote.set("Before: " + VisitResults.marginSentence(a, u) + ". After: " + VisitResults.marginSentence(b, u)
+                + ".");
         status.set("Before: " + describe(before) + ".  After: the reading set on this visit.");
     }
 
+    /** "3.2 warmer" or "13.6 colder": the coil against the dew point, no bare minus sign. */
+    private static String marginCell(UnitSystem u, double marginK) {
+        if (!Double.isFinite(marginK)) {
+            return Shown.NONE;
+        }
+        return (app.latentledger.core.text.MarginWords.number(u, marginK, Double.NaN) + " "
+                + app.latentledger.core.text.MarginWords.direction(u, marginK)).trim();
+    }
+
+    /** Both sets' dew-point margins as sentences ("Coil is … warmer than the return dew point — …"). */
+    public javafx.beans.property.ReadOnlyStringProperty marginNoteProperty() {
+        return marginNote.getReadOnlyProperty();
+    }
 }

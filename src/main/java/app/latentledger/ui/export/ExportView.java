@@ -75,13 +75,6 @@ public final class ExportView extends VBox implements Reflowing {
 
     /** Open, print or share the file just written, as far as this device offers. */
     private app.latentledger.ui.share.ShareBar shareBar(ReportViewModel reports) {
-        app.latentledger.ui.share.ShareViewModel share = new app.latentledger.ui.share.ShareViewModel(
-                app.latentledger.handoff.HandOffs.forThisDevice(), app.latentledger.ui.session.Background.worker(),
-                app.latentledger.ui.session.Background.fx());
-        share.fileProperty().bind(reports.lastFileProperty());
-        share.titleProperty().bind(javafx.beans.binding.Bindings.createStringBinding(() ->
-                reports.lastFileProperty().get() == null ? "Report" : reports.lastFileProperty().get().getFileName()
-                        .toString(), reports.lastFileProperty()));
-        return new app.latentledger.ui.share.ShareBar(share);
+        return app.latentledger.ui.share.ShareBar.forFile(reports.lastFileProperty());
     }
 }
