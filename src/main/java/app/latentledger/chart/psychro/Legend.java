@@ -39,17 +39,17 @@ final class Legend {
             key.add((p, x, y, w) -> {
                 Marker.CIRCLE.paint(p, x + 9, y, 13, theme.mutedText(), null);
                 Marker.CIRCLE.paint(p, x + w - 9, y, 13, theme.plotBackground(), Stroke.solid(theme.mutedText(), 2.5));
-            }, "filled entering, hollow leaving");
+            }, "entering, leaving");
         }
         if (dewPoint) {
             key.add(LegendFlow.marker(Marker.DIAMOND, 11, theme.plotBackground(), Stroke.solid(theme.mutedText(), 2)),
-                    "dew point of the entering air");
+                    "entering dew point");
         }
         if (adp) {
             key.add((p, x, y, w) -> {
                 p.circle(x + w / 2, y, 6, theme.plotBackground(), Stroke.solid(theme.mutedText(), 2.2));
                 p.circle(x + w / 2, y, 1.8, theme.mutedText(), null);
-            }, "apparatus dew point (ADP)");
+            }, "apparatus dew point");
         }
         if (coil) {
             key.add(LegendFlow.marker(Marker.TRIANGLE_UP, 14, theme.coil(), Stroke.solid(theme.plotBackground(), 1.5)),
@@ -59,13 +59,13 @@ final class Legend {
             key.add(LegendFlow.marker(Marker.TRIANGLE_UP, 15, theme.text(), Stroke.solid(theme.plotBackground(), 1.5)),
                     pt.label());
         }
-        key.add(LegendFlow.line(Stroke.solid(theme.relativeHumidity(), 1.4)), "relative humidity, 10 % steps");
+        key.add(LegendFlow.line(Stroke.solid(theme.relativeHumidity(), 1.4)), "RH, 10 % steps");
         key.add(LegendFlow.line(new Stroke(theme.wetBulb(), 1.2, DashPattern.DASHED)),
                 "wet bulb, " + Quantity.TEMPERATURE.symbol(data.units()));
         key.add(LegendFlow.line(Stroke.solid(theme.enthalpy(), 1.0)),
                 "enthalpy, " + Quantity.ENTHALPY.symbol(data.units()));
         key.add(LegendFlow.line(new Stroke(theme.volume(), 1.2, DashPattern.DASH_DOT)),
-                "specific volume, " + Quantity.SPECIFIC_VOLUME.symbol(data.units()));
+                "volume, " + Quantity.SPECIFIC_VOLUME.symbol(data.units()));
         return key;
     }
 }

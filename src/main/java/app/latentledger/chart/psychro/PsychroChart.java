@@ -92,8 +92,8 @@ public final class PsychroChart {
     /** The layout of this chart in a {@code width} × {@code height} area, with room for its key below the plot. */
     public PsychroChartLayout layout(double width, double height, Theme theme) {
         double keyHeight = Legend.of(theme, data).height(PsychroChartLayout.legendWidth(width, theme));
-        // the key never takes more than a third of the chart; a tiny chart keeps its plot instead
-        return PsychroChartLayout.forSize(width, height, theme, keyHeight <= height / 3 ? keyHeight : 0);
+        // the key never takes more than 40 % of the chart's height; a tiny chart keeps its plot instead
+        return PsychroChartLayout.forSize(width, height, theme, keyHeight <= height * 0.4 ? keyHeight : 0);
     }
 
     /** Paints the whole chart: frame, line families, axes, overlays, legend and title. */

@@ -40,7 +40,7 @@ public final class SettingsCatalogue {
     public static final String THEME = "theme";
     public static final String PAPER = "paper";
 
-    private static final String TOLERANCE_SOURCE = "typical field kit, docs/methods.md §9.1 (common practice, no source)";
+    private static final String TOLERANCE_SOURCE = "typical field kit, Methods guide §9.1 (common practice, no source)";
 
     private static final List<ChoiceSetting> CHOICES = List.of(
             new ChoiceSetting(UNITS, "units", SettingGroup.UNITS_AND_SITE, List.of("ip", "si"), "ip",

@@ -172,10 +172,10 @@ public final class CompareViewModel {
             String change = Double.isFinite(x) && Double.isFinite(y)
                     ? DisplayNumber.signed(f.quantity.toDisplay(u, y) - f.quantity.toDisplay(u, x), decimals) : Shown.NONE;
             if (f == CompareFigure.MARGIN) {
-                // which side of the dew point, in the words Results and the report use; the change stays a
-                // number: positive is a colder coil, better at drying
-                rows.add(new CompareRow(f.key(), f.label, marginCell(u, x), marginCell(u, y), change,
-                        f.quantity.symbol(u)));
+                // which side of the dew point, in the words Results and the report use; the change too:
+                // "2.0 colder" is a coil moved 2.0 further below the dew point
+                rows.add(new CompareRow(f.key(), f.label, marginCell(u, x), marginCell(u, y),
+                        Double.isFinite(x) && Double.isFinite(y) ? marginCell(u, y - x) : Shown.NONE, f.quantity.symbol(u)));
                 continue;
             }
             rows.add(new CompareRow(f.key(), f.label, Shown.of(f.quantity, u, x), Shown.of(f.quantity, u, y), change,

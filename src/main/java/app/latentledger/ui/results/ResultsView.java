@@ -72,8 +72,8 @@ public final class ResultsView extends VBox implements Reflowing {
         } else {
             // the figures and findings scroll on the left; the chart stands on the right, read at a glance
             javafx.scene.control.ScrollPane left = Ui.scroll(new VBox(12, figures, Ui.panel(8, findings)));
-            left.setPrefWidth(520);
-            left.setMinWidth(480);
+            left.setPrefWidth(420);
+            left.setMinWidth(400);
             HBox.setHgrow(chartSlot, Priority.ALWAYS);
             chartSlot.setMaxHeight(Double.MAX_VALUE);
             body = new HBox(16, left, chartSlot);

@@ -190,8 +190,8 @@ class PsychroChartGeometryTest {
                     .map(RecordingPainter.Text::text).toList();
             // drawn: dew-point diamonds, ADP rings, coil triangles; each kind needs its words in the key
             assertFalse(g.rec.ops(RecordingPainter.Polygon.class, "dew-point:0").isEmpty());
-            assertTrue(legend.contains("dew point of the entering air"), legend.toString());
-            assertTrue(legend.contains("apparatus dew point (ADP)"), legend.toString());
+            assertTrue(legend.contains("entering dew point"), legend.toString());
+            assertTrue(legend.contains("apparatus dew point"), legend.toString());
             assertTrue(legend.contains("coil temperature"), legend.toString());
             // no key text runs past the chart's right edge (estimate of its width, as the key lays out)
             for (RecordingPainter.Text t : g.rec.ops(RecordingPainter.Text.class, "legend")) {
