@@ -116,7 +116,7 @@ public final class TimelineChart {
         DateTimeFormatter f = DateTimeFormatter.ofPattern("EEE d MMM HH:mm", Locale.ENGLISH);
         return f.format(data.startLocal().plusSeconds(Math.round(vp.startS()))) + " – "
                 + f.format(data.startLocal().plusSeconds(Math.round(vp.endS()))) + " · " + span
-                + (bandsShown(vp) ? " · bands: range per pixel" : "");
+                + (bandsShown(vp) ? " · shaded bands: low to high readings" : "");
     }
 
     /** True when the window holds more than two samples per pixel column, so series draw as bands. */

@@ -296,6 +296,29 @@ public final class AppSession implements AutoCloseable {
         ledger.sites().save(s);
     }
 
+    /**
+     * Stores a corrected site (same id). When it is the site in hand, the visit is opened again so
+     * its checks use the new elevation and the header shows the new name.
+     */
+    public void correctSite(Site s) {
+        ledger.sites().save(s);
+        if (site.get() != null && site.get().id().equals(s.id()) && visit.get() != null) {
+            openVisit(visit.get());
+        }
+    }
+
+    /**
+     * After records went to or came back from the recycle bin: when the visit in hand is gone, the
+     * latest remaining visit is opened instead, so no screen shows a record that is no longer there.
+     */
+    public void recordsChanged() {
+        storedChecks.clear();
+        Visit v = visit.get();
+        if (v != null && ledger.visits().find(v.id()).isEmpty()) {
+            openLatestVisit();
+        }
+    }
+
     public void addSystem(HvacSystem s) {
         ledger.systems().save(s);
     }
