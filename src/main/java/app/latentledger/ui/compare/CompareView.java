@@ -27,7 +27,8 @@ public final class CompareView extends VBox implements Reflowing {
         setId("screen-compare");
         ComboBox<ReadingSet> pick = new ComboBox<>(viewModel.earlier());
         pick.setId("compare-pick");
-        pick.setPrefWidth(420);
+        // as wide as its longest entry needs at the text size in use
+        pick.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         pick.setCellFactory(v -> cell());
         pick.setButtonCell(cell());
         pick.valueProperty().bindBidirectional(viewModel.chosenProperty());
@@ -46,8 +47,12 @@ public final class CompareView extends VBox implements Reflowing {
         table.getColumnConstraints().add(first);
         Runnable fill = () -> {
             table.getChildren().clear();
-            table.addRow(0, Ui.label("Figure", "table-head"), Ui.label("Before", "table-head"),
-                    Ui.label("After", "table-head"), Ui.label("Change", "table-head"), Ui.label("", "table-head"));
+            Label[] heads = {Ui.label("Figure", "table-head"), Ui.label("Before", "table-head"),
+                    Ui.label("After", "table-head"), Ui.label("Change", "table-head"), Ui.label("", "table-head")};
+            for (Label h : heads) {
+                h.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+            }
+            table.addRow(0, heads);
             int r = 1;
             for (CompareRow row : viewModel.rows()) {
                 Label after = Ui.label(row.after(), "figure-value");
@@ -56,8 +61,12 @@ public final class CompareView extends VBox implements Reflowing {
                 before.setId("before-" + row.key());
                 Label change = Ui.label(row.change(), "figure-value");
                 change.setId("change-" + row.key());
-                table.addRow(r++, Ui.label(row.label(), "figure-label"), before, after, change,
-                        Ui.label(row.unit(), "muted"));
+                Label unit = Ui.label(row.unit(), "muted");
+                // numbers keep every digit at any text size; the figure's name wraps instead
+                for (Label l : new Label[] {before, after, change, unit}) {
+                    l.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+                }
+                table.addRow(r++, Ui.wrapped(row.label(), "figure-label"), before, after, change, unit);
             }
         };
         viewModel.rows().addListener((ListChangeListener<CompareRow>) c -> fill.run());

@@ -49,7 +49,7 @@ public final class JobView extends VBox implements Reflowing {
         Label siteStatus = Ui.wrapped("", "message");
         siteStatus.setId("site-status");
         siteStatus.textProperty().bind(viewModel.siteStatusProperty());
-        VBox siteCol = Ui.panel(8, Ui.label("1  Site", "heading"), sites,
+        VBox siteCol = Ui.panel(8, Ui.wrapped("1  Site", "heading"), sites,
                 new FlowPane(8, 8, Ui.button("edit-site", "Correct site", null, viewModel::editSite),
                         Ui.button("delete-site", "Delete site", Icons.FIX, viewModel::askDeleteSite)),
                 siteName, siteAddress, elevationCaption, siteElevation, new FlowPane(8, 8, addSite, cancelEdit),
@@ -62,9 +62,9 @@ public final class JobView extends VBox implements Reflowing {
         Label systemStatus = Ui.wrapped("", "message");
         systemStatus.setId("system-status");
         systemStatus.textProperty().bind(viewModel.systemStatusProperty());
-        VBox systemCol = Ui.panel(8, Ui.label("2  System", "heading"), systems,
+        VBox systemCol = Ui.panel(8, Ui.wrapped("2  System", "heading"), systems,
                 Ui.button("delete-system", "Delete system", Icons.FIX, viewModel::askDeleteSystem), sysLabel,
-                Ui.label("Nominal size, tons", "figure-label"), sysTons,
+                Ui.wrapped("Nominal size, tons", "figure-label"), sysTons,
                 Ui.button("add-system", "Add system", Icons.NEW, viewModel::addSystem), systemStatus);
 
         FlowPane purposes = new FlowPane(8, 8);
@@ -118,8 +118,8 @@ public final class JobView extends VBox implements Reflowing {
         Label status = Ui.wrapped("", "message");
         status.setId("job-status");
         status.textProperty().bind(viewModel.statusProperty());
-        VBox visitCol = Ui.panel(8, Ui.label("3  Visit", "heading"), Ui.label("Purpose", "figure-label"), purposes,
-                tech, start, status, Ui.label("Earlier visits (tap to open)", "figure-label"), visits);
+        VBox visitCol = Ui.panel(8, Ui.wrapped("3  Visit", "heading"), Ui.label("Purpose", "figure-label"), purposes,
+                tech, start, status, Ui.wrapped("Earlier visits (tap to open)", "figure-label"), visits);
 
         columns = new Columns(12, siteCol, systemCol, visitCol);
         VBox.setVgrow(columns, Priority.ALWAYS);
