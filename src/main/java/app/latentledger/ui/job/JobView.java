@@ -99,6 +99,10 @@ public final class JobView extends VBox implements Reflowing {
                         + "\n" + item.technician());
                 javafx.scene.layout.HBox.setHgrow(text, Priority.ALWAYS);
                 text.setMaxWidth(Double.MAX_VALUE);
+                // the row fits the list's width: the words wrap, the Delete button stays in view
+                text.setMinWidth(0);
+                text.setPrefWidth(0);
+                setPrefWidth(0);
                 javafx.scene.control.Button delete = Ui.button("delete-visit-" + item.id(), "Delete", Icons.FIX,
                         () -> viewModel.askDeleteVisit(item));
                 // its own tap: deleting never also opens the visit
