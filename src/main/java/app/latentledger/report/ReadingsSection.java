@@ -12,6 +12,7 @@ import app.latentledger.core.records.Airflow;
 import app.latentledger.core.records.HumidityReading;
 import app.latentledger.core.records.Measurement;
 import app.latentledger.core.records.ReadingSet;
+import app.latentledger.core.text.MarginWords;
 import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.Ratio;
@@ -169,7 +170,12 @@ final class ReadingsSection {
                 ? Numbers.estimate(Quantity.TEMPERATURE, units, r.estimate(Measurand.COIL_TEMPERATURE)) + " ("
                 + (r.coilTemperatureSource() == CoilTemperatureSource.MEASURED ? "measured" : "apparatus dew point")
                 + ")" : "none");
-        est(tb, sets, Measurand.DEW_POINT_MARGIN, "Entering dew point minus coil temperature");
+        // which side of the dew point the coil is on, in the words the screen uses, never a bare minus sign
+        rowResult(tb, sets, "Coil against the entering air's dew point", r -> {
+            Estimate e = r.estimate(Measurand.DEW_POINT_MARGIN);
+            return e.exists() ? MarginWords.amount(units, e.valueSi(), e.expandedSi()) + " ("
+                    + MarginWords.consequence(e.valueSi(), e.expandedSi()) + ")" : "—";
+        });
         if (sets.stream().anyMatch(c -> c.checked() && c.result().condensate() != null)) {
             est(tb, sets, Measurand.CONDENSATE_RATE, "Condensate caught per hour");
             est(tb, sets, Measurand.CONDENSATE_MINUS_AIRSIDE, "Condensate minus air-side removal");

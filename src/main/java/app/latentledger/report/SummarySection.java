@@ -181,8 +181,13 @@ final class SummarySection {
     /** "about 235 pints if it ran all day": the rate a homeowner can picture. */
     private String daily(CoilResult r) {
         double perDay = Quantity.WATER_RATE_DAILY.toDisplay(units, r.process().moistureRemovalKgPerS());
-        return "about " + DisplayNumber.number(perDay, 0) + " " + Quantity.WATER_RATE_DAILY.symbol(units).replace("/day", "")
-                + " if it ran all day";
+        String unit = Quantity.WATER_RATE_DAILY.symbol(units).replace("/day", "");
+        if (perDay < 0 && !DisplayNumber.number(-perDay, 0).equals(DisplayNumber.number(0, 0))) {
+            // never "about -96 pints": the air left wetter than it came, so say that
+            return "none: the air left wetter, about " + DisplayNumber.number(-perDay, 0) + " " + unit
+                    + " put back if it ran all day";
+        }
+        return "about " + DisplayNumber.number(Math.abs(perDay), 0) + " " + unit + " if it ran all day";
     }
 
     private void changes(Typeset t) {

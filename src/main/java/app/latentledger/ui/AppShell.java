@@ -120,13 +120,13 @@ public final class AppShell extends BorderPane {
         shell.screenProperty().addListener((o, a, b) -> show(b));
         sceneProperty().addListener((o, a, scene) -> {
             if (scene != null) {
-                Theme.apply(scene, shell.darkProperty().get());
+                Theme.apply(scene, shell.themeProperty().get());
                 scene.widthProperty().addListener((x, y, z) -> fit(scene));
                 scene.heightProperty().addListener((x, y, z) -> fit(scene));
                 fit(scene);
             }
         });
-        shell.darkProperty().addListener((o, a, b) -> {
+        shell.themeProperty().addListener((o, a, b) -> {
             if (getScene() != null) {
                 Theme.apply(getScene(), b);
             }

@@ -79,6 +79,11 @@ public final class ShellViewModel {
         return session.darkProperty();
     }
 
+    /** The saved theme the screens are drawn in: light, dark or outdoor. */
+    public javafx.beans.property.ReadOnlyObjectProperty<app.latentledger.core.settings.DisplayTheme> themeProperty() {
+        return session.themeProperty();
+    }
+
     private String describeJob() {
         if (session.visit() == null) {
             return "No visit open";

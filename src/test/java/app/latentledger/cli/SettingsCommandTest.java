@@ -137,7 +137,7 @@ class SettingsCommandTest {
         assertTrue(unknown.err().contains("unknown setting 'coilHugeAirflow'"), unknown.err());
         Run word = run("settings set theme purple");
         assertEquals(2, word.code());
-        assertTrue(word.err().contains("theme 'purple' refused: accepted light, dark"), word.err());
+        assertTrue(word.err().contains("theme 'purple' refused: accepted light, dark, outdoor"), word.err());
         Run nan = run("settings set tolRh lots");
         assertEquals(2, nan.code());
         assertTrue(nan.err().contains("tolRh value 'lots' is not a number"), nan.err());

@@ -78,6 +78,37 @@ class LayoutUiTest {
         assertTrue(problems.isEmpty(), String.join("\n", problems));
     }
 
+    /** 150 % text: the root's 18 px base at 27 px; every other size in the stylesheets is relative to it. */
+    private void largeText(FxRobot robot) {
+        robot.interact(() -> stage.getScene().getRoot().setStyle("-fx-font-size: 27px;"));
+    }
+
+    @Test
+    void atOneAndAHalfTimesTheTextLyingDownNothingIsCut(FxRobot robot) {
+        largeText(robot);
+        List<String> problems = walk(robot);
+        assertTrue(problems.isEmpty(), String.join("\n", problems));
+    }
+
+    @Test
+    void atOneAndAHalfTimesTheTextUprightNothingIsCut(FxRobot robot) {
+        robot.interact(() -> show(800, 1280));
+        largeText(robot);
+        List<String> problems = walk(robot);
+        assertTrue(problems.isEmpty(), String.join("\n", problems));
+    }
+
+    @Test
+    void theTextSizeFollowsTheRoot(FxRobot robot) {
+        // the test above means something only if the screens' text really grows with the root
+        robot.interact(() -> session.screenProperty().set(Screen.RESULTS));
+        javafx.scene.control.Label verdict = robot.lookup(".verdict-word").queryAs(javafx.scene.control.Label.class);
+        double normal = verdict.getFont().getSize();
+        largeText(robot);
+        robot.interact(() -> stage.getScene().getRoot().applyCss());
+        assertTrue(verdict.getFont().getSize() >= normal * 1.45, normal + " → " + verdict.getFont().getSize());
+    }
+
     @Test
     void resultsPutTheVerdictMarginAndWaterFirstAndGiveTheChartHalfTheWidth(FxRobot robot) {
         robot.interact(() -> session.screenProperty().set(Screen.RESULTS));

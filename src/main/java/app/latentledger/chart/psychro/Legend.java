@@ -1,112 +1,71 @@
 package app.latentledger.chart.psychro;
 
 import app.latentledger.chart.draw.DashPattern;
+import app.latentledger.chart.draw.LegendFlow;
 import app.latentledger.chart.draw.Marker;
-import app.latentledger.chart.draw.Painter;
 import app.latentledger.chart.draw.Stroke;
-import app.latentledger.chart.draw.TextMeasurer;
-import app.latentledger.chart.draw.TextStyle;
 import app.latentledger.chart.draw.Theme;
 import app.latentledger.core.units.Quantity;
 
-import java.util.ArrayList;
-import java.util.List;
-
 /**
- * The key in the chart's empty upper-left corner (above the saturation curve): each coil process
- * by marker and line pattern, filled = entering and hollow = leaving, and the line families.
+ * The psychrometric chart's key, drawn in a band below the plot so it never hides a state or a
+ * line: each coil process by marker and line pattern (filled = entering, hollow = leaving), every
+ * other mark the chart can draw (the entering air's dew point, the apparatus dew point, the coil
+ * temperature, other plotted states) and the line families.
  */
 final class Legend {
-    private static final double PAD = 12;
-    private static final double SAMPLE_W = 44;
-
-    private final Theme theme;
-    private final PsychroChartData data;
-
-    Legend(Theme theme, PsychroChartData data) {
-        this.theme = theme;
-        this.data = data;
+    private Legend() {
     }
 
-    private double rowHeight() {
-        return theme.smallText() * 1.55;
-    }
-
-    private List<String> texts() {
-        List<String> t = new ArrayList<>();
-        for (int i = 0; i < data.overlays().size(); i++) {
-            t.add(OverlayStyle.of(theme, data.overlays().get(i), i, data.overlays().size()).legendName());
-        }
-        if (!data.overlays().isEmpty()) {
-            t.add("filled entering, hollow leaving");
-        }
-        t.add("relative humidity, 10 % steps");
-        t.add(wetBulb());
-        t.add(enthalpy());
-        t.add(volume());
-        return t;
-    }
-
-    private String wetBulb() {
-        return "wet bulb, " + Quantity.TEMPERATURE.symbol(data.units());
-    }
-
-    private String enthalpy() {
-        return "enthalpy, " + Quantity.ENTHALPY.symbol(data.units());
-    }
-
-    private String volume() {
-        return "specific volume, " + Quantity.SPECIFIC_VOLUME.symbol(data.units());
-    }
-
-    /** {x, y, width, height} of the legend box in device units. */
-    double[] box(Painter p, ChartViewport vp) {
-        TextMeasurer m = p.measurer();
-        double w = 0;
-        for (String s : texts()) {
-            w = Math.max(w, m.width(s, theme.smallText(), false));
-        }
-        double width = PAD * 3 + SAMPLE_W + w;
-        double height = PAD * 2 + rowHeight() * texts().size();
-        return new double[] {vp.left() + 14, vp.top() + 14, width, height};
-    }
-
-    void paint(Painter p, double[] box) {
-        p.beginGroup("legend");
-        p.rect(box[0], box[1], box[2], box[3], theme.legendBackground(), Stroke.solid(theme.gridMajor(), 1));
-        double x = box[0] + PAD;
-        double textX = x + SAMPLE_W + PAD;
-        double y = box[1] + PAD + rowHeight() / 2;
-        TextStyle ts = TextStyle.of(theme.smallText(), theme.text()).align(TextStyle.HAlign.LEFT,
-                TextStyle.VAlign.MIDDLE);
+    static LegendFlow of(Theme theme, PsychroChartData data) {
+        LegendFlow key = new LegendFlow(theme);
         int n = data.overlays().size();
+        boolean dewPoint = false;
+        boolean adp = false;
+        boolean coil = false;
         for (int i = 0; i < n; i++) {
-            OverlayStyle s = OverlayStyle.of(theme, data.overlays().get(i), i, n);
-            p.line(x, y, x + SAMPLE_W, y, new Stroke(s.colour(), 3.2, s.dash()));
-            s.marker().paint(p, x + 8, y, 14, s.colour(), Stroke.solid(theme.plotBackground(), 1.5));
-            s.marker().paint(p, x + SAMPLE_W - 8, y, 14, theme.plotBackground(), Stroke.solid(s.colour(), 2.5));
-            p.text(textX, y, s.legendName(), ts.emphasised());
-            y += rowHeight();
+            CoilProcessOverlay o = data.overlays().get(i);
+            OverlayStyle s = OverlayStyle.of(theme, o, i, n);
+            key.add((p, x, y, w) -> {
+                p.line(x, y, x + w, y, new Stroke(s.colour(), 3.2, s.dash()));
+                s.marker().paint(p, x + 7, y, 13, s.colour(), Stroke.solid(theme.plotBackground(), 1.5));
+                s.marker().paint(p, x + w - 7, y, 13, theme.plotBackground(), Stroke.solid(s.colour(), 2.5));
+            }, s.legendName(), true);
+            dewPoint |= !Double.isNaN(o.enteringDewPointC());
+            adp |= !Double.isNaN(o.adpC());
+            coil |= !Double.isNaN(o.coilTempC());
         }
         if (n > 0) {
-            Marker.CIRCLE.paint(p, x + 10, y, 13, theme.mutedText(), null);
-            Marker.CIRCLE.paint(p, x + SAMPLE_W - 10, y, 13, theme.plotBackground(),
-                    Stroke.solid(theme.mutedText(), 2.5));
-            p.text(textX, y, "filled entering, hollow leaving", ts);
-            y += rowHeight();
+            key.add((p, x, y, w) -> {
+                Marker.CIRCLE.paint(p, x + 9, y, 13, theme.mutedText(), null);
+                Marker.CIRCLE.paint(p, x + w - 9, y, 13, theme.plotBackground(), Stroke.solid(theme.mutedText(), 2.5));
+            }, "entering, leaving");
         }
-        sample(p, x, y, Stroke.solid(theme.relativeHumidity(), 1.4), textX, "relative humidity, 10 % steps", ts);
-        y += rowHeight();
-        sample(p, x, y, new Stroke(theme.wetBulb(), 1.2, DashPattern.DASHED), textX, wetBulb(), ts);
-        y += rowHeight();
-        sample(p, x, y, Stroke.solid(theme.enthalpy(), 1.0), textX, enthalpy(), ts);
-        y += rowHeight();
-        sample(p, x, y, new Stroke(theme.volume(), 1.2, DashPattern.DASH_DOT), textX, volume(), ts);
-        p.endGroup();
-    }
-
-    private static void sample(Painter p, double x, double y, Stroke stroke, double textX, String text, TextStyle ts) {
-        p.line(x, y, x + SAMPLE_W, y, stroke);
-        p.text(textX, y, text, ts);
+        if (dewPoint) {
+            key.add(LegendFlow.marker(Marker.DIAMOND, 11, theme.plotBackground(), Stroke.solid(theme.mutedText(), 2)),
+                    "entering dew point");
+        }
+        if (adp) {
+            key.add((p, x, y, w) -> {
+                p.circle(x + w / 2, y, 6, theme.plotBackground(), Stroke.solid(theme.mutedText(), 2.2));
+                p.circle(x + w / 2, y, 1.8, theme.mutedText(), null);
+            }, "apparatus dew point");
+        }
+        if (coil) {
+            key.add(LegendFlow.marker(Marker.TRIANGLE_UP, 14, theme.coil(), Stroke.solid(theme.plotBackground(), 1.5)),
+                    "coil temperature");
+        }
+        for (ChartPoint pt : data.points()) {
+            key.add(LegendFlow.marker(Marker.TRIANGLE_UP, 15, theme.text(), Stroke.solid(theme.plotBackground(), 1.5)),
+                    pt.label());
+        }
+        key.add(LegendFlow.line(Stroke.solid(theme.relativeHumidity(), 1.4)), "RH, 10 % steps");
+        key.add(LegendFlow.line(new Stroke(theme.wetBulb(), 1.2, DashPattern.DASHED)),
+                "wet bulb, " + Quantity.TEMPERATURE.symbol(data.units()));
+        key.add(LegendFlow.line(Stroke.solid(theme.enthalpy(), 1.0)),
+                "enthalpy, " + Quantity.ENTHALPY.symbol(data.units()));
+        key.add(LegendFlow.line(new Stroke(theme.volume(), 1.2, DashPattern.DASH_DOT)),
+                "volume, " + Quantity.SPECIFIC_VOLUME.symbol(data.units()));
+        return key;
     }
 }

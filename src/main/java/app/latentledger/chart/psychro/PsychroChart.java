@@ -85,19 +85,24 @@ public final class PsychroChart {
      * vectors to the page, so type and line weights keep their proportions.
      */
     public void paintWhole(Painter p, Theme theme, double width, double height) {
-        PsychroChartLayout layout = PsychroChartLayout.forSize(width, height, theme);
+        PsychroChartLayout layout = layout(width, height, theme);
         paint(p, theme, layout, initialViewport(layout));
     }
 
+    /** The layout of this chart in a {@code width} × {@code height} area, with room for its key below the plot. */
+    public PsychroChartLayout layout(double width, double height, Theme theme) {
+        double keyHeight = Legend.of(theme, data).height(PsychroChartLayout.legendWidth(width, theme));
+        // the key never takes more than 40 % of the chart's height; a tiny chart keeps its plot instead
+        return PsychroChartLayout.forSize(width, height, theme, keyHeight <= height * 0.4 ? keyHeight : 0);
+    }
+
     /** Paints the whole chart: frame, line families, axes, overlays, legend and title. */
-    public void paint(Painter p, Theme theme, PsychroChartLayout layout, ChartViewport vp) {
+    public void paint(Painter painter, Theme theme, PsychroChartLayout layout, ChartViewport vp) {
+        Painter p = theme.painter(painter);
         p.rect(0, 0, layout.width(), layout.height(), theme.background(), null);
         p.rect(vp.left(), vp.top(), vp.width(), vp.height(), theme.plotBackground(), null);
         LabelPlacer placer = new LabelPlacer(vp.left(), vp.top(), vp.left() + vp.width(), vp.top() + vp.height());
         Labels labels = new Labels(p, placer, theme.plotBackground());
-        Legend legend = new Legend(theme, data);
-        double[] legendBox = legend.box(p, vp);
-        placer.reserve(legendBox[0], legendBox[1], legendBox[2], legendBox[3]);
         reserveMarkers(placer, vp);
 
         List<ChartCurve> curves = lines.compute(vp.range(), vp.width());
@@ -124,12 +129,16 @@ public final class PsychroChart {
         paintFrame(p, theme, vp);
         paintDryBulbAxis(p, theme, vp);
         paintHumidityRatioAxis(p, theme, vp);
-        legend.paint(p, legendBox);
+        if (layout.legendHeight() > 0) {
+            Legend.of(theme, data).paint(p, vp.left(), layout.legendTop(), PsychroChartLayout.legendWidth(layout.width(),
+                    theme));
+        }
         paintTitle(p, theme, layout, vp);
     }
 
     /** A ring around the tapped state so the tech sees which one the readout describes. */
-    public void paintSelection(Painter p, Theme theme, ChartViewport vp, ChartPoint point) {
+    public void paintSelection(Painter painter, Theme theme, ChartViewport vp, ChartPoint point) {
+        Painter p = theme.painter(painter);
         p.beginGroup("selection");
         p.circle(vp.x(point.dryBulbC()), vp.y(point.humidityRatio()), MARKER_PX * 0.95, null,
                 Stroke.solid(theme.text(), 2.4));
@@ -427,11 +436,21 @@ public final class PsychroChart {
         p.beginGroup("title");
         TextStyle title = TextStyle.of(theme.baseText() + 4, theme.text()).emphasised();
         p.text(vp.left(), vp.top() - theme.baseText() * 1.75, data.title(), title);
-        String pressure = String.format(Locale.ROOT, "Site pressure %s %s · %s · rectangular dry bulb–humidity ratio axes",
-                Format.pressure(data.units(), data.pressurePa()), Quantity.PRESSURE.symbol(data.units()),
-                data.units() == UnitSystem.IP ? "ASHRAE inch-pound equations" : "ASHRAE SI equations");
-        p.text(vp.left(), vp.top() - theme.baseText() * 0.5, pressure, TextStyle.of(theme.smallText(),
-                theme.mutedText()));
+        String site = String.format(Locale.ROOT, "Site pressure %s %s",
+                Format.pressure(data.units(), data.pressurePa()), Quantity.PRESSURE.symbol(data.units()));
+        String equations = data.units() == UnitSystem.IP ? "ASHRAE inch-pound equations" : "ASHRAE SI equations";
+        TextStyle sub = TextStyle.of(theme.smallText(), theme.mutedText());
+        // the longest subtitle that fits the chart's width: never cut mid-word
+        double room = layout.width() - vp.left() - 4;
+        String subtitle = site;
+        for (String candidate : List.of(site + " · " + equations + " · rectangular dry bulb–humidity ratio axes",
+                site + " · " + equations)) {
+            if (p.measurer().width(candidate, sub.size(), false) <= room) {
+                subtitle = candidate;
+                break;
+            }
+        }
+        p.text(vp.left(), vp.top() - theme.baseText() * 0.5, subtitle, sub);
         p.endGroup();
     }
 

@@ -64,7 +64,8 @@ public final class TimelineChart {
     }
 
     /** Paints everything; {@code selectedCycle} (−1 for none) is shaded across the panels. */
-    public void paint(Painter p, Theme theme, TimelineLayout layout, TimeViewport vp, int selectedCycle) {
+    public void paint(Painter painter, Theme theme, TimelineLayout layout, TimeViewport vp, int selectedCycle) {
+        Painter p = theme.painter(painter);
         UnitSystem u = data.units();
         p.rect(0, 0, layout.width(), layout.height(), theme.background(), null);
         paintTitle(p, theme, layout, vp);
@@ -115,7 +116,7 @@ public final class TimelineChart {
         DateTimeFormatter f = DateTimeFormatter.ofPattern("EEE d MMM HH:mm", Locale.ENGLISH);
         return f.format(data.startLocal().plusSeconds(Math.round(vp.startS()))) + " – "
                 + f.format(data.startLocal().plusSeconds(Math.round(vp.endS()))) + " · " + span
-                + (bandsShown(vp) ? " · bands: range per pixel" : "");
+                + (bandsShown(vp) ? " · shaded bands: low to high readings" : "");
     }
 
     /** True when the window holds more than two samples per pixel column, so series draw as bands. */

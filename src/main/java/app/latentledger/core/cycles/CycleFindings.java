@@ -87,8 +87,10 @@ final class CycleFindings {
                 : String.format(Locale.ROOT, "The runs are too short to dry the house: the system removes about"
                         + " %.0f %% of the moisture it removes when it runs steadily.", 100 * judged);
         out.add(new Finding(FindingCode.SHORT_CYCLING_LIMITS_LATENT, Severity.FIX, sentence,
-                String.format(Locale.ROOT, "latent fraction %s %s (measured %s, predicted %s by Henderson &"
-                                + " Rengarajan 1996 with t_wet %.0f s, gamma %.2f, tau %.0f s, %s) below %.2f"
+                String.format(Locale.ROOT, "latent fraction %s %s (measured %s, predicted %s by the Henderson &"
+                                + " Rengarajan 1996 part-load model: condensate drains after %.0f s, start-up"
+                                + " evaporation %.2f × the steady latent rate, latent time constant %.0f s, %s)"
+                                + " below %.2f"
                                 + " (common practice, no source)", which, fraction(judged), fraction(measured),
                         fraction(predicted), r.model().twetS(), r.model().gamma(), r.model().tauS(),
                         r.model().source(), min),
@@ -230,8 +232,8 @@ final class CycleFindings {
         out.add(new Finding(FindingCode.COIL_NEVER_WET, Severity.CHECK,
                 "During every run the air leaving the coil was no drier than the air entering it, so the system"
                         + " removed no moisture.",
-                String.format(Locale.ROOT, "no run kept W_return − W_supply above %.4f kg/kg for two samples;"
-                                + " %d runs, longest %.1f min; floor common practice (docs/methods.md §9.9)",
+                String.format(Locale.ROOT, "no run kept the return-minus-supply humidity ratio above %.4f kg/kg for two samples;"
+                                + " %d runs, longest %.1f min; floor common practice (Methods guide §9.9)",
                         floor, r.cycles().size(), longest / 60.0),
                 List.of(Evidence.of("longestOnTime", "longest compressor on-time", Quantity.DURATION_MINUTES, longest),
                         Evidence.of("moistureRemovalFloor", "humidity-ratio drop counted as removal",

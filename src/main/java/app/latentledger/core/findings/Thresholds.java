@@ -93,8 +93,8 @@ public final class Thresholds {
     /** More starts per hour than this is short cycling. */
     public static final Threshold CYCLES_PER_HOUR_MAX = new Threshold("cyclesPerHourMax",
             "most compressor starts per hour before it counts as short cycling", Quantity.DIMENSIONLESS, 3.0,
-            COMMON_PRACTICE + " (3 cycles/h is also the EnergyPlus-suggested maximum cycling rate N_max,"
-                    + " Coil:Cooling:DX:SingleSpeed)");
+            COMMON_PRACTICE + " (3 cycles/h is also the largest cycling rate EnergyPlus suggests for a"
+                    + " single-speed cooling coil)");
     /** A median on-time below this is short cycling. */
     public static final Threshold MEDIAN_ON_TIME_MIN = new Threshold("medianOnTimeMin",
             "shortest median compressor on-time before it counts as short cycling", Quantity.DURATION_MINUTES,
@@ -111,7 +111,7 @@ public final class Thresholds {
     public static final Threshold MOISTURE_REMOVAL_FLOOR = new Threshold("moistureRemovalFloor",
             "smallest return-minus-supply humidity ratio counted as moisture removal",
             Quantity.HUMIDITY_RATIO_FINE, 0.0004,
-            COMMON_PRACTICE + " (docs/methods.md §9.9: noise floor 0.0003–0.0005 kg/kg)");
+            COMMON_PRACTICE + " (Methods guide §9.9: noise floor 0.0003–0.0005 kg/kg)");
     /** Return and supply RH disagreeing by more than this over a dry coil with the blower on is a sensor offset. */
     public static final Threshold SENSOR_OFFSET_RH = new Threshold("sensorOffsetRh",
             "largest return/supply RH difference accepted over a dry coil with the blower on",
@@ -119,16 +119,16 @@ public final class Thresholds {
     /** Blower-on, compressor-off time after which the coil is taken as dry for the sensor comparison. */
     public static final Threshold SENSOR_CHECK_AFTER = new Threshold("sensorCheckAfter",
             "blower-on off time before return and supply humidity are compared", Quantity.DURATION_MINUTES,
-            30 * 60.0, "docs/methods.md §9.9 (≥ 30 min, derived from the 2·t_wet/γ dry-out of"
-                    + " Henderson & Rengarajan 1996 with the EnergyPlus-suggested values)");
+            30 * 60.0, "Methods guide §9.9 (≥ 30 min, derived from the time a wet coil takes to dry"
+                    + " out in the Henderson & Rengarajan 1996 model with the EnergyPlus-suggested values)");
     /** On-cycles at least this long give the steady-state latent rate. */
     public static final Threshold LONG_CYCLE_ON_TIME = new Threshold("longCycleOnTime",
             "shortest on-cycle used for the steady-state moisture removal rate", Quantity.DURATION_MINUTES,
-            15 * 60.0, "docs/methods.md §9.9 (steady ΔW from on-cycles ≥ 15 min; derived, with common practice)");
+            15 * 60.0, "Methods guide §9.9 (steady ΔW from on-cycles ≥ 15 min; derived, with common practice)");
     /** Return-minus-supply split above which the compressor is taken as running (no status column). */
     public static final Threshold SPLIT_ON = new Threshold("splitOn",
             "return-minus-supply dry-bulb split that confirms the compressor is running",
-            Quantity.TEMPERATURE_DIFFERENCE, 3.0, COMMON_PRACTICE + " (docs/methods.md §9.9)");
+            Quantity.TEMPERATURE_DIFFERENCE, 3.0, COMMON_PRACTICE + " (Methods guide §9.9)");
     /** Split below which the compressor is taken as stopped. */
     public static final Threshold SPLIT_OFF = new Threshold("splitOff",
             "return-minus-supply dry-bulb split below which the compressor is taken as stopped",
@@ -136,7 +136,7 @@ public final class Thresholds {
     /** Supply rise above its on-cycle low (or fall below its off-cycle high) that marks a stop (start). */
     public static final Threshold SUPPLY_EDGE = new Threshold("supplyEdge",
             "supply dry-bulb rise from its on-cycle low (or fall from its off-cycle high) that marks a stop (start)",
-            Quantity.TEMPERATURE_DIFFERENCE, 1.5, COMMON_PRACTICE + " (docs/methods.md §9.9)");
+            Quantity.TEMPERATURE_DIFFERENCE, 1.5, COMMON_PRACTICE + " (Methods guide §9.9)");
     /** How close to its low (high) the supply must be to date the stop (start) back to it. */
     public static final Threshold EDGE_TOLERANCE = new Threshold("edgeTolerance",
             "supply dry-bulb band used to date a start or stop back to where the change began",

@@ -2,11 +2,14 @@ package app.latentledger.core.settings;
 
 import java.util.Locale;
 
-/** Light or dark screens and charts; the UI maps it onto its own colour themes. */
+/**
+ * Light, dark or outdoor (high contrast for direct sunlight) screens and charts; the UI maps it onto
+ * its own colour themes.
+ */
 public enum DisplayTheme {
-    LIGHT, DARK;
+    LIGHT, DARK, OUTDOOR;
 
-    /** "light" | "dark", as stored and typed. */
+    /** "light" | "dark" | "outdoor", as stored and typed. */
     public String key() {
         return name().toLowerCase(Locale.ROOT);
     }

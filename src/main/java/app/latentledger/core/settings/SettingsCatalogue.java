@@ -40,13 +40,14 @@ public final class SettingsCatalogue {
     public static final String THEME = "theme";
     public static final String PAPER = "paper";
 
-    private static final String TOLERANCE_SOURCE = "typical field kit, docs/methods.md §9.1 (common practice, no source)";
+    private static final String TOLERANCE_SOURCE = "typical field kit, Methods guide §9.1 (common practice, no source)";
 
     private static final List<ChoiceSetting> CHOICES = List.of(
             new ChoiceSetting(UNITS, "units", SettingGroup.UNITS_AND_SITE, List.of("ip", "si"), "ip",
                     "inch-pound, what most US field instruments read (common practice, no source)"),
-            new ChoiceSetting(THEME, "theme", SettingGroup.DISPLAY_AND_PAPER, List.of("light", "dark"), "light",
-                    "light: reads best in daylight (common practice, no source)"),
+            new ChoiceSetting(THEME, "theme", SettingGroup.DISPLAY_AND_PAPER, List.of("light", "dark", "outdoor"),
+                    "light", "light: reads best in daylight; outdoor: black on white with heavier lines for direct sun;"
+                    + " dark: attics and night (common practice, no source)"),
             new ChoiceSetting(PAPER, "paper size", SettingGroup.DISPLAY_AND_PAPER, List.of("letter", "a4"), "letter",
                     "US Letter (ANSI/ASME Y14.1); A4 is ISO 216"));
 

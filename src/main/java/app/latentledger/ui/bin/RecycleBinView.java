@@ -44,38 +44,11 @@ public final class RecycleBinView extends VBox {
         });
         VBox.setVgrow(list, Priority.ALWAYS);
 
-        Label question = Ui.wrapped("", "message");
-        Button yes = Ui.button("bin-confirm", "Yes, delete", Icons.FIX, this::confirm);
-        Button no = Ui.button("bin-cancel", "No, keep it", null, this::cancel);
-        HBox ask = new HBox(12, question, Ui.grow(), yes, no);
-        ask.setId("bin-question");
-        ask.visibleProperty().bind(viewModel.pendingProperty().isNotNull().or(viewModel.emptyAskedProperty().isEqualTo(true)));
-        ask.managedProperty().bind(ask.visibleProperty());
-        question.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(() ->
-                viewModel.pendingProperty().get() != null ? viewModel.pendingProperty().get().question()
-                        : "Empty the recycle bin? Everything in it is deleted for good.",
-                viewModel.pendingProperty(), viewModel.emptyAskedProperty()));
-
-        Label message = Ui.wrapped("", "message");
-        message.textProperty().bind(viewModel.messageProperty());
         getChildren().addAll(Ui.label("Recycle bin", "heading"),
                 Ui.wrapped("Deleted sites, systems, visits, reading sets and logs stay here for 30 days unless the"
                         + " bin is emptied.", "figure-label"),
-                ask, list, new HBox(12, Ui.button("bin-empty", "Empty recycle bin", Icons.FIX, viewModel::askEmpty),
-                        message));
-    }
-
-    private void confirm() {
-        if (viewModel.pendingProperty().get() != null) {
-            viewModel.confirmDelete();
-        } else {
-            viewModel.confirmEmpty();
-        }
-    }
-
-    private void cancel() {
-        viewModel.cancelDelete();
-        viewModel.cancelEmpty();
+                new DeleteQuestion(viewModel), list,
+                Ui.button("bin-empty", "Empty recycle bin", Icons.FIX, viewModel::askEmpty));
     }
 
     public RecycleBinViewModel viewModel() {

@@ -45,6 +45,8 @@ abstract class ChartCanvas extends Region {
             pressX = lastX = e.getX();
             pressY = lastY = e.getY();
             dragged = false;
+            // the drag is the chart's: the page around it must not scroll with it
+            e.consume();
         });
         addEventHandler(MouseEvent.MOUSE_DRAGGED, e -> {
             if (Math.hypot(e.getX() - pressX, e.getY() - pressY) > TAP_SLOP_PX) {
@@ -55,6 +57,7 @@ abstract class ChartCanvas extends Region {
             }
             lastX = e.getX();
             lastY = e.getY();
+            e.consume();
         });
         addEventHandler(MouseEvent.MOUSE_CLICKED, e -> {
             if (!dragged && e.isStillSincePress()) {

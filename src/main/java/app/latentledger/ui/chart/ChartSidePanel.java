@@ -5,52 +5,56 @@ import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.geometry.Insets;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
-import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
 /**
- * The strip beside a chart: the tapped item's readout and large buttons (at least 48 px, the touch
- * minimum) for zooming without a pinch.
+ * The strip beside a chart: large buttons (at least 48 px, the touch minimum) for zooming or
+ * stepping without a pinch, then the tapped item's readout. The buttons come first and the readout
+ * box has a fixed height, so a tap that fills the readout never moves a button under the finger.
  */
 final class ChartSidePanel extends VBox {
     /** Smallest touch target, px (common practice for touch interfaces, no single source). */
     static final double TOUCH_PX = 48;
-    static final double WIDTH_PX = 240;
+    static final double WIDTH_PX = 220;
+    /** Room for the longest readout (a state's seven lines) at the base text size. */
+    private static final double READOUT_PX = 230;
 
     private final Label readout = new Label();
     private final Label heading = new Label();
+    private int buttons;
 
     ChartSidePanel(String headingText, ReadOnlyStringProperty readoutText) {
-        super(12);
-        setPadding(new Insets(20, 18, 20, 18));
+        super(10);
+        setPadding(new Insets(16, 14, 16, 14));
         setPrefWidth(WIDTH_PX);
         setMinWidth(WIDTH_PX);
+        setMaxWidth(WIDTH_PX);
         heading.setText(headingText);
+        heading.setWrapText(true);
+        heading.setMinHeight(Region.USE_PREF_SIZE);
         readout.setId("readout");
         readout.setWrapText(true);
         readout.textProperty().bind(readoutText);
-        readout.setMinHeight(110);
+        readout.setMinHeight(READOUT_PX);
+        readout.setPrefHeight(READOUT_PX);
+        readout.setMaxHeight(READOUT_PX);
         readout.setMaxWidth(Double.MAX_VALUE);
         readout.setAlignment(javafx.geometry.Pos.TOP_LEFT);
         getChildren().addAll(heading, readout);
     }
 
+    /** A button above the readout, in the order added. */
     Button addButton(String id, String text, Runnable action) {
         Button b = new Button(text);
         b.setId(id);
         b.setMinHeight(TOUCH_PX);
         b.setMinWidth(TOUCH_PX);
         b.setMaxWidth(Double.MAX_VALUE);
+        b.setWrapText(true);
         b.setOnAction(e -> action.run());
-        getChildren().add(b);
+        getChildren().add(buttons++, b);
         return b;
-    }
-
-    void addSpacer() {
-        Region r = new Region();
-        VBox.setVgrow(r, Priority.ALWAYS);
-        getChildren().add(r);
     }
 
     void applyTheme(Theme theme) {
@@ -59,8 +63,8 @@ final class ChartSidePanel extends VBox {
                 + "transparent " + theme.gridMajor().hex() + "; -fx-border-width: 0 0 0 1; -fx-font-size: "
                 + theme.baseText() + "px;");
         heading.setStyle("-fx-text-fill: " + text + "; -fx-font-weight: bold; -fx-font-size: "
-                + (theme.baseText() + 2) + "px;");
-        readout.setStyle("-fx-text-fill: " + text + "; -fx-line-spacing: 4px; -fx-padding: 12;"
+                + (theme.baseText() + 2) + "px; -fx-padding: 6 0 0 0;");
+        readout.setStyle("-fx-text-fill: " + text + "; -fx-line-spacing: 2px; -fx-padding: 10;"
                 + "-fx-background-color: " + theme.plotBackground().hex() + "; -fx-background-radius: 6;"
                 + "-fx-border-color: " + theme.gridMajor().hex() + "; -fx-border-radius: 6;");
         for (var n : getChildren()) {

@@ -48,8 +48,17 @@ public final class CoilCharts {
                 "No readings yet", null, null);
     }
 
-    /** The chart palette of the app's theme. */
+    /** The chart palette of the light or dark theme. */
     public static Theme theme(boolean dark) {
         return dark ? Theme.DARK : Theme.LIGHT;
+    }
+
+    /** The chart palette of the app's saved theme, outdoor included. */
+    public static Theme theme(app.latentledger.core.settings.DisplayTheme theme) {
+        return switch (theme) {
+            case DARK -> Theme.DARK;
+            case OUTDOOR -> Theme.OUTDOOR;
+            case LIGHT -> Theme.LIGHT;
+        };
     }
 }

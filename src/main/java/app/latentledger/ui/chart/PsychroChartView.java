@@ -3,47 +3,34 @@ package app.latentledger.ui.chart;
 import app.latentledger.chart.draw.Painter;
 import app.latentledger.chart.psychro.ChartPoint;
 import app.latentledger.chart.psychro.ChartViewport;
-import javafx.scene.layout.BorderPane;
 
 /**
- * The psychrometric chart on screen: the canvas, the tapped state's readout and zoom buttons.
+ * The psychrometric chart on screen: the canvas, zoom buttons and the tapped state's readout.
  * Binds and forwards gestures only; the view model holds the state. The view keeps a strong
  * reference to its view model because bindings alone would let it be collected.
  */
-public final class PsychroChartView extends BorderPane {
+public final class PsychroChartView extends ChartView {
     private final PsychroChartViewModel viewModel;
-    private final Surface surface;
-    private final ChartSidePanel side;
 
     public PsychroChartView(PsychroChartViewModel viewModel) {
+        this(viewModel, new Surface(viewModel));
+    }
+
+    private PsychroChartView(PsychroChartViewModel viewModel, Surface surface) {
+        super(surface, "Tapped state", viewModel.readoutProperty(), viewModel.themeProperty());
         this.viewModel = viewModel;
-        this.surface = new Surface();
         surface.setId("psychro-canvas");
-        side = new ChartSidePanel("Tapped state", viewModel.readoutProperty());
-        side.addButton("zoom-in", "Zoom in", () -> zoomAboutCentre(1.4));
-        side.addButton("zoom-out", "Zoom out", () -> zoomAboutCentre(1 / 1.4));
-        side.addButton("whole-chart", "Whole chart", viewModel::reset);
-        side.addSpacer();
-        setCenter(surface);
-        setRight(side);
-        viewModel.viewportProperty().addListener((o, a, b) -> surface.repaint());
-        viewModel.selectedProperty().addListener((o, a, b) -> surface.repaint());
-        viewModel.chartProperty().addListener((o, a, b) -> surface.repaint());
-        viewModel.themeProperty().addListener((o, a, b) -> applyTheme());
+        addButton("zoom-in", "Zoom in", () -> zoomAboutCentre(1.4));
+        addButton("zoom-out", "Zoom out", () -> zoomAboutCentre(1 / 1.4));
+        addButton("whole-chart", "Whole chart", viewModel::reset);
+        viewModel.viewportProperty().addListener((o, a, b) -> repaint());
+        viewModel.selectedProperty().addListener((o, a, b) -> repaint());
+        viewModel.chartProperty().addListener((o, a, b) -> repaint());
         applyTheme();
     }
 
     public PsychroChartViewModel viewModel() {
         return viewModel;
-    }
-
-    private void applyTheme() {
-        side.applyTheme(viewModel.themeProperty().get());
-        setStyle("-fx-background-color: " + viewModel.themeProperty().get().background().hex() + ";");
-        if (surface.getWidth() > 0) {
-            viewModel.resize(surface.canvas().getWidth(), surface.canvas().getHeight());
-        }
-        surface.repaint();
     }
 
     private void zoomAboutCentre(double factor) {
@@ -56,10 +43,16 @@ public final class PsychroChartView extends BorderPane {
     /** Screen position of a plotted state, in this view's coordinates (for tests and tooltips). */
     public double[] screenPosition(ChartPoint p) {
         ChartViewport vp = viewModel.viewportProperty().get();
-        return new double[] {surface.getLayoutX() + vp.x(p.dryBulbC()), surface.getLayoutY() + vp.y(p.humidityRatio())};
+        return new double[] {surface().getLayoutX() + vp.x(p.dryBulbC()), surface().getLayoutY() + vp.y(p.humidityRatio())};
     }
 
-    private final class Surface extends ChartCanvas {
+    private static final class Surface extends ChartCanvas {
+        private final PsychroChartViewModel viewModel;
+
+        Surface(PsychroChartViewModel viewModel) {
+            this.viewModel = viewModel;
+        }
+
         @Override
         void resized(double width, double height) {
             viewModel.resize(width, height);

@@ -56,10 +56,23 @@ public final class PsychroChartViewModel {
         readout.set(HINT);
         chart.set(next);
         if (layout != null) {
+            // the key may have more or fewer rows: the plot area follows it
+            layout = next.layout(layout.width(), layout.height(), theme.get());
             ChartViewport vp = viewport.get();
-            viewport.set(moved && sameAxes && vp != null ? vp : next.initialViewport(layout));
+            viewport.set(moved && sameAxes && vp != null
+                    ? vp.withPlot(layout.plotLeft(), layout.plotTop(), layout.plotWidth(), layout.plotHeight())
+                    : next.initialViewport(layout));
             moved = moved && sameAxes;
         }
+    }
+
+    /**
+     * Draws the states of another reading set: unlike {@link #show}, a zoom or pan made on the
+     * previous set is dropped, so the new set's states all start in view.
+     */
+    public void showNewSet(PsychroChartData data) {
+        moved = false;
+        show(data);
     }
 
     public ObjectProperty<Theme> themeProperty() {
@@ -84,7 +97,7 @@ public final class PsychroChartViewModel {
 
     /** A new size: keep the window, move it into the new plot area. */
     public void resize(double width, double height) {
-        layout = PsychroChartLayout.forSize(width, height, theme.get());
+        layout = chart.get().layout(width, height, theme.get());
         ChartViewport vp = viewport.get();
         viewport.set(vp == null ? chart.get().initialViewport(layout)
                 : vp.withPlot(layout.plotLeft(), layout.plotTop(), layout.plotWidth(), layout.plotHeight()));

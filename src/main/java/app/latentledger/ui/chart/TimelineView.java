@@ -1,30 +1,27 @@
 package app.latentledger.ui.chart;
 
 import app.latentledger.chart.draw.Painter;
-import javafx.scene.layout.BorderPane;
 
 /**
- * The cycle timeline on screen: canvas, the tapped cycle's readout and buttons to step cycle by
- * cycle or return to the whole log. Pinch or wheel zooms time, a drag pans it. Holds its view model.
+ * The cycle timeline on screen: canvas, buttons to step cycle by cycle or return to the whole log,
+ * and the tapped cycle's readout. Pinch or wheel zooms time, a drag pans it. Holds its view model.
  */
-public final class TimelineView extends BorderPane {
+public final class TimelineView extends ChartView {
     private final TimelineViewModel viewModel;
-    private final Surface surface = new Surface();
-    private final ChartSidePanel side;
 
     public TimelineView(TimelineViewModel viewModel) {
+        this(viewModel, new Surface(viewModel));
+    }
+
+    private TimelineView(TimelineViewModel viewModel, Surface surface) {
+        super(surface, "Tapped cycle", viewModel.readoutProperty(), viewModel.themeProperty());
         this.viewModel = viewModel;
         surface.setId("timeline-canvas");
-        side = new ChartSidePanel("Tapped cycle", viewModel.readoutProperty());
-        side.addButton("previous-cycle", "◀  Previous cycle", () -> viewModel.step(-1));
-        side.addButton("next-cycle", "Next cycle  ▶", () -> viewModel.step(1));
-        side.addButton("whole-log", "Whole log", viewModel::wholeLog);
-        side.addSpacer();
-        setCenter(surface);
-        setRight(side);
-        viewModel.viewportProperty().addListener((o, a, b) -> surface.repaint());
-        viewModel.selectedProperty().addListener((o, a, b) -> surface.repaint());
-        viewModel.themeProperty().addListener((o, a, b) -> applyTheme());
+        addButton("previous-cycle", "◀  Previous cycle", () -> viewModel.step(-1));
+        addButton("next-cycle", "Next cycle  ▶", () -> viewModel.step(1));
+        addButton("whole-log", "Whole log", viewModel::wholeLog);
+        viewModel.viewportProperty().addListener((o, a, b) -> repaint());
+        viewModel.selectedProperty().addListener((o, a, b) -> repaint());
         applyTheme();
     }
 
@@ -32,27 +29,24 @@ public final class TimelineView extends BorderPane {
         return viewModel;
     }
 
-    private void applyTheme() {
-        side.applyTheme(viewModel.themeProperty().get());
-        setStyle("-fx-background-color: " + viewModel.themeProperty().get().background().hex() + ";");
-        if (surface.getWidth() > 0) {
-            viewModel.resize(surface.canvas().getWidth(), surface.canvas().getHeight());
-        }
-        surface.repaint();
-    }
-
     /** Screen x of a time on the log, in this view's coordinates. */
     public double screenX(double timeS) {
-        return surface.getLayoutX() + viewModel.viewportProperty().get().x(timeS);
+        return surface().getLayoutX() + viewModel.viewportProperty().get().x(timeS);
     }
 
     /** Screen y of the middle of the moisture-bar panel. */
     public double moisturePanelY() {
         var m = viewModel.layout().moisture();
-        return surface.getLayoutY() + m.top() + m.height() / 2;
+        return surface().getLayoutY() + m.top() + m.height() / 2;
     }
 
-    private final class Surface extends ChartCanvas {
+    private static final class Surface extends ChartCanvas {
+        private final TimelineViewModel viewModel;
+
+        Surface(TimelineViewModel viewModel) {
+            this.viewModel = viewModel;
+        }
+
         @Override
         void resized(double width, double height) {
             viewModel.resize(width, height);

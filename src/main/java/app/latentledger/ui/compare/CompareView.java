@@ -27,7 +27,8 @@ public final class CompareView extends VBox implements Reflowing {
         setId("screen-compare");
         ComboBox<ReadingSet> pick = new ComboBox<>(viewModel.earlier());
         pick.setId("compare-pick");
-        pick.setPrefWidth(420);
+        // as wide as its longest entry needs at the text size in use
+        pick.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         pick.setCellFactory(v -> cell());
         pick.setButtonCell(cell());
         pick.valueProperty().bindBidirectional(viewModel.chosenProperty());
@@ -46,8 +47,12 @@ public final class CompareView extends VBox implements Reflowing {
         table.getColumnConstraints().add(first);
         Runnable fill = () -> {
             table.getChildren().clear();
-            table.addRow(0, Ui.label("Figure", "table-head"), Ui.label("Before", "table-head"),
-                    Ui.label("After", "table-head"), Ui.label("Change", "table-head"), Ui.label("", "table-head"));
+            Label[] heads = {Ui.label("Figure", "table-head"), Ui.label("Before", "table-head"),
+                    Ui.label("After", "table-head"), Ui.label("Change", "table-head"), Ui.label("", "table-head")};
+            for (Label h : heads) {
+                h.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+            }
+            table.addRow(0, heads);
             int r = 1;
             for (CompareRow row : viewModel.rows()) {
                 Label after = Ui.label(row.after(), "figure-value");
@@ -56,27 +61,41 @@ public final class CompareView extends VBox implements Reflowing {
                 before.setId("before-" + row.key());
                 Label change = Ui.label(row.change(), "figure-value");
                 change.setId("change-" + row.key());
-                table.addRow(r++, Ui.label(row.label(), "figure-label"), before, after, change,
-                        Ui.label(row.unit(), "muted"));
+                Label unit = Ui.label(row.unit(), "muted");
+                // numbers keep every digit at any text size; the figure's name wraps instead
+                for (Label l : new Label[] {before, after, change, unit}) {
+                    l.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+                }
+                table.addRow(r++, Ui.wrapped(row.label(), "figure-label"), before, after, change, unit);
             }
         };
         viewModel.rows().addListener((ListChangeListener<CompareRow>) c -> fill.run());
         fill.run();
         var report = Ui.button("before-after-report", "Before/after report", app.latentledger.ui.look.Icons.EXPORT,
                 viewModel::beforeAfterReport);
-        report.disableProperty().bind(viewModel.chosenProperty().isNull().or(viewModel.reports().busyProperty()));
+        // not disabled while writing (a second tap is ignored): a disabled button drops its focus, and the
+        // focus moving on to the chart's buttons scrolled the page away from the report's own message
+        report.disableProperty().bind(viewModel.chosenProperty().isNull());
         Label reportStatus = Ui.wrapped("", "message");
         reportStatus.setId("compare-report-status");
         // takes room only when it has something to say
         reportStatus.managedProperty().bind(reportStatus.textProperty().isNotEmpty());
         reportStatus.visibleProperty().bind(reportStatus.managedProperty());
         reportStatus.textProperty().bind(viewModel.reports().statusProperty());
+        var share = app.latentledger.ui.share.ShareBar.forFile(viewModel.reports().lastFileProperty());
+        share.visibleProperty().bind(viewModel.reports().lastFileProperty().isNotNull());
+        share.managedProperty().bind(share.visibleProperty());
+        Label margins = Ui.wrapped("", "muted");
+        margins.setId("compare-margins");
+        margins.textProperty().bind(viewModel.marginNoteProperty());
+        margins.managedProperty().bind(margins.textProperty().isNotEmpty());
+        margins.visibleProperty().bind(margins.managedProperty());
         chartSlot.setId(CHART_SLOT_ID);
         chartSlot.getStyleClass().add("slot-placeholder");
         chartSlot.getChildren().add(Ui.wrapped("Drawing the before/after chart…", "muted"));
         VBox panel = Ui.panel(10, Ui.label("Compare with an earlier reading set", "heading"),
-                Ui.label("Earlier reading set of this system", "figure-label"), pick, verdicts, status,
-                report, reportStatus, table, chartSlot);
+                Ui.label("Earlier reading set of this system", "figure-label"), pick, verdicts, status, margins,
+                report, reportStatus, share, table, chartSlot);
         getChildren().add(Ui.scroll(panel));
     }
 

@@ -40,6 +40,7 @@ public final class CompareViewModel {
     private final ObservableList<CompareRow> rows = FXCollections.observableArrayList();
     private final ReadOnlyStringWrapper verdicts = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
+    private final ReadOnlyStringWrapper marginNote = new ReadOnlyStringWrapper("");
     private final ReadOnlyObjectWrapper<PsychroChartData> chartData = new ReadOnlyObjectWrapper<>();
     private final ReportViewModel reports;
     /** Built on first use, after the first frame. */
@@ -67,7 +68,7 @@ public final class CompareViewModel {
         if (chart == null) {
             chart = new PsychroChartViewModel(CoilCharts.orEmpty(chartData.get(), session.units()));
             chart.themeProperty().bind(javafx.beans.binding.Bindings.createObjectBinding(
-                    () -> CoilCharts.theme(session.darkProperty().get()), session.darkProperty()));
+                    () -> CoilCharts.theme(session.themeProperty().get()), session.themeProperty()));
             chartData.addListener((o, a, b) -> chart.show(b));
         }
         return chart;
@@ -143,6 +144,7 @@ public final class CompareViewModel {
 
     private void recompute() {
         rows.clear();
+        marginNote.set("");
         verdicts.set("");
         ReadingSet before = chosen.get();
         CurrentCheck now = session.currentCheck();
@@ -169,9 +171,18 @@ public final class CompareViewModel {
             int decimals = DisplayNumber.decimals(f.quantity, u);
             String change = Double.isFinite(x) && Double.isFinite(y)
                     ? DisplayNumber.signed(f.quantity.toDisplay(u, y) - f.quantity.toDisplay(u, x), decimals) : Shown.NONE;
+            if (f == CompareFigure.MARGIN) {
+                // which side of the dew point, in the words Results and the report use; the change too:
+                // "2.0 colder" is a coil moved 2.0 further below the dew point
+                rows.add(new CompareRow(f.key(), f.label, marginCell(u, x), marginCell(u, y),
+                        Double.isFinite(x) && Double.isFinite(y) ? marginCell(u, y - x) : Shown.NONE, f.quantity.symbol(u)));
+                continue;
+            }
             rows.add(new CompareRow(f.key(), f.label, shown(f, u, x), shown(f, u, y), change, f.quantity.symbol(u)));
         }
         verdicts.set(VisitResults.headline(a.verdict()) + "  →  " + VisitResults.headline(b.verdict()));
+        marginNote.set("Before: " + VisitResults.marginSentence(a, u) + ". After: " + VisitResults.marginSentence(b, u)
+                + ".");
         status.set("Before: " + describe(before) + ".  After: the reading set on this visit.");
     }
 
@@ -179,5 +190,19 @@ public final class CompareViewModel {
     private static String shown(CompareFigure f, UnitSystem u, double si) {
         return f == CompareFigure.SHR && !Double.isFinite(si) ? app.latentledger.core.units.Ratio.NOT_MEASURABLE
                 : Shown.of(f.quantity, u, si);
+    }
+
+    /** "3.2 warmer" or "13.6 colder": the coil against the dew point, no bare minus sign. */
+    private static String marginCell(UnitSystem u, double marginK) {
+        if (!Double.isFinite(marginK)) {
+            return Shown.NONE;
+        }
+        return (app.latentledger.core.text.MarginWords.number(u, marginK, Double.NaN) + " "
+                + app.latentledger.core.text.MarginWords.direction(u, marginK)).trim();
+    }
+
+    /** Both sets' dew-point margins as sentences ("Coil is … warmer than the return dew point — …"). */
+    public javafx.beans.property.ReadOnlyStringProperty marginNoteProperty() {
+        return marginNote.getReadOnlyProperty();
     }
 }

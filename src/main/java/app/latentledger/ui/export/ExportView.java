@@ -48,8 +48,8 @@ public final class ExportView extends VBox implements Reflowing {
         bundleButtons.setPrefWrapLength(700);
         VBox bundle = Ui.panel(12, Ui.label("Export a bundle", "heading"),
                 Ui.wrapped("A bundle is one file with the visit's site, system, readings, logs and results as"
-                        + " shown, checked by its own manifest. Another tablet or the office imports it with"
-                        + " the visits command.", "muted"),
+                        + " shown, checked by its own manifest. Another tablet imports it on its Record screen"
+                        + " (Import a bundle); the office can import it there too.", "muted"),
                 bundleButtons, status, Ui.wrapped("Bundles are written to " + viewModel.folder(), "muted"));
         VBox report = Ui.panel(12, Ui.label("Report and data", "heading"),
                 Ui.wrapped("The report is a PDF for the customer and the file: readings, results with their"
@@ -75,13 +75,6 @@ public final class ExportView extends VBox implements Reflowing {
 
     /** Open, print or share the file just written, as far as this device offers. */
     private app.latentledger.ui.share.ShareBar shareBar(ReportViewModel reports) {
-        app.latentledger.ui.share.ShareViewModel share = new app.latentledger.ui.share.ShareViewModel(
-                app.latentledger.handoff.HandOffs.forThisDevice(), app.latentledger.ui.session.Background.worker(),
-                app.latentledger.ui.session.Background.fx());
-        share.fileProperty().bind(reports.lastFileProperty());
-        share.titleProperty().bind(javafx.beans.binding.Bindings.createStringBinding(() ->
-                reports.lastFileProperty().get() == null ? "Report" : reports.lastFileProperty().get().getFileName()
-                        .toString(), reports.lastFileProperty()));
-        return new app.latentledger.ui.share.ShareBar(share);
+        return app.latentledger.ui.share.ShareBar.forFile(reports.lastFileProperty());
     }
 }

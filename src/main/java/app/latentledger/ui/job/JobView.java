@@ -40,17 +40,32 @@ public final class JobView extends VBox implements Reflowing {
         TextField siteElevation = field("new-site-elevation", "Elevation", viewModel.newSiteElevationFtProperty());
         javafx.scene.control.Label elevationCaption = Ui.label("", "figure-label");
         elevationCaption.textProperty().bind(viewModel.elevationCaptionProperty());
-        VBox siteCol = Ui.panel(8, Ui.label("1  Site", "heading"), sites, siteName, siteAddress,
-                elevationCaption, siteElevation,
-                Ui.button("add-site", "Add site", Icons.NEW, viewModel::addSite));
+        javafx.scene.control.Button addSite = Ui.button("add-site", "Add site", Icons.NEW, viewModel::addSite);
+        addSite.textProperty().bind(javafx.beans.binding.Bindings.when(viewModel.editingSiteProperty().isNull())
+                .then("Add site").otherwise("Save site"));
+        javafx.scene.control.Button cancelEdit = Ui.button("cancel-site-edit", "Cancel", null, viewModel::cancelEdit);
+        cancelEdit.visibleProperty().bind(viewModel.editingSiteProperty().isNotNull());
+        cancelEdit.managedProperty().bind(cancelEdit.visibleProperty());
+        Label siteStatus = Ui.wrapped("", "message");
+        siteStatus.setId("site-status");
+        siteStatus.textProperty().bind(viewModel.siteStatusProperty());
+        VBox siteCol = Ui.panel(8, Ui.wrapped("1  Site", "heading"), sites,
+                new FlowPane(8, 8, Ui.button("edit-site", "Correct site", null, viewModel::editSite),
+                        Ui.button("delete-site", "Delete site", Icons.FIX, viewModel::askDeleteSite)),
+                siteName, siteAddress, elevationCaption, siteElevation, new FlowPane(8, 8, addSite, cancelEdit),
+                siteStatus);
 
         ListView<HvacSystem> systems = list("system-list", viewModel.systems(), viewModel::describe);
         bindSelection(systems, viewModel.systemProperty());
         TextField sysLabel = field("new-system-label", "New system name", viewModel.newSystemLabelProperty());
         TextField sysTons = field("new-system-tons", "Nominal tons", viewModel.newSystemTonsProperty());
-        VBox systemCol = Ui.panel(8, Ui.label("2  System", "heading"), systems, sysLabel,
-                Ui.label("Nominal size, tons", "figure-label"), sysTons,
-                Ui.button("add-system", "Add system", Icons.NEW, viewModel::addSystem));
+        Label systemStatus = Ui.wrapped("", "message");
+        systemStatus.setId("system-status");
+        systemStatus.textProperty().bind(viewModel.systemStatusProperty());
+        VBox systemCol = Ui.panel(8, Ui.wrapped("2  System", "heading"), systems,
+                Ui.button("delete-system", "Delete system", Icons.FIX, viewModel::askDeleteSystem), sysLabel,
+                Ui.wrapped("Nominal size, tons", "figure-label"), sysTons,
+                Ui.button("add-system", "Add system", Icons.NEW, viewModel::addSystem), systemStatus);
 
         FlowPane purposes = new FlowPane(8, 8);
         ToggleGroup group = new ToggleGroup();
@@ -66,8 +81,35 @@ public final class JobView extends VBox implements Reflowing {
             purposes.getChildren().add(b);
         }
         TextField tech = field("technician", "Technician", viewModel.technicianProperty());
-        ListView<Visit> visits = list("visit-list", viewModel.visits(), v -> v.startedAt().format(WHEN) + " · "
-                + JobViewModel.purposeWord(v.purpose()) + "\n" + v.technician());
+        ListView<Visit> visits = new ListView<>(viewModel.visits());
+        visits.setId("visit-list");
+        visits.setPrefHeight(240);
+        visits.setMinHeight(140);
+        VBox.setVgrow(visits, Priority.ALWAYS);
+        visits.setCellFactory(v -> new ListCell<>() {
+            @Override
+            protected void updateItem(Visit item, boolean empty) {
+                super.updateItem(item, empty);
+                setText(null);
+                if (empty || item == null) {
+                    setGraphic(null);
+                    return;
+                }
+                Label text = Ui.wrapped(item.startedAt().format(WHEN) + " · " + JobViewModel.purposeWord(item.purpose())
+                        + "\n" + item.technician());
+                javafx.scene.layout.HBox.setHgrow(text, Priority.ALWAYS);
+                text.setMaxWidth(Double.MAX_VALUE);
+                // the row fits the list's width: the words wrap, the Delete button stays in view
+                text.setMinWidth(0);
+                text.setPrefWidth(0);
+                setPrefWidth(0);
+                javafx.scene.control.Button delete = Ui.button("delete-visit-" + item.id(), "Delete", Icons.FIX,
+                        () -> viewModel.askDeleteVisit(item));
+                // its own tap: deleting never also opens the visit
+                delete.addEventHandler(javafx.scene.input.MouseEvent.MOUSE_CLICKED, javafx.event.Event::consume);
+                setGraphic(new javafx.scene.layout.HBox(8, text, delete));
+            }
+        });
         visits.setOnMouseClicked(e -> {
             Visit v = visits.getSelectionModel().getSelectedItem();
             if (v != null) {
@@ -80,12 +122,13 @@ public final class JobView extends VBox implements Reflowing {
         Label status = Ui.wrapped("", "message");
         status.setId("job-status");
         status.textProperty().bind(viewModel.statusProperty());
-        VBox visitCol = Ui.panel(8, Ui.label("3  Visit", "heading"), Ui.label("Purpose", "figure-label"), purposes,
-                tech, start, status, Ui.label("Earlier visits (tap to open)", "figure-label"), visits);
+        VBox visitCol = Ui.panel(8, Ui.wrapped("3  Visit", "heading"), Ui.label("Purpose", "figure-label"), purposes,
+                tech, start, status, Ui.wrapped("Earlier visits (tap to open)", "figure-label"), visits);
 
         columns = new Columns(12, siteCol, systemCol, visitCol);
         VBox.setVgrow(columns, Priority.ALWAYS);
-        getChildren().add(columns);
+        // the question before a deletion, above the three columns where every delete button can see it
+        getChildren().addAll(new app.latentledger.ui.bin.DeleteQuestion(viewModel.bin()), columns);
     }
 
     public JobViewModel viewModel() {

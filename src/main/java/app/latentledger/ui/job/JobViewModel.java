@@ -12,6 +12,8 @@ import app.latentledger.core.units.Quantity;
 import app.latentledger.ui.session.AppSession;
 import app.latentledger.ui.session.Screen;
 import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.beans.property.SimpleObjectProperty;
@@ -41,6 +43,12 @@ public final class JobViewModel {
     private final StringProperty newSystemLabel = new SimpleStringProperty("");
     private final StringProperty newSystemTons = new SimpleStringProperty("3");
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
+    /** Messages shown next to the column they are about: site and system each have their own. */
+    private final ReadOnlyStringWrapper siteStatus = new ReadOnlyStringWrapper("");
+    private final ReadOnlyStringWrapper systemStatus = new ReadOnlyStringWrapper("");
+    /** The site whose name, address and elevation the site fields hold for a correction; null: a new site. */
+    private final ReadOnlyObjectWrapper<Site> editingSite = new ReadOnlyObjectWrapper<>();
+    private final app.latentledger.ui.bin.RecycleBinViewModel bin;
 
     public JobViewModel(AppSession session) {
         this.session = session;
@@ -57,6 +65,100 @@ public final class JobViewModel {
         if (session.visit() != null) {
             technician.set(session.visit().technician());
         }
+        bin = new app.latentledger.ui.bin.RecycleBinViewModel(session.ledger());
+        bin.onChange(this::afterBinChange);
+        // a new choice starts without the last choice's messages
+        site.addListener((o, a, b) -> {
+            siteStatus.set("");
+            systemStatus.set("");
+        });
+    }
+
+    /** Deleting asks first and goes to the ledger's one recycle bin (restorable from the Record screen). */
+    public app.latentledger.ui.bin.RecycleBinViewModel bin() {
+        return bin;
+    }
+
+    public ReadOnlyStringProperty siteStatusProperty() {
+        return siteStatus.getReadOnlyProperty();
+    }
+
+    public ReadOnlyStringProperty systemStatusProperty() {
+        return systemStatus.getReadOnlyProperty();
+    }
+
+    /** The site being corrected in the site fields, or null while they describe a new site. */
+    public ReadOnlyObjectProperty<Site> editingSiteProperty() {
+        return editingSite.getReadOnlyProperty();
+    }
+
+    /** Asks to delete the chosen site with its systems, visits, readings and logs. */
+    public void askDeleteSite() {
+        if (site.get() == null) {
+            siteStatus.set("Pick the site to delete first.");
+            return;
+        }
+        bin.askDelete(app.latentledger.core.records.RecordKind.SITE, site.get().id(),
+                "the site " + site.get().name() + " with its systems, visits, readings and logs");
+    }
+
+    /** Asks to delete the chosen system with its visits, readings and logs. */
+    public void askDeleteSystem() {
+        if (system.get() == null) {
+            systemStatus.set("Pick the system to delete first.");
+            return;
+        }
+        bin.askDelete(app.latentledger.core.records.RecordKind.SYSTEM, system.get().id(),
+                "the system " + system.get().label() + " with its visits, readings and logs");
+    }
+
+    /** Asks to delete one earlier visit with its readings, logs, instruments and notes. */
+    public void askDeleteVisit(Visit v) {
+        if (v == null) {
+            status.set("Pick the visit to delete first.");
+            return;
+        }
+        bin.askDelete(app.latentledger.core.records.RecordKind.VISIT, v.id(), "the visit of "
+                + v.startedAt().toLocalDate() + " with its readings, logs, instruments and notes");
+    }
+
+    private void afterBinChange() {
+        session.recordsChanged();
+        String siteId = site.get() == null ? null : site.get().id();
+        String systemId = system.get() == null ? null : system.get().id();
+        sites.setAll(session.ledger().sites().all());
+        Site again = siteId == null ? null : find(siteId);
+        site.set(again != null ? again : sites.isEmpty() ? null : sites.get(0));
+        loadSystems();
+        if (systemId != null) {
+            systems.stream().filter(x -> x.id().equals(systemId)).findFirst().ifPresent(system::set);
+        }
+        loadVisits();
+        status.set(bin.messageProperty().get());
+    }
+
+    /** Puts the chosen site's name, address and elevation in the site fields to correct them. */
+    public void editSite() {
+        Site s = site.get();
+        if (s == null) {
+            siteStatus.set("Pick the site to correct first.");
+            return;
+        }
+        editingSite.set(s);
+        newSiteName.set(s.name());
+        newSiteAddress.set(s.address());
+        newSiteElevationFt.set(app.latentledger.ui.present.Shown.of(Quantity.ELEVATION, session.units(), s.elevationM(),
+                0).replace(",", ""));
+        siteStatus.set("Correct the fields, then save the site.");
+    }
+
+    /** Leaves a correction unsaved: the fields describe a new site again. */
+    public void cancelEdit() {
+        editingSite.set(null);
+        newSiteName.set("");
+        newSiteAddress.set("");
+        showDefaultElevation();
+        siteStatus.set("");
     }
 
     /** "Elevation, ft" or "Elevation, m". */
@@ -160,28 +262,42 @@ public final class JobViewModel {
         session.screenProperty().set(Screen.RESULTS);
     }
 
+    /** Adds the site in the fields, or saves the correction of the site being edited. */
     public boolean addSite() {
+        Site editing = editingSite.get();
+        String verb = editing == null ? "added" : "saved";
         try {
             double m = Quantity.ELEVATION.fromDisplay(session.units(), number("elevation", newSiteElevationFt.get()));
-            Site s = new Site(Ids.newId(), newSiteName.get(), newSiteAddress.get(), m, "");
-            session.addSite(s);
+            Site s = editing == null ? new Site(Ids.newId(), newSiteName.get(), newSiteAddress.get(), m, "")
+                    : new Site(editing.id(), newSiteName.get(), newSiteAddress.get(), m, editing.notes());
+            if (editing == null) {
+                session.addSite(s);
+            } else {
+                session.correctSite(s);
+            }
+            editingSite.set(null);
             sites.setAll(session.ledger().sites().all());
-            site.set(find(s.id()));
-            status.set("Site added: " + s.name() + ".");
+            Site shown = find(s.id());
+            if (site.get() != null && site.get().id().equals(s.id())) {
+                site.set(null);
+            }
+            site.set(shown);
+            siteStatus.set("Site " + verb + ": " + s.name() + ".");
             newSiteName.set("");
             newSiteAddress.set("");
+            showDefaultElevation();
             return true;
         } catch (InvalidInputException e) {
-            status.set("Site not added: " + e.message(session.units()));
+            siteStatus.set("Site not " + verb + ": " + e.message(session.units()));
         } catch (IllegalArgumentException e) {
-            status.set("Site not added: " + e.getMessage());
+            siteStatus.set("Site not " + verb + ": " + e.getMessage());
         }
         return false;
     }
 
     public boolean addSystem() {
         if (site.get() == null) {
-            status.set("Pick or add the site first.");
+            systemStatus.set("Pick or add the site first.");
             return false;
         }
         try {
@@ -191,13 +307,13 @@ public final class JobViewModel {
             session.addSystem(s);
             loadSystems();
             systems.stream().filter(x -> x.id().equals(s.id())).findFirst().ifPresent(system::set);
-            status.set("System added: " + s.label() + ".");
+            systemStatus.set("System added: " + s.label() + ".");
             newSystemLabel.set("");
             return true;
         } catch (InvalidInputException e) {
-            status.set("System not added: " + e.message(session.units()));
+            systemStatus.set("System not added: " + e.message(session.units()));
         } catch (IllegalArgumentException e) {
-            status.set("System not added: " + e.getMessage());
+            systemStatus.set("System not added: " + e.getMessage());
         }
         return false;
     }

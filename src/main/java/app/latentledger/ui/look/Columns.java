@@ -45,6 +45,7 @@ public final class Columns extends StackPane implements Reflowing {
             javafx.scene.control.ScrollPane scroll = new javafx.scene.control.ScrollPane(box);
             scroll.setFitToWidth(true);
             scroll.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
+            scroll.setPannable(true);
             getChildren().setAll(scroll);
         } else {
             getChildren().setAll(box);

@@ -37,6 +37,8 @@ public final class Ui {
             b.setGraphicTextGap(10);
         }
         b.setMinHeight(MIN_TARGET_PX);
+        // a button keeps its whole words at any text size; the rows holding buttons wrap instead
+        b.setMinWidth(Region.USE_PREF_SIZE);
         b.setOnAction(e -> action.run());
         return b;
     }
@@ -51,6 +53,8 @@ public final class Ui {
         ScrollPane s = new ScrollPane(content);
         s.setFitToWidth(true);
         s.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+        // a drag scrolls, as a finger, a stylus or single-touch mouse emulation expects
+        s.setPannable(true);
         VBox.setVgrow(s, Priority.ALWAYS);
         return s;
     }

@@ -35,8 +35,8 @@ public final class PaperworkView extends VBox implements Reflowing {
 
         TextArea words = area("customer-words", "What the customer said", paperwork.customerWordsProperty());
         TextArea done = area("work-done", "What was done", paperwork.workDoneProperty());
-        VBox notes = Ui.panel(8, Ui.label("Notes", "heading"), Ui.label("Customer's words", "figure-label"), words,
-                Ui.label("Work done", "figure-label"), done,
+        VBox notes = Ui.panel(8, Ui.label("Notes", "heading"), Ui.wrapped("Customer's words", "figure-label"), words,
+                Ui.wrapped("Work done", "figure-label"), done,
                 Ui.button("save-notes", "Save notes", Icons.NEW, paperwork::saveNotes), message(paperwork.notesMessageProperty()));
 
         ListView<InstrumentsViewModel.Row> list = new ListView<>(instruments.rows());

@@ -47,6 +47,8 @@ public final class VisitRecordModel {
             reload();
         });
         session.visitProperty().addListener((o, a, b) -> reload());
+        // another screen (Job) may have deleted something since: the bin shows it when this screen opens
+        session.screenProperty().addListener((o, a, b) -> bin.refresh());
         session.draftProperty().addListener((o, a, b) -> reloadSet());
         session.unitsProperty().addListener((o, a, b) -> reloadSet());
         reload();

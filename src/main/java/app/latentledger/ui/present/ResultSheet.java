@@ -16,9 +16,12 @@ import java.util.List;
  * @param performance  capacities, SHR, moisture removal, margins
  * @param findings     the findings, in the core's order
  * @param safety       the safety line that ends every findings list
+ * @param marginWords  the dew-point margin as a sentence ("Coil is 3.2 ± 2.3 °F warmer than the return
+ *                     dew point — it cannot dry the air"), "" while there is no check
  */
 public record ResultSheet(CoilVerdict verdict, String headline, String explanation, List<Row> entering,
-                          List<Row> leaving, List<Row> performance, List<FindingCard> findings, String safety) {
+                          List<Row> leaving, List<Row> performance, List<FindingCard> findings, String safety,
+                          String marginWords) {
     public ResultSheet {
         entering = List.copyOf(entering);
         leaving = List.copyOf(leaving);

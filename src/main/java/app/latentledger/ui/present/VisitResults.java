@@ -46,7 +46,21 @@ public final class VisitResults {
         }
         return new ResultSheet(r.verdict(), headline(r.verdict()), explanation(r.verdict()),
                 state(r.entering(), units, "entering"), state(r.leaving(), units, "leaving"),
-                performance(r, units), cards, Cautions.SAFETY_LINE);
+                performance(r, units), cards, Cautions.SAFETY_LINE, marginSentence(r, units));
+    }
+
+    /** Whose dew point the coil is held against: the return's, or the mix's when outdoor air comes in. */
+    public static String enteringAir(CoilResult r) {
+        return r.mixed() ? "entering" : "return";
+    }
+
+    /** The dew-point margin in the one wording the screen, the report and the command line share. */
+    public static String marginSentence(CoilResult r, UnitSystem units) {
+        var e = r.estimate(Measurand.DEW_POINT_MARGIN);
+        if (e == null || !e.exists()) {
+            return "";
+        }
+        return app.latentledger.core.text.MarginWords.sentence(units, e.valueSi(), e.expandedSi(), enteringAir(r));
     }
 
     public static String headline(CoilVerdict v) {
@@ -66,7 +80,8 @@ public final class VisitResults {
     }
 
     private static ResultSheet incomplete(String headline, String why) {
-        return new ResultSheet(null, headline, why, List.of(), List.of(), List.of(), List.of(), Cautions.SAFETY_LINE);
+        return new ResultSheet(null, headline, why, List.of(), List.of(), List.of(), List.of(), Cautions.SAFETY_LINE,
+                "");
     }
 
     private static List<Row> state(MoistAirState s, UnitSystem u, String prefix) {
@@ -77,7 +92,7 @@ public final class VisitResults {
                 new Row(prefix + "-dew-point", "Dew point", Shown.of(Quantity.TEMPERATURE, u, s.dewPointC()), t),
                 new Row(prefix + "-rh", "Relative humidity", Shown.of(Quantity.RELATIVE_HUMIDITY, u,
                         s.relativeHumidityPct()), Quantity.RELATIVE_HUMIDITY.symbol(u)),
-                new Row(prefix + "-humidity-ratio", "Moisture", Shown.of(Quantity.HUMIDITY_RATIO_FINE, u,
+                new Row(prefix + "-humidity-ratio", "Humidity ratio", Shown.of(Quantity.HUMIDITY_RATIO_FINE, u,
                         s.humidityRatio()), Quantity.HUMIDITY_RATIO_FINE.symbol(u)),
                 new Row(prefix + "-enthalpy", "Enthalpy", Shown.of(Quantity.ENTHALPY, u, s.enthalpyJPerKg()),
                         Quantity.ENTHALPY.symbol(u)));
@@ -97,10 +112,9 @@ public final class VisitResults {
                 Shown.of(Quantity.WATER_RATE_DAILY, u, p.moistureRemovalKgPerS()), Quantity.WATER_RATE_DAILY.symbol(u)));
         rows.add(row(r, u, "latent-per-airflow", "Latent per airflow", Measurand.LATENT_PER_AIRFLOW,
                 Quantity.POWER_PER_AIRFLOW));
-        rows.add(row(r, u, "humidity-drop", "Moisture drop", Measurand.HUMIDITY_RATIO_DROP,
+        rows.add(row(r, u, "humidity-drop", "Humidity ratio drop", Measurand.HUMIDITY_RATIO_DROP,
                 Quantity.HUMIDITY_RATIO_FINE));
-        rows.add(row(r, u, "dew-point-margin", "Dew point minus coil", Measurand.DEW_POINT_MARGIN,
-                Quantity.TEMPERATURE_DIFFERENCE));
+        rows.add(marginRow(r, u));
         rows.add(new Row("coil-temperature", "Coil temperature (" + coilSource(r) + ")",
                 Shown.of(Quantity.TEMPERATURE, u, r.coilTemperatureC()), Quantity.TEMPERATURE.symbol(u)));
         String adpWhyNot = WithheldRatios.apparatusDewPointWhyNot(r);
@@ -138,6 +152,20 @@ public final class VisitResults {
     private static Row ratioRow(CoilResult r, UnitSystem u, String key, String label, Measurand m, Ratio ratio) {
         return ratio.measurable() ? row(r, u, key, label, m, m.quantity())
                 : new Row(key, label, Ratio.notMeasurable(ratio.reason()), "");
+    }
+
+    /** "Coil against the return dew point  3.2 ± 2.3  °F warmer": which side, never a bare minus sign. */
+    private static Row marginRow(CoilResult r, UnitSystem u) {
+        var e = r.estimate(Measurand.DEW_POINT_MARGIN);
+        String air = enteringAir(r);
+        if (e == null || !e.exists()) {
+            return new Row("dew-point-margin", app.latentledger.core.text.MarginWords.label(air), Shown.NONE,
+                    Quantity.TEMPERATURE_DIFFERENCE.symbol(u));
+        }
+        String direction = app.latentledger.core.text.MarginWords.direction(u, e.valueSi());
+        return new Row("dew-point-margin", app.latentledger.core.text.MarginWords.label(air),
+                app.latentledger.core.text.MarginWords.number(u, e.valueSi(), e.expandedSi()),
+                (Quantity.TEMPERATURE_DIFFERENCE.symbol(u) + " " + direction).trim());
     }
 
     private static String coilSource(CoilResult r) {

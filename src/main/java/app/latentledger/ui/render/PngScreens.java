@@ -93,6 +93,15 @@ public final class PngScreens {
                 session.screenProperty().set(Screen.RESULTS);
                 files.add(write(scene, outDir.resolve("results-" + (portrait ? "portrait" : "landscape") + "-dark.png")));
                 session.darkProperty().set(false);
+                if (!portrait) {
+                    // the outdoor theme for direct sun, then back to what was saved
+                    var saved = session.settings();
+                    session.saveSettings(saved.withChoice(app.latentledger.core.settings.SettingsCatalogue.THEME,
+                            "outdoor"));
+                    files.add(write(scene, outDir.resolve("results-landscape-outdoor.png")));
+                    session.saveSettings(session.settings().withChoice(
+                            app.latentledger.core.settings.SettingsCatalogue.THEME, saved.theme().key()));
+                }
             }
         }
         return files;

@@ -72,8 +72,8 @@ public final class ResultsView extends VBox implements Reflowing {
         } else {
             // the figures and findings scroll on the left; the chart stands on the right, read at a glance
             javafx.scene.control.ScrollPane left = Ui.scroll(new VBox(12, figures, Ui.panel(8, findings)));
-            left.setPrefWidth(520);
-            left.setMinWidth(480);
+            left.setPrefWidth(420);
+            left.setMinWidth(400);
             HBox.setHgrow(chartSlot, Priority.ALWAYS);
             chartSlot.setMaxHeight(Double.MAX_VALUE);
             body = new HBox(16, left, chartSlot);
@@ -90,14 +90,15 @@ public final class ResultsView extends VBox implements Reflowing {
         leaving.show("Supply (leaving)", s.leaving());
         performance.show("What the coil does", s.performance());
         keyFigures.getChildren().clear();
-        keyFigure(s, "dew-point-margin", "Return dew point above the coil");
-        keyFigure(s, "moisture-removal", "Water removed");
+        keyFigure(s, "dew-point-margin", s.marginWords().replaceFirst("^.* — ", ""));
+        keyFigure(s, "moisture-removal", "while running");
         if (s.performance().isEmpty()) {
             performance.add(new Label(s.explanation()), 0, 1, 3, 1);
         }
     }
 
-    private void keyFigure(ResultSheet s, String key, String name) {
+    /** A figure read at a glance: its name, the number large, and one line on what it means. */
+    private void keyFigure(ResultSheet s, String key, String meaning) {
         app.latentledger.ui.present.Row r = s.performance(key);
         if (r == null) {
             return;
@@ -105,6 +106,11 @@ public final class ResultsView extends VBox implements Reflowing {
         Label value = Ui.label(r.value() + " " + r.unit(), "key-figure-value");
         value.setId("key-" + key);
         value.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
-        keyFigures.getChildren().add(Ui.panel(2, Ui.wrapped(name, "muted"), value));
+        Label words = Ui.wrapped(meaning, "muted");
+        words.setId("key-" + key + "-meaning");
+        VBox panel = Ui.panel(2, Ui.wrapped(r.label(), "muted"), value, words);
+        HBox.setHgrow(panel, Priority.ALWAYS);
+        panel.setMaxWidth(Double.MAX_VALUE);
+        keyFigures.getChildren().add(panel);
     }
 }

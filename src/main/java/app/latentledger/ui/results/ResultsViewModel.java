@@ -28,6 +28,9 @@ public final class ResultsViewModel {
     /** Built on first use: after the first frame, so the chart never delays it. */
     private PsychroChartViewModel chart;
     private String beforeKey;
+    /** The reading set whose states the chart data holds, and the one the chart last drew. */
+    private String chartSet = "";
+    private String shownSet = "";
     private ReadingSet beforeSet;
 
     public ResultsViewModel(AppSession session) {
@@ -54,8 +57,17 @@ public final class ResultsViewModel {
         if (chart == null) {
             chart = new PsychroChartViewModel(CoilCharts.orEmpty(chartData.get(), session.units()));
             chart.themeProperty().bind(javafx.beans.binding.Bindings.createObjectBinding(
-                    () -> CoilCharts.theme(session.darkProperty().get()), session.darkProperty()));
-            chartData.addListener((o, a, b) -> chart.show(b));
+                    () -> CoilCharts.theme(session.themeProperty().get()), session.themeProperty()));
+            chartData.addListener((o, a, b) -> {
+                // a zoom made on one reading set does not carry over to the next
+                if (chartSet.equals(shownSet)) {
+                    chart.show(b);
+                } else {
+                    chart.showNewSet(b);
+                }
+                shownSet = chartSet;
+            });
+            shownSet = chartSet;
         }
         return chart;
     }
@@ -65,6 +77,7 @@ public final class ResultsViewModel {
             return;
         }
         sheet.set(c.sheet());
+        chartSet = c.draft().visitId() + "/" + c.draft().readingSetId();
         CoilResult pairedWith = before(c.draft());
         // short: the header already names the site, and the chart's title shares its width with the plot
         String title = pairedWith != null && c.coil() != null ? "Before and after" : "This reading set";

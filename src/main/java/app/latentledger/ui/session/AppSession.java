@@ -56,6 +56,10 @@ public final class AppSession implements AutoCloseable {
     /** The app opens on what the system in hand is doing; Job and Readings are one tap away. */
     private final ObjectProperty<Screen> screen = new SimpleObjectProperty<>(Screen.RESULTS);
     private final BooleanProperty dark = new SimpleBooleanProperty(false);
+    /** The saved theme (light, dark or outdoor); the header's dark switch flips between dark and the last bright one. */
+    private final ReadOnlyObjectWrapper<DisplayTheme> theme = new ReadOnlyObjectWrapper<>(DisplayTheme.LIGHT);
+    /** The bright theme the dark switch returns to: light or outdoor, whichever was chosen last. */
+    private DisplayTheme bright = DisplayTheme.LIGHT;
     private final ReadOnlyObjectWrapper<Site> site = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyObjectWrapper<HvacSystem> system = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyObjectWrapper<Visit> visit = new ReadOnlyObjectWrapper<>();
@@ -85,11 +89,11 @@ public final class AppSession implements AutoCloseable {
         Settings stored = settingsBase.settings();
         settings.set(stored);
         units.set(stored.units());
-        dark.set(stored.theme() == DisplayTheme.DARK);
+        showTheme(stored.theme());
         currentCheck.set(CurrentCheck.nothing(stored.units()));
         settings.addListener((o, a, b) -> {
             units.set(b.units());
-            dark.set(b.theme() == DisplayTheme.DARK);
+            showTheme(b.theme());
             // the check depends on the units (handbook edition, wording) and the thresholds only
             if (a.units() != b.units() || !Objects.equals(a.thresholds(), b.thresholds())) {
                 storedChecks.clear();
@@ -101,7 +105,7 @@ public final class AppSession implements AutoCloseable {
         });
         // the header's theme switch is a setting too: keep it for the next start
         dark.addListener((o, a, b) -> {
-            DisplayTheme wanted = b ? DisplayTheme.DARK : DisplayTheme.LIGHT;
+            DisplayTheme wanted = b ? DisplayTheme.DARK : bright;
             if (settings.get().theme() != wanted) {
                 saveSettings(settings.get().withChoice(SettingsCatalogue.THEME, wanted.key()));
             }
@@ -323,6 +327,29 @@ public final class AppSession implements AutoCloseable {
         ledger.sites().save(s);
     }
 
+    /**
+     * Stores a corrected site (same id). When it is the site in hand, the visit is opened again so
+     * its checks use the new elevation and the header shows the new name.
+     */
+    public void correctSite(Site s) {
+        ledger.sites().save(s);
+        if (site.get() != null && site.get().id().equals(s.id()) && visit.get() != null) {
+            openVisit(visit.get());
+        }
+    }
+
+    /**
+     * After records went to or came back from the recycle bin: when the visit in hand is gone, the
+     * latest remaining visit is opened instead, so no screen shows a record that is no longer there.
+     */
+    public void recordsChanged() {
+        storedChecks.clear();
+        Visit v = visit.get();
+        if (v != null && ledger.visits().find(v.id()).isEmpty()) {
+            openLatestVisit();
+        }
+    }
+
     public void addSystem(HvacSystem s) {
         ledger.systems().save(s);
     }
@@ -380,6 +407,19 @@ public final class AppSession implements AutoCloseable {
 
     public BooleanProperty darkProperty() {
         return dark;
+    }
+
+    /** The saved theme: light, dark or outdoor (high contrast for direct sun). */
+    public ReadOnlyObjectProperty<DisplayTheme> themeProperty() {
+        return theme.getReadOnlyProperty();
+    }
+
+    private void showTheme(DisplayTheme t) {
+        if (t != DisplayTheme.DARK) {
+            bright = t;
+        }
+        theme.set(t);
+        dark.set(t == DisplayTheme.DARK);
     }
 
     public ReadOnlyObjectProperty<Site> siteProperty() {

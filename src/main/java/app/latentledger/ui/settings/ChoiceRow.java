@@ -50,6 +50,7 @@ public final class ChoiceRow {
             case "units:si": return "SI  °C · L/s";
             case "theme:light": return "Light";
             case "theme:dark": return "Dark";
+            case "theme:outdoor": return "Outdoor";
             case "paper:letter": return "Letter";
             case "paper:a4": return "A4";
             default: return word;

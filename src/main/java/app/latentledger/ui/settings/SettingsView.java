@@ -69,9 +69,11 @@ public final class SettingsView extends BorderPane {
     }
 
     private void applyTheme(DisplayTheme theme) {
-        getStyleClass().remove("dark");
+        getStyleClass().removeAll("dark", "outdoor");
         if (theme == DisplayTheme.DARK) {
             getStyleClass().add("dark");
+        } else if (theme == DisplayTheme.OUTDOOR) {
+            getStyleClass().add("outdoor");
         }
     }
 
@@ -83,10 +85,13 @@ public final class SettingsView extends BorderPane {
         grid.setVgap(6);
         ColumnConstraints text = new ColumnConstraints();
         text.setHgrow(Priority.ALWAYS);
-        text.setMinWidth(360);
+        text.setMinWidth(240);
         ColumnConstraints field = new ColumnConstraints(150);
-        ColumnConstraints unit = new ColumnConstraints(110);
-        ColumnConstraints action = new ColumnConstraints(130);
+        // unit and Default button take what their words need at any text size
+        ColumnConstraints unit = new ColumnConstraints();
+        unit.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        ColumnConstraints action = new ColumnConstraints();
+        action.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         grid.getColumnConstraints().addAll(text, field, unit, action);
         int row = 0;
         for (ChoiceRow c : viewModel.choices(g)) {
@@ -104,12 +109,15 @@ public final class SettingsView extends BorderPane {
     private int choice(GridPane grid, int row, ChoiceRow c) {
         Label label = new Label(capitalised(c.label()));
         label.getStyleClass().add("setting-label");
-        HBox buttons = new HBox(0);
+        // the choices wrap onto a second line rather than cut their words at a large text size
+        javafx.scene.layout.FlowPane buttons = new javafx.scene.layout.FlowPane(0, 6);
         buttons.setId("setting-" + c.key());
         for (String word : c.choices()) {
             ToggleButton b = new ToggleButton(ChoiceRow.caption(c.key(), word));
             b.setId("choice-" + c.key() + "-" + word);
             b.setMinHeight(48);
+            b.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+            b.setPrefWidth(javafx.scene.layout.Region.USE_COMPUTED_SIZE);
             b.setOnAction(e -> {
                 c.choose(word);
                 showChoice(buttons, c);
@@ -129,7 +137,7 @@ public final class SettingsView extends BorderPane {
         return row + 2;
     }
 
-    private static void showChoice(HBox buttons, ChoiceRow c) {
+    private static void showChoice(javafx.scene.layout.Pane buttons, ChoiceRow c) {
         for (int i = 0; i < c.choices().size(); i++) {
             ((ToggleButton) buttons.getChildren().get(i)).setSelected(c.choices().get(i).equals(c.valueProperty().get()));
         }
@@ -160,7 +168,7 @@ public final class SettingsView extends BorderPane {
         Button reset = new Button("Default");
         reset.setId("reset-" + n.key());
         reset.setMinHeight(48);
-        reset.setMinWidth(120);
+        reset.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         reset.disableProperty().bind(n.changedProperty().not());
         reset.setOnAction(e -> n.resetToDefault());
 

@@ -31,6 +31,16 @@ public final class ShareBar extends VBox {
         b.managedProperty().bind(can);
     }
 
+    /** A bar for the file a screen last wrote ({@code null} until then), offering what this device can do. */
+    public static ShareBar forFile(javafx.beans.value.ObservableValue<java.nio.file.Path> lastFile) {
+        ShareViewModel share = new ShareViewModel(app.latentledger.handoff.HandOffs.forThisDevice(),
+                app.latentledger.ui.session.Background.worker(), app.latentledger.ui.session.Background.fx());
+        share.fileProperty().bind(lastFile);
+        share.titleProperty().bind(javafx.beans.binding.Bindings.createStringBinding(() ->
+                lastFile.getValue() == null ? "Report" : lastFile.getValue().getFileName().toString(), lastFile));
+        return new ShareBar(share);
+    }
+
     public ShareViewModel viewModel() {
         return viewModel;
     }

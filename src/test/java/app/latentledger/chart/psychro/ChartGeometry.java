@@ -21,7 +21,7 @@ final class ChartGeometry {
 
     ChartGeometry(PsychroChartData data, double width, double height) {
         chart = new PsychroChart(data);
-        layout = PsychroChartLayout.forSize(width, height, Theme.LIGHT);
+        layout = chart.layout(width, height, Theme.LIGHT);
         vp = chart.initialViewport(layout);
         chart.paint(rec, Theme.LIGHT, layout, vp);
     }

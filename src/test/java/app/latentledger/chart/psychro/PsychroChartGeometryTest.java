@@ -15,6 +15,7 @@ import org.junit.jupiter.params.provider.EnumSource;
 import java.util.List;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /** What the chart draws, measured from a recording, against the core and against PsychroLib. */
@@ -171,6 +172,46 @@ class PsychroChartGeometryTest {
                 .map(RecordingPainter.Text::text).toList();
         assertTrue(legend.containsAll(List.of("Before", "After")), legend.toString());
         assertTrue(g.rec.balanced());
+    }
+
+    @Test
+    @DisplayName("the key sits below the plot, outside it, and names every kind of mark the chart draws")
+    void keyIsOutsideThePlotAndNamesEveryMark() {
+        for (double[] size : new double[][] {{1280, 800}, {640, 520}, {1000, 620}}) {
+            PsychroChartData data = app.latentledger.fielddata.SaltreedDemo.beforeAfter(UnitSystem.IP);
+            ChartGeometry g = new ChartGeometry(data, size[0], size[1]);
+            List<RecordingPainter.Rect> box = g.rec.ops(RecordingPainter.Rect.class, "legend");
+            assertFalse(box.isEmpty(), "a key box");
+            double plotBottom = g.vp.top() + g.vp.height();
+            assertTrue(box.get(0).y() >= plotBottom, "key top " + box.get(0).y() + " is inside the plot (bottom "
+                    + plotBottom + ")");
+            assertTrue(box.get(0).y() + box.get(0).height() <= size[1] + 0.5, "key leaves the chart");
+            List<String> legend = g.rec.ops(RecordingPainter.Text.class, "legend").stream()
+                    .map(RecordingPainter.Text::text).toList();
+            // drawn: dew-point diamonds, ADP rings, coil triangles; each kind needs its words in the key
+            assertFalse(g.rec.ops(RecordingPainter.Polygon.class, "dew-point:0").isEmpty());
+            assertTrue(legend.contains("entering dew point"), legend.toString());
+            assertTrue(legend.contains("apparatus dew point"), legend.toString());
+            assertTrue(legend.contains("coil temperature"), legend.toString());
+            // no key text runs past the chart's right edge (estimate of its width, as the key lays out)
+            for (RecordingPainter.Text t : g.rec.ops(RecordingPainter.Text.class, "legend")) {
+                assertTrue(t.x() + app.latentledger.chart.draw.TextMeasurer.ESTIMATE.width(t.text(), t.style().size(),
+                        t.style().bold()) <= size[0], t.text() + " runs off at width " + size[0]);
+            }
+        }
+    }
+
+    @Test
+    @DisplayName("the subtitle is shortened to fit a narrow chart, never cut")
+    void subtitleFitsTheWidth() {
+        PsychroChartData data = app.latentledger.fielddata.SaltreedDemo.single(UnitSystem.IP);
+        for (double w : new double[] {420, 640, 1280}) {
+            ChartGeometry g = new ChartGeometry(data, w, 600);
+            RecordingPainter.Text sub = g.rec.ops(RecordingPainter.Text.class, "title").stream()
+                    .filter(t -> t.text().startsWith("Site pressure")).findFirst().orElseThrow();
+            double end = sub.x() + g.rec.measurer().width(sub.text(), sub.style().size(), false);
+            assertTrue(end <= w, "'" + sub.text() + "' ends at " + end + " in a chart " + w + " wide");
+        }
     }
 
     @Test
