@@ -2,7 +2,6 @@ package app.latentledger.ui.log;
 
 import app.latentledger.ui.log.LogImportViewModel.About;
 import app.latentledger.ui.log.LogImportViewModel.KeptLog;
-import app.latentledger.ui.look.Columns;
 import app.latentledger.ui.look.Icons;
 import app.latentledger.ui.look.Reflowing;
 import app.latentledger.ui.look.Ui;
@@ -21,9 +20,7 @@ import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextField;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
-import javafx.scene.layout.ColumnConstraints;
 import javafx.scene.layout.FlowPane;
-import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
@@ -40,18 +37,21 @@ import java.util.Map;
  * (file, another logger's column names, the airflow when the visit has none, the fan-only airflow,
  * the date order and the clock's zone), which closes once a log is shown, then the cycle summary,
  * the findings and the timeline. Each message sits beside the field or part it is about and is
- * kept in view; an action never moves the focus away from where the tech is. Both columns scroll
- * by dragging. Binds only; the timeline goes into {@link #timelineSlot()} when the view model has one.
+ * kept in view; an action never moves the focus away from where the tech is. The screen is one
+ * page that scrolls by its bar or by a drag. Binds only; the timeline goes into {@link #timelineSlot()} when the view model has one.
  */
 public final class LogView extends VBox implements Reflowing {
     /** Id of the pane the cycle timeline goes into when the chart build is merged. */
     public static final String TIMELINE_SLOT_ID = "cycle-timeline-slot";
 
     private final LogImportViewModel viewModel;
-    private final Columns columns;
+    private final StackPane columns = new StackPane();
     private final StackPane timelineSlot = new StackPane();
     private final Map<About, Label> messages = new EnumMap<>(About.class);
-    private final ScrollPane leftScroll;
+    private final VBox left;
+    private final VBox right;
+    private final VBox page;
+    private final ScrollPane scroll;
 
     public LogView(LogImportViewModel viewModel) {
         super(12);
@@ -109,24 +109,28 @@ public final class LogView extends VBox implements Reflowing {
         notes.managedProperty().bind(notes.textProperty().isNotEmpty());
         notes.visibleProperty().bind(notes.managedProperty());
 
-        GridPane summary = summaryGrid();
+        VBox summary = summaryRows();
         timelineSlot.setId(TIMELINE_SLOT_ID);
         timelineSlot.getStyleClass().add("slot-placeholder");
         app.latentledger.ui.chart.ChartSlots.timeline(timelineSlot, viewModel.timelineProperty(),
                 "The cycle timeline appears here once a log is imported.");
-        VBox left = Ui.panel(10, Ui.label("Logs on this visit", "heading"), kept, ask, messages.get(About.LOGS),
+        left = Ui.panel(10, Ui.label("Logs on this visit", "heading"), kept, ask, messages.get(About.LOGS),
                 formToggle, form, notes, Ui.label("Cycle summary", "subheading"), summary);
-        VBox.setVgrow(timelineSlot, Priority.ALWAYS);
-        VBox right = Ui.panel(8, new FindingsList(viewModel.findings()));
-        leftScroll = dragScroll(left);
-        leftScroll.setId("log-left-scroll");
-        ScrollPane rightScroll = dragScroll(right);
-        rightScroll.setId("log-findings-scroll");
-        columns = new Columns(12, leftScroll, rightScroll);
-        // the timeline below keeps its height; the columns scroll in what is left
-        columns.setMinHeight(0);
-        VBox.setVgrow(columns, Priority.ALWAYS);
-        getChildren().addAll(columns, timelineSlot);
+        left.setId("log-left");
+        right = Ui.panel(8, new FindingsList(viewModel.findings()));
+        right.setId("log-right");
+        // one page that scrolls as a whole (by its bar or by a drag): the summary, the findings and the
+        // timeline each get their natural height instead of sharing one screen's height
+        columns.setId("log-columns");
+        page = new VBox(12, columns, timelineSlot);
+        scroll = new ScrollPane(page);
+        scroll.setId("log-scroll");
+        scroll.setFitToWidth(true);
+        scroll.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+        scroll.setPannable(true);
+        VBox.setVgrow(scroll, Priority.ALWAYS);
+        setPortrait(false);
+        getChildren().add(scroll);
         // a new message stays in view beside its field, without moving what is already in view
         viewModel.statusProperty().addListener((o, a, b) -> keepInView(messages.get(viewModel.aboutProperty().get())));
     }
@@ -217,6 +221,7 @@ public final class LogView extends VBox implements Reflowing {
         t.setPromptText(prompt);
         t.textProperty().bindBidirectional(p);
         t.setMinHeight(Ui.MIN_TARGET_PX);
+        t.setMinWidth(140);
         return t;
     }
 
@@ -264,43 +269,34 @@ public final class LogView extends VBox implements Reflowing {
         return row;
     }
 
-    private GridPane summaryGrid() {
-        GridPane summary = new GridPane();
+    /**
+     * The cycle summary, one row per figure: the words take what is left and wrap between words; the
+     * value with its unit keeps its whole width, so neither is ever cut.
+     */
+    private VBox summaryRows() {
+        VBox summary = new VBox(6);
         summary.setId("log-summary");
-        summary.setHgap(12);
-        summary.setVgap(6);
-        ColumnConstraints label = new ColumnConstraints();
-        label.setHgrow(Priority.ALWAYS);
-        label.setMinWidth(80);
-        ColumnConstraints value = new ColumnConstraints();
-        value.setMinWidth(Region.USE_PREF_SIZE);
-        value.setHalignment(javafx.geometry.HPos.RIGHT);
-        ColumnConstraints unit = new ColumnConstraints();
-        unit.setMinWidth(Region.USE_PREF_SIZE);
-        summary.getColumnConstraints().setAll(label, value, unit);
         Runnable fill = () -> {
             summary.getChildren().clear();
-            int r = 0;
             for (Row row : viewModel.summary()) {
-                // the words wrap; a value and its unit are never cut
-                Label v = Ui.wrapped(row.value(), "figure-value");
-                v.setMinWidth(Region.USE_PREF_SIZE);
-                v.setMaxWidth(360);
-                Label u = Ui.label(row.unit(), "muted");
-                u.setMinWidth(Region.USE_PREF_SIZE);
-                summary.addRow(r++, Ui.wrapped(row.label(), "figure-label"), v, u);
+                Label words = Ui.wrapped(row.label(), "figure-label");
+                words.setMinWidth(0);
+                words.setMaxWidth(Double.MAX_VALUE);
+                HBox.setHgrow(words, Priority.ALWAYS);
+                Label value = Ui.wrapped(row.unit().isEmpty() ? row.value() : row.value() + " " + row.unit(),
+                        "figure-value");
+                // a number and its unit never wrap; a phrase ("not measurable (…)") wraps between words
+                value.setMinWidth(value.getText().length() <= 16 ? Region.USE_PREF_SIZE : 160);
+                value.setMaxWidth(Region.USE_PREF_SIZE);
+                HBox line = new HBox(12, words, value);
+                line.setAlignment(Pos.BASELINE_LEFT);
+                line.setId("log-summary-" + row.key());
+                summary.getChildren().add(line);
             }
         };
         viewModel.summary().addListener((ListChangeListener<Row>) c -> fill.run());
         fill.run();
         return summary;
-    }
-
-    /** A scroll pane a finger or a stylus can drag, not only its scroll bar. */
-    private static ScrollPane dragScroll(Node content) {
-        ScrollPane s = Ui.scroll(content);
-        s.setPannable(true);
-        return s;
     }
 
     /**
@@ -329,25 +325,25 @@ public final class LogView extends VBox implements Reflowing {
      * has settled; a message already in view moves nothing.
      */
     private void keepInView(Label message) {
-        if (message == null || !isInside(message, leftScroll.getContent())) {
+        if (message == null) {
             return;
         }
         javafx.application.Platform.runLater(() -> {
-            leftScroll.layout();
-            Node content = leftScroll.getContent();
-            Bounds viewport = leftScroll.getViewportBounds();
+            scroll.layout();
+            Node content = scroll.getContent();
+            Bounds viewport = scroll.getViewportBounds();
             double contentH = content.getLayoutBounds().getHeight();
             double extra = contentH - viewport.getHeight();
             if (extra <= 0 || !message.isVisible()) {
                 return;
             }
             Bounds m = content.sceneToLocal(message.localToScene(message.getLayoutBounds()));
-            double top = leftScroll.getVvalue() * extra;
+            double top = scroll.getVvalue() * extra;
             double bottom = top + viewport.getHeight();
             if (m.getMinY() < top) {
-                leftScroll.setVvalue(Math.max(0, m.getMinY()) / extra);
+                scroll.setVvalue(Math.max(0, m.getMinY()) / extra);
             } else if (m.getMaxY() > bottom) {
-                leftScroll.setVvalue(Math.min(extra, m.getMaxY() - viewport.getHeight()) / extra);
+                scroll.setVvalue(Math.min(extra, m.getMaxY() - viewport.getHeight()) / extra);
             }
         });
     }
@@ -360,8 +356,16 @@ public final class LogView extends VBox implements Reflowing {
         return timelineSlot;
     }
 
+    /** Side by side in landscape (equal shares), the findings under the summary upright. */
     @Override
     public void setPortrait(boolean portrait) {
-        columns.setPortrait(portrait);
+        javafx.scene.layout.Pane box = portrait ? new VBox(12) : new HBox(12);
+        for (VBox part : new VBox[] {left, right}) {
+            part.setPrefWidth(portrait ? Region.USE_COMPUTED_SIZE : 10);
+            part.setMinWidth(0);
+            HBox.setHgrow(part, Priority.ALWAYS);
+            box.getChildren().add(part);
+        }
+        columns.getChildren().setAll(box);
     }
 }
