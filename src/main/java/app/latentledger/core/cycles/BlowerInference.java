@@ -33,6 +33,8 @@ final class BlowerInference {
     static final double FOLLOW_S = 300.0;
     static final double FOLLOW_LAG_S = 90.0;
     static final double END_GRACE_S = 120.0;
+    /** The kink is looked for over at most this much before the departure (the fit is quadratic in samples). */
+    static final double KINK_WINDOW_S = 600.0;
     /** Departure from the plateau, as a share of the band, that ends it (the mean is steadier than one sample). */
     static final double DEPART = 0.5;
 
@@ -114,7 +116,11 @@ final class BlowerInference {
             end--;
         }
         // a slow still-air drift crosses the band well after the stop: date the stop where the drift began
-        int kink = kink(log, d, from, start, i);
+        int kinkFrom = start;
+        while (kinkFrom < i && log.timeS(i) - log.timeS(kinkFrom) > KINK_WINDOW_S) {
+            kinkFrom++;
+        }
+        int kink = kink(log, d, from, kinkFrom, i);
         return Math.min(end, kink) + 1;
     }
 
