@@ -291,6 +291,25 @@ class LogImportViewModelTest {
     }
 
     @Test
+    void aCelsiusFileUnderFahrenheitSettingsIsRefusedWithItsUnitAndReadInSiSettings() {
+        try (AppSession s = withNewVisit(dir)) {
+            LogImportViewModel vm = direct(s);
+            vm.airflowProperty().set("1200");
+            vm.fileProperty().set(SAMPLES.resolve("celsius-plain.csv").toString());
+            vm.importFile();
+            // README: celsius-plain.csv is refused under IP settings (24 °F return air)
+            String m = vm.statusProperty().get();
+            assertTrue(m.startsWith("Not imported") && m.contains("return_db") && m.contains("°F"), m);
+            assertEquals(LogImportViewModel.About.IMPORT, vm.aboutProperty().get());
+            assertTrue(s.ledger().logs().idsForVisit(s.visit().id()).isEmpty(), "nothing kept");
+            s.saveSettings(s.settings().withChoice(SettingsCatalogue.UNITS, "si"));
+            vm.airflowProperty().set("570"); // README: --units si --airflow 570
+            importSample(vm, "celsius-plain.csv");
+            assertTrue(codes(vm.findings()).contains("fan-off-delay-reevaporation"), codes(vm.findings()).toString());
+        }
+    }
+
+    @Test
     void parsesAHeaderMapAtTheLastEqualsSign() {
         assertEquals(java.util.Map.of("A=B", "time", "RA", "return_db"), LogImportViewModel.parseMap("A=B=time; RA=return_db"));
     }
