@@ -235,6 +235,23 @@ class LogsScreenUiTest {
         });
     }
 
+    @Test
+    void aDragOnTheTimelinePansTheTimelineNotThePage(FxRobot robot) {
+        ScrollPane pane = robot.lookup("#log-scroll").query();
+        reveal(robot, "#timeline");
+        double before = pane.getVvalue();
+        Node timeline = robot.lookup("#timeline").query();
+        Bounds b = timeline.localToScreen(timeline.getLayoutBounds());
+        robot.moveTo(new javafx.geometry.Point2D(b.getMinX() + b.getWidth() * 0.5, b.getMinY() + b.getHeight() * 0.4));
+        robot.press(MouseButton.PRIMARY);
+        robot.moveBy(-80, -60);
+        robot.moveBy(-80, -60);
+        robot.release(MouseButton.PRIMARY);
+        robot.interact(() -> { });
+        assertEquals(before, pane.getVvalue(), 1e-9, "the page moved under a drag on the timeline");
+        assertTrue(pane.isPannable(), "after the drag the page pans again");
+    }
+
     private void assertInView(FxRobot robot, String id) {
         Node n = robot.lookup(id).query();
         assertTrue(n.isVisible(), id + " hidden");

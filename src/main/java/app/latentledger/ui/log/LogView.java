@@ -131,6 +131,10 @@ public final class LogView extends VBox implements Reflowing {
         VBox.setVgrow(scroll, Priority.ALWAYS);
         setPortrait(false);
         getChildren().add(scroll);
+        // a drag on the timeline pans the timeline, not the page
+        addEventFilter(javafx.scene.input.MouseEvent.MOUSE_PRESSED, e ->
+                scroll.setPannable(!(e.getTarget() instanceof Node n && isInside(n, timelineSlot))));
+        addEventHandler(javafx.scene.input.MouseEvent.MOUSE_RELEASED, e -> scroll.setPannable(true));
         // a new message stays in view beside its field, without moving what is already in view
         viewModel.statusProperty().addListener((o, a, b) -> keepInView(messages.get(viewModel.aboutProperty().get())));
     }
