@@ -187,11 +187,41 @@ public final class LogRepository {
         return db.read(c -> {
             List<String> out = new ArrayList<>();
             try (PreparedStatement p = c.prepareStatement(
-                    "SELECT id FROM imported_log WHERE visit_id = ? ORDER BY imported_epoch_s, id")) {
+                    "SELECT id FROM imported_log WHERE visit_id = ? ORDER BY imported_epoch_s, rowid")) {
                 p.setString(1, visitId);
                 try (ResultSet r = p.executeQuery()) {
                     while (r.next()) {
                         out.add(r.getString(1));
+                    }
+                }
+            }
+            return out;
+        });
+    }
+
+    /**
+     * One kept log as a list shows it, read without its samples.
+     *
+     * @param importedAt when it was kept
+     * @param samples    how many samples it holds
+     * @param timeZone   the zone its clock times are shown in, "" when none was stored
+     */
+    public record Listed(String id, String sourceFileName, java.time.OffsetDateTime importedAt, int samples,
+                         String timeZone) {
+    }
+
+    /** The visit's logs in import order, without their samples (a list of a visit's logs stays quick). */
+    public List<Listed> listForVisit(String visitId) {
+        return db.read(c -> {
+            List<Listed> out = new ArrayList<>();
+            try (PreparedStatement p = c.prepareStatement("SELECT id, source_file_name, imported_at, sample_count,"
+                    + " time_zone FROM imported_log WHERE visit_id = ? ORDER BY imported_epoch_s, rowid")) {
+                p.setString(1, visitId);
+                try (ResultSet r = p.executeQuery()) {
+                    while (r.next()) {
+                        String zone = r.getString("time_zone");
+                        out.add(new Listed(r.getString("id"), r.getString("source_file_name"),
+                                Sql.time(r, "imported_at"), r.getInt("sample_count"), zone == null ? "" : zone));
                     }
                 }
             }

@@ -80,6 +80,7 @@ class IndependentLogTest {
         "120, false, 0, 30, COOLS",
         "180, true, 1.0, 60, WARMS",
         "60, true, 0, 20, COOLS",
+        "60, false, 1.0, 60, WARMS",
     })
     @DisplayName("fan-off delays: returned share within ±10 points of the integrated truth, runs ±1, median run ±1 min")
     void fanOffDelays(double delayS, boolean status, double heatK, double rhLagS, StillAir still) throws Exception {
@@ -98,21 +99,24 @@ class IndependentLogTest {
 
     /**
      * The hardest case found: a 1-minute fan-off delay, no status columns, 60 s RH lag, 1 K blower heat,
-     * and a still-air supply that warms toward the return's enthalpy. The blower stop is found late
-     * (about 3 min instead of 1), so returned water over-reads by about 11 points: outside the ±10-point
-     * target. Kept as a measured limit (docs/methods.md) so a change that worsens it fails.
+     * and a still-air supply that warms toward the return's enthalpy. The returned share is now within
+     * the ±10-point target (above, since the stop is dated at the kink where the still-air drift
+     * begins), but the stop itself is still found late: the lagging humidity probe keeps the enthalpy
+     * moving for the whole minute the blower runs on, so the plateau is only recognised in still air
+     * and the delay reads about 160 s instead of 60 s. Kept as a measured limit (docs/methods.md) so a
+     * change that worsens it fails.
      */
     @Test
-    @DisplayName("known limit: 60 s fan-off delay, warming still air, no status: over-reads by at most 12 points")
+    @DisplayName("known limit: 60 s fan-off delay, warming still air, no status: the delay found is late by at most 2 min")
     void shortDelayWarmingStillAir() throws Exception {
         Config c = delay(60, false, 1.0, 60, StillAir.WARMS);
         Truth t = IndependentLog.generate(c);
         RunCycleReport r = analyse(c, t);
-        double over = r.reevaporationShare() - t.share();
+        double late = r.fanOffDelayMedianS() - 60;
         System.out.printf("known limit: truth %.3f tool %.3f delay found %.0f s%n", t.share(), r.reevaporationShare(),
                 r.fanOffDelayMedianS());
-        assertTrue(over >= 0 && over <= 0.12, "over-read " + over);
-        assertEquals(t.runs(), r.cycles().size(), 1);
+        assertTrue(late >= 0 && late <= 120, "delay found late by " + late + " s");
+        assertEquals(t.share(), r.reevaporationShare(), 0.10, "returned share");
         noUndefinedWords(r);
     }
 

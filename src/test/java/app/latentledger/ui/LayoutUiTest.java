@@ -147,7 +147,7 @@ class LayoutUiTest {
         return false;
     }
 
-    private static void check(Screen s, Node n, List<String> problems) {
+    static void check(Screen s, Node n, List<String> problems) {
         if (!n.isVisible()) {
             return;
         }

@@ -151,10 +151,16 @@ public final class AirSeries {
             return;
         }
         double[] w = supplyW.clone();
+        // the derivative's window slides along the log: each end only moves forward
+        int a = 0;
+        int b = 0;
         for (int i = 0; i < size; i++) {
             boolean gapNear = i > 0 && log.timeS(i) - log.timeS(i - 1) > gapS
                     || i + 1 < size && log.timeS(i + 1) - log.timeS(i) > gapS;
-            double x = gapNear ? w[i] : HumidityLag.sharpened(log, w, i, lagS);
+            a = HumidityLag.windowStart(log, i, a);
+            b = HumidityLag.windowEnd(log, i, b);
+            double d = Double.isNaN(w[i]) ? Double.NaN : HumidityLag.slope(log, w, a, b);
+            double x = gapNear || Double.isNaN(d) ? w[i] : w[i] + lagS * d;
             double cap = Double.isNaN(supplyDbC[i]) ? Double.NaN
                     : Psychrometrics.saturationHumidityRatio(supplyDbC[i], pressurePa);
             supplyW[i] = Double.isNaN(x) ? x : Math.max(0.0, Double.isNaN(cap) ? x : Math.min(cap, x));

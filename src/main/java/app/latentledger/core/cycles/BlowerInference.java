@@ -33,6 +33,8 @@ final class BlowerInference {
     static final double FOLLOW_S = 300.0;
     static final double FOLLOW_LAG_S = 90.0;
     static final double END_GRACE_S = 120.0;
+    /** The kink is looked for over at most this much before the departure (the fit is quadratic in samples). */
+    static final double KINK_WINDOW_S = 600.0;
     /** Departure from the plateau, as a share of the band, that ends it (the mean is steadier than one sample). */
     static final double DEPART = 0.5;
 
@@ -113,7 +115,72 @@ final class BlowerInference {
         while (end > start && (Double.isNaN(d[end - from]) || Math.abs(d[end - from] - plateau) > 0.25 * band)) {
             end--;
         }
-        return end + 1;
+        // a slow still-air drift crosses the band well after the stop: date the stop where the drift began
+        int kinkFrom = start;
+        while (kinkFrom < i && log.timeS(i) - log.timeS(kinkFrom) > KINK_WINDOW_S) {
+            kinkFrom++;
+        }
+        int kink = kink(log, d, from, kinkFrom, i);
+        return Math.min(end, kink) + 1;
+    }
+
+    /**
+     * Where a flat stretch turns into a ramp over [start, stop): the sample c that best fits
+     * d = level + slope·max(0, t − t_c) by least squares (a continuous two-piece line, the usual
+     * change-point model for a change of slope, e.g. Hudson, J. Am. Stat. Assoc. 61, 1966). With the
+     * blower on the supply-minus-return enthalpy sits on its plateau; in still air it drifts away at
+     * once, if slowly, so the kink is the stop even when the band is crossed minutes later. The flat
+     * part keeps at least {@link #HOLD_S}; {@code stop - 1} when no kink fits better than one level.
+     */
+    static int kink(LogSeries log, double[] d, int from, int start, int stop) {
+        int best = stop - 1;
+        double flat = Double.NaN;
+        double bestSse = Double.POSITIVE_INFINITY;
+        double t0 = log.timeS(start);
+        for (int c = start; c < stop; c++) {
+            if (log.timeS(c) - t0 < HOLD_S) {
+                continue;
+            }
+            double tc = log.timeS(c);
+            // least squares of d on [1, x] with x = max(0, t − t_c)
+            double n = 0;
+            double sx = 0;
+            double sy = 0;
+            double sxx = 0;
+            double sxy = 0;
+            double syy = 0;
+            for (int k = start; k < stop; k++) {
+                double y = d[k - from];
+                if (Double.isNaN(y)) {
+                    continue;
+                }
+                double x = Math.max(0, log.timeS(k) - tc);
+                n++;
+                sx += x;
+                sy += y;
+                sxx += x * x;
+                sxy += x * y;
+                syy += y * y;
+            }
+            if (n < 3) {
+                return stop - 1;
+            }
+            double den = n * sxx - sx * sx;
+            double sse;
+            if (den <= 0) {
+                sse = syy - sy * sy / n;
+                flat = sse;
+            } else {
+                double slope = (n * sxy - sx * sy) / den;
+                double level = (sy - slope * sx) / n;
+                sse = syy - level * sy - slope * sxy;
+            }
+            if (sse < bestSse) {
+                bestSse = sse;
+                best = c;
+            }
+        }
+        return best;
     }
 
     private static double d(AirSeries air, int i) {

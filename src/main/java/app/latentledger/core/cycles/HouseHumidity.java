@@ -3,7 +3,6 @@ package app.latentledger.core.cycles;
 import app.latentledger.core.psychro.Psychrometrics;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -93,13 +92,10 @@ public record HouseHumidity(double dewPointMedianC, double dewPointP95C, double 
         if (m == 0) {
             return null;
         }
-        double[] wSorted = Arrays.copyOf(ws, m);
-        double[] rhs = Arrays.copyOf(rh, m);
-        Arrays.sort(wSorted);
-        Arrays.sort(rhs);
-        double[] dps = {Psychrometrics.dewPointC(Stats.median(wSorted, m), pressurePa),
-            Psychrometrics.dewPointC(percentile(wSorted, 0.95), pressurePa),
-            Psychrometrics.dewPointC(wSorted[m - 1], pressurePa)};
+        // order statistics by selection, not by sorting a week of samples twice
+        double[] dps = {Psychrometrics.dewPointC(Stats.median(ws, m), pressurePa),
+            Psychrometrics.dewPointC(Stats.percentile(ws, m, 0.95), pressurePa),
+            Psychrometrics.dewPointC(Stats.max(ws, m), pressurePa)};
         List<Double> slopes = new ArrayList<>();
         double offS = 0;
         int i = 0;
@@ -124,8 +120,8 @@ public record HouseHumidity(double dewPointMedianC, double dewPointP95C, double 
         }
         double[] sl = slopes.stream().mapToDouble(Double::doubleValue).toArray();
         double outdoor = outdoorDewPoint(log, pressurePa);
-        return new HouseHumidity(dps[0], dps[1], dps[2], Stats.median(rhs, m),
-                percentile(rhs, 0.95), rhs[m - 1], aboveRh / 3600.0, aboveDp / 3600.0, Stats.median(sl, sl.length),
+        return new HouseHumidity(dps[0], dps[1], dps[2], Stats.median(rh, m),
+                Stats.percentile(rh, m, 0.95), Stats.max(rh, m), aboveRh / 3600.0, aboveDp / 3600.0, Stats.median(sl, sl.length),
                 sl.length, offS / 3600.0, outdoor);
     }
 
@@ -174,11 +170,5 @@ public record HouseHumidity(double dewPointMedianC, double dewPointP95C, double 
             }
         }
         return Stats.median(d, m);
-    }
-
-    /** Nearest-rank percentile of sorted values. */
-    private static double percentile(double[] sorted, double q) {
-        int idx = (int) Math.ceil(q * sorted.length) - 1;
-        return sorted[Math.max(0, Math.min(sorted.length - 1, idx))];
     }
 }

@@ -63,10 +63,16 @@ final class HumidityLag {
         double bestCost = Double.POSITIVE_INFINITY;
         double none = Double.NaN;
         double[] hh = new double[m];
+        // the slope at a sample does not depend on the lag tried: found once, not once per lag
+        double[] slope = new double[m];
+        for (int k = 0; k < m; k++) {
+            slope[k] = slope(log, air.supplyW, idx[k]);
+        }
         for (double tau = 0; tau <= MAX_LAG_S; tau += STEP_S) {
             for (int k = 0; k < m; k++) {
                 int i = idx[k];
-                double w = sharpened(log, air.supplyW, i, tau);
+                double w = Double.isNaN(air.supplyW[i]) ? Double.NaN
+                        : tau == 0 || Double.isNaN(slope[k]) ? air.supplyW[i] : air.supplyW[i] + tau * slope[k];
                 hh[k] = Double.isNaN(w) || Double.isNaN(air.supplyDbC[i]) ? Double.NaN
                         : AirSeries.enthalpy(air.supplyDbC[i], w) - air.returnH[i];
             }
@@ -103,25 +109,45 @@ final class HumidityLag {
         return s;
     }
 
-    /** W_m + τ·dW_m/dt at sample i, the derivative over ±HALF_WINDOW_S (at least one sample each side). */
-    static double sharpened(LogSeries log, double[] w, int i, double tau) {
-        if (Double.isNaN(w[i])) {
-            return Double.NaN;
-        }
-        if (tau == 0) {
-            return w[i];
-        }
+    /** dW_m/dt at sample i over ±HALF_WINDOW_S (at least one sample each side); NaN when not known. */
+    static double slope(LogSeries log, double[] w, int i) {
         int a = i;
         while (a > 0 && log.timeS(i) - log.timeS(a) < HALF_WINDOW_S) {
             a--;
         }
-        int b = i;
+        return slope(log, w, a, windowEnd(log, i, i));
+    }
+
+    /** The slope between window ends a and b; NaN when they are one sample or either is unknown. */
+    static double slope(LogSeries log, double[] w, int a, int b) {
+        if (a == b || Double.isNaN(w[a]) || Double.isNaN(w[b])) {
+            return Double.NaN;
+        }
+        return (w[b] - w[a]) / (log.timeS(b) - log.timeS(a));
+    }
+
+    /**
+     * First sample of the window before i: the last at least HALF_WINDOW_S earlier, else sample 0.
+     * {@code from} is the answer for an earlier sample (the start never moves back as i moves on), so a
+     * caller going through the log in order walks it once.
+     */
+    static int windowStart(LogSeries log, int i, int from) {
+        int a = Math.max(0, Math.min(from, i));
+        while (a < i && log.timeS(i) - log.timeS(a + 1) >= HALF_WINDOW_S) {
+            a++;
+        }
+        return log.timeS(i) - log.timeS(a) >= HALF_WINDOW_S ? a : 0;
+    }
+
+    /**
+     * Last sample of the window after i: the first at least HALF_WINDOW_S later, else the last sample.
+     * {@code from} is the answer for an earlier sample, as for {@link #windowStart}.
+     */
+    static int windowEnd(LogSeries log, int i, int from) {
+        int b = Math.max(from, i);
         while (b + 1 < log.size() && log.timeS(b) - log.timeS(i) < HALF_WINDOW_S) {
             b++;
         }
-        if (a == b || Double.isNaN(w[a]) || Double.isNaN(w[b])) {
-            return w[i];
-        }
-        return w[i] + tau * (w[b] - w[a]) / (log.timeS(b) - log.timeS(a));
+        return b;
     }
 }

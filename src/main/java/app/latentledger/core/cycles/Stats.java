@@ -26,6 +26,27 @@ final class Stats {
         return 0.5 * (lower + upper);
     }
 
+    /**
+     * Nearest-rank percentile (the ⌈q·n⌉-th smallest) of the first {@code n} values, the array not
+     * changed; NaN when n is 0. Quickselect on a copy, O(n), where a sort would be O(n log n).
+     */
+    static double percentile(double[] values, int n, double q) {
+        if (n == 0) {
+            return Double.NaN;
+        }
+        int k = Math.max(0, Math.min(n - 1, (int) Math.ceil(q * n) - 1));
+        return select(java.util.Arrays.copyOf(values, n), k);
+    }
+
+    /** Largest of the first {@code n} values; NaN when n is 0. */
+    static double max(double[] values, int n) {
+        double m = n == 0 ? Double.NaN : Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < n; i++) {
+            m = Math.max(m, values[i]);
+        }
+        return m;
+    }
+
     /** The k-th smallest value (0-based); reorders {@code a}. Hoare partition with middle pivot. */
     private static double select(double[] a, int k) {
         int lo = 0;

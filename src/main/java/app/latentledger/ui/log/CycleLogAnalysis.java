@@ -51,11 +51,17 @@ public final class CycleLogAnalysis implements LogAnalysisService {
     @Override
     public Optional<LogAnalysis> latestKept(LogRequest request) throws Exception {
         List<String> ids = request.ledger().logs().idsForVisit(request.visit().id());
-        if (ids.isEmpty()) {
+        return ids.isEmpty() ? Optional.empty() : kept(request, ids.get(ids.size() - 1));
+    }
+
+    @Override
+    public Optional<LogAnalysis> kept(LogRequest request, String logId) throws Exception {
+        Optional<ImportedLog> log = request.ledger().logs().find(logId)
+                .filter(l -> l.visitId().equals(request.visit().id()));
+        if (log.isEmpty()) {
             return Optional.empty();
         }
-        ImportedLog log = request.ledger().logs().find(ids.get(ids.size() - 1)).orElseThrow();
-        VisitLog a = VisitLogs.analyseKept(request.ledger(), log, request.thresholds(), request.units());
+        VisitLog a = VisitLogs.analyseKept(request.ledger(), log.get(), request.thresholds(), request.units());
         if (!a.analysed()) {
             throw new IllegalArgumentException(a.refusal());
         }
@@ -70,7 +76,8 @@ public final class CycleLogAnalysis implements LogAnalysisService {
     private static LogAnalysis analysis(VisitLog a, UnitSystem u, String notes) {
         String all = (notes + " " + a.note()).strip();
         return new LogAnalysis(a.source(), summary(a.report(), u), a.report().findings(), all,
-                LogTimelineSource.timeline(a.series(), a.report(), a.conditions().pressurePa(), u, a.source()));
+                LogTimelineSource.timeline(a.series(), a.report(), a.conditions().pressurePa(), u, a.source()),
+                a.logId());
     }
 
     /** The cycle summary, in the order the {@code log} command prints it. */

@@ -4,6 +4,9 @@ import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.cycles.RunCycleAnalysis;
 import app.latentledger.core.findings.Finding;
 import app.latentledger.core.psychro.InputLimits;
+import app.latentledger.core.records.RecordKind;
+import app.latentledger.store.LogRepository;
+import app.latentledger.ui.bin.RecycleBinViewModel;
 import app.latentledger.io.logcsv.DateOrder;
 import app.latentledger.io.logcsv.HeaderMap;
 import app.latentledger.core.records.ImportedLog;
@@ -30,6 +33,8 @@ import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
@@ -38,6 +43,7 @@ import javafx.collections.ObservableList;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.ZoneId;
+import java.time.format.DateTimeFormatter;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -48,10 +54,39 @@ import java.util.concurrent.Executor;
  * the visit's reading sets give none, the airflow), then its cycle summary, findings and timeline,
  * all from the {@link LogAnalysisService} the session was given. The import runs off the FX
  * thread; its progress and its results are applied on the FX thread. A visit opened with a log
- * already kept shows that log.
+ * already kept shows that log; every kept log of the visit is listed and can be shown again or
+ * deleted (asked first, into the recycle bin). The import form closes once a log is shown and opens
+ * again on request. Each message says which field it is about, so the screen shows it beside that
+ * field.
  */
 public final class LogImportViewModel {
     public static final String NOT_WIRED_MESSAGE = LogAnalysisService.NOT_WIRED_MESSAGE;
+
+    /** Where a message belongs on the screen: beside the field or the part it is about. */
+    public enum About {
+        /** The list of kept logs (shown, deleted). */
+        LOGS,
+        /** The import as a whole (the file, its columns, its units), shown under the Import button. */
+        IMPORT,
+        HEADER_MAP, AIRFLOW, FAN_AIRFLOW, DATE_ORDER, TIME_ZONE
+    }
+
+    /**
+     * One kept log as the list shows it.
+     *
+     * @param id    the log's id in the ledger
+     * @param name  the file it came from
+     * @param when  when it was kept, and its length in samples
+     * @param shown true for the log whose figures the screen shows
+     */
+    public record KeptLog(String id, String name, String when, boolean shown) {
+    }
+
+    /** The date orders offered: key ("" decides from the file) and the words on the button. */
+    public static final List<Map.Entry<String, String>> DATE_ORDERS = List.of(Map.entry("", "From the file"),
+            Map.entry("mdy", "Month/day"), Map.entry("dmy", "Day/month"), Map.entry("ymd", "Year/month/day"));
+
+    private static final DateTimeFormatter KEPT_AT = DateTimeFormatter.ofPattern("d MMM yyyy, HH:mm");
 
     private final AppSession session;
     private final Executor work;
@@ -65,6 +100,11 @@ public final class LogImportViewModel {
     private final ReadOnlyBooleanWrapper airflowNeeded = new ReadOnlyBooleanWrapper(false);
     private final ReadOnlyStringWrapper airflowCaption = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
+    private final ReadOnlyObjectWrapper<About> about = new ReadOnlyObjectWrapper<>(About.IMPORT);
+    private final BooleanProperty formOpen = new SimpleBooleanProperty(true);
+    private final ObservableList<KeptLog> keptLogs = FXCollections.observableArrayList();
+    private final ReadOnlyStringWrapper shownId = new ReadOnlyStringWrapper("");
+    private final RecycleBinViewModel bin;
     private final ReadOnlyStringWrapper notes = new ReadOnlyStringWrapper("");
     private final ReadOnlyBooleanWrapper busy = new ReadOnlyBooleanWrapper(false);
     private final ReadOnlyDoubleWrapper progress = new ReadOnlyDoubleWrapper(0);
@@ -89,10 +129,18 @@ public final class LogImportViewModel {
         this.session = session;
         this.work = work;
         this.fx = fx;
+        this.bin = new RecycleBinViewModel(session.ledger());
+        bin.onChange(this::afterDelete);
         session.visitProperty().addListener((o, a, b) -> refresh());
         session.draftProperty().addListener((o, a, b) -> showAirflowNeed());
         // other units or thresholds: show the kept log again in them
-        session.settingsProperty().addListener((o, a, b) -> refresh());
+        session.settingsProperty().addListener((o, a, b) -> showAgain());
+        // a log restored from (or deleted on) the Record screen's bin: list what is kept now
+        session.screenProperty().addListener((o, a, b) -> {
+            if (b == app.latentledger.ui.session.Screen.LOGS) {
+                listKept();
+            }
+        });
         refresh();
     }
 
@@ -177,25 +225,139 @@ public final class LogImportViewModel {
         return timeline.getReadOnlyProperty();
     }
 
+    /** The part of the screen the current message is about. */
+    public ReadOnlyObjectProperty<About> aboutProperty() {
+        return about.getReadOnlyProperty();
+    }
+
+    /** True while the import form is open; it closes once a log is shown. */
+    public BooleanProperty formOpenProperty() {
+        return formOpen;
+    }
+
+    /** The visit's kept logs, in import order, the one shown marked. */
+    public ObservableList<KeptLog> keptLogs() {
+        return keptLogs;
+    }
+
+    /** Id of the kept log whose figures are shown, "" when none. */
+    public ReadOnlyStringProperty shownIdProperty() {
+        return shownId.getReadOnlyProperty();
+    }
+
+    /** A deletion waiting for the tech's yes, or null. */
+    public ReadOnlyObjectProperty<RecycleBinViewModel.PendingDelete> pendingDeleteProperty() {
+        return bin.pendingProperty();
+    }
+
+    private void say(About where, String text) {
+        about.set(where);
+        status.set(text);
+    }
+
+    /** Shows one of the visit's kept logs again, with what it was kept with. */
+    public void view(KeptLog log) {
+        if (!wired() || log == null || session.visit() == null) {
+            return;
+        }
+        bin.cancelDelete();
+        LogRequest request;
+        try {
+            request = request(Map.of());
+        } catch (FieldException e) {
+            say(e.about, "Not analysed: " + e.getMessage());
+            return;
+        }
+        int mine = ++job;
+        busy.set(true);
+        say(About.LOGS, "Analysing " + log.name() + ", kept on this visit…");
+        work.execute(() -> {
+            try {
+                Optional<LogAnalysis> a = session.logAnalysis().kept(request, log.id());
+                fx.execute(() -> {
+                    if (mine == job) {
+                        busy.set(false);
+                        if (a.isPresent()) {
+                            show(a.get());
+                            formOpen.set(false);
+                            say(About.LOGS, "Showing " + a.get().source() + ", kept on this visit.");
+                        } else {
+                            say(About.LOGS, log.name() + " is no longer kept on this visit.");
+                        }
+                        listKept();
+                    }
+                });
+            } catch (Exception e) {
+                fx.execute(() -> {
+                    if (mine == job) {
+                        busy.set(false);
+                        say(About.LOGS, "The log " + log.name() + " cannot be analysed: " + e.getMessage());
+                    }
+                });
+            }
+        });
+    }
+
+    /** Step one of deleting a kept log: ask. */
+    public void askDelete(KeptLog log) {
+        if (log == null) {
+            return;
+        }
+        bin.askDelete(RecordKind.LOG, log.id(), "the log " + log.name());
+        say(About.LOGS, "");
+    }
+
+    /** Step two: the tech said yes; the log goes to the recycle bin with its samples. */
+    public void confirmDelete() {
+        bin.confirmDelete();
+        say(About.LOGS, bin.messageProperty().get());
+    }
+
+    public void cancelDelete() {
+        bin.cancelDelete();
+        say(About.LOGS, "");
+    }
+
+    private void afterDelete() {
+        String shown = shownId.get();
+        listKept();
+        if (!shown.isEmpty() && keptLogs.stream().noneMatch(k -> k.id().equals(shown))) {
+            // the log on screen went to the bin: its figures go with it
+            ++job;
+            clearShown();
+            if (keptLogs.isEmpty()) {
+                formOpen.set(true);
+            }
+        }
+    }
+
     /** Imports and analyses the chosen file, off the FX thread. */
     public void importFile() {
         if (!wired()) {
-            status.set(NOT_WIRED_MESSAGE);
+            say(About.IMPORT, NOT_WIRED_MESSAGE);
             return;
         }
         if (busy.get()) {
             return;
         }
+        bin.cancelDelete();
         String f = file.get() == null ? "" : file.get().strip();
         if (f.isEmpty() || !Files.isRegularFile(Path.of(f))) {
-            status.set("Choose a log file first" + (f.isEmpty() ? "." : ": " + f + " is not a file."));
+            say(About.IMPORT, "Choose a log file first" + (f.isEmpty() ? "." : ": " + f + " is not a file."));
+            return;
+        }
+        Map<String, String> map;
+        try {
+            map = parseMap(headerMap.get());
+        } catch (IllegalArgumentException e) {
+            say(About.HEADER_MAP, "Not imported: " + e.getMessage());
             return;
         }
         LogRequest request;
         try {
-            request = request(parseMap(headerMap.get()));
-        } catch (IllegalArgumentException e) {
-            status.set("Not imported: " + e.getMessage());
+            request = request(map);
+        } catch (FieldException e) {
+            say(e.about, "Not imported: " + e.getMessage());
             return;
         }
         Path path = Path.of(f);
@@ -203,24 +365,26 @@ public final class LogImportViewModel {
         busy.set(true);
         progress.set(0);
         lastSent = 0;
-        status.set("Reading " + path.getFileName() + "…");
+        say(About.IMPORT, "Reading " + path.getFileName() + "…");
         work.execute(() -> {
             try {
                 LogAnalysis a = session.logAnalysis().importAndAnalyse(request, path, this::reported);
                 fx.execute(() -> {
                     if (mine == job) {
                         show(a);
-                        status.set("Imported " + a.source() + " and kept it with this visit."
-                                + (airflowNeeded.get() && Double.isNaN(request.airflowM3PerS())
-                                ? " Give the airflow for water masses." : ""));
                         busy.set(false);
                         listKept();
+                        formOpen.set(false);
+                        say(About.LOGS, "Imported " + a.source() + " and kept it with this visit."
+                                + (airflowNeeded.get() && Double.isNaN(request.airflowM3PerS())
+                                ? " Give the airflow for water masses." : ""));
                     }
                 });
             } catch (Exception e) {
                 fx.execute(() -> {
                     if (mine == job) {
-                        status.set("Not imported: " + e.getMessage());
+                        String m = e.getMessage() == null ? e.toString() : e.getMessage();
+                        say(m.contains("date order") ? About.DATE_ORDER : About.IMPORT, "Not imported: " + m);
                         busy.set(false);
                     }
                 });
@@ -237,6 +401,7 @@ public final class LogImportViewModel {
     }
 
     private void show(LogAnalysis a) {
+        shownId.set(a.logId());
         summary.setAll(a.summary());
         findings.clear();
         for (Finding x : a.findings()) {
@@ -255,6 +420,7 @@ public final class LogImportViewModel {
     }
 
     private void clearShown() {
+        shownId.set("");
         summary.clear();
         findings.clear();
         notes.set("");
@@ -271,12 +437,28 @@ public final class LogImportViewModel {
         try {
             order = dateOrder.get() == null || dateOrder.get().isBlank() ? DateOrder.AUTO
                     : DateOrder.parse(dateOrder.get());
+        } catch (IllegalArgumentException e) {
+            throw new FieldException(About.DATE_ORDER, e.getMessage());
+        }
+        try {
             zone = timeZone.get() == null || timeZone.get().isBlank() ? null : ZoneId.of(timeZone.get().strip());
         } catch (java.time.DateTimeException e) {
-            throw new IllegalArgumentException("time zone '" + timeZone.get() + "' is not known (e.g. America/Chicago)");
+            throw new FieldException(About.TIME_ZONE, "time zone '" + timeZone.get().strip()
+                    + "' is not known: give a zone such as America/Chicago or an offset such as -05:00");
         }
-        return new LogRequest(session.ledger(), session.visit(), typedAirflow(airflow, "airflow"),
-                typedAirflow(fanAirflow, "fan-only airflow"), session.units(), session.thresholds(), map, order, zone);
+        return new LogRequest(session.ledger(), session.visit(), typedAirflow(airflow, "airflow", About.AIRFLOW),
+                typedAirflow(fanAirflow, "fan-only airflow", About.FAN_AIRFLOW), session.units(), session.thresholds(),
+                map, order, zone);
+    }
+
+    /** A typed value refused, with the field it belongs to. */
+    private static final class FieldException extends IllegalArgumentException {
+        private final About about;
+
+        FieldException(About about, String message) {
+            super(message);
+            this.about = about;
+        }
     }
 
     /** The airflow of the visit's last reading set that has one (the state the logger ran in), else NaN. */
@@ -290,7 +472,7 @@ public final class LogImportViewModel {
         return flow;
     }
 
-    private double typedAirflow(StringProperty box, String field) {
+    private double typedAirflow(StringProperty box, String field, About where) {
         String t = box.get() == null ? "" : box.get().strip();
         if (t.isEmpty()) {
             return Double.NaN;
@@ -300,14 +482,14 @@ public final class LogImportViewModel {
         try {
             shown = Double.parseDouble(t.replace(',', '.'));
         } catch (NumberFormatException e) {
-            throw new IllegalArgumentException(field + " '" + t + "' is not a number");
+            throw new FieldException(where, field + " '" + t + "' is not a number");
         }
         double si = Quantity.AIRFLOW.fromDisplay(u, shown);
         try {
             InputLimits.check(field, Quantity.AIRFLOW, si, RunCycleAnalysis.MIN_AIRFLOW_M3_PER_S,
                     RunCycleAnalysis.MAX_AIRFLOW_M3_PER_S, null);
         } catch (InvalidInputException e) {
-            throw new IllegalArgumentException(e.message(u), e);
+            throw new FieldException(where, e.message(u));
         }
         return si;
     }
@@ -326,14 +508,25 @@ public final class LogImportViewModel {
         airflowCaption.set("Airflow, " + Quantity.AIRFLOW.symbol(session.units()));
     }
 
+    /** The visit's kept logs, read without their samples. */
     private void listKept() {
         imported.clear();
-        if (session.visit() == null) {
-            return;
+        List<KeptLog> out = new java.util.ArrayList<>();
+        if (session.visit() != null) {
+            for (LogRepository.Listed l : session.ledger().logs().listForVisit(session.visit().id())) {
+                imported.add(l.sourceFileName());
+                out.add(new KeptLog(l.id(), l.sourceFileName(), "kept " + l.importedAt().format(KEPT_AT) + ", "
+                        + l.samples() + " samples" + (l.timeZone().isEmpty() ? "" : ", clock in " + l.timeZone()),
+                        l.id().equals(shownId.get())));
+            }
         }
-        for (ImportedLog l : session.ledger().logs().forVisit(session.visit().id())) {
-            imported.add(l.sourceFileName());
-        }
+        keptLogs.setAll(out);
+    }
+
+    /** Other units or thresholds: the log on screen again, in them. */
+    private void showAgain() {
+        String shown = shownId.get();
+        keptLogs.stream().filter(k -> k.id().equals(shown)).findFirst().ifPresentOrElse(this::view, this::refresh);
     }
 
     /** A visit opened (or other settings): list its logs and show the latest kept one. */
@@ -341,38 +534,41 @@ public final class LogImportViewModel {
         int mine = ++job;
         clearShown();
         busy.set(false);
+        bin.cancelDelete();
         listKept();
         showAirflowNeed();
+        formOpen.set(keptLogs.isEmpty());
         if (!wired()) {
-            status.set(NOT_WIRED_MESSAGE);
+            say(About.IMPORT, NOT_WIRED_MESSAGE);
             return;
         }
-        status.set("");
+        say(About.LOGS, "");
         if (imported.isEmpty()) {
             return;
         }
         LogRequest request;
         try {
             request = request(Map.of());
-        } catch (IllegalArgumentException e) {
-            status.set("Not analysed: " + e.getMessage());
+        } catch (FieldException e) {
+            say(e.about, "Not analysed: " + e.getMessage());
             return;
         }
         String name = imported.get(imported.size() - 1);
-        status.set("Analysing " + name + ", kept on this visit…");
+        say(About.LOGS, "Analysing " + name + ", kept on this visit…");
         work.execute(() -> {
             try {
                 Optional<LogAnalysis> a = session.logAnalysis().latestKept(request);
                 fx.execute(() -> {
                     if (mine == job) {
                         a.ifPresent(this::show);
-                        status.set(a.map(x -> "Showing " + x.source() + ", kept on this visit.").orElse(""));
+                        listKept();
+                        say(About.LOGS, a.map(x -> "Showing " + x.source() + ", kept on this visit.").orElse(""));
                     }
                 });
             } catch (Exception e) {
                 fx.execute(() -> {
                     if (mine == job) {
-                        status.set("The log kept on this visit cannot be analysed: " + e.getMessage());
+                        say(About.LOGS, "The log kept on this visit cannot be analysed: " + e.getMessage());
                     }
                 });
             }

@@ -34,6 +34,14 @@ public interface LogAnalysisService {
      */
     Optional<LogAnalysis> latestKept(LogRequest request) throws Exception;
 
+    /**
+     * One of the visit's kept logs, by id, analysed again with what it was kept with; empty when the
+     * visit has no log of that id (deleted meanwhile).
+     *
+     * @throws Exception with a message for the tech when the kept log cannot be analysed
+     */
+    Optional<LogAnalysis> kept(LogRequest request, String logId) throws Exception;
+
     /** What the log screen says when the build has no log analysis. */
     String NOT_WIRED_MESSAGE = "Log analysis arrives in a later build: this build can keep"
             + " readings but cannot read a logger file yet.";
@@ -57,6 +65,11 @@ public interface LogAnalysisService {
 
         @Override
         public Optional<LogAnalysis> latestKept(LogRequest request) {
+            return Optional.empty();
+        }
+
+        @Override
+        public Optional<LogAnalysis> kept(LogRequest request, String logId) {
             return Optional.empty();
         }
     };

@@ -181,6 +181,134 @@ class LogImportViewModelTest {
         }
     }
 
+    private static void importSample(LogImportViewModel vm, String name) {
+        vm.fileProperty().set(SAMPLES.resolve(name).toString());
+        vm.importFile();
+        assertTrue(vm.statusProperty().get().startsWith("Imported " + name), vm.statusProperty().get());
+    }
+
+    @Test
+    void severalKeptLogsAreListedAndEachCanBeShownAgainWithItsOwnFigures() {
+        try (AppSession s = withNewVisit(dir)) {
+            LogImportViewModel vm = direct(s);
+            assertTrue(vm.formOpenProperty().get(), "a visit without logs opens on the import form");
+            vm.airflowProperty().set("1400");
+            importSample(vm, "oversized-short-cycling.csv");
+            assertFalse(vm.formOpenProperty().get(), "the form closes once a log is shown");
+            assertEquals(LogImportViewModel.About.LOGS, vm.aboutProperty().get(), "the message sits by the kept logs");
+            String oversizedRate = row(vm, "cycles-per-hour").value();
+            vm.formOpenProperty().set(true);
+            vm.airflowProperty().set("1200");
+            importSample(vm, "healthy-long-cycling.csv");
+            assertEquals(List.of("oversized-short-cycling.csv", "healthy-long-cycling.csv"),
+                    vm.keptLogs().stream().map(LogImportViewModel.KeptLog::name).toList());
+            LogImportViewModel.KeptLog first = vm.keptLogs().get(0);
+            LogImportViewModel.KeptLog second = vm.keptLogs().get(1);
+            assertTrue(second.shown() && !first.shown(), "the newest import is the one shown");
+            // README: the healthy log has no findings, the oversized one short-cycles
+            assertTrue(vm.findings().isEmpty(), codes(vm.findings()).toString());
+            vm.view(first);
+            assertTrue(vm.statusProperty().get().startsWith("Showing oversized-short-cycling.csv"),
+                    vm.statusProperty().get());
+            assertTrue(codes(vm.findings()).contains("short-cycling"), codes(vm.findings()).toString());
+            assertEquals(oversizedRate, row(vm, "cycles-per-hour").value(), "the same figures as at import");
+            assertEquals(first.id(), vm.shownIdProperty().get());
+            assertTrue(vm.keptLogs().get(0).shown());
+        }
+    }
+
+    @Test
+    void deletingAKeptLogAsksFirstThenMovesItToTheRecycleBinFromWhereItCanBeRestored() {
+        try (AppSession s = withNewVisit(dir)) {
+            LogImportViewModel vm = direct(s);
+            vm.airflowProperty().set("1200");
+            importSample(vm, "healthy-long-cycling.csv");
+            vm.formOpenProperty().set(true);
+            importSample(vm, "oversized-short-cycling.csv");
+            LogImportViewModel.KeptLog shown = vm.keptLogs().get(1);
+            vm.askDelete(shown);
+            assertNotNull(vm.pendingDeleteProperty().get(), "asked first");
+            assertTrue(vm.pendingDeleteProperty().get().question().contains("oversized-short-cycling.csv"));
+            vm.cancelDelete();
+            assertEquals(2, s.ledger().logs().idsForVisit(s.visit().id()).size(), "no means nothing is deleted");
+            vm.askDelete(shown);
+            vm.confirmDelete();
+            assertEquals(List.of("healthy-long-cycling.csv"), vm.keptLogs().stream().map(LogImportViewModel.KeptLog::name).toList());
+            assertTrue(vm.statusProperty().get().startsWith("Deleted Log oversized-short-cycling.csv"), vm.statusProperty().get());
+            assertTrue(vm.summary().isEmpty() && vm.findings().isEmpty() && vm.timelineProperty().get() == null,
+                    "the deleted log's figures leave the screen");
+            var entry = s.ledger().recycleBin().find(app.latentledger.core.records.RecordKind.LOG, shown.id());
+            assertTrue(entry.isPresent(), "the log is in the recycle bin");
+            s.ledger().recycleBin().restore(app.latentledger.core.records.RecordKind.LOG, shown.id());
+            s.screenProperty().set(app.latentledger.ui.session.Screen.RESULTS);
+            s.screenProperty().set(app.latentledger.ui.session.Screen.LOGS);
+            assertEquals(2, vm.keptLogs().size(), "a restored log is listed again when the screen is shown");
+        }
+    }
+
+    @Test
+    void theDateOrderAndTimeZoneChosenAreUsedAndTheZoneIsKeptWithTheLog() {
+        try (AppSession s = withNewVisit(dir)) {
+            LogImportViewModel vm = direct(s);
+            vm.airflowProperty().set("1200");
+            vm.fileProperty().set(SAMPLES.resolve("us-dates-hot-week.csv").toString());
+            vm.timeZoneProperty().set("Saltreed/Nowhere");
+            vm.dateOrderProperty().set("mdy");
+            vm.importFile();
+            assertEquals(LogImportViewModel.About.TIME_ZONE, vm.aboutProperty().get());
+            assertTrue(vm.statusProperty().get().contains("Saltreed/Nowhere"), vm.statusProperty().get());
+            vm.timeZoneProperty().set("America/Chicago");
+            vm.fanAirflowProperty().set("x");
+            vm.importFile();
+            assertEquals(LogImportViewModel.About.FAN_AIRFLOW, vm.aboutProperty().get());
+            vm.fanAirflowProperty().set("800");
+            importSample(vm, "us-dates-hot-week.csv");
+            assertTrue(vm.notesProperty().get().contains("dates read as mdy"), vm.notesProperty().get());
+            assertTrue(vm.keptLogs().get(0).when().contains("America/Chicago"), vm.keptLogs().get(0).when());
+            var kept = s.ledger().logs().find(vm.keptLogs().get(0).id()).orElseThrow().kept();
+            assertEquals("America/Chicago", kept.timeZone());
+            // 800 cfm in m³/s: 800 × 0.3048³ / 60
+            assertEquals(800 * Math.pow(0.3048, 3) / 60, kept.fanAirflowM3PerS(), 1e-9);
+            // README: us-dates-hot-week gives oversized-for-load
+            assertTrue(codes(vm.findings()).contains("oversized-for-load"), codes(vm.findings()).toString());
+        }
+    }
+
+    @Test
+    void anAirflowRefusedIsSaidBesideTheAirflowField() {
+        try (AppSession s = withNewVisit(dir)) {
+            LogImportViewModel vm = direct(s);
+            vm.fileProperty().set(SAMPLES.resolve("healthy-long-cycling.csv").toString());
+            vm.airflowProperty().set("5");
+            vm.importFile();
+            assertEquals(LogImportViewModel.About.AIRFLOW, vm.aboutProperty().get());
+            vm.airflowProperty().set("1200");
+            vm.fileProperty().set("no-such-file.csv");
+            vm.importFile();
+            assertEquals(LogImportViewModel.About.IMPORT, vm.aboutProperty().get());
+            assertTrue(vm.formOpenProperty().get(), "a refused import leaves the form open");
+        }
+    }
+
+    @Test
+    void aCelsiusFileUnderFahrenheitSettingsIsRefusedWithItsUnitAndReadInSiSettings() {
+        try (AppSession s = withNewVisit(dir)) {
+            LogImportViewModel vm = direct(s);
+            vm.airflowProperty().set("1200");
+            vm.fileProperty().set(SAMPLES.resolve("celsius-plain.csv").toString());
+            vm.importFile();
+            // README: celsius-plain.csv is refused under IP settings (24 °F return air)
+            String m = vm.statusProperty().get();
+            assertTrue(m.startsWith("Not imported") && m.contains("return_db") && m.contains("°F"), m);
+            assertEquals(LogImportViewModel.About.IMPORT, vm.aboutProperty().get());
+            assertTrue(s.ledger().logs().idsForVisit(s.visit().id()).isEmpty(), "nothing kept");
+            s.saveSettings(s.settings().withChoice(SettingsCatalogue.UNITS, "si"));
+            vm.airflowProperty().set("570"); // README: --units si --airflow 570
+            importSample(vm, "celsius-plain.csv");
+            assertTrue(codes(vm.findings()).contains("fan-off-delay-reevaporation"), codes(vm.findings()).toString());
+        }
+    }
+
     @Test
     void parsesAHeaderMapAtTheLastEqualsSign() {
         assertEquals(java.util.Map.of("A=B", "time", "RA", "return_db"), LogImportViewModel.parseMap("A=B=time; RA=return_db"));
