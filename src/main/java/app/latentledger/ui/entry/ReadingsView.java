@@ -96,26 +96,31 @@ public final class ReadingsView extends VBox implements Reflowing {
 
     /** Beside the airflow box: on for standard cfm (most flow hoods and grids), off for an actual volume. */
     private javafx.scene.control.ToggleButton airflowSwitch() {
-        javafx.scene.control.ToggleButton b = switchButton("airflow-standard", "Standard air (flow hood, grid)");
+        javafx.scene.control.ToggleButton b = switchButton("airflow-standard", "Standard air");
         b.selectedProperty().bindBidirectional(viewModel.standardAirflowProperty());
         return b;
     }
 
     /** Beside the probe offset: on when one instrument read return and supply (or both were compared). */
     private javafx.scene.control.ToggleButton probeSwitch() {
-        javafx.scene.control.ToggleButton b = switchButton("same-probe", "Same instrument both sides");
+        javafx.scene.control.ToggleButton b = switchButton("same-probe", "One probe");
         b.selectedProperty().bindBidirectional(viewModel.sameProbeProperty());
         return b;
     }
 
     private static javafx.scene.control.ToggleButton switchButton(String id, String text) {
-        javafx.scene.control.ToggleButton b = new javafx.scene.control.ToggleButton(text);
+        javafx.scene.control.ToggleButton b = new javafx.scene.control.ToggleButton(text) {
+            // at least a gloved finger's height, and tall enough for its wrapped words at any text size
+            @Override
+            protected double computeMinHeight(double width) {
+                return Math.max(48, computePrefHeight(width));
+            }
+        };
         b.setId(id);
         b.getStyleClass().add("switch-box");
         b.setWrapText(true);
         b.setMaxWidth(Double.MAX_VALUE);
         b.setMaxHeight(Double.MAX_VALUE);
-        b.setMinHeight(48);
         b.setFocusTraversable(false);
         return b;
     }

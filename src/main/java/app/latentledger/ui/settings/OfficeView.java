@@ -46,7 +46,6 @@ public final class OfficeView extends VBox {
         enrolRow.setAlignment(Pos.BOTTOM_LEFT);
 
         Button sync = Ui.button("office-sync", "Sync now", null, viewModel::syncNow);
-        sync.setMinWidth(140);
         sync.disableProperty().bind(viewModel.busyProperty().or(viewModel.enrolledProperty().not()));
         Label waiting = bound("office-waiting", "");
         waiting.textProperty().bind(viewModel.waitingProperty());
