@@ -414,8 +414,9 @@ public final class LogImportViewModel {
             return;
         }
         TimelineViewModel t = new TimelineViewModel(a.timeline());
-        t.themeProperty().bind(Bindings.createObjectBinding(() -> CoilCharts.theme(session.darkProperty().get()),
-                session.darkProperty()));
+        // the saved theme, outdoor included, as the Results chart takes it
+        t.themeProperty().bind(Bindings.createObjectBinding(() -> CoilCharts.theme(session.themeProperty().get()),
+                session.themeProperty()));
         timeline.set(t);
     }
 

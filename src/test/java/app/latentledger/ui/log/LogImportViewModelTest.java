@@ -64,6 +64,22 @@ class LogImportViewModelTest {
         }
     }
 
+    /** The timeline takes the saved theme as the Results chart does: outdoor gives its heavy lines, and it follows a change. */
+    @Test
+    void theTimelineFollowsTheSavedThemeOutdoorIncluded() {
+        try (AppSession s = withNewVisit(dir)) {
+            s.saveSettings(s.settingsProperty().get().withChoice("theme", "outdoor"));
+            LogImportViewModel vm = direct(s);
+            vm.fileProperty().set(SAMPLES.resolve("oversized-short-cycling.csv").toString());
+            vm.airflowProperty().set("1400");
+            vm.importFile();
+            assertNotNull(vm.timelineProperty().get(), vm.statusProperty().get());
+            assertEquals(app.latentledger.chart.draw.Theme.OUTDOOR, vm.timelineProperty().get().themeProperty().get());
+            s.saveSettings(s.settingsProperty().get().withChoice("theme", "dark"));
+            assertEquals(app.latentledger.chart.draw.Theme.DARK, vm.timelineProperty().get().themeProperty().get());
+        }
+    }
+
     @Test
     void anOversizedSystemsLogShowsItsShortCyclingIsKeptAndComesBackAfterARestart() {
         String visitId;
