@@ -29,6 +29,7 @@ final class Routes {
     private final SyncService sync;
     private final LogSamples samples;
     private final VisitBundles bundles;
+    private final OfficePages office;
 
     Routes(OfficeDatabase db, ServerConfig config) {
         this.db = db;
@@ -37,6 +38,7 @@ final class Routes {
         this.sync = new SyncService(db);
         this.samples = new LogSamples(db);
         this.bundles = new VisitBundles(db);
+        this.office = new OfficePages(db, config, accounts, bundles);
     }
 
     /**
@@ -88,6 +90,9 @@ final class Routes {
         if (path.equals(API + "/enrol")) {
             only(method, "POST");
             return enrol(call);
+        }
+        if (OfficePages.isOfficePath(path)) {
+            return office.handle(call);
         }
         if (!path.startsWith(API + "/")) {
             throw ApiError.notFound("no such page: " + path);

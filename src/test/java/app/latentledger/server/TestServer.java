@@ -160,6 +160,15 @@ final class TestServer implements AutoCloseable {
         }
     }
 
+    /** Runs a query in this server's schema and returns its first column of the first row as text. */
+    String sqlText(String query) throws SQLException {
+        try (Connection c = DriverManager.getConnection(url); Statement s = c.createStatement()) {
+            s.execute("set search_path to " + schema);
+            var rs = s.executeQuery(query);
+            return rs.next() ? rs.getString(1) : null;
+        }
+    }
+
     @Override
     public void close() throws Exception {
         server.close();
