@@ -101,7 +101,7 @@ final class OfficeVisits {
             Visit v = WireCodec.visit(live(c, s, SyncKind.VISIT, visitId).body());
             Site site = WireCodec.site(live(c, s, SyncKind.SITE, v.siteId()).body());
             HvacSystem system = WireCodec.system(live(c, s, SyncKind.SYSTEM, v.systemId()).body());
-            List<ReadingSet> sets = SyncService.currentWhere(c, s.companyId(), SyncKind.READINGS, "visit_id", visitId)
+            List<ReadingSet> sets = SyncService.currentOfVisit(c, s.companyId(), SyncKind.READINGS, visitId)
                     .stream().filter(r -> !r.deleted()).map(r -> WireCodec.readingSet(r.body()))
                     .sorted(Comparator.comparing(ReadingSet::takenAt)).toList();
             return new Loaded(v, site, system, sets);
