@@ -62,17 +62,7 @@ public final class Database implements AutoCloseable {
             throw new StoreException(StoreException.Kind.UNAVAILABLE, "cannot create the folder for " + file + ": "
                     + e.getMessage(), e);
         }
-        Connection c;
-        try {
-            SQLiteConfig config = new SQLiteConfig();
-            config.setJournalMode(SQLiteConfig.JournalMode.WAL);
-            config.setSynchronous(SQLiteConfig.SynchronousMode.FULL);
-            config.enforceForeignKeys(true);
-            config.setBusyTimeout(busyTimeoutMs());
-            c = config.createConnection("jdbc:sqlite:" + file.toAbsolutePath());
-        } catch (SQLException e) {
-            throw new StoreException(StoreException.Kind.UNAVAILABLE, "cannot open " + file + ": " + e.getMessage(), e);
-        }
+        Connection c = connect(file);
         Database db = new Database(file, c, created);
         try {
             db.checkPragmas();
@@ -89,6 +79,48 @@ public final class Database implements AutoCloseable {
             throw e;
         }
         return db;
+    }
+
+    /**
+     * A connection with the busy timeout, FULL sync, foreign keys and WAL. Opening is retried for up to
+     * the busy timeout while SQLite answers "busy": in WAL mode the last program closing the ledger
+     * holds it exclusively for a moment while it cleans up the log, and a program opening it in that
+     * moment is told "busy" at once, without waiting [SQLite docs: "Write-Ahead Logging", §"Sometimes
+     * queries return SQLITE_BUSY in WAL mode"]. Six `settings set` commands started together saw this
+     * in about 1 of 40 races before the retry.
+     */
+    private static Connection connect(Path file) {
+        long deadline = System.nanoTime() + busyTimeoutMs() * 1_000_000L;
+        long pauseMs = 5;
+        while (true) {
+            try {
+                SQLiteConfig config = new SQLiteConfig();
+                config.setSynchronous(SQLiteConfig.SynchronousMode.FULL);
+                config.enforceForeignKeys(true);
+                config.setBusyTimeout(busyTimeoutMs());
+                Connection c = config.createConnection("jdbc:sqlite:" + file.toAbsolutePath());
+                // WAL after the busy timeout is in force, not among the driver's opening pragmas
+                try (Statement s = c.createStatement()) {
+                    s.execute("PRAGMA journal_mode=WAL");
+                } catch (SQLException e) {
+                    c.close();
+                    throw e;
+                }
+                return c;
+            } catch (SQLException e) {
+                if (!busy(e) || System.nanoTime() > deadline) {
+                    throw new StoreException(StoreException.Kind.UNAVAILABLE, "cannot open " + file + ": "
+                            + e.getMessage(), e);
+                }
+            }
+            try {
+                Thread.sleep(pauseMs);
+            } catch (InterruptedException ie) {
+                Thread.currentThread().interrupt();
+                throw new StoreException(StoreException.Kind.UNAVAILABLE, "cannot open " + file + ": interrupted", ie);
+            }
+            pauseMs = Math.min(100, pauseMs * 2);
+        }
     }
 
     /** The pragmas are what crash safety rests on: fail loudly if SQLite did not take them. */
