@@ -88,6 +88,25 @@ public final class BundleObjects {
         return PaperworkJson.paperwork(new JsonFields(o, "paperwork"));
     }
 
+    /** A site's house facts as {@code house.json} writes them (with the site's id). */
+    public static JsonObject houseFacts(app.latentledger.core.house.HouseFacts f, String siteId) {
+        return HouseJson.facts(f, siteId);
+    }
+
+    /** The house facts in the {@code facts} member of {@code o}, or null when it is absent or null. */
+    public static app.latentledger.core.house.HouseFacts houseFacts(JsonObject o) throws BundleException {
+        return HouseJson.facts(new JsonFields(o, "house"));
+    }
+
+    /** One visit's house readings as an item of {@code house.json}'s {@code readings} list. */
+    public static JsonObject houseReadings(String visitId, app.latentledger.core.house.HouseVisitReadings r) {
+        return HouseJson.readings(new BundleContent.VisitHouse(visitId, r));
+    }
+
+    public static app.latentledger.core.house.HouseVisitReadings houseReadings(JsonObject o) throws BundleException {
+        return HouseJson.visitReadings(new JsonFields(o, "house readings")).readings();
+    }
+
     /** The log object of {@code logs.json} (metadata; the samples are {@link #logSamples}). */
     public static JsonObject log(ImportedLog l) {
         return LogJson.write(l);

@@ -35,7 +35,7 @@ final class HouseJson {
         return o;
     }
 
-    private static JsonObject facts(HouseFacts f, String siteId) {
+    static JsonObject facts(HouseFacts f, String siteId) {
         JsonObject o = new JsonObject();
         o.addProperty("siteId", siteId);
         o.addProperty("floorAreaM2", f.floorAreaM2());
@@ -53,7 +53,7 @@ final class HouseJson {
         return o;
     }
 
-    private static JsonObject readings(BundleContent.VisitHouse v) {
+    static JsonObject readings(BundleContent.VisitHouse v) {
         HouseVisitReadings h = v.readings();
         JsonObject o = new JsonObject();
         o.addProperty("visitId", v.visitId());
@@ -104,15 +104,19 @@ final class HouseJson {
         List<BundleContent.VisitHouse> out = new ArrayList<>();
         int n = 0;
         for (JsonElement e : list.getAsJsonArray()) {
-            JsonFields f = new JsonFields(e, house.where() + " readings item " + (++n));
-            AirReading[] air = new AirReading[AIR.length];
-            for (int i = 0; i < AIR.length; i++) {
-                air[i] = air(f.optionalObject(AIR[i]), AIR[i]);
-            }
-            out.add(new BundleContent.VisitHouse(f.text("visitId"),
-                    new HouseVisitReadings(air[0], air[1], air[2], air[3], optional(f, "runtimeFraction"))));
+            out.add(visitReadings(new JsonFields(e, house.where() + " readings item " + (++n))));
         }
         return out;
+    }
+
+    /** One visit's house readings object, as {@link #readings(BundleContent.VisitHouse)} writes it. */
+    static BundleContent.VisitHouse visitReadings(JsonFields f) throws BundleException {
+        AirReading[] air = new AirReading[AIR.length];
+        for (int i = 0; i < AIR.length; i++) {
+            air[i] = air(f.optionalObject(AIR[i]), AIR[i]);
+        }
+        return new BundleContent.VisitHouse(f.text("visitId"),
+                new HouseVisitReadings(air[0], air[1], air[2], air[3], optional(f, "runtimeFraction")));
     }
 
     private static AirReading air(JsonFields a, String where) throws BundleException {

@@ -2,11 +2,7 @@ package app.latentledger.sync.wire;
 
 import app.latentledger.bundle.BundleException;
 import app.latentledger.bundle.BundleObjects;
-import app.latentledger.core.coil.AirReading;
-import app.latentledger.core.house.HouseFacts;
 import app.latentledger.core.house.HouseVisitReadings;
-import app.latentledger.core.house.VentilationType;
-import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.Instrument;
@@ -42,7 +38,6 @@ public final class WireCodec {
     /** How wire JSON is written: compact, nulls kept (an empty cell is a null), no HTML escaping. */
     public static final Gson GSON = new GsonBuilder().disableHtmlEscaping().serializeNulls().create();
     private static final Pattern FIELD = Pattern.compile("field \"([^\"]+)\"");
-    private static final String[] AIR = {"outdoor", "grille", "plenum", "space"};
 
     private WireCodec() {
     }
@@ -87,60 +82,14 @@ public final class WireCodec {
         return BundleObjects.logSamples(l.samples());
     }
 
+    /** The site's facts and the visit's readings in the shapes {@code house.json} gives them. */
     public static JsonObject body(HouseRecord h) {
         JsonObject o = new JsonObject();
         o.addProperty("visitId", h.visitId());
         o.addProperty("siteId", h.siteId());
-        HouseFacts f = h.facts();
-        if (f == null) {
-            o.add("facts", JsonNull.INSTANCE);
-        } else {
-            JsonObject facts = new JsonObject();
-            facts.addProperty("floorAreaM2", f.floorAreaM2());
-            facts.addProperty("ceilingHeightM", f.ceilingHeightM());
-            facts.addProperty("stories", f.stories());
-            facts.addProperty("bedrooms", f.bedrooms());
-            facts.addProperty("occupants", f.occupants());
-            number(facts, "cfm50M3PerS", f.cfm50M3PerS());
-            number(facts, "ach50", f.ach50());
-            facts.addProperty("shelterClass", f.shelterClass());
-            number(facts, "windMPerS", f.windMPerS());
-            facts.addProperty("ventilationType", f.ventilationType().key());
-            facts.addProperty("ventilationM3PerS", f.ventilationM3PerS());
-            number(facts, "ervLatentEffectiveness", f.ervLatentEffectiveness());
-            o.add("facts", facts);
-        }
-        HouseVisitReadings r = h.readings();
-        JsonObject readings = new JsonObject();
-        AirReading[] airs = {r.outdoor(), r.grille(), r.plenum(), r.space()};
-        for (int i = 0; i < AIR.length; i++) {
-            readings.add(AIR[i], air(airs[i]));
-        }
-        number(readings, "runtimeFraction", r.runtimeFraction());
-        o.add("readings", readings);
+        o.add("facts", h.facts() == null ? JsonNull.INSTANCE : BundleObjects.houseFacts(h.facts(), h.siteId()));
+        o.add("readings", BundleObjects.houseReadings(h.visitId(), h.readings()));
         return o;
-    }
-
-    private static JsonElement air(AirReading a) {
-        if (a == null) {
-            return JsonNull.INSTANCE;
-        }
-        JsonObject o = new JsonObject();
-        o.addProperty("dryBulbC", a.dryBulbC());
-        o.addProperty("dryBulbTolK", a.dryBulbTolK());
-        o.addProperty("humidityKind", a.humidityKind().key());
-        o.addProperty("humidityValue", a.humiditySi());
-        o.addProperty("humidityTol", a.humidityTolSi());
-        return o;
-    }
-
-    /** NaN ("not given") travels as null: JSON has no NaN. */
-    private static void number(JsonObject o, String name, double v) {
-        if (Double.isNaN(v)) {
-            o.add(name, JsonNull.INSTANCE);
-        } else {
-            o.addProperty(name, v);
-        }
     }
 
     // ---- reading bodies back ------------------------------------------------------------------
@@ -230,28 +179,13 @@ public final class WireCodec {
     public static HouseRecord house(JsonObject body) {
         String visitId = text(body, "visitId", "house");
         String siteId = text(body, "siteId", "house");
-        HouseFacts facts = null;
-        JsonObject f = object(body, "facts", "house");
-        if (f != null) {
-            facts = new HouseFacts(need(f, "floorAreaM2"), need(f, "ceilingHeightM"), whole(f, "stories"),
-                    whole(f, "bedrooms"), whole(f, "occupants"), optional(f, "cfm50M3PerS"), optional(f, "ach50"),
-                    whole(f, "shelterClass"), optional(f, "windMPerS"),
-                    VentilationType.parse(text(f, "ventilationType", "house facts")), need(f, "ventilationM3PerS"),
-                    optional(f, "ervLatentEffectiveness"));
-        }
         JsonObject r = object(body, "readings", "house");
-        HouseVisitReadings readings = HouseVisitReadings.EMPTY;
-        if (r != null) {
-            AirReading[] airs = new AirReading[AIR.length];
-            for (int i = 0; i < AIR.length; i++) {
-                JsonObject a = object(r, AIR[i], "house readings");
-                airs[i] = a == null ? null : new AirReading(AIR[i], need(a, "dryBulbC"), need(a, "dryBulbTolK"),
-                        HumidityKind.parse(AIR[i] + " humidity kind", text(a, "humidityKind", "house " + AIR[i])),
-                        need(a, "humidityValue"), need(a, "humidityTol"));
-            }
-            readings = new HouseVisitReadings(airs[0], airs[1], airs[2], airs[3], optional(r, "runtimeFraction"));
+        try {
+            return new HouseRecord(visitId, siteId, BundleObjects.houseFacts(body),
+                    r == null ? HouseVisitReadings.EMPTY : BundleObjects.houseReadings(r));
+        } catch (BundleException e) {
+            throw refused(e);
         }
-        return new HouseRecord(visitId, siteId, facts, readings);
     }
 
     /**
@@ -392,38 +326,5 @@ public final class WireCodec {
             throw new WireException(name, where + ": field \"" + name + "\" must be an object or null");
         }
         return e.getAsJsonObject();
-    }
-
-    private static double need(JsonObject o, String name) {
-        double v = optional(o, name);
-        if (Double.isNaN(v)) {
-            throw new WireException(name, "house: field \"" + name + "\" missing");
-        }
-        return v;
-    }
-
-    private static double optional(JsonObject o, String name) {
-        JsonElement e = o.get(name);
-        if (e == null || e.isJsonNull()) {
-            return Double.NaN;
-        }
-        if (!e.isJsonPrimitive() || !e.getAsJsonPrimitive().isNumber()) {
-            throw new WireException(name, "house: field \"" + name + "\" must be a number");
-        }
-        double v = e.getAsDouble();
-        if (!Double.isFinite(v)) {
-            throw new WireException(new Refusal(name, String.valueOf(v), "a finite number",
-                    "house: field \"" + name + "\" " + v + " is not a finite number"));
-        }
-        return v;
-    }
-
-    private static int whole(JsonObject o, String name) {
-        double v = need(o, name);
-        if (v != Math.rint(v) || Math.abs(v) > Integer.MAX_VALUE) {
-            throw new WireException(new Refusal(name, String.valueOf(v), "a whole number",
-                    "house: field \"" + name + "\" " + v + " is not a whole number"));
-        }
-        return (int) v;
     }
 }
