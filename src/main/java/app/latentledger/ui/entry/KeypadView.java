@@ -7,12 +7,13 @@ import javafx.geometry.Pos;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.ToggleButton;
-import javafx.scene.layout.ColumnConstraints;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
+import java.util.ArrayList;
+import java.util.List;
 
 /**
  * The number pad with the selected box's name, the number being typed and its unit, the choice
@@ -145,30 +146,7 @@ final class KeypadView extends VBox {
     }
 
     private GridPane keys(EntryViewModel vm) {
-        KeypadViewModel pad = vm.pad();
-        GridPane g = new GridPane();
-        g.setHgap(8);
-        g.setVgap(8);
-        for (int i = 0; i < 4; i++) {
-            ColumnConstraints c = new ColumnConstraints();
-            c.setPercentWidth(25);
-            g.getColumnConstraints().add(c);
-        }
-        int[][] digits = {{7, 8, 9}, {4, 5, 6}, {1, 2, 3}};
-        for (int r = 0; r < 3; r++) {
-            for (int c = 0; c < 3; c++) {
-                int d = digits[r][c];
-                g.add(key("key-" + d, String.valueOf(d), () -> pad.digit(d)), c, r);
-            }
-        }
-        g.add(key("key-back", "⌫", pad::backspace), 3, 0);
-        g.add(key("key-clear", "C", pad::clear), 3, 1);
-        g.add(key("key-sign", "±", pad::sign), 0, 3);
-        g.add(key("key-0", "0", () -> pad.digit(0)), 1, 3);
-        g.add(key("key-point", ".", pad::point), 2, 3);
-        Button enter = key("key-enter", "Enter", vm::enterAndAdvance);
-        enter.getStyleClass().add("enter");
-        g.getRowConstraints().clear();
+        List<javafx.scene.layout.RowConstraints> rows = new ArrayList<>();
         for (int i = 0; i < 4; i++) {
             javafx.scene.layout.RowConstraints rc = new javafx.scene.layout.RowConstraints();
             // fixed: the same key is at the same place on every box, whatever the message says
@@ -176,25 +154,14 @@ final class KeypadView extends VBox {
             upright.add(() -> fixRow(rc, KEY_HEIGHT_UPRIGHT));
             fixRow(rc, KEY_HEIGHT);
             rc.setFillHeight(true);
-            g.getRowConstraints().add(rc);
+            rows.add(rc);
         }
-        g.getChildren().forEach(n -> ((Button) n).setMaxHeight(Double.MAX_VALUE));
-        enter.setMaxHeight(Double.MAX_VALUE);
-        g.add(enter, 3, 2, 1, 2);
-        return g;
+        return KeyGrid.of(vm.pad(), "", vm::enterAndAdvance, rows);
     }
 
     private static void fixRow(javafx.scene.layout.RowConstraints rc, double px) {
         rc.setMinHeight(px);
         rc.setPrefHeight(px);
         rc.setMaxHeight(px);
-    }
-
-    private static Button key(String id, String text, Runnable action) {
-        Button b = Ui.button(id, text, null, action);
-        b.getStyleClass().add("key");
-        b.setMaxWidth(Double.MAX_VALUE);
-        b.setFocusTraversable(false);
-        return b;
     }
 }

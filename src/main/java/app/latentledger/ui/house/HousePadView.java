@@ -1,19 +1,20 @@
 package app.latentledger.ui.house;
 
+import app.latentledger.ui.entry.KeyGrid;
 import app.latentledger.ui.entry.KeypadViewModel;
 import app.latentledger.ui.look.Ui;
 import javafx.geometry.Pos;
-import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
-import javafx.scene.layout.ColumnConstraints;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.RowConstraints;
 import javafx.scene.layout.VBox;
+import java.util.ArrayList;
+import java.util.List;
 
 /**
  * The House screen's number pad: the selected box's name, the number being typed on the shared
@@ -91,40 +92,10 @@ final class HousePadView extends VBox {
     }
 
     private GridPane keys(KeypadViewModel pad) {
-        GridPane g = new GridPane();
-        g.setHgap(8);
-        g.setVgap(8);
+        List<RowConstraints> rows = new ArrayList<>();
         for (int i = 0; i < 4; i++) {
-            ColumnConstraints c = new ColumnConstraints();
-            c.setPercentWidth(25);
-            g.getColumnConstraints().add(c);
-            RowConstraints r = new RowConstraints(KEY_HEIGHT, KEY_HEIGHT, KEY_HEIGHT);
-            g.getRowConstraints().add(r);
+            rows.add(new RowConstraints(KEY_HEIGHT, KEY_HEIGHT, KEY_HEIGHT));
         }
-        int[][] digits = {{7, 8, 9}, {4, 5, 6}, {1, 2, 3}};
-        for (int r = 0; r < 3; r++) {
-            for (int c = 0; c < 3; c++) {
-                int d = digits[r][c];
-                g.add(key("house-key-" + d, String.valueOf(d), () -> pad.digit(d)), c, r);
-            }
-        }
-        g.add(key("house-key-back", "⌫", pad::backspace), 3, 0);
-        g.add(key("house-key-clear", "C", pad::clear), 3, 1);
-        g.add(key("house-key-sign", "±", pad::sign), 0, 3);
-        g.add(key("house-key-0", "0", () -> pad.digit(0)), 1, 3);
-        g.add(key("house-key-point", ".", pad::point), 2, 3);
-        Button enter = key("house-key-enter", "Enter", vm::enterAndAdvance);
-        enter.getStyleClass().add("enter");
-        g.add(enter, 3, 2, 1, 2);
-        return g;
-    }
-
-    private static Button key(String id, String text, Runnable action) {
-        Button b = Ui.button(id, text, null, action);
-        b.getStyleClass().add("key");
-        b.setMaxWidth(Double.MAX_VALUE);
-        b.setMaxHeight(Double.MAX_VALUE);
-        b.setFocusTraversable(false);
-        return b;
+        return KeyGrid.of(pad, "house-", vm::enterAndAdvance, rows);
     }
 }
