@@ -11,6 +11,20 @@ final class DecimalText {
                 || v.equalsIgnoreCase("null");
     }
 
+    /** {@link #missing(String)} of {@code v[from, to)}. */
+    static boolean missing(char[] v, int from, int to) {
+        int n = to - from;
+        if (n == 0) {
+            return true;
+        }
+        char c = v[from];
+        if (n > 4 || c >= '0' && c <= '9') {
+            return false;
+        }
+        return Cells.equalsIgnoreCase(v, from, to, "nan") || Cells.equalsIgnoreCase(v, from, to, "na")
+                || Cells.equals(v, from, to, "-") || Cells.equalsIgnoreCase(v, from, to, "null");
+    }
+
     private static final double[] POWERS_OF_TEN = new double[23];
 
     static {
@@ -27,13 +41,19 @@ final class DecimalText {
      * Double.parseDouble (Clinger's fast path); anything else goes to Double.parseDouble.
      */
     static double parse(String v, boolean decimalComma) {
-        int n = v.length();
+        char[] c = v.toCharArray();
+        return parse(c, 0, c.length, decimalComma);
+    }
+
+    /** {@link #parse(String, boolean)} of {@code text[from, to)}: no String unless the JDK must parse it. */
+    static double parse(char[] text, int from, int to, boolean decimalComma) {
+        int n = to - from;
         if (n == 0 || n > 40) {
             return Double.NaN;
         }
         int i = 0;
         boolean negative = false;
-        char first = v.charAt(0);
+        char first = text[from];
         if (first == '+' || first == '-') {
             negative = first == '-';
             i = 1;
@@ -44,7 +64,7 @@ final class DecimalText {
         boolean exponent = false;
         boolean anyDigit = false;
         for (; i < n; i++) {
-            char c = v.charAt(i);
+            char c = text[from + i];
             if (c >= '0' && c <= '9') {
                 anyDigit = true;
                 if (fraction >= 0) {
@@ -71,6 +91,7 @@ final class DecimalText {
             return negative ? -x : x;
         }
         // rare forms (exponent, many digits): check the shape, then let the JDK parse it
+        String v = new String(text, from, n);
         if (exponent) {
             String e = v.substring(i + 1);
             int j = e.startsWith("+") || e.startsWith("-") ? 1 : 0;

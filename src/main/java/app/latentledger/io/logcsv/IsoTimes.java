@@ -23,35 +23,45 @@ final class IsoTimes {
      *         (never throws)
      */
     static boolean parse(String s, Parsed out) {
-        int n = s.length();
+        char[] c = s.toCharArray();
+        return parse(c, 0, c.length, out);
+    }
+
+    /** The same on {@code s[from, to)}: no String per timestamp. */
+    static boolean parse(char[] s, int from, int to, Parsed out) {
+        return parseAt(s, from, to - from, out);
+    }
+
+    /** {@code n} chars of {@code s} from {@code o}; indices below are relative to {@code o}. */
+    private static boolean parseAt(char[] s, int o, int n, Parsed out) {
         if (n < 16) {
             return false;
         }
-        int year = digits(s, 0, 4);
-        int month = digits(s, 5, 2);
-        int day = digits(s, 8, 2);
-        char sep = s.charAt(10);
-        int hour = digits(s, 11, 2);
-        int minute = digits(s, 14, 2);
-        if (year < 0 || month < 1 || month > 12 || day < 1 || s.charAt(4) != '-' || s.charAt(7) != '-'
-                || sep != 'T' && sep != 't' && sep != ' ' || hour < 0 || hour > 23 || s.charAt(13) != ':'
+        int year = digits(s, o, n, 0, 4);
+        int month = digits(s, o, n, 5, 2);
+        int day = digits(s, o, n, 8, 2);
+        char sep = s[o + 10];
+        int hour = digits(s, o, n, 11, 2);
+        int minute = digits(s, o, n, 14, 2);
+        if (year < 0 || month < 1 || month > 12 || day < 1 || s[o + 4] != '-' || s[o + 7] != '-'
+                || sep != 'T' && sep != 't' && sep != ' ' || hour < 0 || hour > 23 || s[o + 13] != ':'
                 || minute < 0 || minute > 59 || day > daysInMonth(year, month)) {
             return false;
         }
         int i = 16;
         double second = 0;
-        if (i < n && s.charAt(i) == ':') {
-            int sec = digits(s, i + 1, 2);
+        if (i < n && s[o + i] == ':') {
+            int sec = digits(s, o, n, i + 1, 2);
             if (sec < 0 || sec > 59) {
                 return false;
             }
             second = sec;
             i += 3;
-            if (i < n && (s.charAt(i) == '.' || s.charAt(i) == ',')) {
+            if (i < n && (s[o + i] == '.' || s[o + i] == ',')) {
                 int start = ++i;
                 double scale = 0.1;
-                while (i < n && s.charAt(i) >= '0' && s.charAt(i) <= '9') {
-                    second += (s.charAt(i) - '0') * scale;
+                while (i < n && s[o + i] >= '0' && s[o + i] <= '9') {
+                    second += (s[o + i] - '0') * scale;
                     scale /= 10;
                     i++;
                 }
@@ -63,20 +73,20 @@ final class IsoTimes {
         boolean hasOffset = false;
         int offset = 0;
         if (i < n) {
-            char c = s.charAt(i);
+            char c = s[o + i];
             if ((c == 'Z' || c == 'z') && i + 1 == n) {
                 hasOffset = true;
             } else if (c == '+' || c == '-') {
-                int oh = digits(s, i + 1, 2);
+                int oh = digits(s, o, n, i + 1, 2);
                 int om = 0;
                 int rest = n - (i + 3);
                 if (oh < 0 || oh > 18) {
                     return false;
                 }
-                if (rest == 3 && s.charAt(i + 3) == ':') {
-                    om = digits(s, i + 4, 2);
+                if (rest == 3 && s[o + i + 3] == ':') {
+                    om = digits(s, o, n, i + 4, 2);
                 } else if (rest == 2) {
-                    om = digits(s, i + 3, 2);
+                    om = digits(s, o, n, i + 3, 2);
                 } else if (rest != 0) {
                     return false;
                 }
@@ -96,13 +106,13 @@ final class IsoTimes {
         return true;
     }
 
-    private static int digits(String s, int from, int count) {
-        if (from + count > s.length()) {
+    private static int digits(char[] s, int o, int n, int from, int count) {
+        if (from + count > n) {
             return -1;
         }
         int v = 0;
         for (int i = from; i < from + count; i++) {
-            char c = s.charAt(i);
+            char c = s[o + i];
             if (c < '0' || c > '9') {
                 return -1;
             }

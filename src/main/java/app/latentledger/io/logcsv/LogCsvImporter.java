@@ -7,10 +7,7 @@ import app.latentledger.core.measure.FieldLimits;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStreamReader;
 import java.io.Reader;
@@ -21,7 +18,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.EnumMap;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -104,77 +100,53 @@ public final class LogCsvImporter {
      * @param totalChars its length for progress (≤ 0 when unknown)
      */
     public LogImport read(Reader in, long totalChars) throws IOException, LogRefusedException {
-        BufferedReader buffered = new BufferedReader(in, 1 << 16);
-        buffered.mark(MAX_HEADER_CHARS + 2);
-        String headerLine = firstLine(buffered);
-        buffered.reset();
+        // the importer's own splitter: the same rows and fields as format(delimiter) gives, no String per cell
+        RowSplitter rows0 = new RowSplitter(in, ',');
+        String headerLine = rows0.peekFirstLine(MAX_HEADER_CHARS);
         if (headerLine == null) {
             throw new LogRefusedException("the file is empty: a log needs a header row and sample rows");
         }
+        if (headerLine.length() > MAX_HEADER_CHARS) {
+            throw new LogRefusedException("the first line is over " + MAX_HEADER_CHARS
+                    + " characters: not a header row of a log");
+        }
         char delimiter = sniffDelimiter(headerLine);
         boolean decimalComma = delimiter == ';';
-        CSVFormat format = format(delimiter);
-        try (CSVParser parser = CSVParser.builder().setReader(buffered).setFormat(format).get()) {
-            Iterator<CSVRecord> it = parser.iterator();
-            if (!it.hasNext()) {
-                throw new LogRefusedException("the file is empty: a log needs a header row and sample rows");
-            }
-            HeaderLayout header = HeaderLayout.read(names(it.next()), maps);
-            // rows are about as long as the header: size the columns once instead of doubling them
-            int capacity = (int) Math.max(1024, Math.min(50_000_000L, totalChars / Math.max(20, headerLine.length())));
-            UnitSystem stated = header.statedTemperatureUnit();
-            Rows rows = new Rows(header, capacity, stated != null ? stated : units, stated != null);
-            int rowsRead = 0;
-            IsoTimes.Parsed parsed = new IsoTimes.Parsed();
-            Boolean offsetMode = null;
-            while (true) {
-                if (!it.hasNext()) {
-                    break;
-                }
-                // hasNext() has read the record: the parser's count of physical lines (blank ones
-                // skipped by the format included) now ends on the record's own line
-                long line = parser.getCurrentLineNumber();
-                CSVRecord rec = it.next();
-                rowsRead++;
-                if ((rowsRead & 8191) == 0 && totalChars > 0) {
-                    progress.progress(Math.min(1.0, rec.getCharacterPosition() / (double) totalChars));
-                }
-                RowProblem problem = rows.add(rec, line, decimalComma, parsed, offsetMode);
-                if (problem != null) {
-                    rows.reject(problem.text());
-                } else if (offsetMode == null && header.timeIsIso && !rows.slashed) {
-                    offsetMode = parsed.hasOffset;
-                    rows.firstOffsetSeconds = parsed.offsetSeconds;
-                }
-            }
-            progress.progress(1.0);
-            return rows.finish(rowsRead, delimiter, decimalComma, Boolean.TRUE.equals(offsetMode));
+        rows0.delimiter(delimiter);
+        if (!rows0.next()) {
+            throw new LogRefusedException("the file is empty: a log needs a header row and sample rows");
         }
+        HeaderLayout header = HeaderLayout.read(names(rows0), maps);
+        // rows are about as long as the header: size the columns once instead of doubling them
+        int capacity = (int) Math.max(1024, Math.min(50_000_000L, totalChars / Math.max(20, headerLine.length())));
+        UnitSystem stated = header.statedTemperatureUnit();
+        Rows rows = new Rows(header, capacity, stated != null ? stated : units, stated != null);
+        int rowsRead = 0;
+        IsoTimes.Parsed parsed = new IsoTimes.Parsed();
+        Boolean offsetMode = null;
+        while (rows0.next()) {
+            // the physical line a text editor shows the row on (blank lines skipped but counted)
+            long line = rows0.line();
+            rowsRead++;
+            if ((rowsRead & 8191) == 0 && totalChars > 0) {
+                progress.progress(Math.min(1.0, rows0.position() / (double) totalChars));
+            }
+            RowProblem problem = rows.add(rows0, line, decimalComma, parsed, offsetMode);
+            if (problem != null) {
+                rows.reject(problem.text());
+            } else if (offsetMode == null && header.timeIsIso && !rows.slashed) {
+                offsetMode = parsed.hasOffset;
+                rows.firstOffsetSeconds = parsed.offsetSeconds;
+            }
+        }
+        progress.progress(1.0);
+        return rows.finish(rowsRead, delimiter, decimalComma, Boolean.TRUE.equals(offsetMode));
     }
 
     /** The same format the benchmark's bare parse uses. */
     public static CSVFormat format(char delimiter) {
         return CSVFormat.DEFAULT.builder().setDelimiter(delimiter).setQuote(null).setIgnoreEmptyLines(true)
                 .setTrim(true).get();
-    }
-
-    private static String firstLine(BufferedReader r) throws IOException, LogRefusedException {
-        StringBuilder b = new StringBuilder();
-        int c;
-        while ((c = r.read()) != -1) {
-            if (c == '\n' || c == '\r') {
-                if (b.length() > 0) {
-                    return b.toString();
-                }
-                continue;
-            }
-            b.append((char) c);
-            if (b.length() > MAX_HEADER_CHARS) {
-                throw new LogRefusedException("the first line is over " + MAX_HEADER_CHARS
-                        + " characters: not a header row of a log");
-            }
-        }
-        return b.length() > 0 ? b.toString() : null;
     }
 
     static char sniffDelimiter(String header) {
@@ -197,10 +169,10 @@ public final class LogCsvImporter {
         return semi > comma ? ';' : ',';
     }
 
-    private static String[] names(CSVRecord rec) {
-        String[] names = new String[rec.size()];
+    private static String[] names(RowSplitter row) {
+        String[] names = new String[row.size()];
         for (int c = 0; c < names.length; c++) {
-            names[c] = clean(rec.get(c));
+            names[c] = clean(row.text(c));
         }
         return names;
     }
@@ -214,6 +186,10 @@ public final class LogCsvImporter {
             t = t.substring(1, t.length() - 1).strip();
         }
         return t;
+    }
+
+    private static String quote(char[] b, int from, int to) {
+        return quote(new String(b, from, to - from));
     }
 
     private static String quote(String v) {
@@ -268,43 +244,48 @@ public final class LogCsvImporter {
             }
         }
 
-        /** Adds the record, or returns why it was kept out. */
-        RowProblem add(CSVRecord rec, long line, boolean decimalComma, IsoTimes.Parsed parsed, Boolean offsetMode) {
-            int size = rec.size();
+        /** Adds the row, or returns why it was kept out. */
+        RowProblem add(RowSplitter row, long line, boolean decimalComma, IsoTimes.Parsed parsed, Boolean offsetMode) {
+            int size = row.size();
             if (size < header.width) {
-                if (size == 1 && rec.get(0).isEmpty()) {
+                if (size == 1 && row.trimmedEnd(0) == row.trimmedStart(0)) {
                     return RowProblem.row(line, "empty row");
                 }
                 return RowProblem.row(line, size + " of " + header.width + " columns (line cut short?)");
             }
             for (int c = header.width; c < size; c++) {
-                if (!rec.get(c).isEmpty()) {
+                if (row.trimmedEnd(c) != row.trimmedStart(c)) {
                     return RowProblem.row(line, size + " columns, the header has " + header.width);
                 }
             }
             if (n == time.length) {
                 grow();
             }
+            char[] b = row.chars();
             int tc = header.timeColumn;
-            String tv = clean(rec.get(tc));
+            long tr = Cells.clean(b, row.trimmedStart(tc), row.trimmedEnd(tc));
+            int ts = (int) (tr >>> 32);
+            int te = (int) tr;
             double t;
             if (header.timeIsIso) {
-                RowProblem p = clockTime(tv, line, tc, parsed, offsetMode);
+                RowProblem p = clockTime(b, ts, te, line, tc, parsed, offsetMode);
                 if (p != null) {
                     return p;
                 }
                 t = slashed ? slashedParsed.secondOfDay : parsed.epochSeconds;
             } else {
-                t = DecimalText.parse(tv, decimalComma);
+                t = DecimalText.parse(b, ts, te, decimalComma);
                 if (!Double.isFinite(t)) {
-                    return new RowProblem(line, tc + 1, "seconds", quote(tv) + " is not a number");
+                    return new RowProblem(line, tc + 1, "seconds", quote(b, ts, te) + " is not a number");
                 }
             }
             for (int k = 0; k < header.present.length; k++) {
                 Channel ch = header.present[k];
                 int c = header.presentColumn[k];
-                String v = clean(rec.get(c));
-                String problem = ch.isStatus() ? status(ch, v) : analog(ch, v, decimalComma);
+                long r = Cells.clean(b, row.trimmedStart(c), row.trimmedEnd(c));
+                int vs = (int) (r >>> 32);
+                int ve = (int) r;
+                String problem = ch.isStatus() ? status(ch, b, vs, ve) : analog(ch, b, vs, ve, decimalComma);
                 if (problem != null) {
                     return new RowProblem(line, c + 1, ch.field(), problem);
                 }
@@ -318,16 +299,17 @@ public final class LogCsvImporter {
         }
 
         /** ISO-8601 or a slashed date-time; the first good row decides which the file uses. */
-        private RowProblem clockTime(String tv, long line, int tc, IsoTimes.Parsed parsed, Boolean offsetMode) {
+        private RowProblem clockTime(char[] b, int ts, int te, long line, int tc, IsoTimes.Parsed parsed,
+                                     Boolean offsetMode) {
             boolean first = n == 0 && !slashed && offsetMode == null;
-            if (!slashed && IsoTimes.parse(tv, parsed)) {
+            if (!slashed && IsoTimes.parse(b, ts, te, parsed)) {
                 if (offsetMode != null && offsetMode != parsed.hasOffset) {
-                    return new RowProblem(line, tc + 1, "time", quote(tv) + (parsed.hasOffset
+                    return new RowProblem(line, tc + 1, "time", quote(b, ts, te) + (parsed.hasOffset
                             ? " has a UTC offset, earlier rows had none" : " has no UTC offset, earlier rows had one"));
                 }
                 return null;
             }
-            if ((slashed || first) && SlashedTimes.parse(tv, slashedParsed)
+            if ((slashed || first) && SlashedTimes.parse(b, ts, te, slashedParsed)
                     && (!slashed || slashedParsed.yearFirst == yearFirst)) {
                 if (!slashed) {
                     slashed = true;
@@ -336,43 +318,45 @@ public final class LogCsvImporter {
                 }
                 return null;
             }
-            return new RowProblem(line, tc + 1, "time", quote(tv) + " is not a date and time this reader knows"
+            return new RowProblem(line, tc + 1, "time", quote(b, ts, te) + " is not a date and time this reader knows"
                     + " (e.g. 2026-07-14T13:05:00, 2026-07-14T13:05:00-04:00, 7/14/2026 1:05:00 PM or"
                     + " 14/07/2026 13:05)");
         }
 
-        private String status(Channel ch, String v) {
-            byte b;
-            if (DecimalText.missing(v)) {
-                b = LogSeries.UNKNOWN;
-            } else if (v.equals("1") || v.equalsIgnoreCase("on") || v.equalsIgnoreCase("true")) {
-                b = 1;
-            } else if (v.equals("0") || v.equalsIgnoreCase("off") || v.equalsIgnoreCase("false")) {
-                b = 0;
+        private String status(Channel ch, char[] b, int vs, int ve) {
+            byte s;
+            if (DecimalText.missing(b, vs, ve)) {
+                s = LogSeries.UNKNOWN;
+            } else if (Cells.equals(b, vs, ve, "1") || Cells.equalsIgnoreCase(b, vs, ve, "on")
+                    || Cells.equalsIgnoreCase(b, vs, ve, "true")) {
+                s = 1;
+            } else if (Cells.equals(b, vs, ve, "0") || Cells.equalsIgnoreCase(b, vs, ve, "off")
+                    || Cells.equalsIgnoreCase(b, vs, ve, "false")) {
+                s = 0;
             } else {
-                double d = DecimalText.parse(v, false);
+                double d = DecimalText.parse(b, vs, ve, false);
                 if (!(d >= 0 && d <= 1)) {
-                    return quote(v) + " is not a status (0/1, on/off)";
+                    return quote(b, vs, ve) + " is not a status (0/1, on/off)";
                 }
-                b = (byte) (d >= 0.5 ? 1 : 0);
+                s = (byte) (d >= 0.5 ? 1 : 0);
             }
-            status[ch.ordinal()][n] = b;
+            status[ch.ordinal()][n] = s;
             return null;
         }
 
-        private String analog(Channel ch, String v, boolean decimalComma) {
+        private String analog(Channel ch, char[] b, int vs, int ve, boolean decimalComma) {
             double si;
-            if (DecimalText.missing(v)) {
+            if (DecimalText.missing(b, vs, ve)) {
                 si = Double.NaN;
             } else {
-                double shown = DecimalText.parse(v, decimalComma);
+                double shown = DecimalText.parse(b, vs, ve, decimalComma);
                 if (!Double.isFinite(shown)) {
-                    return quote(v) + " is not a number";
+                    return quote(b, vs, ve) + " is not a number";
                 }
                 if (ch.isTemperature()) {
                     si = Quantity.TEMPERATURE.fromDisplay(tempUnit, shown);
                     if (!FieldLimits.AIR_TEMPERATURE.accepts(si)) {
-                        return String.format(Locale.ROOT, "%s %s outside %.0f to %.0f %s", quote(v),
+                        return String.format(Locale.ROOT, "%s %s outside %.0f to %.0f %s", quote(b, vs, ve),
                                 Quantity.TEMPERATURE.symbol(tempUnit),
                                 Quantity.TEMPERATURE.toDisplay(tempUnit, FieldLimits.AIR_TEMPERATURE.minSi()),
                                 Quantity.TEMPERATURE.toDisplay(tempUnit, FieldLimits.AIR_TEMPERATURE.maxSi()),
@@ -381,7 +365,7 @@ public final class LogCsvImporter {
                 } else {
                     if (shown < FieldLimits.RELATIVE_HUMIDITY.minSi()
                             || shown > FieldLimits.RELATIVE_HUMIDITY.maxSi() + RH_SATURATION_SLACK_PCT) {
-                        return quote(v) + " % outside 0 to 100 %";
+                        return quote(b, vs, ve) + " % outside 0 to 100 %";
                     }
                     si = Math.min(100.0, shown);
                 }

@@ -16,6 +16,9 @@ final class SlashedTimes {
         /** True when the year came first (year/month/day). */
         boolean yearFirst;
         double secondOfDay;
+        /** Scratch for the parse, kept to save two arrays per row. */
+        final int[] fields = new int[3];
+        final int[] widths = new int[3];
     }
 
     private SlashedTimes() {
@@ -23,16 +26,26 @@ final class SlashedTimes {
 
     /** True and fills {@code out} when {@code s} has this shape (the date itself is checked later). */
     static boolean parse(String s, Parsed out) {
-        int n = s.length();
+        char[] c = s.toCharArray();
+        return parse(c, 0, c.length, out);
+    }
+
+    /** The same on {@code s[from, to)}: no String per timestamp. */
+    static boolean parse(char[] s, int from, int to, Parsed out) {
+        return parseAt(s, from, to - from, out);
+    }
+
+    /** {@code n} chars of {@code s} from {@code o}; indices below are relative to {@code o}. */
+    private static boolean parseAt(char[] s, int o, int n, Parsed out) {
         int i = 0;
-        int[] f = new int[3];
-        int[] width = new int[3];
+        int[] f = out.fields;
+        int[] width = out.widths;
         char sep = 0;
         for (int k = 0; k < 3; k++) {
             int start = i;
             int v = 0;
-            while (i < n && Character.isDigit(s.charAt(i)) && i - start < 4) {
-                v = v * 10 + (s.charAt(i) - '0');
+            while (i < n && Character.isDigit(s[o + i]) && i - start < 4) {
+                v = v * 10 + (s[o + i] - '0');
                 i++;
             }
             width[k] = i - start;
@@ -44,7 +57,7 @@ final class SlashedTimes {
                 if (i >= n) {
                     return false;
                 }
-                char c = s.charAt(i);
+                char c = s[o + i];
                 if (c != '/' && c != '.' && c != '-' || sep != 0 && c != sep) {
                     return false;
                 }
@@ -56,39 +69,39 @@ final class SlashedTimes {
         if (!yearFirst && width[2] != 4 || yearFirst && width[2] > 2 || width[1] > 2 || !yearFirst && width[0] > 2) {
             return false;
         }
-        if (i >= n || s.charAt(i) != ' ' && s.charAt(i) != 'T') {
+        if (i >= n || s[o + i] != ' ' && s[o + i] != 'T') {
             return false;
         }
-        while (i < n && s.charAt(i) == ' ' || i < n && s.charAt(i) == 'T') {
+        while (i < n && s[o + i] == ' ' || i < n && s[o + i] == 'T') {
             i++;
         }
         int hStart = i;
         int hour = 0;
-        while (i < n && Character.isDigit(s.charAt(i)) && i - hStart < 2) {
-            hour = hour * 10 + (s.charAt(i) - '0');
+        while (i < n && Character.isDigit(s[o + i]) && i - hStart < 2) {
+            hour = hour * 10 + (s[o + i] - '0');
             i++;
         }
-        if (i == hStart || i + 2 >= n || s.charAt(i) != ':') {
+        if (i == hStart || i + 2 >= n || s[o + i] != ':') {
             return false;
         }
-        int minute = two(s, i + 1);
+        int minute = two(s, o, n, i + 1);
         i += 3;
         double second = 0;
         if (minute < 0 || minute > 59) {
             return false;
         }
-        if (i < n && s.charAt(i) == ':') {
-            int sec = two(s, i + 1);
+        if (i < n && s[o + i] == ':') {
+            int sec = two(s, o, n, i + 1);
             if (sec < 0 || sec > 59) {
                 return false;
             }
             second = sec;
             i += 3;
-            if (i < n && s.charAt(i) == '.') {
+            if (i < n && s[o + i] == '.') {
                 int start = ++i;
                 double scale = 0.1;
-                while (i < n && Character.isDigit(s.charAt(i))) {
-                    second += (s.charAt(i) - '0') * scale;
+                while (i < n && Character.isDigit(s[o + i])) {
+                    second += (s[o + i] - '0') * scale;
                     scale /= 10;
                     i++;
                 }
@@ -97,13 +110,12 @@ final class SlashedTimes {
                 }
             }
         }
-        while (i < n && s.charAt(i) == ' ') {
+        while (i < n && s[o + i] == ' ') {
             i++;
         }
         if (i < n) {
-            String ampm = s.substring(i);
-            boolean pm = ampm.equalsIgnoreCase("PM") || ampm.equalsIgnoreCase("P.M.");
-            boolean am = ampm.equalsIgnoreCase("AM") || ampm.equalsIgnoreCase("A.M.");
+            boolean pm = Cells.equalsIgnoreCase(s, o + i, o + n, "PM") || Cells.equalsIgnoreCase(s, o + i, o + n, "P.M.");
+            boolean am = Cells.equalsIgnoreCase(s, o + i, o + n, "AM") || Cells.equalsIgnoreCase(s, o + i, o + n, "A.M.");
             if (!pm && !am || hour < 1 || hour > 12) {
                 return false;
             }
@@ -119,11 +131,11 @@ final class SlashedTimes {
         return true;
     }
 
-    private static int two(String s, int i) {
-        if (i + 2 > s.length() || !Character.isDigit(s.charAt(i)) || !Character.isDigit(s.charAt(i + 1))) {
+    private static int two(char[] s, int o, int n, int i) {
+        if (i + 2 > n || !Character.isDigit(s[o + i]) || !Character.isDigit(s[o + i + 1])) {
             return -1;
         }
-        return (s.charAt(i) - '0') * 10 + (s.charAt(i + 1) - '0');
+        return (s[o + i] - '0') * 10 + (s[o + i + 1] - '0');
     }
 
     /** Days since 1970-01-01, or Long.MIN_VALUE when month/day are not a date. */
