@@ -127,21 +127,24 @@ final class ClockTimeResolver {
 
     /**
      * Local clock seconds (as if UTC) → epoch seconds in {@code zone}, in place; the zone's rules
-     * (daylight saving included) are looked up once per clock hour.
+     * (daylight saving included) are looked up once per clock minute, as zones change their offset
+     * on whole minutes (not always on whole hours: Newfoundland changed at 00:01 until 2011, the
+     * Chatham Islands change at 2:45). A clock time in a gap takes the offset before it, one in an
+     * overlap the earlier offset, as {@link java.time.ZonedDateTime#of} does.
      *
      * @return the UTC offset of the first row, s
      */
     static int toUtc(double[] time, int n, ZoneId zone) {
         ZoneRules rules = zone.getRules();
-        long lastHour = Long.MIN_VALUE;
+        long lastMinute = Long.MIN_VALUE;
         int offset = 0;
         int first = 0;
         for (int i = 0; i < n; i++) {
-            long hour = (long) Math.floor(time[i] / 3600.0);
-            if (hour != lastHour) {
-                LocalDateTime local = LocalDateTime.ofEpochSecond(hour * 3600, 0, ZoneOffset.UTC);
+            long minute = (long) Math.floor(time[i] / 60.0);
+            if (minute != lastMinute) {
+                LocalDateTime local = LocalDateTime.ofEpochSecond(minute * 60, 0, ZoneOffset.UTC);
                 offset = rules.getOffset(local).getTotalSeconds();
-                lastHour = hour;
+                lastMinute = minute;
             }
             if (i == 0) {
                 first = offset;
