@@ -2,7 +2,6 @@ package app.latentledger.core.cycles;
 
 import app.latentledger.core.psychro.HandbookEdition;
 import app.latentledger.core.psychro.Psychrometrics;
-import app.latentledger.core.psychro.SaturationPressure;
 
 /**
  * Return and supply air per sample as the analysis needs it: dry bulb, humidity ratio, enthalpy
@@ -27,6 +26,8 @@ public final class AirSeries {
     final double[] returnDryAirDensity;
     final boolean humidity;
     private final double pressurePa;
+    /** Saturation pressures already worked out, by dry bulb (exact reuse, see the class). */
+    private final SaturationMemo saturation = new SaturationMemo();
 
     /** Per-sample air of {@code log} at {@code pressurePa}, as the analysis sees it (before any probe-offset correction). */
     public static AirSeries of(LogSeries log, double pressurePa) {
@@ -58,8 +59,8 @@ public final class AirSeries {
         size = log.size();
         returnDbC = column(log, Channel.RETURN_DB);
         supplyDbC = column(log, Channel.SUPPLY_DB);
-        returnW = humidityRatios(log, Channel.RETURN_DB, Channel.RETURN_RH, Channel.RETURN_WB, pressurePa);
-        supplyW = humidityRatios(log, Channel.SUPPLY_DB, Channel.SUPPLY_RH, Channel.SUPPLY_WB, pressurePa);
+        returnW = humidityRatios(log, Channel.RETURN_DB, Channel.RETURN_RH, Channel.RETURN_WB, pressurePa, saturation);
+        supplyW = humidityRatios(log, Channel.SUPPLY_DB, Channel.SUPPLY_RH, Channel.SUPPLY_WB, pressurePa, saturation);
         humidity = returnW != null && supplyW != null;
         returnH = enthalpies(returnDbC, returnW);
         supplyH = enthalpies(supplyDbC, supplyW);
@@ -79,7 +80,8 @@ public final class AirSeries {
         return v;
     }
 
-    private static double[] humidityRatios(LogSeries log, Channel db, Channel rh, Channel wb, double p) {
+    private static double[] humidityRatios(LogSeries log, Channel db, Channel rh, Channel wb, double p,
+                                           SaturationMemo saturation) {
         boolean hasRh = log.has(rh);
         boolean hasWb = log.has(wb);
         if (!log.has(db) || !hasRh && !hasWb) {
@@ -91,7 +93,7 @@ public final class AirSeries {
             double r = hasRh ? log.value(rh, i) : Double.NaN;
             double x = Double.NaN;
             if (!Double.isNaN(t) && !Double.isNaN(r)) {
-                double pw = r / 100.0 * SaturationPressure.pascals(t);
+                double pw = r / 100.0 * saturation.pascals(t);
                 x = Psychrometrics.humidityRatio(pw, p);
             } else if (!Double.isNaN(t) && hasWb) {
                 double b = log.value(wb, i);
@@ -128,8 +130,9 @@ public final class AirSeries {
             if (Double.isNaN(supplyW[i]) || Double.isNaN(t)) {
                 continue;
             }
-            double pws = SaturationPressure.pascals(t);
-            double rh = Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(supplyW[i], pressurePa), t);
+            double pws = saturation.pascals(t);
+            // Psychrometrics.relativeHumidityPct's own expression, with the remembered pws
+            double rh = 100.0 * Psychrometrics.vaporPressurePa(supplyW[i], pressurePa) / pws;
             double corrected = Math.max(0.0, Math.min(100.0, rh - offsetRhPct));
             supplyW[i] = Psychrometrics.humidityRatio(corrected / 100.0 * pws, pressurePa);
             supplyH[i] = EDITION.enthalpyJPerKg(t, supplyW[i]);
@@ -161,12 +164,22 @@ public final class AirSeries {
             b = HumidityLag.windowEnd(log, i, b);
             double d = Double.isNaN(w[i]) ? Double.NaN : HumidityLag.slope(log, w, a, b);
             double x = gapNear || Double.isNaN(d) ? w[i] : w[i] + lagS * d;
-            double cap = Double.isNaN(supplyDbC[i]) ? Double.NaN
-                    : Psychrometrics.saturationHumidityRatio(supplyDbC[i], pressurePa);
+            double cap = Double.isNaN(supplyDbC[i]) ? Double.NaN : saturationHumidityRatio(supplyDbC[i]);
             supplyW[i] = Double.isNaN(x) ? x : Math.max(0.0, Double.isNaN(cap) ? x : Math.min(cap, x));
             supplyH[i] = Double.isNaN(supplyW[i]) || Double.isNaN(supplyDbC[i]) ? Double.NaN
                     : EDITION.enthalpyJPerKg(supplyDbC[i], supplyW[i]);
         }
+    }
+
+    /** Saturation pressure at {@code dryBulbC}, Pa, remembered per value (see {@link SaturationMemo}). */
+    double saturationPascals(double dryBulbC) {
+        return saturation.pascals(dryBulbC);
+    }
+
+    /** {@link Psychrometrics#saturationHumidityRatio} with the remembered saturation pressure. */
+    private double saturationHumidityRatio(double dryBulbC) {
+        double pws = saturation.pascals(dryBulbC);
+        return pws >= pressurePa ? Double.POSITIVE_INFINITY : Psychrometrics.humidityRatio(pws, pressurePa);
     }
 
     /** W_return − W_supply at sample i (positive while the coil removes moisture), NaN if unknown. */

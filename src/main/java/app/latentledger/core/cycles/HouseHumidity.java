@@ -75,7 +75,8 @@ public record HouseHumidity(double dewPointMedianC, double dewPointP95C, double 
             if (Double.isNaN(w) || Double.isNaN(t)) {
                 continue;
             }
-            double r = Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(w, pressurePa), t);
+            // Psychrometrics.relativeHumidityPct's own expression, the saturation pressure remembered per dry bulb
+            double r = 100.0 * Psychrometrics.vaporPressurePa(w, pressurePa) / air.saturationPascals(t);
             ws[m] = w;
             rh[m++] = r;
             double dt = i + 1 < n ? log.timeS(i + 1) - log.timeS(i) : 0;

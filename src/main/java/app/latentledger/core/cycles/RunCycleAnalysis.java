@@ -241,8 +241,10 @@ public final class RunCycleAnalysis {
             return new double[] {Double.NaN, 0, Double.NaN, 0};
         }
         double after = settings.valueSi(Thresholds.SENSOR_CHECK_AFTER);
-        List<Double> d = new ArrayList<>();
-        List<Double> ddp = new ArrayList<>();
+        // primitive columns, not boxed lists: a week's off-cycles hold a few hundred thousand samples
+        double[] a = new double[64];
+        double[] b = new double[64];
+        int m = 0;
         double seconds = 0;
         double gap = settings.valueSi(Thresholds.GAP_FACTOR) * log.nominalIntervalS();
         for (Cycle c : cycles) {
@@ -258,19 +260,23 @@ public final class RunCycleAnalysis {
                     continue;
                 }
                 double pwR = Psychrometrics.vaporPressurePa(air.returnW[i], p);
-                double expected = Psychrometrics.relativeHumidityPct(pwR, ts);
-                double rhS = Psychrometrics.relativeHumidityPct(Psychrometrics.vaporPressurePa(air.supplyW[i], p), ts);
-                d.add(rhS - expected);
-                ddp.add(Psychrometrics.dewPointC(air.supplyW[i], p) - Psychrometrics.dewPointC(air.returnW[i], p));
+                // Psychrometrics.relativeHumidityPct's own expression, pws remembered per dry bulb
+                double pws = air.saturationPascals(ts);
+                double expected = 100.0 * pwR / pws;
+                double rhS = 100.0 * Psychrometrics.vaporPressurePa(air.supplyW[i], p) / pws;
+                if (m == a.length) {
+                    a = java.util.Arrays.copyOf(a, 2 * m);
+                    b = java.util.Arrays.copyOf(b, 2 * m);
+                }
+                a[m] = rhS - expected;
+                b[m++] = Psychrometrics.dewPointC(air.supplyW[i], p) - Psychrometrics.dewPointC(air.returnW[i], p);
                 double dt = i + 1 < log.size() ? log.timeS(i + 1) - log.timeS(i) : 0;
                 seconds += dt > gap ? 0 : dt;
             }
         }
-        if (d.size() < SENSOR_CHECK_MIN_SAMPLES) {
-            return new double[] {Double.NaN, d.size(), Double.NaN, seconds};
+        if (m < SENSOR_CHECK_MIN_SAMPLES) {
+            return new double[] {Double.NaN, m, Double.NaN, seconds};
         }
-        double[] a = d.stream().mapToDouble(Double::doubleValue).toArray();
-        double[] b = ddp.stream().mapToDouble(Double::doubleValue).toArray();
-        return new double[] {Stats.median(a, a.length), a.length, Stats.median(b, b.length), seconds};
+        return new double[] {Stats.median(a, m), m, Stats.median(b, m), seconds};
     }
 }
