@@ -143,7 +143,11 @@ public final class LogCsvImporter {
         return rows.finish(rowsRead, delimiter, decimalComma, Boolean.TRUE.equals(offsetMode));
     }
 
-    /** The same format the benchmark's bare parse uses. */
+    /**
+     * The CSV format a log's rows follow, in commons-csv terms: {@link RowSplitter} reads exactly
+     * these rows and fields (its test checks that against commons-csv), and the benchmark's reference
+     * parse uses it.
+     */
     public static CSVFormat format(char delimiter) {
         return CSVFormat.DEFAULT.builder().setDelimiter(delimiter).setQuote(null).setIgnoreEmptyLines(true)
                 .setTrim(true).get();
