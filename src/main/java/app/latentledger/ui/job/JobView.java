@@ -45,6 +45,9 @@ public final class JobView extends VBox implements Reflowing {
                 viewModel.zoneChoices());
         siteZone.setId("new-site-zone");
         siteZone.setMaxWidth(Double.MAX_VALUE);
+        // a long name ("Mountain, no daylight saving (Arizona) · America/Phoenix") wraps, never cut
+        siteZone.setButtonCell(zoneCell());
+        siteZone.setCellFactory(v -> zoneCell());
         siteZone.valueProperty().bindBidirectional(viewModel.newSiteZoneProperty());
         TextField zoneSearch = field("new-site-zone-search", "Search all zones, e.g. Regina",
                 viewModel.zoneSearchProperty());
@@ -155,6 +158,20 @@ public final class JobView extends VBox implements Reflowing {
         f.setPromptText(prompt);
         f.textProperty().bindBidirectional(value);
         return f;
+    }
+
+    private static ListCell<SiteZones.Choice> zoneCell() {
+        ListCell<SiteZones.Choice> c = new ListCell<>() {
+            @Override
+            protected void updateItem(SiteZones.Choice item, boolean empty) {
+                super.updateItem(item, empty);
+                setText(empty || item == null ? null : item.label());
+            }
+        };
+        c.setWrapText(true);
+        c.setMinWidth(0);
+        c.setPrefWidth(0);
+        return c;
     }
 
     private static <T> ListView<T> list(String id, javafx.collections.ObservableList<T> items, Function<T, String> text) {
