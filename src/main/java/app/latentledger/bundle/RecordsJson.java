@@ -22,12 +22,16 @@ final class RecordsJson {
         o.addProperty("address", s.address());
         o.addProperty("elevationM", s.elevationM());
         o.addProperty("notes", s.notes());
+        // only when given: a site without a zone writes the same object (and wire hash) as before
+        if (!s.timeZone().isEmpty()) {
+            o.addProperty("timeZone", s.timeZone());
+        }
         return o;
     }
 
     static Site site(JsonFields f) throws BundleException {
         return new Site(f.text("id"), f.text("name"), f.optionalText("address"), f.number("elevationM"),
-                f.optionalText("notes"));
+                f.optionalText("notes"), f.optionalText("timeZone"));
     }
 
     static JsonObject system(HvacSystem s) {

@@ -29,6 +29,7 @@ final class RecordsView {
         m.put("address", s.address());
         m.put("elevation", Quantity.ELEVATION.toDisplay(units, s.elevationM()));
         m.put("notes", s.notes());
+        m.put("timeZone", s.timeZone().isEmpty() ? null : s.timeZone());
         return m;
     }
 
@@ -187,6 +188,9 @@ final class RecordsView {
         b.append(line("site", site.name() + ", " + site.address() + " (elevation "
                 + Format.fixed(Quantity.ELEVATION.toDisplay(units, site.elevationM()), 0) + " "
                 + Quantity.ELEVATION.symbol(units) + ")"));
+        if (!site.timeZone().isEmpty()) {
+            b.append(line("time zone", site.timeZone()));
+        }
         b.append(line("system", system.label() + ": " + system.type().key() + ", "
                 + Format.fixed(Quantity.POWER_LARGE.toDisplay(units, system.nominalCapacityW()), 1) + " "
                 + Quantity.POWER_LARGE.symbol(units) + " nominal"

@@ -11,7 +11,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
-/** {@code sites}: add a site, or list them with their ids. */
+/** {@code sites}: add a site, correct one, or list them with their ids. */
 public final class SitesCommand implements Command {
     @Override
     public String name() {
@@ -20,16 +20,21 @@ public final class SitesCommand implements Command {
 
     @Override
     public String summary() {
-        return "record a site (add) or list the sites with their ids";
+        return "record a site (add), correct one (edit) or list the sites with their ids";
     }
 
     @Override
     public String usage() {
         return "usage: latent-ledger [--data-dir DIR] sites add --name NAME [--address TEXT] [--elevation FT|M]\n"
-                + "                                              [--notes TEXT] [--units ip|si] [--json]\n"
+                + "                                              [--notes TEXT] [--time-zone ZONE] [--units ip|si] [--json]\n"
+                + "       latent-ledger [--data-dir DIR] sites edit SITE [--name NAME] [--address TEXT] [--elevation FT|M]\n"
+                + "                                              [--notes TEXT] [--time-zone ZONE|none] [--units ip|si] [--json]\n"
                 + "       latent-ledger [--data-dir DIR] sites list [--json]\n"
                 + "  --elevation sets the standard-atmosphere pressure of every reading set at the site\n"
-                + "  (default: the stored default elevation, 'settings show'); prints the new site's id\n";
+                + "  (default: the stored default elevation, 'settings show'); prints the new site's id\n"
+                + "  --time-zone the site's zone, an IANA region id such as America/Chicago: a logger's clock times\n"
+                + "  written without a UTC offset are read in it (default: none, this computer's zone is used)\n"
+                + "  edit changes only the options given; SITE is a site id or its first characters\n";
     }
 
     @Override
@@ -46,6 +51,7 @@ public final class SitesCommand implements Command {
                     String address = args.value("address");
                     Double elevation = UnitOptions.si(args, "elevation", Quantity.ELEVATION, units);
                     String notes = args.value("notes");
+                    String zone = args.value("time-zone");
                     args.rejectUnknown();
                     expect(words, 1);
                     if (name == null) {
@@ -53,13 +59,39 @@ public final class SitesCommand implements Command {
                     }
                     Site site = LedgerRecords.refusing(units, "--elevation", () -> {
                         Site s = new Site(Ids.newId(), name, address, elevation == null
-                                ? settings.defaultElevationM() : elevation, notes);
+                                ? settings.defaultElevationM() : elevation, notes, zone);
                         ledger.sites().save(s);
                         return s;
                     });
                     Map<String, Object> m = LedgerRecords.made(site.id(), "site");
                     m.put("name", site.name());
-                    context.out().print(json ? Json.print(m) + "\n" : "Added site " + site.name() + ": " + site.id() + "\n");
+                    m.put("timeZone", site.timeZone().isEmpty() ? null : site.timeZone());
+                    context.out().print(json ? Json.print(m) + "\n" : "Added site " + site.name() + ": " + site.id()
+                            + zoneWords(site) + "\n");
+                    return Cli.OK;
+                }
+                case "edit": {
+                    if (words.size() != 2) {
+                        throw new UsageException("sites edit needs the SITE to correct (see: sites list)");
+                    }
+                    Site was = LedgerRecords.site(ledger, words.get(1));
+                    String name = args.value("name");
+                    String address = args.value("address");
+                    Double elevation = UnitOptions.si(args, "elevation", Quantity.ELEVATION, units);
+                    String notes = args.value("notes");
+                    String zone = args.value("time-zone");
+                    args.rejectUnknown();
+                    Site site = LedgerRecords.refusing(units, "--elevation", () -> {
+                        Site s = new Site(was.id(), name == null ? was.name() : name,
+                                address == null ? was.address() : address,
+                                elevation == null ? was.elevationM() : elevation, notes == null ? was.notes() : notes,
+                                zone == null ? was.timeZone() : zone.strip().equalsIgnoreCase("none") ? "" : zone);
+                        ledger.sites().save(s);
+                        return s;
+                    });
+                    Map<String, Object> m = RecordsView.site(site, units);
+                    context.out().print(json ? Json.print(m) + "\n" : "Saved site " + site.name() + ": " + site.id()
+                            + zoneWords(site) + "\n");
                     return Cli.OK;
                 }
                 case "list": {
@@ -69,15 +101,21 @@ public final class SitesCommand implements Command {
                     StringBuilder b = new StringBuilder();
                     for (Site s : ledger.sites().all()) {
                         rows.add(RecordsView.site(s, units));
-                        b.append(String.format("%-36s  %-28s  %s%n", s.id(), s.name(), s.address()));
+                        b.append(String.format("%-36s  %-28s  %-20s  %s%n", s.id(), s.name(),
+                                s.timeZone().isEmpty() ? "(no zone)" : s.timeZone(), s.address()));
                     }
                     context.out().print(json ? Json.print(rows) + "\n" : b.toString());
                     return Cli.OK;
                 }
                 default:
-                    throw new UsageException("sites needs a subcommand: add or list\n" + usage());
+                    throw new UsageException("sites needs a subcommand: add, edit or list\n" + usage());
             }
         }
+    }
+
+    /** " (time zone America/Chicago)" for a site with a zone, else "". */
+    private static String zoneWords(Site s) {
+        return s.timeZone().isEmpty() ? "" : " (time zone " + s.timeZone() + ")";
     }
 
     private static void expect(List<String> words, int count) {

@@ -1,14 +1,10 @@
 package app.latentledger.cli;
 
-import app.latentledger.core.InvalidInputException;
-import app.latentledger.core.cycles.LogNotAnalysableException;
-import app.latentledger.core.cycles.RunCycleAnalysis;
 import app.latentledger.core.records.HvacSystem;
 import app.latentledger.core.records.Ids;
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.Instrument;
 import app.latentledger.core.records.InvalidRecordException;
-import app.latentledger.core.records.ReadingSet;
 import app.latentledger.core.records.SignOff;
 import app.latentledger.core.records.Site;
 import app.latentledger.core.records.StatedAccuracy;
@@ -18,15 +14,13 @@ import app.latentledger.core.records.VisitPurpose;
 import app.latentledger.core.settings.Settings;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
-import app.latentledger.core.visit.ReadingSetCheck;
-import app.latentledger.core.visit.StoredLogSeries;
-import app.latentledger.io.logcsv.LogCsvImporter;
-import app.latentledger.io.logcsv.LogImport;
-import app.latentledger.io.logcsv.LogRefusedException;
 import app.latentledger.store.Ledger;
+import java.time.ZoneId;
+import app.latentledger.io.logcsv.DateOrder;
+import app.latentledger.visit.VisitLogs;
+import app.latentledger.visit.VisitLog;
+import app.latentledger.visit.LogProblem;
 
-import java.io.IOException;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
@@ -35,7 +29,6 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.stream.Collectors;
 
 /**
  * The recording subcommands of {@code visits}: {@code new}, {@code notes}, {@code instruments},
@@ -58,11 +51,14 @@ final class VisitRecords {
                 + "             [--acc-coil D] [--acc-airflow-pct PCT] [--units ip|si] [--json]\n"
                 + "       latent-ledger [--data-dir DIR] visits sign-off VISIT (--technician NAME | --customer NAME)\n"
                 + "             [--remark TEXT] [--json]\n"
-                + "       latent-ledger [--data-dir DIR] visits attach-log VISIT FILE [--map HEADER=field]... [--units ip|si] [--json]\n"
+                + "       latent-ledger [--data-dir DIR] visits attach-log VISIT FILE [--map HEADER=field]... [--time-zone ZONE]\n"
+                + "             [--units ip|si] [--json]\n"
                 + "  SYSTEM: a system id or its first characters (see: systems list SITE); the visit is at its site\n"
                 + "  --acc-*: the instrument's stated accuracy (± °F or K; %RH; % of the airflow reading); it fills the\n"
                 + "  tolerances of the reading sets it takes (readings add --instrument NAME)\n"
-                + "  attach-log keeps a data-logger CSV with the visit once it reads and analyses, as the app does\n";
+                + "  attach-log keeps a data-logger CSV with the visit once it reads and analyses, as the app does;\n"
+                + "  clock times written without a UTC offset are read in --time-zone, else the site's zone (sites edit\n"
+                + "  --time-zone), else this computer's; the zone used is kept with the log\n";
     }
 
     static int run(String sub, Args args, CliContext context) {
@@ -175,14 +171,20 @@ final class VisitRecords {
                     need(words, 3, "visits attach-log VISIT FILE");
                     Visit v = LedgerRecords.visit(ledger, words.get(1));
                     Map<String, String> maps = maps(args.values("map"));
+                    ZoneId chosen = zone(args.value("time-zone"));
                     args.rejectUnknown();
-                    ImportedLog log = attach(ledger, v, Path.of(words.get(2)), units, maps, settings);
+                    Attached kept = attach(ledger, v, Path.of(words.get(2)), units, maps, chosen, settings);
+                    ImportedLog log = kept.log();
                     result = LedgerRecords.made(log.id(), "log");
                     result.put("visitId", v.id());
                     result.put("samples", log.samples().size());
                     result.put("channels", log.samples().channelNames());
+                    result.put("timeZone", kept.zone() == null ? null : kept.zone().zone().getId());
+                    result.put("timeZoneFrom", kept.zone() == null ? null
+                            : kept.zone().from().name().toLowerCase(java.util.Locale.ROOT));
                     text = "Kept log " + log.sourceFileName() + " with visit " + Visits.shortId(v.id()) + ": " + log.id()
                             + " (" + log.samples().size() + " samples; " + String.join(", ", log.samples().channelNames())
+                            + (kept.zone() == null ? "" : "; clock times read in " + kept.zone().words("computer"))
                             + ")\n";
                 }
             }
@@ -218,44 +220,40 @@ final class VisitRecords {
         });
     }
 
-    /** The CSV read, analysed and kept as the app's log screen does; refused (nothing kept) when it does not analyse. */
-    private static ImportedLog attach(Ledger ledger, Visit v, Path file, UnitSystem units, Map<String, String> maps,
-                                      Settings settings) {
-        LogImport imported;
+    /**
+     * The CSV read, analysed and kept through {@link VisitLogs}, as the app's log screen does: clock
+     * times without a UTC offset in the zone chosen, else the site's, else this computer's; kept with
+     * the airflows it was analysed at and the zone used. Refused (nothing kept) when it does not analyse.
+     */
+    private static Attached attach(Ledger ledger, Visit v, Path file, UnitSystem units, Map<String, String> maps,
+                                   ZoneId chosen, Settings settings) {
+        VisitLogs.ReadOptions options = new VisitLogs.ReadOptions(units, maps, DateOrder.AUTO, chosen);
+        VisitLogs.ClockZone zone = VisitLogs.clockZone(ledger, v, options);
+        VisitLog a;
         try {
-            imported = new LogCsvImporter(units, maps, null).read(file);
-        } catch (NoSuchFileException e) {
-            throw new UsageException("no such file: " + file);
-        } catch (IOException e) {
-            throw new UsageException("cannot read " + file + ": " + e.getMessage());
-        } catch (LogRefusedException e) {
-            throw new UsageException(file + " refused: " + e.getMessage());
+            a = VisitLogs.importAndKeep(ledger, v, file, options, Double.NaN, Double.NaN, settings.thresholds(), null);
+        } catch (LogProblem e) {
+            throw new UsageException(e.getMessage() + "; nothing was kept");
         }
-        Site site = ledger.sites().find(v.siteId()).orElseThrow();
-        List<ReadingSet> sets = ledger.readings().forVisit(v.id());
-        double airflow = Double.NaN;
-        double pressure = app.latentledger.core.psychro.StandardAtmosphere.pressurePa(site.elevationM());
-        for (ReadingSet r : sets) {
-            if (r.airflow() != null) {
-                airflow = r.airflow().volume().valueSi();
-            }
-            pressure = ReadingSetCheck.pressurePa(r, site);
+        ImportedLog log = ledger.logs().find(a.logId()).orElseThrow();
+        return new Attached(log, a.importReport().timeZone().isEmpty() ? null : zone);
+    }
+
+    /** A log kept with its visit, and the zone its clock times were read in (null: the file gave offsets). */
+    private record Attached(ImportedLog log, VisitLogs.ClockZone zone) {
+    }
+
+    /** {@code --time-zone ZONE}: a zone id or a fixed offset, as the log command reads it; null when not given. */
+    private static ZoneId zone(String typed) {
+        if (typed == null) {
+            return null;
         }
         try {
-            new RunCycleAnalysis(settings.thresholds()).analyse(imported.series(), pressure, airflow);
-        } catch (InvalidInputException e) {
-            throw UnitOptions.refused(e, units, null);
-        } catch (LogNotAnalysableException e) {
-            throw new UsageException(file + ": " + e.getMessage() + "; nothing was kept");
+            return ZoneId.of(typed.strip());
+        } catch (java.time.DateTimeException e) {
+            throw new UsageException("--time-zone '" + typed.strip() + "' is not a time zone: give a zone id such as"
+                    + " America/Chicago or an offset such as -05:00");
         }
-        String mapping = imported.report().columns().entrySet().stream().map(e -> e.getKey() + "=" + e.getValue())
-                .collect(Collectors.joining("; "));
-        ImportedLog log = new ImportedLog(Ids.newId(), v.id(), file.getFileName().toString(), mapping,
-                OffsetDateTime.now(), StoredLogSeries.samples(imported.series()));
-        return LedgerRecords.refusing(units, null, () -> {
-            ledger.logs().save(log);
-            return log;
-        });
     }
 
     /** {@code --map HEADER=field} options, as the log command reads them. */

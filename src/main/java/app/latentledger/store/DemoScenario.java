@@ -59,6 +59,9 @@ public final class DemoScenario {
     private DemoScenario() {
     }
 
+    /** Saltreed keeps Eastern time (its visits are at −04:00 in summer): its loggers' clocks read in it. */
+    public static final String SALTREED_ZONE = "America/New_York";
+
     /** Adds the scenario in one transaction when the ledger has no site at all. */
     static void seedIfEmpty(Ledger ledger) {
         // looked at first in a read transaction: opening a ledger that has sites never waits for a writer
@@ -76,9 +79,9 @@ public final class DemoScenario {
     public static void seed(Ledger ledger) {
         ledger.inTransaction(() -> {
             ledger.sites().save(new Site(SITE_HERON, "Heron Spit Road residence", "14 Heron Spit Road, Saltreed",
-                    12, "Two-storey house on the harbor side. Customer of " + CONTRACTOR + "."));
+                    12, "Two-storey house on the harbor side. Customer of " + CONTRACTOR + ".", SALTREED_ZONE));
             ledger.sites().save(new Site(SITE_QUAY, "Saltreed Marina office", "2 Tidewater Quay, Saltreed",
-                    6, "Single-storey office over the boat store. Commissioning for " + CONTRACTOR + "."));
+                    6, "Single-storey office over the boat store. Commissioning for " + CONTRACTOR + ".", SALTREED_ZONE));
             ledger.systems().save(new HvacSystem(SYSTEM_HERON, SITE_HERON, "Main air handler (attic)",
                     SystemType.SINGLE_STAGE, 3 * W_PER_TON, "R-410A", "PSC, 4-speed",
                     "Fan AUTO; blower on the high tap as found", "Cooling 76 °F; no dehumidify setting; fan-off delay 90 s"));

@@ -30,7 +30,8 @@ record Migration(int version, String name, List<String> statements) {
             "V6__log_conditions.sql",
             "V7__paperwork_and_recycle_bin.sql",
             "V9__house_facts.sql",
-            "V10__office_sync.sql");
+            "V10__office_sync.sql",
+            "V11__site_time_zone.sql");
 
     static List<Migration> all() {
         List<Migration> all = new ArrayList<>();

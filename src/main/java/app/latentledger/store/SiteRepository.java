@@ -21,14 +21,17 @@ public final class SiteRepository {
     /** Saves a new site or the new state of an existing one, in one transaction. */
     public void save(Site s) {
         db.write(c -> {
-            try (PreparedStatement p = c.prepareStatement("INSERT INTO site (id, name, address, elevation_m, notes)"
-                    + " VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO UPDATE SET name = excluded.name,"
-                    + " address = excluded.address, elevation_m = excluded.elevation_m, notes = excluded.notes")) {
+            try (PreparedStatement p = c.prepareStatement("INSERT INTO site (id, name, address, elevation_m, notes, time_zone)"
+                    + " VALUES (?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO UPDATE SET name = excluded.name,"
+                    + " address = excluded.address, elevation_m = excluded.elevation_m, notes = excluded.notes,"
+                    + " time_zone = excluded.time_zone")) {
                 p.setString(1, s.id());
                 p.setString(2, s.name());
                 p.setString(3, s.address());
                 p.setDouble(4, s.elevationM());
                 p.setString(5, s.notes());
+                // NULL, not "", for a site without a zone, as every site kept before V11 has
+                p.setString(6, s.timeZone().isEmpty() ? null : s.timeZone());
                 p.executeUpdate();
             }
             return null;
@@ -64,6 +67,6 @@ public final class SiteRepository {
 
     private static Site map(ResultSet r) throws SQLException {
         return new Site(r.getString("id"), r.getString("name"), r.getString("address"),
-                r.getDouble("elevation_m"), r.getString("notes"));
+                r.getDouble("elevation_m"), r.getString("notes"), r.getString("time_zone"));
     }
 }

@@ -51,17 +51,70 @@ public final class VisitLogs {
     /**
      * How to read a file.
      *
-     * @param units     temperature unit of columns whose headers state none; also the units of messages
-     * @param headerMap another logger's header → generic field name
-     * @param dateOrder how dates that are not ISO-8601 are read
-     * @param zone      zone of clock times without a UTC offset (the site's, else the machine's)
+     * @param units       temperature unit of columns whose headers state none; also the units of messages
+     * @param headerMap   another logger's header → generic field name
+     * @param dateOrder   how dates that are not ISO-8601 are read
+     * @param zone        zone the tech chose for clock times without a UTC offset; null: none chosen
+     *                    (a visit's log is then read in its site's zone, else in {@code machineZone})
+     * @param machineZone this machine's zone (null: {@link ZoneId#systemDefault()}); given by tests
      */
-    public record ReadOptions(UnitSystem units, Map<String, String> headerMap, DateOrder dateOrder, ZoneId zone) {
+    public record ReadOptions(UnitSystem units, Map<String, String> headerMap, DateOrder dateOrder, ZoneId zone,
+                              ZoneId machineZone) {
         public ReadOptions {
             headerMap = Map.copyOf(headerMap);
             dateOrder = dateOrder == null ? DateOrder.AUTO : dateOrder;
-            zone = zone == null ? ZoneId.systemDefault() : zone;
+            machineZone = machineZone == null ? ZoneId.systemDefault() : machineZone;
         }
+
+        /** Read in the zone chosen, else in this machine's zone. */
+        public ReadOptions(UnitSystem units, Map<String, String> headerMap, DateOrder dateOrder, ZoneId zone) {
+            this(units, headerMap, dateOrder, zone, null);
+        }
+
+        ReadOptions withZone(ZoneId z) {
+            return new ReadOptions(units, headerMap, dateOrder, z, machineZone);
+        }
+    }
+
+    /**
+     * The zone a log's clock times without a UTC offset are read in, and why.
+     *
+     * @param zone the zone
+     * @param from where it came from
+     */
+    public record ClockZone(ZoneId zone, From from) {
+        /** Where the zone came from: chosen for this import, the visit's site, or this machine. */
+        public enum From { CHOSEN, SITE, MACHINE }
+
+        /**
+         * "the site's zone America/Chicago", "this tablet's zone Europe/Lisbon", "the zone chosen,
+         * -05:00".
+         *
+         * @param machine what the machine is called where this is shown, e.g. "tablet"
+         */
+        public String words(String machine) {
+            return switch (from) {
+                case CHOSEN -> "the zone chosen, " + zone.getId();
+                case SITE -> "the site's zone " + zone.getId();
+                case MACHINE -> "this " + machine + "'s zone " + zone.getId();
+            };
+        }
+    }
+
+    /** The one rule for a visit's log: the zone chosen, else the site's zone, else this machine's. */
+    public static ClockZone clockZone(Site site, ZoneId chosen, ZoneId machine) {
+        if (chosen != null) {
+            return new ClockZone(chosen, ClockZone.From.CHOSEN);
+        }
+        if (site != null && site.zone().isPresent()) {
+            return new ClockZone(site.zone().get(), ClockZone.From.SITE);
+        }
+        return new ClockZone(machine == null ? ZoneId.systemDefault() : machine, ClockZone.From.MACHINE);
+    }
+
+    /** {@link #clockZone(Site, ZoneId, ZoneId)} for the visit's site and the options' zones. */
+    public static ClockZone clockZone(Ledger ledger, Visit visit, ReadOptions o) {
+        return clockZone(ledger.sites().find(visit.siteId()).orElse(null), o.zone(), o.machineZone());
     }
 
     /**
@@ -71,7 +124,8 @@ public final class VisitLogs {
      */
     public static LogImport read(Path file, ReadOptions o, ImportProgress progress) throws LogProblem {
         try {
-            return new LogCsvImporter(o.units(), o.headerMap(), o.dateOrder(), o.zone(), progress).read(file);
+            ZoneId zone = o.zone() == null ? o.machineZone() : o.zone();
+            return new LogCsvImporter(o.units(), o.headerMap(), o.dateOrder(), zone, progress).read(file);
         } catch (NoSuchFileException e) {
             throw new LogProblem("no such file: " + file, e);
         } catch (IOException e) {
@@ -106,7 +160,8 @@ public final class VisitLogs {
 
     /**
      * Reads, analyses and keeps a log with the visit, with the airflows it was analysed at and the
-     * zone its clock was read in. A log that does not analyse is not kept (nothing half-kept reaches
+     * zone its clock was read in ({@link #clockZone(Ledger, Visit, ReadOptions)}: the zone chosen,
+     * else the site's, else this machine's). A log that does not analyse is not kept (nothing half-kept reaches
      * the visit's report).
      *
      * @param typedAirflow    airflow the tech gave, m³/s (NaN: none); used when no reading set has one
@@ -116,7 +171,8 @@ public final class VisitLogs {
     public static VisitLog importAndKeep(Ledger ledger, Visit visit, Path file, ReadOptions o, double typedAirflow,
                                          double fanAirflow, ThresholdSettings t, ImportProgress progress)
             throws LogProblem {
-        LogImport imported = read(file, o, progress);
+        // clock times without an offset: the zone chosen, else the site's, else this machine's
+        LogImport imported = read(file, o.withZone(clockZone(ledger, visit, o).zone()), progress);
         LogConditions c = visitConditions(ledger, visit, typedAirflow, fanAirflow);
         String name = file.getFileName().toString();
         String id = Ids.newId();

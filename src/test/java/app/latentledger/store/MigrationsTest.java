@@ -56,6 +56,10 @@ class MigrationsTest {
             assertEquals(Migration.latestVersion(), ledger.database().schemaVersion());
             assertEquals("ok", ledger.database().integrityCheck());
             assertEquals("Old site", ledger.sites().find("s").orElseThrow().name());
+            // V11: a site from before it has no time zone (its logs are read in the tablet's)
+            assertEquals("", ledger.sites().find("s").orElseThrow().timeZone());
+            ledger.sites().save(ledger.sites().find("s").orElseThrow().withTimeZone("America/Chicago"));
+            assertEquals("America/Chicago", ledger.sites().find("s").orElseThrow().timeZone());
             assertEquals(3 * 3516.85, ledger.systems().find("y").orElseThrow().nominalCapacityW());
             assertEquals("complaint", ledger.visits().find("v").orElseThrow().purpose().key());
             ReadingSet r = ledger.readings().find("r").orElseThrow();
@@ -121,7 +125,8 @@ class MigrationsTest {
                 "V6__log_conditions.sql", "1696abc12866c2c22da55c21732391e8bcaa5e62f4b6ccafa998893a8ba11194",
                 "V7__paperwork_and_recycle_bin.sql", "315109d0f711683fafeafb5c713728291c54a68b24972d8bbf7307d4102f5c4e",
                 "V9__house_facts.sql", "b265b23ce40679f4a3c3c62f270a85fb5f3c2fb6ae6b152ca5691c521b204874",
-                "V10__office_sync.sql", "e00cf6afc6973b57b4909a1df69b91e34a83bf13135a98fc0e5afdf1554826bf");
+                "V10__office_sync.sql", "e00cf6afc6973b57b4909a1df69b91e34a83bf13135a98fc0e5afdf1554826bf",
+                "V11__site_time_zone.sql", "a45bd5f2d6c406d64c4ea77a420eb14ddd0caa1adc48faacee4fccade5931da9");
 
         for (Map.Entry<String, String> e : released.entrySet()) {
             try (InputStream in = Migration.class.getResourceAsStream("migrations/" + e.getKey())) {

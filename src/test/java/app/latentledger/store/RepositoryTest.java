@@ -55,6 +55,24 @@ class RepositoryTest extends OneVisitLedger {
     }
 
     @Test
+    void aSitesTimeZoneReadsBackAndCanBeTakenOff() {
+        Site zoned = new Site("s1", "Renamed", "2 Other Way, Saltreed", 20, "note", "America/Denver");
+        ledger.sites().save(zoned);
+        assertEquals(Optional.of(zoned), ledger.sites().find("s1"));
+        assertEquals("America/Denver", ledger.sites().all().get(0).zone().orElseThrow().getId());
+        ledger.sites().save(zoned.withTimeZone(""));
+        assertEquals("", ledger.sites().find("s1").orElseThrow().timeZone());
+        assertTrue(ledger.sites().find("s1").orElseThrow().zone().isEmpty());
+        // kept as NULL, as every site from before V11
+        assertEquals(Boolean.TRUE, ledger.database().read(c -> {
+            try (PreparedStatement p = c.prepareStatement("SELECT time_zone IS NULL FROM site WHERE id = 's1'");
+                 java.sql.ResultSet r = p.executeQuery()) {
+                return r.next() && r.getBoolean(1);
+            }
+        }));
+    }
+
+    @Test
     void missingSiteIsRefusedNamingTheField() {
         InvalidRecordException e = assertThrows(InvalidRecordException.class,
                 () -> ledger.systems().save(TestRecords.system("y2", "nowhere")));

@@ -40,6 +40,17 @@ public final class JobView extends VBox implements Reflowing {
         TextField siteElevation = field("new-site-elevation", "Elevation", viewModel.newSiteElevationFtProperty());
         javafx.scene.control.Label elevationCaption = Ui.label("", "figure-label");
         elevationCaption.textProperty().bind(viewModel.elevationCaptionProperty());
+        // the time zone a logger's clock times without an offset are read in: picked, never typed by heart
+        javafx.scene.control.ComboBox<SiteZones.Choice> siteZone = new javafx.scene.control.ComboBox<>(
+                viewModel.zoneChoices());
+        siteZone.setId("new-site-zone");
+        siteZone.setMaxWidth(Double.MAX_VALUE);
+        // a long name ("Mountain, no daylight saving (Arizona) · America/Phoenix") wraps, never cut
+        siteZone.setButtonCell(zoneCell());
+        siteZone.setCellFactory(v -> zoneCell());
+        siteZone.valueProperty().bindBidirectional(viewModel.newSiteZoneProperty());
+        TextField zoneSearch = field("new-site-zone-search", "Search all zones, e.g. Regina",
+                viewModel.zoneSearchProperty());
         javafx.scene.control.Button addSite = Ui.button("add-site", "Add site", Icons.NEW, viewModel::addSite);
         addSite.textProperty().bind(javafx.beans.binding.Bindings.when(viewModel.editingSiteProperty().isNull())
                 .then("Add site").otherwise("Save site"));
@@ -52,7 +63,8 @@ public final class JobView extends VBox implements Reflowing {
         VBox siteCol = Ui.panel(8, Ui.wrapped("1  Site", "heading"), sites,
                 new FlowPane(8, 8, Ui.button("edit-site", "Correct site", null, viewModel::editSite),
                         Ui.button("delete-site", "Delete site", Icons.FIX, viewModel::askDeleteSite)),
-                siteName, siteAddress, elevationCaption, siteElevation, new FlowPane(8, 8, addSite, cancelEdit),
+                siteName, siteAddress, elevationCaption, siteElevation, Ui.wrapped("Time zone", "figure-label"),
+                siteZone, zoneSearch, new FlowPane(8, 8, addSite, cancelEdit),
                 siteStatus);
 
         ListView<HvacSystem> systems = list("system-list", viewModel.systems(), viewModel::describe);
@@ -146,6 +158,20 @@ public final class JobView extends VBox implements Reflowing {
         f.setPromptText(prompt);
         f.textProperty().bindBidirectional(value);
         return f;
+    }
+
+    private static ListCell<SiteZones.Choice> zoneCell() {
+        ListCell<SiteZones.Choice> c = new ListCell<>() {
+            @Override
+            protected void updateItem(SiteZones.Choice item, boolean empty) {
+                super.updateItem(item, empty);
+                setText(empty || item == null ? null : item.label());
+            }
+        };
+        c.setWrapText(true);
+        c.setMinWidth(0);
+        c.setPrefWidth(0);
+        return c;
     }
 
     private static <T> ListView<T> list(String id, javafx.collections.ObservableList<T> items, Function<T, String> text) {

@@ -40,6 +40,11 @@ public final class JobViewModel {
     /** The elevation of a new site, in the tech's units (the name is older than the SI setting). */
     private final StringProperty newSiteElevationFt = new SimpleStringProperty("0");
     private final ReadOnlyStringWrapper elevationCaption = new ReadOnlyStringWrapper("");
+    /** The site's time zone as chosen; {@link SiteZones#TABLET}: none kept, the tablet's is used. */
+    private final ObjectProperty<SiteZones.Choice> newSiteZone = new SimpleObjectProperty<>(SiteZones.TABLET);
+    /** What the tech typed to search every zone; the choices follow it. */
+    private final StringProperty zoneSearch = new SimpleStringProperty("");
+    private final ObservableList<SiteZones.Choice> zoneChoices = FXCollections.observableArrayList(SiteZones.common());
     private final StringProperty newSystemLabel = new SimpleStringProperty("");
     private final StringProperty newSystemTons = new SimpleStringProperty("3");
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
@@ -55,6 +60,12 @@ public final class JobViewModel {
         // a new site starts at the tech's default elevation, shown in the units of the moment
         session.settingsProperty().addListener((o, a, b) -> showDefaultElevation());
         showDefaultElevation();
+        zoneSearch.addListener((o, a, b) -> {
+            // a drop-down whose items are replaced may drop its value: the zone chosen stays chosen
+            SiteZones.Choice keep = newSiteZone.get();
+            zoneChoices.setAll(SiteZones.search(b, keep));
+            newSiteZone.set(keep);
+        });
         site.addListener((o, a, b) -> loadSystems());
         system.addListener((o, a, b) -> loadVisits());
         sites.setAll(session.ledger().sites().all());
@@ -137,7 +148,7 @@ public final class JobViewModel {
         status.set(bin.messageProperty().get());
     }
 
-    /** Puts the chosen site's name, address and elevation in the site fields to correct them. */
+    /** Puts the chosen site's name, address, elevation and time zone in the site fields to correct them. */
     public void editSite() {
         Site s = site.get();
         if (s == null) {
@@ -149,6 +160,7 @@ public final class JobViewModel {
         newSiteAddress.set(s.address());
         newSiteElevationFt.set(app.latentledger.ui.present.Shown.of(Quantity.ELEVATION, session.units(), s.elevationM(),
                 0).replace(",", ""));
+        showZone(SiteZones.of(s.timeZone()));
         siteStatus.set("Correct the fields, then save the site.");
     }
 
@@ -158,7 +170,30 @@ public final class JobViewModel {
         newSiteName.set("");
         newSiteAddress.set("");
         showDefaultElevation();
+        showZone(SiteZones.TABLET);
         siteStatus.set("");
+    }
+
+    /** The zone field showing {@code z}, with the usual choices (and {@code z}) to pick from. */
+    private void showZone(SiteZones.Choice z) {
+        zoneChoices.setAll(SiteZones.search("", z));
+        newSiteZone.set(z);
+        zoneSearch.set("");
+    }
+
+    /** The site's time zone as chosen in the form. */
+    public ObjectProperty<SiteZones.Choice> newSiteZoneProperty() {
+        return newSiteZone;
+    }
+
+    /** Words typed to search every time zone ("regina", "Europe/Lis"); empty: the usual ones. */
+    public StringProperty zoneSearchProperty() {
+        return zoneSearch;
+    }
+
+    /** The time zones offered: the tablet's, the usual ones of the US and Canada, or those searched for. */
+    public ObservableList<SiteZones.Choice> zoneChoices() {
+        return zoneChoices;
     }
 
     /** "Elevation, ft" or "Elevation, m". */
@@ -268,8 +303,9 @@ public final class JobViewModel {
         String verb = editing == null ? "added" : "saved";
         try {
             double m = Quantity.ELEVATION.fromDisplay(session.units(), number("elevation", newSiteElevationFt.get()));
-            Site s = editing == null ? new Site(Ids.newId(), newSiteName.get(), newSiteAddress.get(), m, "")
-                    : new Site(editing.id(), newSiteName.get(), newSiteAddress.get(), m, editing.notes());
+            String zone = newSiteZone.get() == null ? "" : newSiteZone.get().id();
+            Site s = editing == null ? new Site(Ids.newId(), newSiteName.get(), newSiteAddress.get(), m, "", zone)
+                    : new Site(editing.id(), newSiteName.get(), newSiteAddress.get(), m, editing.notes(), zone);
             if (editing == null) {
                 session.addSite(s);
             } else {
@@ -282,10 +318,12 @@ public final class JobViewModel {
                 site.set(null);
             }
             site.set(shown);
-            siteStatus.set("Site " + verb + ": " + s.name() + ".");
+            siteStatus.set("Site " + verb + ": " + s.name() + (s.timeZone().isEmpty() ? "" : ", time zone "
+                    + s.timeZone()) + ".");
             newSiteName.set("");
             newSiteAddress.set("");
             showDefaultElevation();
+            showZone(SiteZones.TABLET);
             return true;
         } catch (InvalidInputException e) {
             siteStatus.set("Site not " + verb + ": " + e.message(session.units()));

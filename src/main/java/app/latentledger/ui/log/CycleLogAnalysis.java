@@ -45,7 +45,8 @@ public final class CycleLogAnalysis implements LogAnalysisService {
         } catch (LogProblem e) {
             throw new IllegalArgumentException(e.getMessage(), e);
         }
-        return analysis(a, request.units(), notes(a.importReport()));
+        return analysis(a, request.units(), notes(a.importReport(),
+                VisitLogs.clockZone(request.ledger(), request.visit(), options(request))));
     }
 
     @Override
@@ -132,7 +133,8 @@ public final class CycleLogAnalysis implements LogAnalysisService {
         return rows;
     }
 
-    private static String notes(ImportReport rep) {
+    /** What the import noticed; {@code zone}: where the zone of clock times without an offset came from. */
+    static String notes(ImportReport rep, VisitLogs.ClockZone zone) {
         List<String> parts = new ArrayList<>();
         parts.add(rep.rowsKept() + " of " + rep.rowsRead() + " rows kept");
         parts.add("temperatures in " + rep.temperatureUnitText());
@@ -140,7 +142,8 @@ public final class CycleLogAnalysis implements LogAnalysisService {
             parts.add("dates read as " + rep.dateOrder().key());
         }
         if (!rep.timeZone().isEmpty()) {
-            parts.add("clock times in " + rep.timeZone());
+            parts.add("clock times read in " + (zone.zone().getId().equals(rep.timeZone()) ? zone.words("tablet")
+                    : rep.timeZone()));
         }
         if (rep.rejectedCount() > 0) {
             parts.add(rep.rejectedCount() + " kept out (" + String.join(", ", rep.rejected().subList(0,

@@ -97,6 +97,7 @@ public final class LogImportViewModel {
     private final StringProperty fanAirflow = new SimpleStringProperty("");
     private final StringProperty dateOrder = new SimpleStringProperty("");
     private final StringProperty timeZone = new SimpleStringProperty("");
+    private final ReadOnlyStringWrapper timeZonePrompt = new ReadOnlyStringWrapper("");
     private final ReadOnlyBooleanWrapper airflowNeeded = new ReadOnlyBooleanWrapper(false);
     private final ReadOnlyStringWrapper airflowCaption = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
@@ -139,6 +140,7 @@ public final class LogImportViewModel {
         session.screenProperty().addListener((o, a, b) -> {
             if (b == app.latentledger.ui.session.Screen.LOGS) {
                 listKept();
+                showDefaultZone();
             }
         });
         refresh();
@@ -173,9 +175,25 @@ public final class LogImportViewModel {
         return dateOrder;
     }
 
-    /** Zone of clock times written without a UTC offset, e.g. "America/Chicago"; empty: the tablet's. */
+    /** Zone of clock times written without a UTC offset, e.g. "America/Chicago"; empty: the site's, else the tablet's. */
     public StringProperty timeZoneProperty() {
         return timeZone;
+    }
+
+    /**
+     * The zone used when none is typed, as the empty zone field says it: "The site's: America/Chicago"
+     * or "This tablet's: Europe/Lisbon" (the rule of {@link VisitLogs#clockZone}).
+     */
+    public ReadOnlyStringProperty timeZonePromptProperty() {
+        return timeZonePrompt.getReadOnlyProperty();
+    }
+
+    private void showDefaultZone() {
+        app.latentledger.core.records.Site site = session.visit() == null ? null
+                : session.ledger().sites().find(session.visit().siteId()).orElse(null);
+        VisitLogs.ClockZone z = VisitLogs.clockZone(site, null, ZoneId.systemDefault());
+        timeZonePrompt.set((z.from() == VisitLogs.ClockZone.From.SITE ? "The site's: " : "This tablet's: ")
+                + z.zone().getId());
     }
 
     /** True when no reading set of the visit has an airflow: the screen asks for it. */
@@ -537,6 +555,7 @@ public final class LogImportViewModel {
         busy.set(false);
         bin.cancelDelete();
         listKept();
+        showDefaultZone();
         showAirflowNeed();
         formOpen.set(keptLogs.isEmpty());
         if (!wired()) {

@@ -198,8 +198,8 @@ public final class LogView extends VBox implements Reflowing {
         VBox orderBox = new VBox(4, Ui.wrapped("Dates like 7/8/2026 are read as", "figure-label"), orderButtons,
                 messages.get(About.DATE_ORDER));
 
-        TextField zone = field("log-time-zone", "This tablet's: " + java.time.ZoneId.systemDefault().getId(),
-                viewModel.timeZoneProperty());
+        TextField zone = field("log-time-zone", "", viewModel.timeZoneProperty());
+        zone.promptTextProperty().bind(viewModel.timeZonePromptProperty());
         VBox zoneBox = new VBox(4, Ui.wrapped("Time zone of clock times written without one", "figure-label"), zone,
                 Ui.wrapped("A zone such as America/Chicago or an offset such as -05:00; the zone used is kept with"
                         + " the log.", "muted"), messages.get(About.TIME_ZONE));

@@ -43,6 +43,22 @@ class RecordsValidationTest {
     }
 
     @Test
+    void aSiteTimeZoneMustBeARegionIdAndTheRefusalSaysWhatIsAccepted() {
+        InvalidRecordException e = assertThrows(InvalidRecordException.class,
+                () -> new Site("s", "x", "", 0, "", "America/Chicagoo"));
+        assertEquals("site time zone", e.field());
+        assertTrue(e.getMessage().contains("'America/Chicagoo'") && e.getMessage().contains("America/Chicago,"),
+                e.getMessage());
+        // a fixed offset would read a summer log an hour off once the clocks change
+        assertEquals("site time zone", assertThrows(InvalidRecordException.class,
+                () -> new Site("s", "x", "", 0, "", "-05:00")).field());
+        assertEquals("America/Chicago", new Site("s", "x", "", 0, "", " america/chicago ").timeZone());
+        assertEquals("", new Site("s", "x", "", 0, "", null).timeZone());
+        assertEquals("", new Site("s", "x", "", 0, "").timeZone());
+        assertEquals("America/Regina", new Site("s", "x", "", 0, "", "America/Regina").zone().orElseThrow().getId());
+    }
+
+    @Test
     void missingNameAndBadIdsAreRefused() {
         assertEquals("site name", assertThrows(InvalidRecordException.class,
                 () -> new Site("s", "  ", "", 0, "")).field());

@@ -49,6 +49,31 @@ class WireCodecTest {
     }
 
     @Test
+    void aSitesTimeZoneTravelsAndAnOlderBodyWithoutItIsStillAccepted() {
+        Site zoned = TestRecords.site("site-1").withTimeZone("America/Chicago");
+        JsonObject body = WireCodec.body(zoned);
+        assertEquals("America/Chicago", body.get("timeZone").getAsString());
+        assertEquals(zoned, WireCodec.site(overTheWire(SyncKind.SITE, "site-1", body)));
+        // a site without a zone sends the body an older tablet sent, so its agreed hash stays the same
+        Site plain = TestRecords.site("site-1");
+        JsonObject older = new JsonObject();
+        older.addProperty("id", plain.id());
+        older.addProperty("name", plain.name());
+        older.addProperty("address", plain.address());
+        older.addProperty("elevationM", plain.elevationM());
+        older.addProperty("notes", plain.notes());
+        assertEquals(WireHash.of(older), WireHash.of(WireCodec.body(plain)));
+        assertEquals(plain, WireCodec.site(overTheWire(SyncKind.SITE, "site-1", older)));
+        // a zone that is not a region id is refused naming the field
+        JsonObject bad = WireCodec.body(zoned);
+        bad.addProperty("timeZone", "Central");
+        List<Refusal> refused = WireValidation.check(WireRecord.of(SyncKind.SITE, "site-1", bad, null, EDITED));
+        assertEquals(1, refused.size(), refused::toString);
+        assertEquals("site time zone", refused.get(0).field());
+        assertTrue(refused.get(0).message().contains("'Central'"), refused.get(0).message());
+    }
+
+    @Test
     void readingSetsRoundTripWithEveryColumnTyped() {
         ReadingSet full = TestRecords.fullReadingSet("rs-1", "visit-1", 3);
         ReadingSet minimal = TestRecords.minimalReadingSet("rs-2", "visit-1");
