@@ -106,7 +106,7 @@ public final class CycleLogAnalysis implements LogAnalysisService {
                 : Shown.number(r.fanOffDelayMedianS() / 60, 1), Double.isNaN(r.fanOffDelayMedianS()) ? "" : "min"));
         rows.add(new Row("latent-measured", "Latent fraction, measured", r.latentMeasured().number(2, MORE_RETURNED),
                 ""));
-        rows.add(new Row("latent-predicted", "Latent fraction, model", r.latentPredicted().number(2, MORE_RETURNED),
+        rows.add(new Row("latent-predicted", "Latent fraction, expected for these runs", r.latentPredicted().number(2, MORE_RETURNED),
                 ""));
         if (r.house() != null) {
             HouseHumidity h = r.house();
