@@ -1,5 +1,6 @@
 package app.latentledger.cli;
 
+import app.latentledger.core.text.DailyWaterWords;
 import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilProcess;
@@ -140,8 +141,8 @@ public final class CoilCommand implements Command {
         }
         b.append(est(Measurand.MOISTURE_REMOVAL.label(units), Measurand.MOISTURE_REMOVAL, r, units, 2));
         // a rate per day reads like a dehumidifier's rating unless it says it assumes a day of running
-        b.append(Format.row("", Format.fixed(Quantity.WATER_RATE_DAILY.toDisplay(units, q.moistureRemovalKgPerS()), 1),
-                Quantity.WATER_RATE_DAILY.symbol(units) + " if it ran all day"));
+        b.append(Format.row("", DailyWaterWords.number(q.moistureRemovalKgPerS(), units),
+                DailyWaterWords.unitAndWords(q.moistureRemovalKgPerS(), units)));
         b.append(est(Measurand.HUMIDITY_RATIO_DROP.label(units), Measurand.HUMIDITY_RATIO_DROP, r, units, units == UnitSystem.IP ? 1 : 2));
         b.append(est(Measurand.LATENT_PER_AIRFLOW.label(units), Measurand.LATENT_PER_AIRFLOW, r, units, 2));
         if (r.readings().hasNominalCapacity()) {

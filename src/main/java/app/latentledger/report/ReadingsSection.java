@@ -1,5 +1,6 @@
 package app.latentledger.report;
 
+import app.latentledger.core.text.DailyWaterWords;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.CoilTemperatureSource;
 import app.latentledger.core.coil.Estimate;
@@ -156,7 +157,7 @@ final class ReadingsSection {
         rowResult(tb, sets, "Sensible heat ratio", r -> ratio(r, Measurand.SHR, WithheldRatios.shr(r)));
         rowResult(tb, sets, Measurand.MOISTURE_REMOVAL.title(units), r -> Numbers.estimate(Quantity.WATER_RATE, units,
                 r.estimate(Measurand.MOISTURE_REMOVAL)) + " ("
-                + DisplayNumber.withUnit(Quantity.WATER_RATE_DAILY, units, r.process().moistureRemovalKgPerS()) + " if it ran all day)");
+                + DailyWaterWords.phrase(r.process().moistureRemovalKgPerS(), units) + ")");
         est(tb, sets, Measurand.LATENT_PER_AIRFLOW, Measurand.LATENT_PER_AIRFLOW.title(units));
         est(tb, sets, Measurand.AIRFLOW_PER_CAPACITY, Measurand.AIRFLOW_PER_CAPACITY.title(units));
         rowResult(tb, sets, Measurand.AIRFLOW_PER_NOMINAL_CAPACITY.title(units), r -> r.readings().hasNominalCapacity()

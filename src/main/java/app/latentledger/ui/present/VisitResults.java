@@ -1,5 +1,6 @@
 package app.latentledger.ui.present;
 
+import app.latentledger.core.text.DailyWaterWords;
 import app.latentledger.core.coil.CoilProcess;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.CoilVerdict;
@@ -108,8 +109,9 @@ public final class VisitResults {
         rows.add(row(r, u, "latent", "Latent", Measurand.LATENT, Quantity.POWER));
         rows.add(ratioRow(r, u, "shr", "Sensible heat ratio", Measurand.SHR, WithheldRatios.shr(r)));
         rows.add(row(r, u, "moisture-removal", Measurand.MOISTURE_REMOVAL.title(u), Measurand.MOISTURE_REMOVAL, Quantity.WATER_RATE));
-        rows.add(new Row("moisture-removal-daily", "Water removed if it ran all day",
-                Shown.of(Quantity.WATER_RATE_DAILY, u, p.moistureRemovalKgPerS()), Quantity.WATER_RATE_DAILY.symbol(u)));
+        // never a negative amount of water: a coil that leaves the air wetter says it adds water
+        rows.add(new Row("moisture-removal-daily", DailyWaterWords.label(p.moistureRemovalKgPerS(), u),
+                DailyWaterWords.number(p.moistureRemovalKgPerS(), u), Quantity.WATER_RATE_DAILY.symbol(u)));
         rows.add(row(r, u, "latent-per-airflow", Measurand.LATENT_PER_AIRFLOW.title(u), Measurand.LATENT_PER_AIRFLOW,
                 Quantity.POWER_PER_AIRFLOW));
         rows.add(row(r, u, "humidity-drop", Measurand.HUMIDITY_RATIO_DROP.title(u), Measurand.HUMIDITY_RATIO_DROP,
