@@ -150,7 +150,8 @@ public final class CoilCommand implements Command {
                     units, 0));
         } else {
             b.append("  " + Measurand.AIRFLOW_PER_NOMINAL_CAPACITY.label(units) + ": "
-                    + Ratio.notMeasurable("no nameplate size given; add --nominal-tons")
+                    + Ratio.notMeasurable("no nameplate size given; add "
+                            + (units == UnitSystem.IP ? "--nominal-tons" : "--nominal-kw"))
                     + "\n");
         }
         ShortcutFigures s = ShortcutFigures.of(units, r.readings().pressurePa(), r.readings().airflowM3PerS(), q,
