@@ -143,6 +143,11 @@ final class CycleFindings {
         double[] blower = r.cycles().stream().mapToDouble(c -> c.cycle().blowerOnSeconds())
                 .filter(v -> v > 0).sorted().toArray();
         double medianBlower = blower.length == 0 ? Double.NaN : blower[blower.length / 2];
+        // the blower ran through the rests, so there is no fan-off delay to give (it would read "—"):
+        // the evidence gives how long it ran in a rest instead, the figure the technical line names
+        List<Evidence> throughRests = new ArrayList<>(evidence.subList(0, evidence.size() - 1));
+        throughRests.add(Evidence.of("blowerOnInRests", "median blower time in a rest", Quantity.DURATION_MINUTES,
+                medianBlower));
         out.add(new Finding(FindingCode.OFF_CYCLE_REEVAPORATION, Severity.FIX,
                 String.format(Locale.ROOT, "After the compressor stops, the blower keeps running and blows water"
                         + " from the wet coil back into the house: about %.0f %% of what it removed.", 100 * share),
@@ -151,7 +156,7 @@ final class CycleFindings {
                                 + " blower ran on after the compressor in %d of %d rests (median %.1f min, %s);"
                                 + " limit %.0f %% (common practice, no source)",
                         100 * share, r.blowerOnRests(), r.cycles().size(), medianBlower / 60.0, source, 100 * min),
-                evidence,
+                List.copyOf(throughRests),
                 List.of("Set the thermostat fan to AUTO rather than ON",
                         "Check the air handler's fan-off delay and shorten it if the complaint persists",
                         "Check that the condensate pan drains freely (standing water re-evaporates too)")));
