@@ -91,11 +91,11 @@ final class CycleFindings {
                 // and in the log command's model line and JSON
                 String.format(Locale.ROOT, "share of steady moisture removal %s %s (measured %s; expected %s for"
                                 + " these run lengths from a published part-load model, Methods guide §3.6: the"
-                                + " coil starts to drain after about %.0f s of running, %s) below %.2f"
+                                + " coil starts to drain after about %.0f s of running (%s)) below %.2f"
                                 + " (common practice, no source)", which, fraction(judged), fraction(measured),
                         fraction(predicted), r.model().twetS(),
                         r.model().source() == LatentDegradationModel.Source.FITTED ? "timed from this log"
-                                : "the published typical value", min),
+                                : "a published typical value", min),
                 List.of(Evidence.of("latentFractionMeasured", "measured share of steady moisture removal",
                                 Quantity.FRACTION_PERCENT, measured),
                         Evidence.of("latentFractionPredicted", "expected share of steady moisture removal for these run lengths",
