@@ -1,6 +1,7 @@
 package app.latentledger.ui;
 
 import app.latentledger.TradeWords;
+import app.latentledger.core.settings.SettingsCatalogue;
 import app.latentledger.store.DemoScenario;
 import app.latentledger.ui.log.CycleLogAnalysis;
 import app.latentledger.ui.session.AppSession;
@@ -62,12 +63,20 @@ class TradeWordsUiTest {
     void noScreenShowsModelSymbolsFileNamesCommandSyntaxOrFieldKeys(FxRobot robot) {
         List<String> problems = new ArrayList<>();
         int[] scanned = {0};
+        walk(robot, problems, scanned);
+        // the same screens in SI: the names that carry a unit ("per kW (nominal)") change with it
+        robot.interact(() -> session.saveSettings(session.settings().withChoice(SettingsCatalogue.UNITS, "si")));
+        assertTrue(session.units() == app.latentledger.core.units.UnitSystem.SI, "the screens now show SI");
+        walk(robot, problems, scanned);
+        assertTrue(scanned[0] > 400, "the walk reached the screens' words: " + scanned[0] + " texts");
+        assertTrue(problems.isEmpty(), String.join("\n", problems));
+    }
+
+    private void walk(FxRobot robot, List<String> problems, int[] scanned) {
         for (Screen s : Screen.values()) {
             robot.interact(() -> session.screenProperty().set(s));
             robot.interact(() -> scan(s, stage.getScene().getRoot(), problems, scanned));
         }
-        assertTrue(scanned[0] > 200, "the walk reached the screens' words: " + scanned[0] + " texts");
-        assertTrue(problems.isEmpty(), String.join("\n", problems));
     }
 
     private static void scan(Screen s, Node n, List<String> problems, int[] scanned) {
