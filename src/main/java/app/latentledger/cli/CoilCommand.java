@@ -1,5 +1,6 @@
 package app.latentledger.cli;
 
+import app.latentledger.core.text.DailyWaterWords;
 import app.latentledger.core.InvalidInputException;
 import app.latentledger.core.coil.CoilCheck;
 import app.latentledger.core.coil.CoilProcess;
@@ -138,15 +139,19 @@ public final class CoilCommand implements Command {
             b.append(est("latent from condensate", Measurand.LATENT_FROM_CONDENSATE, r, units, 0));
             b.append(est("SHR from condensate", Measurand.SHR_FROM_CONDENSATE, r, units, 3));
         }
-        b.append(est("moisture removal", Measurand.MOISTURE_REMOVAL, r, units, 2));
-        b.append(Format.row("", Format.fixed(Quantity.WATER_RATE_DAILY.toDisplay(units, q.moistureRemovalKgPerS()), 1),
-                Quantity.WATER_RATE_DAILY.symbol(units)));
-        b.append(est("humidity-ratio drop", Measurand.HUMIDITY_RATIO_DROP, r, units, units == UnitSystem.IP ? 1 : 2));
-        b.append(est("latent per airflow", Measurand.LATENT_PER_AIRFLOW, r, units, 2));
+        b.append(est(Measurand.MOISTURE_REMOVAL.label(units), Measurand.MOISTURE_REMOVAL, r, units, 2));
+        // a rate per day reads like a dehumidifier's rating unless it says it assumes a day of running
+        b.append(Format.row("", DailyWaterWords.number(q.moistureRemovalKgPerS(), units),
+                DailyWaterWords.unitAndWords(q.moistureRemovalKgPerS(), units)));
+        b.append(est(Measurand.HUMIDITY_RATIO_DROP.label(units), Measurand.HUMIDITY_RATIO_DROP, r, units, units == UnitSystem.IP ? 1 : 2));
+        b.append(est(Measurand.LATENT_PER_AIRFLOW.label(units), Measurand.LATENT_PER_AIRFLOW, r, units, 2));
         if (r.readings().hasNominalCapacity()) {
-            b.append(est("airflow per nominal ton", Measurand.AIRFLOW_PER_NOMINAL_CAPACITY, r, units, 0));
+            b.append(est(Measurand.AIRFLOW_PER_NOMINAL_CAPACITY.label(units), Measurand.AIRFLOW_PER_NOMINAL_CAPACITY, r,
+                    units, 0));
         } else {
-            b.append("  airflow per nominal ton: " + Ratio.notMeasurable("no nameplate size given; add --nominal-tons")
+            b.append("  " + Measurand.AIRFLOW_PER_NOMINAL_CAPACITY.label(units) + ": "
+                    + Ratio.notMeasurable("no nameplate size given; add "
+                            + (units == UnitSystem.IP ? "--nominal-tons" : "--nominal-kw"))
                     + "\n");
         }
         ShortcutFigures s = ShortcutFigures.of(units, r.readings().pressurePa(), r.readings().airflowM3PerS(), q,

@@ -20,7 +20,7 @@ final class Format {
 
     /** A table row: label padded, value right-aligned, then the unit. */
     static String row(String label, String value, String unit) {
-        String row = String.format(Locale.ROOT, "  %-22s %12s %s%n", label, value, unit);
+        String row = String.format(Locale.ROOT, "  %-26s %12s %s%n", label, value, unit);
         return TRAILING_SPACES.matcher(row).replaceAll("\n");
     }
 }

@@ -1,5 +1,7 @@
 package app.latentledger.cli;
 
+import app.latentledger.core.coil.Measurand;
+
 import app.latentledger.core.measure.HumidityKind;
 import app.latentledger.core.records.Airflow;
 import app.latentledger.core.records.CoilTemperature;
@@ -135,9 +137,12 @@ final class RecordsView {
             double perCapacity = a.volume().valueSi() / system.nominalCapacityW();
             b.append(line("airflow", Format.fixed(Quantity.AIRFLOW.toDisplay(units, a.volume().valueSi()), 0) + " ± "
                     + Format.fixed(Quantity.AIRFLOW.toDisplay(units, a.volume().toleranceSi()), 0) + " "
-                    + a.basis().label() + " " + Quantity.AIRFLOW.symbol(units) + " " + a.point().key() + " ("
+                    + a.basis().label() + " " + Quantity.AIRFLOW.symbol(units) + " " + a.point().key()
+                    // per the nameplate size, named as the coil command, the app and the report name it
+                    + (perCapacity > 0 && Double.isFinite(perCapacity) ? "; "
+                    + Measurand.AIRFLOW_PER_NOMINAL_CAPACITY.label(units) + " "
                     + Format.fixed(Quantity.AIRFLOW_PER_CAPACITY.toDisplay(units, perCapacity), 0) + " "
-                    + Quantity.AIRFLOW_PER_CAPACITY.symbol(units) + " of nominal)"
+                    + Quantity.AIRFLOW_PER_CAPACITY.symbol(units) : "")
                     + (a.method().isEmpty() ? "" : "; " + a.method())));
         }
         if (r.stationPressurePa() != null) {

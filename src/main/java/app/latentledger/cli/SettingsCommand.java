@@ -185,14 +185,20 @@ public final class SettingsCommand implements Command {
                     continue;
                 }
                 String value = text(r.get("value")) + unitSuffix(r);
+                // the range as the app's hint and a refusal print it, rounded inward to the shown precision
                 String range = r.containsKey("choices") ? String.join(" | ", castList(r.get("choices")))
-                        : text(r.get("min")) + " to " + text(r.get("max")) + unitSuffix(r);
+                        : numberRange(key, s.units()) + unitSuffix(r);
                 b.append(String.format("  %s %-28s %14s   default %s; range %s%n", Boolean.TRUE.equals(r.get("isDefault"))
                         ? " " : "*", key, value, text(r.get("default")) + unitSuffix(r), range));
                 b.append("      ").append(r.get("label")).append(" — ").append(r.get("source")).append('\n');
             }
         }
         return b.append(Cautions.SAFETY_LINE).append('\n').toString();
+    }
+
+    private static String numberRange(String key, UnitSystem u) {
+        NumberSetting n = SettingsCatalogue.number(key).orElseThrow();
+        return app.latentledger.core.InvalidInputException.range(n.quantity(), u, n.minSi(), n.maxSi());
     }
 
     @SuppressWarnings("unchecked")

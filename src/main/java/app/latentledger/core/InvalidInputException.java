@@ -91,9 +91,10 @@ public final class InvalidInputException extends IllegalArgumentException {
     /**
      * The accepted range at the precision the value is shown with, rounded inwards so every number
      * it shows is itself accepted: 0.00944 m³/s is "20 cfm", not "19.9175 cfm". A range too narrow
-     * for that precision keeps its exact ends.
+     * for that precision keeps its exact ends. The one rule for a range a tech reads: refusals, the
+     * settings screen's hints and the {@code settings} command's table all print it.
      */
-    private static String range(Quantity q, UnitSystem units, double minSi, double maxSi) {
+    public static String range(Quantity q, UnitSystem units, double minSi, double maxSi) {
         double min = q.toDisplay(units, minSi);
         double max = q.toDisplay(units, maxSi);
         double step = Math.pow(10, -DisplayNumber.decimals(q, units));

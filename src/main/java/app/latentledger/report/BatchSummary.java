@@ -159,15 +159,12 @@ public record BatchSummary(String source, UnitSystem units, OffsetDateTime gener
         return a > 0 ? NiceTicks.step(a, 10, 1) : 1;
     }
 
-    /** How the summary names a figure, e.g. "latent per airflow (Btu/h per cfm)". */
+    /** How the summary names a figure, e.g. "Latent capacity per cfm (Btu/h per cfm)". */
     public static String title(Measurand m, UnitSystem units) {
         String name = switch (m) {
             case SHR -> "Sensible heat ratio";
-            case LATENT_PER_AIRFLOW -> "Latent capacity per airflow";
-            case AIRFLOW_PER_NOMINAL_CAPACITY -> units == UnitSystem.IP ? "Airflow per nominal ton"
-                    : "Airflow per nominal kW";
             case DEW_POINT_MARGIN -> "Dew-point margin (entering dew point minus coil)";
-            default -> m.label();
+            default -> m.title(units);
         };
         String unit = m.quantity().symbol(units);
         return unit.isEmpty() ? name : name + " (" + unit + ")";

@@ -145,8 +145,10 @@ public final class BatchSummaryReport {
                     e.report());
         }
         table.draw(t);
-        t.paragraph("Units: latent per airflow " + Measurand.LATENT_PER_AIRFLOW.quantity().symbol(s.units())
-                + "; airflow per nominal capacity " + Measurand.AIRFLOW_PER_NOMINAL_CAPACITY.quantity().symbol(s.units())
+        t.paragraph("Units: " + Measurand.LATENT_PER_AIRFLOW.label(s.units()) + " "
+                + Measurand.LATENT_PER_AIRFLOW.quantity().symbol(s.units())
+                + "; " + Measurand.AIRFLOW_PER_NOMINAL_CAPACITY.label(s.units()) + " "
+                + Measurand.AIRFLOW_PER_NOMINAL_CAPACITY.quantity().symbol(s.units())
                 + "; dew-point margin " + Measurand.DEW_POINT_MARGIN.quantity().symbol(s.units()) + ".", Ink.SMALL, 0);
     }
 

@@ -73,8 +73,8 @@ public record Improvement(String key, String label, Quantity quantity, Estimate 
         CoilResult b = pair.before().result();
         CoilResult a = pair.after().result();
         List<Improvement> rows = new ArrayList<>();
-        rows.add(coil("moistureRemoval", "Moisture removal (water taken out while running)", Measurand.MOISTURE_REMOVAL,
-                b, a, +1, units));
+        rows.add(coil("moistureRemoval", Measurand.MOISTURE_REMOVAL.title(units) + " while running",
+                Measurand.MOISTURE_REMOVAL, b, a, +1, units));
         rows.add(coil("latent", "Latent (drying) capacity", Measurand.LATENT, b, a, +1, units));
         rows.add(coil("shr", "Sensible heat ratio (lower = more drying)", Measurand.SHR, b, a, -1, units));
         rows.add(coil("indoorDewPoint", "Indoor (return) dew point", Measurand.RETURN_DEW_POINT, b, a, -1, units));

@@ -1,5 +1,6 @@
 package app.latentledger.report;
 
+import app.latentledger.core.text.DailyWaterWords;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.CoilTemperatureSource;
 import app.latentledger.core.coil.Estimate;
@@ -148,18 +149,18 @@ final class ReadingsSection {
         est(tb, sets, Measurand.RETURN_RELATIVE_HUMIDITY, "Indoor (return) relative humidity");
         est(tb, sets, Measurand.LEAVING_DEW_POINT, "Supply dew point");
         est(tb, sets, Measurand.TEMPERATURE_DROP, "Dry-bulb drop across the coil");
-        est(tb, sets, Measurand.HUMIDITY_RATIO_DROP, "Humidity-ratio drop across the coil");
+        est(tb, sets, Measurand.HUMIDITY_RATIO_DROP, Measurand.HUMIDITY_RATIO_DROP.title(units) + " across the coil");
         est(tb, sets, Measurand.SENSIBLE, "Sensible capacity");
         est(tb, sets, Measurand.LATENT, "Latent capacity");
         rowResult(tb, sets, "Total capacity", r -> Numbers.estimate(Quantity.POWER, units, r.estimate(Measurand.TOTAL))
                 + " (" + DisplayNumber.withUnit(Quantity.POWER_LARGE, units, r.process().totalW()) + ")");
         rowResult(tb, sets, "Sensible heat ratio", r -> ratio(r, Measurand.SHR, WithheldRatios.shr(r)));
-        rowResult(tb, sets, "Moisture removal", r -> Numbers.estimate(Quantity.WATER_RATE, units,
+        rowResult(tb, sets, Measurand.MOISTURE_REMOVAL.title(units), r -> Numbers.estimate(Quantity.WATER_RATE, units,
                 r.estimate(Measurand.MOISTURE_REMOVAL)) + " ("
-                + DisplayNumber.withUnit(Quantity.WATER_RATE_DAILY, units, r.process().moistureRemovalKgPerS()) + " if it ran all day)");
-        est(tb, sets, Measurand.LATENT_PER_AIRFLOW, "Latent capacity per airflow");
-        est(tb, sets, Measurand.AIRFLOW_PER_CAPACITY, "Airflow per measured capacity");
-        rowResult(tb, sets, "Airflow per nominal capacity", r -> r.readings().hasNominalCapacity()
+                + DailyWaterWords.phrase(r.process().moistureRemovalKgPerS(), units) + ")");
+        est(tb, sets, Measurand.LATENT_PER_AIRFLOW, Measurand.LATENT_PER_AIRFLOW.title(units));
+        est(tb, sets, Measurand.AIRFLOW_PER_CAPACITY, Measurand.AIRFLOW_PER_CAPACITY.title(units));
+        rowResult(tb, sets, Measurand.AIRFLOW_PER_NOMINAL_CAPACITY.title(units), r -> r.readings().hasNominalCapacity()
                 ? DisplayNumber.withUnit(Quantity.AIRFLOW_PER_CAPACITY, units, r.airflowPerNominalCapacity())
                 : Ratio.notMeasurable(WithheldRatios.airflowPerNominalWhyNot(r)));
         rowResult(tb, sets, "Apparatus dew point", r -> r.adp().found()

@@ -43,7 +43,7 @@ public record ReportData(UnitSystem units, List<VisitEvidence> visits, BeforeAft
         }
         if (compareVisitId.equals(visitId)) {
             throw new ReportRefusedException("a visit cannot be compared with itself; its own before and after"
-                    + " readings are compared without --compare");
+                    + " readings are compared in its own report");
         }
         VisitEvidence other = VisitEvidence.load(ledger, compareVisitId, units);
         List<VisitEvidence> both = new ArrayList<>(List.of(main, other));

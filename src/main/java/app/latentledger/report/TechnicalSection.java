@@ -122,7 +122,7 @@ final class TechnicalSection {
         tb.row("Net removal rate over the log", DisplayNumber.withUnit(Quantity.WATER_RATE, units, r.netRemovalKgPerS()));
         tb.row("Steady-state removal rate", DisplayNumber.withUnit(Quantity.WATER_RATE, units, r.steadyRemovalKgPerS()));
         tb.row("Latent fraction delivered, measured", r.latentMeasured().percent(MORE_RETURNED));
-        tb.row("Latent fraction, part-load model", r.latentPredicted().percent(MORE_RETURNED));
+        tb.row("Latent fraction, expected for these runs (part-load model)", r.latentPredicted().percent(MORE_RETURNED));
         tb.row("Re-evaporated share", r.reevaporation().percent(RunCycleReport.NONE_RETURNED));
         if (r.house() != null) {
             tb.row("House dew point, median / 95th percentile", DisplayNumber.withUnit(Quantity.TEMPERATURE, units,

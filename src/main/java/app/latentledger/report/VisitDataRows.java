@@ -101,15 +101,15 @@ final class VisitDataRows {
         for (Measurand m : Measurand.values()) {
             Estimate e = r.estimate(m);
             if (e.exists()) {
-                result(id, label, m.key(), m.label(), m.quantity(), e.valueSi(), e.expandedSi());
+                result(id, label, m.key(), m.label(units), m.quantity(), e.valueSi(), e.expandedSi());
             }
         }
         result(id, label, "massFlowDryAir", "dry-air mass flow", Quantity.WATER_RATE, r.process().massFlowKgPerS(),
                 Double.NaN);
         result(id, label, "totalLarge", "total capacity", Quantity.POWER_LARGE, r.process().totalW(), Double.NaN);
-        result(id, label, "moistureRemovalDaily", "moisture removal per day of running", Quantity.WATER_RATE_DAILY,
+        result(id, label, "moistureRemovalDaily", "water removed if it ran all day", Quantity.WATER_RATE_DAILY,
                 r.process().moistureRemovalKgPerS(), Double.NaN);
-        result(id, label, "airflowPerNominalCapacity", "airflow per nominal capacity", Quantity.AIRFLOW_PER_CAPACITY,
+        result(id, label, "airflowPerNominalCapacity", Measurand.AIRFLOW_PER_NOMINAL_CAPACITY.label(units), Quantity.AIRFLOW_PER_CAPACITY,
                 r.airflowPerNominalCapacity(), Double.NaN);
         findings("reading-set", id, label, r.findings());
     }

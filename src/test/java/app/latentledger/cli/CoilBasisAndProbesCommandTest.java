@@ -31,7 +31,7 @@ class CoilBasisAndProbesCommandTest {
     void perNominalTon() {
         assertTrue(json(CASE_A).get("airflowPerTon").isJsonNull());
         assertEquals(400, json(CASE_A + " --nominal-tons 3").get("airflowPerTon").getAsDouble(), 1e-9);
-        assertTrue(run(CASE_A).out().contains("airflow per nominal ton: not measurable (no nameplate size given"));
+        assertTrue(run(CASE_A).out().contains("airflow per ton (nominal): not measurable (no nameplate size given"));
     }
 
     @Test

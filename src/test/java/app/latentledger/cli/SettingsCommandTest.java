@@ -91,6 +91,12 @@ class SettingsCommandTest {
         assertTrue(table.out().contains("Finding thresholds"), table.out());
         assertTrue(table.out().trim().endsWith(Cautions.SAFETY_LINE));
         assertTrue(Cli.standard().overview().contains("settings"));
+        // ranges as the app's hints print them, rounded inward to the shown precision: -450 m is
+        // -1476.378 ft and 4500 m is 14763.78 ft (1 ft = 0.3048 m exactly, NIST SP 811); the edge band
+        // of 0.15–0.45 K is 0.27–0.81 °F (× 1.8)
+        assertTrue(table.out().contains("range -1476 to 14763 ft"), table.out());
+        assertTrue(table.out().contains("range 0.3 to 0.8 °F"), table.out());
+        assertFalse(table.out().contains("14763.7795"), table.out());
     }
 
     @Test

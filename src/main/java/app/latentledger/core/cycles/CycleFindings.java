@@ -80,23 +80,25 @@ final class CycleFindings {
         if (!(judged < min)) {
             return;
         }
-        String which = Double.isNaN(measured) ? "predicted" : "measured";
+        String which = Double.isNaN(measured) ? "expected" : "measured";
         String sentence = judged < 0
                 ? "The runs are too short to dry the house: over the logged cycles the system put back at least as"
                         + " much moisture as it removed."
                 : String.format(Locale.ROOT, "The runs are too short to dry the house: the system removes about"
                         + " %.0f %% of the moisture it removes when it runs steadily.", 100 * judged);
         out.add(new Finding(FindingCode.SHORT_CYCLING_LIMITS_LATENT, Severity.FIX, sentence,
-                String.format(Locale.ROOT, "latent fraction %s %s (measured %s, predicted %s by the Henderson &"
-                                + " Rengarajan 1996 part-load model: condensate drains after %.0f s, start-up"
-                                + " evaporation %.2f × the steady latent rate, latent time constant %.0f s, %s)"
-                                + " below %.2f"
+                // trade words on screen and paper; the model's name and symbols stay in the Methods guide
+                // and in the log command's model line and JSON
+                String.format(Locale.ROOT, "share of steady moisture removal %s %s (measured %s; expected %s for"
+                                + " these run lengths from a published part-load model, Methods guide §3.6: the"
+                                + " coil starts to drain after about %.0f s of running (%s)) below %.2f"
                                 + " (common practice, no source)", which, fraction(judged), fraction(measured),
-                        fraction(predicted), r.model().twetS(), r.model().gamma(), r.model().tauS(),
-                        r.model().source(), min),
+                        fraction(predicted), r.model().twetS(),
+                        r.model().source() == LatentDegradationModel.Source.FITTED ? "timed from this log"
+                                : "a published typical value", min),
                 List.of(Evidence.of("latentFractionMeasured", "measured share of steady moisture removal",
                                 Quantity.FRACTION_PERCENT, measured),
-                        Evidence.of("latentFractionPredicted", "model share of steady moisture removal",
+                        Evidence.of("latentFractionPredicted", "expected share of steady moisture removal for these run lengths",
                                 Quantity.FRACTION_PERCENT, predicted),
                         Evidence.of("medianOnTime", "median compressor on-time", Quantity.DURATION_MINUTES, r.medianOnS())),
                 List.of("Lengthen the runs: lower the thermostat's cycle rate or widen its differential",
@@ -141,6 +143,11 @@ final class CycleFindings {
         double[] blower = r.cycles().stream().mapToDouble(c -> c.cycle().blowerOnSeconds())
                 .filter(v -> v > 0).sorted().toArray();
         double medianBlower = blower.length == 0 ? Double.NaN : blower[blower.length / 2];
+        // the blower ran through the rests, so there is no fan-off delay to give (it would read "—"):
+        // the evidence gives how long it ran in a rest instead, the figure the technical line names
+        List<Evidence> throughRests = new ArrayList<>(evidence.subList(0, evidence.size() - 1));
+        throughRests.add(Evidence.of("blowerOnInRests", "median blower time in a rest", Quantity.DURATION_MINUTES,
+                medianBlower));
         out.add(new Finding(FindingCode.OFF_CYCLE_REEVAPORATION, Severity.FIX,
                 String.format(Locale.ROOT, "After the compressor stops, the blower keeps running and blows water"
                         + " from the wet coil back into the house: about %.0f %% of what it removed.", 100 * share),
@@ -149,7 +156,7 @@ final class CycleFindings {
                                 + " blower ran on after the compressor in %d of %d rests (median %.1f min, %s);"
                                 + " limit %.0f %% (common practice, no source)",
                         100 * share, r.blowerOnRests(), r.cycles().size(), medianBlower / 60.0, source, 100 * min),
-                evidence,
+                List.copyOf(throughRests),
                 List.of("Set the thermostat fan to AUTO rather than ON",
                         "Check the air handler's fan-off delay and shorten it if the complaint persists",
                         "Check that the condensate pan drains freely (standing water re-evaporates too)")));

@@ -93,8 +93,8 @@ public final class Thresholds {
     /** More starts per hour than this is short cycling. */
     public static final Threshold CYCLES_PER_HOUR_MAX = new Threshold("cyclesPerHourMax",
             "most compressor starts per hour before it counts as short cycling", Quantity.DIMENSIONLESS, 3.0,
-            COMMON_PRACTICE + " (3 cycles/h is also the largest cycling rate EnergyPlus suggests for a"
-                    + " single-speed cooling coil)");
+            COMMON_PRACTICE + " (3 cycles/h is also the typical largest cycling rate published for"
+                    + " single-speed cooling equipment, Methods guide §3.6)");
     /** A median on-time below this is short cycling. */
     public static final Threshold MEDIAN_ON_TIME_MIN = new Threshold("medianOnTimeMin",
             "shortest median compressor on-time before it counts as short cycling", Quantity.DURATION_MINUTES,
@@ -119,8 +119,8 @@ public final class Thresholds {
     /** Blower-on, compressor-off time after which the coil is taken as dry for the sensor comparison. */
     public static final Threshold SENSOR_CHECK_AFTER = new Threshold("sensorCheckAfter",
             "blower-on off time before return and supply humidity are compared", Quantity.DURATION_MINUTES,
-            30 * 60.0, "Methods guide §9.9 (≥ 30 min, derived from the time a wet coil takes to dry"
-                    + " out in the Henderson & Rengarajan 1996 model with the EnergyPlus-suggested values)");
+            30 * 60.0, "Methods guide §9.9 (≥ 30 min: about the time a wet coil takes to dry out with the"
+                    + " blower running, from the published part-load model's typical values)");
     /** On-cycles at least this long give the steady-state latent rate. */
     public static final Threshold LONG_CYCLE_ON_TIME = new Threshold("longCycleOnTime",
             "shortest on-cycle used for the steady-state moisture removal rate", Quantity.DURATION_MINUTES,

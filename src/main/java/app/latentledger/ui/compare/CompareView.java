@@ -17,6 +17,11 @@ public final class CompareView extends VBox implements Reflowing {
     /** Id of the pane the before/after psychrometric chart goes into (after the first frame). */
     public static final String CHART_SLOT_ID = "compare-chart-slot";
 
+    /** A change longer than this many characters is words, not a number ("not measurable: …"). */
+    private static final int WORDS = 14;
+    /** The width such words wrap in, px: about three numbers' worth (common practice, no source). */
+    private static final double WORDS_WIDTH = 190;
+
     private final CompareViewModel viewModel;
     private final javafx.scene.layout.StackPane chartSlot = new javafx.scene.layout.StackPane();
 
@@ -59,11 +64,17 @@ public final class CompareView extends VBox implements Reflowing {
                 after.setId("after-" + row.key());
                 Label before = Ui.label(row.before(), "figure-value");
                 before.setId("before-" + row.key());
-                Label change = Ui.label(row.change(), "figure-value");
+                // a change said in words (a ratio withheld on one side, with its reason) wraps in a
+                // column of its own width instead of pushing the numbers off the table
+                boolean words = row.change().length() > WORDS;
+                Label change = words ? Ui.wrapped(row.change(), "figure-value") : Ui.label(row.change(), "figure-value");
                 change.setId("change-" + row.key());
+                if (words) {
+                    change.setPrefWidth(WORDS_WIDTH);
+                }
                 Label unit = Ui.label(row.unit(), "muted");
                 // numbers keep every digit at any text size; the figure's name wraps instead
-                for (Label l : new Label[] {before, after, change, unit}) {
+                for (Label l : words ? new Label[] {before, after, unit} : new Label[] {before, after, change, unit}) {
                     l.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
                 }
                 table.addRow(r++, Ui.wrapped(row.label(), "figure-label"), before, after, change, unit);

@@ -22,6 +22,7 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 
 import java.time.OffsetDateTime;
+import java.util.ArrayList;
 import java.time.format.DateTimeFormatter;
 import java.util.List;
 import java.util.Objects;
@@ -170,20 +171,38 @@ public final class CompareViewModel {
             // printed as the report prints the same figures (DisplayNumber: decimals per quantity, signed change)
             int decimals = DisplayNumber.decimals(f.quantity, u);
             String change = Double.isFinite(x) && Double.isFinite(y)
-                    ? DisplayNumber.signed(f.quantity.toDisplay(u, y) - f.quantity.toDisplay(u, x), decimals) : Shown.NONE;
+                    ? DisplayNumber.signed(f.quantity.toDisplay(u, y) - f.quantity.toDisplay(u, x), decimals)
+                    : f == CompareFigure.SHR ? withheldChange(a, b) : Shown.NONE;
             if (f == CompareFigure.MARGIN) {
                 // which side of the dew point, in the words Results and the report use; the change too:
                 // "2.0 colder" is a coil moved 2.0 further below the dew point
-                rows.add(new CompareRow(f.key(), f.label, marginCell(u, x), marginCell(u, y),
+                rows.add(new CompareRow(f.key(), f.label(u), marginCell(u, x), marginCell(u, y),
                         Double.isFinite(x) && Double.isFinite(y) ? marginCell(u, y - x) : Shown.NONE, f.quantity.symbol(u)));
                 continue;
             }
-            rows.add(new CompareRow(f.key(), f.label, shown(f, u, x), shown(f, u, y), change, f.quantity.symbol(u)));
+            rows.add(new CompareRow(f.key(), f.label(u), shown(f, u, x), shown(f, u, y), change, f.quantity.symbol(u)));
         }
         verdicts.set(VisitResults.headline(a.verdict()) + "  →  " + VisitResults.headline(b.verdict()));
         marginNote.set("Before: " + VisitResults.marginSentence(a, u) + ". After: " + VisitResults.marginSentence(b, u)
                 + ".");
         status.set("Before: " + describe(before) + ".  After: the reading set on this visit.");
+    }
+
+    /**
+     * The change of a sensible heat ratio withheld on one side or both, in words: "not measurable:
+     * the coil removes no heat from the air (before)", the reason the check gave, never a bare dash.
+     */
+    static String withheldChange(CoilResult before, CoilResult after) {
+        app.latentledger.core.units.Ratio x = app.latentledger.core.coil.WithheldRatios.shr(before);
+        app.latentledger.core.units.Ratio y = app.latentledger.core.coil.WithheldRatios.shr(after);
+        List<String> why = new ArrayList<>();
+        if (!x.measurable()) {
+            why.add(x.reason() + " (before)");
+        }
+        if (!y.measurable()) {
+            why.add(y.reason() + " (after)");
+        }
+        return app.latentledger.core.units.Ratio.NOT_MEASURABLE + ": " + String.join("; ", why);
     }
 
     /** A figure as shown; a withheld ratio reads "not measurable", never a bare dash. */

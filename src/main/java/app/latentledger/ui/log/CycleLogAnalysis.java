@@ -107,7 +107,7 @@ public final class CycleLogAnalysis implements LogAnalysisService {
                 : Shown.number(r.fanOffDelayMedianS() / 60, 1), Double.isNaN(r.fanOffDelayMedianS()) ? "" : "min"));
         rows.add(new Row("latent-measured", "Latent fraction, measured", r.latentMeasured().number(2, MORE_RETURNED),
                 ""));
-        rows.add(new Row("latent-predicted", "Latent fraction, model", r.latentPredicted().number(2, MORE_RETURNED),
+        rows.add(new Row("latent-predicted", "Latent fraction, expected for these runs", r.latentPredicted().number(2, MORE_RETURNED),
                 ""));
         if (r.house() != null) {
             HouseHumidity h = r.house();
@@ -117,8 +117,11 @@ public final class CycleLogAnalysis implements LogAnalysisService {
             rows.add(new Row("house-rh", "House RH, median / p95", Shown.number(h.rhMedianPct(), 0) + " / "
                     + Shown.number(h.rhP95Pct(), 0), "%"));
             rows.add(new Row("house-rh-hours", "Hours above RH target", Shown.number(h.hoursAboveRhTarget(), 1), "h"));
-            rows.add(new Row("house-off-trend", "Humidity rise while off", h.longOffPeriods() == 0
+            // a change with its sign, so a falling trend is not read as a "negative rise"
+            rows.add(new Row("house-off-trend", "Humidity change while off", h.longOffPeriods() == 0
                     ? Ratio.NOT_MEASURABLE + " (no long off period)"
+                    : Double.isFinite(h.offTrendPerHour()) ? app.latentledger.core.units.DisplayNumber.signed(
+                            Quantity.HUMIDITY_RATIO_FINE.toDisplay(u, h.offTrendPerHour()), 2)
                     : Shown.of(Quantity.HUMIDITY_RATIO_FINE, u, h.offTrendPerHour(), 2),
                     h.longOffPeriods() == 0 ? "" : Quantity.HUMIDITY_RATIO_FINE.symbol(u) + " per h"));
         }

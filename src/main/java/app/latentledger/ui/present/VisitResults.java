@@ -1,5 +1,6 @@
 package app.latentledger.ui.present;
 
+import app.latentledger.core.text.DailyWaterWords;
 import app.latentledger.core.coil.CoilProcess;
 import app.latentledger.core.coil.CoilResult;
 import app.latentledger.core.coil.CoilVerdict;
@@ -107,12 +108,13 @@ public final class VisitResults {
         rows.add(row(r, u, "sensible", "Sensible", Measurand.SENSIBLE, Quantity.POWER));
         rows.add(row(r, u, "latent", "Latent", Measurand.LATENT, Quantity.POWER));
         rows.add(ratioRow(r, u, "shr", "Sensible heat ratio", Measurand.SHR, WithheldRatios.shr(r)));
-        rows.add(row(r, u, "moisture-removal", "Water removed", Measurand.MOISTURE_REMOVAL, Quantity.WATER_RATE));
-        rows.add(new Row("moisture-removal-daily", "Water removed if it ran all day",
-                Shown.of(Quantity.WATER_RATE_DAILY, u, p.moistureRemovalKgPerS()), Quantity.WATER_RATE_DAILY.symbol(u)));
-        rows.add(row(r, u, "latent-per-airflow", "Latent per airflow", Measurand.LATENT_PER_AIRFLOW,
+        rows.add(row(r, u, "moisture-removal", Measurand.MOISTURE_REMOVAL.title(u), Measurand.MOISTURE_REMOVAL, Quantity.WATER_RATE));
+        // never a negative amount of water: a coil that leaves the air wetter says it adds water
+        rows.add(new Row("moisture-removal-daily", DailyWaterWords.label(p.moistureRemovalKgPerS(), u),
+                DailyWaterWords.number(p.moistureRemovalKgPerS(), u), Quantity.WATER_RATE_DAILY.symbol(u)));
+        rows.add(row(r, u, "latent-per-airflow", Measurand.LATENT_PER_AIRFLOW.title(u), Measurand.LATENT_PER_AIRFLOW,
                 Quantity.POWER_PER_AIRFLOW));
-        rows.add(row(r, u, "humidity-drop", "Humidity ratio drop", Measurand.HUMIDITY_RATIO_DROP,
+        rows.add(row(r, u, "humidity-drop", Measurand.HUMIDITY_RATIO_DROP.title(u), Measurand.HUMIDITY_RATIO_DROP,
                 Quantity.HUMIDITY_RATIO_FINE));
         rows.add(marginRow(r, u));
         rows.add(new Row("coil-temperature", "Coil temperature (" + coilSource(r) + ")",
@@ -141,10 +143,11 @@ public final class VisitResults {
                     Quantity.TEMPERATURE_DIFFERENCE.symbol(u)));
         }
         String perTonWhyNot = WithheldRatios.airflowPerNominalWhyNot(r);
-        rows.add(perTonWhyNot.isEmpty() ? new Row("airflow-per-nominal", "Airflow per nominal size",
+        String perTon = Measurand.AIRFLOW_PER_NOMINAL_CAPACITY.title(u);
+        rows.add(perTonWhyNot.isEmpty() ? new Row("airflow-per-nominal", perTon,
                 Shown.of(Quantity.AIRFLOW_PER_CAPACITY, u, r.airflowPerNominalCapacity()),
                 Quantity.AIRFLOW_PER_CAPACITY.symbol(u))
-                : new Row("airflow-per-nominal", "Airflow per nominal size", Ratio.notMeasurable(perTonWhyNot), ""));
+                : new Row("airflow-per-nominal", perTon, Ratio.notMeasurable(perTonWhyNot), ""));
         return rows;
     }
 

@@ -1,5 +1,7 @@
 package app.latentledger.ui.settings;
 
+import app.latentledger.core.InvalidInputException;
+
 import app.latentledger.core.settings.NumberSetting;
 import app.latentledger.core.settings.Settings;
 import app.latentledger.core.settings.ShownNumber;
@@ -35,28 +37,14 @@ public final class NumberRow {
         text.set(shown(s.numberSi(setting.key()), u));
         unit.set(setting.quantity().symbol(u));
         String symbol = unit.get().isEmpty() ? "" : " " + unit.get();
-        hint.set("default " + shown(setting.defaultSi(), u) + symbol + " · accepts " + rangeEnd(setting.minSi(), u, true)
-                + " to " + rangeEnd(setting.maxSi(), u, false) + symbol);
+        // the range as the refusal and the settings command print it: rounded inward to the shown precision
+        hint.set("default " + shown(setting.defaultSi(), u) + symbol + " · accepts "
+                + InvalidInputException.range(setting.quantity(), u, setting.minSi(), setting.maxSi()) + symbol);
         changed.set(!s.isDefault(setting.key()));
     }
 
     String shown(double si, UnitSystem u) {
         return ShownNumber.text(setting.quantity().toDisplay(u, si));
-    }
-
-    /**
-     * A range end as a tech reads it: where the limit is a large converted number (elevation in ft:
-     * -1476.378 … 14763.7795) it is rounded inward to a whole number, so every value the hint
-     * promises is accepted; the refusal message keeps the exact limits.
-     */
-    private String rangeEnd(double si, UnitSystem u, boolean lower) {
-        double shown = setting.quantity().toDisplay(u, si);
-        double widest = Math.max(Math.abs(setting.quantity().toDisplay(u, setting.minSi())),
-                Math.abs(setting.quantity().toDisplay(u, setting.maxSi())));
-        if (widest < 1000) {
-            return ShownNumber.text(shown);
-        }
-        return ShownNumber.text(lower ? Math.ceil(shown - 1e-9) : Math.floor(shown + 1e-9));
     }
 
     void refuse(String why) {

@@ -113,6 +113,16 @@ class RunCycleAnalysisSyntheticTest {
         assertTrue(r.has(FindingCode.OFF_CYCLE_REEVAPORATION));
         assertFalse(r.has(FindingCode.SHORT_CYCLING));
         assertFalse(r.has(FindingCode.COIL_NEVER_WET));
+        // the blower ran through every 600 s rest (the generator's truth), so the finding's evidence gives
+        // that time and no fan-off delay, which would have nothing to show
+        var offCycle = r.findings().stream().filter(f -> f.code() == FindingCode.OFF_CYCLE_REEVAPORATION)
+                .findFirst().orElseThrow();
+        for (var e : offCycle.evidence()) {
+            assertFalse(Double.isNaN(e.valueSi()), e.key() + " has a value to show");
+        }
+        var blowerInRest = offCycle.evidence().stream().filter(e -> e.key().equals("blowerOnInRests")).findFirst()
+                .orElseThrow();
+        assertEquals(600, blowerInRest.valueSi(), 60, "median blower time in a rest, s");
     }
 
     @ParameterizedTest(name = "blower off in rests (AUTO), 10 min on / 15 min off, status columns: {0}")
