@@ -109,6 +109,10 @@ class LogsScreenUiTest {
     private void checkBothStates(FxRobot robot, String where) {
         List<String> problems = problems(robot);
         save(robot, "logs " + where + " closed");
+        ScrollPane pane = robot.lookup("#log-scroll").query();
+        robot.interact(() -> pane.setVvalue(1));
+        save(robot, "logs " + where + " closed, scrolled to the timeline");
+        robot.interact(() -> pane.setVvalue(0));
         robot.interact(() -> {
             shell.logs().formOpenProperty().set(true);
             shell.logs().askDelete(shell.logs().keptLogs().get(0));

@@ -289,23 +289,22 @@ public final class LogView extends VBox implements Reflowing {
         return l;
     }
 
+    /**
+     * One kept log: its name and when it was kept over the whole width (a file name has no spaces to
+     * wrap at, so beside the buttons it was cut mid-word with large text), the buttons under them.
+     */
     private Node keptRow(KeptLog k) {
         Label name = Ui.wrapped(k.name(), "figure-value");
         Label when = Ui.wrapped(k.when() + (k.shown() ? " · shown below" : ""), "muted");
-        VBox text = new VBox(2, name, when);
-        HBox.setHgrow(text, Priority.ALWAYS);
-        text.setMinWidth(0);
         Button view = Ui.button("log-view-" + k.id(), k.shown() ? "Shown" : "Show", Icons.RESULTS, () -> viewModel.view(k));
         view.setDisable(k.shown());
         view.setMinWidth(Region.USE_PREF_SIZE);
         Button delete = Ui.button("log-delete-" + k.id(), "Delete", Icons.FIX, () -> viewModel.askDelete(k));
         delete.setMinWidth(Region.USE_PREF_SIZE);
         FlowPane buttons = new FlowPane(8, 8, view, delete);
-        buttons.setAlignment(Pos.CENTER_RIGHT);
-        buttons.setMinWidth(Region.USE_PREF_SIZE);
-        buttons.setPrefWrapLength(0);
-        HBox row = new HBox(12, text, buttons);
-        row.setAlignment(Pos.CENTER_LEFT);
+        buttons.setAlignment(Pos.CENTER_LEFT);
+        VBox row = new VBox(6, new VBox(2, name, when), buttons);
+        row.setMinWidth(0);
         row.getStyleClass().add("kept-log");
         if (k.shown()) {
             row.getStyleClass().add("shown");
