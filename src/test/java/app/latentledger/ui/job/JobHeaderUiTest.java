@@ -72,6 +72,7 @@ class JobHeaderUiTest {
         assertTrue(picked.startsWith("Saltreed Marina office") && picked.contains("Office heat pump")
                 && picked.contains("No visit open"), picked);
         assertFalse(picked.contains("Heron"), "the visit of the site left behind: " + picked);
+        save(robot, "job 1280 × 800, another site picked");
 
         // the other screens still work on the Heron Spit visit, so there the header names it
         robot.clickOn("#nav-readings");
@@ -107,6 +108,21 @@ class JobHeaderUiTest {
         assertTrue(siteStatus.getText().startsWith("Site not added"), siteStatus.getText());
         assertTrue(isInside(siteStatus, robot.lookup("#new-site-name").query().getParent()), "by the site fields");
         assertEquals("", status.getText());
+    }
+
+    /** Saves what the screen looks like to target/screens, for a person to look at. */
+    private static void save(FxRobot robot, String name) {
+        robot.interact(() -> {
+            try {
+                java.io.File out = new java.io.File("target/screens");
+                out.mkdirs();
+                javax.imageio.ImageIO.write(javafx.embed.swing.SwingFXUtils.fromFXImage(
+                        robot.lookup("#context").query().getScene().snapshot(null), null), "png",
+                        new java.io.File(out, name + ".png"));
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        });
     }
 
     private static boolean isInside(Node n, Node parent) {
