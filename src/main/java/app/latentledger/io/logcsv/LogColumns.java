@@ -3,6 +3,7 @@ package app.latentledger.io.logcsv;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 
+import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStreamReader;
 import java.io.Reader;
@@ -17,15 +18,12 @@ import java.util.List;
 
 /**
  * A log file's header row, read on its own before an import, so a screen can ask what each column
- * the importer does not know by name holds. Only the first line is read (at most the importer's own
- * header limit); the header is split and cleaned as the importer splits and cleans it.
+ * the importer does not know by name holds. Only the first line is read, as the importer reads it (the
+ * same length limit); the header is split and cleaned as the importer splits and cleans it.
  *
  * @param columns every named column, in file order
  */
 public record LogColumns(List<Column> columns) {
-    /** Longest first line read, characters: the importer refuses a longer one as a header. */
-    private static final int MAX_HEADER_CHARS = 65_536;
-
     /**
      * One column of the header row.
      *
@@ -56,7 +54,7 @@ public record LogColumns(List<Column> columns) {
     public static LogColumns read(Path file) throws IOException, LogRefusedException {
         try (Reader r = new InputStreamReader(Files.newInputStream(file), StandardCharsets.UTF_8.newDecoder()
                 .onMalformedInput(CodingErrorAction.REPLACE).onUnmappableCharacter(CodingErrorAction.REPLACE))) {
-            return of(firstLine(r));
+            return of(LogCsvImporter.firstLine(new BufferedReader(r)));
         }
     }
 
@@ -79,24 +77,5 @@ public record LogColumns(List<Column> columns) {
             }
         }
         return new LogColumns(out);
-    }
-
-    private static String firstLine(Reader r) throws IOException, LogRefusedException {
-        StringBuilder b = new StringBuilder();
-        int c;
-        while ((c = r.read()) != -1) {
-            if (c == '\n' || c == '\r') {
-                if (b.length() > 0) {
-                    return b.toString();
-                }
-                continue;
-            }
-            b.append((char) c);
-            if (b.length() > MAX_HEADER_CHARS) {
-                throw new LogRefusedException("the first line is over " + MAX_HEADER_CHARS
-                        + " characters: not a header row of a log");
-            }
-        }
-        return b.length() > 0 ? b.toString() : null;
     }
 }

@@ -158,7 +158,7 @@ public final class LogCsvImporter {
                 .setTrim(true).get();
     }
 
-    private static String firstLine(BufferedReader r) throws IOException, LogRefusedException {
+    static String firstLine(BufferedReader r) throws IOException, LogRefusedException {
         StringBuilder b = new StringBuilder();
         int c;
         while ((c = r.read()) != -1) {
