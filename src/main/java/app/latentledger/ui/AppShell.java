@@ -163,6 +163,7 @@ public final class AppShell extends BorderPane {
     public JobViewModel job() {
         if (job == null) {
             job = new JobViewModel(session);
+            shell.followJob(job);
         }
         return job;
     }

@@ -3,10 +3,12 @@ package app.latentledger.ui;
 import app.latentledger.ui.job.JobViewModel;
 import app.latentledger.ui.session.AppSession;
 import app.latentledger.ui.session.Screen;
-import javafx.beans.binding.Bindings;
-import javafx.beans.binding.StringBinding;
+import app.latentledger.core.records.HvacSystem;
+import app.latentledger.core.records.Site;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
 
 import java.time.format.DateTimeFormatter;
 import java.util.List;
@@ -20,16 +22,38 @@ public final class ShellViewModel {
     private static final DateTimeFormatter DAY = DateTimeFormatter.ofPattern("yyyy-MM-dd");
 
     private final AppSession session;
-    private final StringBinding context;
+    private final ReadOnlyStringWrapper context = new ReadOnlyStringWrapper("");
+    /** The Job screen's choice of site and system, once that screen exists; null before. */
+    private JobViewModel job;
 
     public ShellViewModel(AppSession session) {
         this.session = session;
-        context = Bindings.createStringBinding(this::describeJob, session.visitProperty(), session.systemProperty());
+        session.visitProperty().addListener((o, a, b) -> describe());
+        session.systemProperty().addListener((o, a, b) -> describe());
+        session.screenProperty().addListener((o, a, b) -> describe());
+        describe();
     }
 
-    /** "Site · system · purpose date", or "No visit open". */
-    public StringBinding contextText() {
-        return context;
+    /**
+     * "Site · system · purpose date", or "No visit open". On the Job screen, while the site or system
+     * picked there is not the open visit's, it names the pick and says no visit is open: the header
+     * never names the visit of a site the tech has just left. Every other screen still works on the
+     * open visit, so there it names that visit.
+     */
+    public ReadOnlyStringProperty contextText() {
+        return context.getReadOnlyProperty();
+    }
+
+    /** Follows the Job screen's site and system picks (the shell calls this when it builds that screen). */
+    public void followJob(JobViewModel jobScreen) {
+        this.job = jobScreen;
+        jobScreen.siteProperty().addListener((o, a, b) -> describe());
+        jobScreen.systemProperty().addListener((o, a, b) -> describe());
+        describe();
+    }
+
+    private void describe() {
+        context.set(describeJob());
     }
 
     /**
@@ -85,10 +109,24 @@ public final class ShellViewModel {
     }
 
     private String describeJob() {
+        if (job != null && session.screenProperty().get() == Screen.JOB && !pickIsOpenVisit()) {
+            Site site = job.siteProperty().get();
+            HvacSystem system = job.systemProperty().get();
+            if (site != null) {
+                return site.name() + "  ·  " + (system == null ? "no system yet" : system.label()) + "  ·  No visit open";
+            }
+        }
         if (session.visit() == null) {
             return "No visit open";
         }
         return session.site().name() + "  ·  " + session.system().label() + "  ·  "
                 + JobViewModel.purposeWord(session.visit().purpose()) + " " + session.visit().startedAt().format(DAY);
+    }
+
+    private boolean pickIsOpenVisit() {
+        Site site = job.siteProperty().get();
+        HvacSystem system = job.systemProperty().get();
+        return session.visit() != null && site != null && system != null
+                && site.id().equals(session.site().id()) && system.id().equals(session.system().id());
     }
 }

@@ -109,6 +109,10 @@ class LogsScreenUiTest {
     private void checkBothStates(FxRobot robot, String where) {
         List<String> problems = problems(robot);
         save(robot, "logs " + where + " closed");
+        ScrollPane pane = robot.lookup("#log-scroll").query();
+        robot.interact(() -> pane.setVvalue(1));
+        save(robot, "logs " + where + " closed, scrolled to the timeline");
+        robot.interact(() -> pane.setVvalue(0));
         robot.interact(() -> {
             shell.logs().formOpenProperty().set(true);
             shell.logs().askDelete(shell.logs().keptLogs().get(0));
@@ -187,6 +191,65 @@ class LogsScreenUiTest {
         assertTrue(shell.logs().statusProperty().get().contains("Saltreed/Nowhere"), shell.logs().statusProperty().get());
         assertInView(robot, "#log-message-time-zone");
         assertEquals("import-log", stage.getScene().getFocusOwner().getId(), "the focus stays on the button tapped");
+    }
+
+    /** Taps the drop-down under a column's header open and taps the words of one choice. */
+    private static void pick(FxRobot robot, String header, String words) {
+        Node combo = robot.lookup("#log-column-picks .combo-box").match((Node n) -> header.equals(n.getUserData())).query();
+        reveal(robot, "#" + combo.getId());
+        robot.clickOn(combo);
+        robot.clickOn(robot.lookup(".combo-box-popup .list-cell").match((javafx.scene.control.ListCell<?> c) ->
+                words.equals(c.getText())).queryAs(Node.class));
+        robot.interact(() -> { });
+    }
+
+    @Test
+    void anotherLoggersColumnsArePickedInWordsAndItsRefusalsNeverShowFieldNames(FxRobot robot) {
+        robot.clickOn("#log-import-toggle");
+        assertFalse(robot.lookup("#log-header-map").tryQuery().isPresent(), "no typed header map in the app");
+        robot.interact(() -> shell.logs().fileProperty().set(SAMPLES.resolve("other-logger-export.csv").toString()));
+        List<String> headers = robot.lookup("#log-column-picks .combo-box").queryAll().stream()
+                .map(n -> (String) n.getUserData()).toList();
+        assertEquals(List.of("Date/Time", "RA Temp [°C]", "RA RH [%]", "SA Temp [°C]", "SA RH [%]", "Battery [V]"),
+                headers, "one drop-down per column the app does not know by name");
+        List<String> problems = problems(robot);
+        assertTrue(problems.isEmpty(), String.join("\n", problems));
+
+        // a tap on Import before any pick: refused in words beside the picker, nothing kept
+        reveal(robot, "#import-log");
+        robot.clickOn("#import-log");
+        String refused = shell.logs().statusProperty().get();
+        assertTrue(refused.startsWith("Not imported: no column holds the time"), refused);
+        assertFalse(refused.contains("--map") || refused.contains("HEADER") || refused.contains("return_db"), refused);
+        assertInView(robot, "#log-message-columns");
+        assertEquals(2, shell.logs().keptLogs().size());
+
+        pick(robot, "Date/Time", "Date and time");
+        pick(robot, "RA Temp [°C]", "Return dry bulb");
+        pick(robot, "RA RH [%]", "Return relative humidity");
+        pick(robot, "SA Temp [°C]", "Supply dry bulb");
+        pick(robot, "SA RH [%]", "Supply relative humidity");
+        reveal(robot, "#import-log");
+        robot.clickOn("#import-log");
+        robot.interact(() -> { });
+        assertEquals(3, shell.logs().keptLogs().size(), shell.logs().statusProperty().get());
+        assertTrue(shell.logs().statusProperty().get().startsWith("Imported other-logger-export.csv"),
+                shell.logs().statusProperty().get());
+        assertFalse(robot.lookup("#log-import-form").query().isVisible(), "the form closes after the import");
+    }
+
+    @Test
+    void theColumnPickerKeepsTargetsWholeAndTextUncutUprightWithLargeText(FxRobot robot) {
+        robot.interact(() -> {
+            show(800, 1280);
+            stage.getScene().getRoot().setStyle("-fx-font-size: 27px;");
+            shell.logs().formOpenProperty().set(true);
+            shell.logs().fileProperty().set(SAMPLES.resolve("other-logger-export.csv").toString());
+        });
+        assertEquals(6, robot.lookup("#log-column-picks .combo-box").queryAll().size());
+        List<String> problems = problems(robot);
+        save(robot, "logs 800 × 1280, text 150 %, column picker");
+        assertTrue(problems.isEmpty(), String.join("\n", problems));
     }
 
     @Test

@@ -142,6 +142,20 @@ final class HeaderLayout {
         return h;
     }
 
+    /**
+     * The field a header is read as without a header map, by the rule {@link #read} applies: the
+     * field's own name, alone or followed by a stated unit; null when it needs a map entry.
+     */
+    static String fieldByName(String header) {
+        String key = header.toLowerCase(Locale.ROOT);
+        if (isField(key)) {
+            return key;
+        }
+        Matcher u = UNIT.matcher(header);
+        String bare = u.matches() ? u.group(1).strip().toLowerCase(Locale.ROOT) : null;
+        return bare != null && isField(bare) ? bare : null;
+    }
+
     /** The unit the temperature columns' headers agree on, null when none states one. */
     UnitSystem statedTemperatureUnit() throws LogRefusedException {
         UnitSystem found = null;

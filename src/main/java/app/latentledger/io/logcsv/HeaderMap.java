@@ -5,28 +5,12 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * How another logger's column headers are read as the generic fields: "RA Temp=return_db". One
- * parser for the app's text box and the command line's repeated {@code --map}, worded for either.
+ * How another logger's column headers are read as the generic fields: "RA Temp=return_db", the
+ * command line's repeated {@code --map}. (The app asks with a column picker in words instead and
+ * builds the same header → field map from it.)
  */
 public final class HeaderMap {
     private HeaderMap() {
-    }
-
-    /**
-     * "A=b; C=d", or one entry per line; the header is everything before the last '=' (a header may
-     * itself hold '=' but not ';').
-     *
-     * @throws IllegalArgumentException naming the entry that is not HEADER=field
-     */
-    public static Map<String, String> parse(String text) {
-        Map<String, String> m = new LinkedHashMap<>();
-        if (text == null) {
-            return m;
-        }
-        for (String part : text.split("[;\\n]")) {
-            put(m, part);
-        }
-        return m;
     }
 
     /** One entry per item (the command line's repeated option); an item may hold ';' in its header. */

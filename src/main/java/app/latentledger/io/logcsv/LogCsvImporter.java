@@ -102,14 +102,7 @@ public final class LogCsvImporter {
     public LogImport read(Reader in, long totalChars) throws IOException, LogRefusedException {
         // the importer's own splitter: the same rows and fields as format(delimiter) gives, no String per cell
         RowSplitter rows0 = new RowSplitter(in, ',');
-        String headerLine = rows0.peekFirstLine(MAX_HEADER_CHARS);
-        if (headerLine == null) {
-            throw new LogRefusedException("the file is empty: a log needs a header row and sample rows");
-        }
-        if (headerLine.length() > MAX_HEADER_CHARS) {
-            throw new LogRefusedException("the first line is over " + MAX_HEADER_CHARS
-                    + " characters: not a header row of a log");
-        }
+        String headerLine = firstLine(rows0);
         char delimiter = sniffDelimiter(headerLine);
         boolean decimalComma = delimiter == ';';
         rows0.delimiter(delimiter);
@@ -151,6 +144,22 @@ public final class LogCsvImporter {
     public static CSVFormat format(char delimiter) {
         return CSVFormat.DEFAULT.builder().setDelimiter(delimiter).setQuote(null).setIgnoreEmptyLines(true)
                 .setTrim(true).get();
+    }
+
+    /**
+     * The header row, read with the importer's own splitter: the one rule for the importer and the
+     * app's column picker (same length limit, same refusals).
+     */
+    static String firstLine(RowSplitter rows) throws IOException, LogRefusedException {
+        String headerLine = rows.peekFirstLine(MAX_HEADER_CHARS);
+        if (headerLine == null) {
+            throw new LogRefusedException("the file is empty: a log needs a header row and sample rows");
+        }
+        if (headerLine.length() > MAX_HEADER_CHARS) {
+            throw new LogRefusedException("the first line is over " + MAX_HEADER_CHARS
+                    + " characters: not a header row of a log");
+        }
+        return headerLine;
     }
 
     static char sniffDelimiter(String header) {

@@ -13,8 +13,13 @@ record RowProblem(long line, int column, String field, String message) {
         return new RowProblem(line, 0, "", message);
     }
 
-    /** "line:column: field message", as the import report lists it. */
+    /**
+     * "line:column: field message", as the import report lists it, the field in words ("return
+     * relative humidity", not "return_rh"): the app shows this list and never shows field names.
+     */
     String text() {
-        return line + (column > 0 ? ":" + column : "") + ": " + (field.isEmpty() ? "" : field + " ") + message;
+        app.latentledger.core.cycles.Channel ch = app.latentledger.core.cycles.Channel.ofField(field);
+        String words = ch != null ? ch.label() : field;
+        return line + (column > 0 ? ":" + column : "") + ": " + (words.isEmpty() ? "" : words + " ") + message;
     }
 }

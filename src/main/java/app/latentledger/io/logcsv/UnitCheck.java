@@ -61,6 +61,6 @@ final class UnitCheck {
                 : "air leaving a cooling coil") + " stays within. "
                 + (fromHeader ? "Check the header's unit." : "If the file is in " + Quantity.TEMPERATURE.symbol(other)
                 + ", import it with " + Quantity.TEMPERATURE.symbol(other) + " units or write the unit in the header,"
-                + " e.g. " + ch.field() + " [" + Quantity.TEMPERATURE.symbol(other) + "]."));
+                + " e.g. " + column + " [" + Quantity.TEMPERATURE.symbol(other) + "]."));
     }
 }

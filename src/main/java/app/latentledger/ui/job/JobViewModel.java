@@ -78,10 +78,11 @@ public final class JobViewModel {
         }
         bin = new app.latentledger.ui.bin.RecycleBinViewModel(session.ledger());
         bin.onChange(this::afterBinChange);
-        // a new choice starts without the last choice's messages
+        // a new choice starts without the last choice's messages ("Visit started" at the site left included)
         site.addListener((o, a, b) -> {
             siteStatus.set("");
             systemStatus.set("");
+            status.set("");
         });
     }
 

@@ -8,7 +8,6 @@ import app.latentledger.core.records.RecordKind;
 import app.latentledger.store.LogRepository;
 import app.latentledger.ui.bin.RecycleBinViewModel;
 import app.latentledger.io.logcsv.DateOrder;
-import app.latentledger.io.logcsv.HeaderMap;
 import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.visit.VisitLogs;
@@ -50,8 +49,8 @@ import java.util.Optional;
 import java.util.concurrent.Executor;
 
 /**
- * The log screen: a logger file to import into the visit (with an optional header map and, when
- * the visit's reading sets give none, the airflow), then its cycle summary, findings and timeline,
+ * The log screen: a logger file to import into the visit (with what each column the importer does
+ * not know by name holds, picked in words, and, when the visit's reading sets give none, the airflow), then its cycle summary, findings and timeline,
  * all from the {@link LogAnalysisService} the session was given. The import runs off the FX
  * thread; its progress and its results are applied on the FX thread. A visit opened with a log
  * already kept shows that log; every kept log of the visit is listed and can be shown again or
@@ -68,7 +67,8 @@ public final class LogImportViewModel {
         LOGS,
         /** The import as a whole (the file, its columns, its units), shown under the Import button. */
         IMPORT,
-        HEADER_MAP, AIRFLOW, FAN_AIRFLOW, DATE_ORDER, TIME_ZONE
+        /** The column picker: what each column of another logger's file holds. */
+        COLUMNS, AIRFLOW, FAN_AIRFLOW, DATE_ORDER, TIME_ZONE
     }
 
     /**
@@ -92,7 +92,7 @@ public final class LogImportViewModel {
     private final Executor work;
     private final Executor fx;
     private final StringProperty file = new SimpleStringProperty("");
-    private final StringProperty headerMap = new SimpleStringProperty("");
+    private final ColumnPicks columns = new ColumnPicks();
     private final StringProperty airflow = new SimpleStringProperty("");
     private final StringProperty fanAirflow = new SimpleStringProperty("");
     private final StringProperty dateOrder = new SimpleStringProperty("");
@@ -131,6 +131,8 @@ public final class LogImportViewModel {
         this.work = work;
         this.fx = fx;
         this.bin = new RecycleBinViewModel(session.ledger());
+        // a file chosen: its header row tells which columns need the tech's word
+        file.addListener((o, a, b) -> columns.read(b));
         bin.onChange(this::afterDelete);
         session.visitProperty().addListener((o, a, b) -> refresh());
         session.draftProperty().addListener((o, a, b) -> showAirflowNeed());
@@ -155,9 +157,9 @@ public final class LogImportViewModel {
         return file;
     }
 
-    /** Another logger's headers, "RA Temp=return_db; RA RH=return_rh" (one per line also works). */
-    public StringProperty headerMapProperty() {
-        return headerMap;
+    /** The chosen file's columns the importer does not know by name, each with what it holds. */
+    public ColumnPicks columns() {
+        return columns;
     }
 
     /** Airflow typed in the tech's units, used when the visit's reading sets give none. */
@@ -364,13 +366,15 @@ public final class LogImportViewModel {
             say(About.IMPORT, "Choose a log file first" + (f.isEmpty() ? "." : ": " + f + " is not a file."));
             return;
         }
-        Map<String, String> map;
-        try {
-            map = parseMap(headerMap.get());
-        } catch (IllegalArgumentException e) {
-            say(About.HEADER_MAP, "Not imported: " + e.getMessage());
+        if (columns.picks().isEmpty() && columns.knownProperty().get().isEmpty()) {
+            columns.read(f); // the file changed on disk, or was typed before it existed
+        }
+        String problem = columns.problem();
+        if (problem != null) {
+            say(About.COLUMNS, "Not imported: " + problem);
             return;
         }
+        Map<String, String> map = columns.headerMap();
         LogRequest request;
         try {
             request = request(map);
@@ -448,7 +452,7 @@ public final class LogImportViewModel {
 
     /**
      * What the analysis needs besides the visit's own conditions ({@link VisitLogs} applies the one
-     * rule): the typed airflows, the units, thresholds, header map, date order and zone.
+     * rule): the typed airflows, the units, thresholds, the picked columns, date order and zone.
      */
     private LogRequest request(Map<String, String> map) {
         DateOrder order;
@@ -511,11 +515,6 @@ public final class LogImportViewModel {
             throw new FieldException(where, e.message(u));
         }
         return si;
-    }
-
-    /** The header map as typed; see {@link HeaderMap#parse(String)}. */
-    static Map<String, String> parseMap(String text) {
-        return HeaderMap.parse(text);
     }
 
     private void showAirflowNeed() {

@@ -9,11 +9,13 @@ import app.latentledger.ui.present.Row;
 import app.latentledger.ui.results.FindingsList;
 import javafx.beans.binding.Bindings;
 import javafx.beans.value.ObservableValue;
+import javafx.collections.FXCollections;
 import javafx.collections.ListChangeListener;
 import javafx.geometry.Bounds;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
+import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.ProgressBar;
 import javafx.scene.control.ScrollPane;
@@ -34,7 +36,7 @@ import java.util.Map;
 
 /**
  * The log screen: the visit's kept logs (show one, delete one after a question), the import form
- * (file, another logger's column names, the airflow when the visit has none, the fan-only airflow,
+ * (file, what each column the importer does not know by name holds, the airflow when the visit has none, the fan-only airflow,
  * the date order and the clock's zone), which closes once a log is shown, then the cycle summary,
  * the findings and the timeline. Each message sits beside the field or part it is about and is
  * kept in view; an action never moves the focus away from where the tech is. The screen is one
@@ -155,8 +157,7 @@ public final class LogView extends VBox implements Reflowing {
             }
         });
         choose.setMinWidth(Region.USE_PREF_SIZE);
-        TextField map = field("log-header-map", "Logger's column = field; e.g. RA Temp=return_db; RA RH=return_rh",
-                viewModel.headerMapProperty());
+        VBox picker = columnPicker();
         TextField airflow = field("log-airflow", "Airflow", viewModel.airflowProperty());
         Label airflowCaption = Ui.wrapped("", "figure-label");
         airflowCaption.textProperty().bind(viewModel.airflowCaptionProperty());
@@ -215,8 +216,48 @@ public final class LogView extends VBox implements Reflowing {
         bar.progressProperty().bind(viewModel.progressProperty());
         bar.visibleProperty().bind(viewModel.busyProperty());
         bar.managedProperty().bind(viewModel.busyProperty());
-        return new VBox(10, new HBox(8, file, choose), new VBox(4, map, messages.get(About.HEADER_MAP)), airflowBox,
+        return new VBox(10, new HBox(8, file, choose), picker, airflowBox,
                 fanBox, orderBox, zoneBox, go, bar, messages.get(About.IMPORT));
+    }
+
+    /**
+     * One drop-down per column the importer does not know by name, under the column's header, with
+     * what it may hold in words; the columns it knows are named in one line above them.
+     */
+    private VBox columnPicker() {
+        VBox rows = new VBox(8);
+        rows.setId("log-column-picks");
+        ColumnPicks cols = viewModel.columns();
+        Runnable fill = () -> {
+            rows.getChildren().clear();
+            int i = 0;
+            for (ColumnPicks.Pick p : cols.picks()) {
+                Label header = Ui.wrapped("Column '" + p.header() + "' holds", "figure-label");
+                ComboBox<LogField> choice = new ComboBox<>(FXCollections.observableArrayList(LogField.choices()));
+                choice.setId("log-column-pick-" + i++);
+                choice.setUserData(p.header());
+                choice.valueProperty().bindBidirectional(p.fieldProperty());
+                choice.setMinHeight(Ui.MIN_TARGET_PX);
+                choice.setMaxWidth(Double.MAX_VALUE);
+                choice.setVisibleRowCount(8);
+                rows.getChildren().add(new VBox(4, header, choice));
+            }
+        };
+        cols.picks().addListener((ListChangeListener<ColumnPicks.Pick>) c -> fill.run());
+        fill.run();
+        Label ask = Ui.wrapped("Some columns of this file have names the app does not know: say what each one"
+                + " holds, or leave it Not used.", "muted");
+        Label known = Ui.wrapped("", "muted");
+        known.setId("log-columns-known");
+        known.textProperty().bind(cols.knownProperty());
+        VBox picks = new VBox(8, ask, rows);
+        picks.visibleProperty().bind(Bindings.isNotEmpty(cols.picks()));
+        picks.managedProperty().bind(picks.visibleProperty());
+        known.visibleProperty().bind(known.textProperty().isNotEmpty());
+        known.managedProperty().bind(known.visibleProperty());
+        VBox box = new VBox(6, known, picks, messages.get(About.COLUMNS));
+        box.setId("log-columns");
+        return box;
     }
 
     private static TextField field(String id, String prompt, javafx.beans.property.StringProperty p) {
@@ -248,23 +289,22 @@ public final class LogView extends VBox implements Reflowing {
         return l;
     }
 
+    /**
+     * One kept log: its name and when it was kept over the whole width (a file name has no spaces to
+     * wrap at, so beside the buttons it was cut mid-word with large text), the buttons under them.
+     */
     private Node keptRow(KeptLog k) {
         Label name = Ui.wrapped(k.name(), "figure-value");
         Label when = Ui.wrapped(k.when() + (k.shown() ? " · shown below" : ""), "muted");
-        VBox text = new VBox(2, name, when);
-        HBox.setHgrow(text, Priority.ALWAYS);
-        text.setMinWidth(0);
         Button view = Ui.button("log-view-" + k.id(), k.shown() ? "Shown" : "Show", Icons.RESULTS, () -> viewModel.view(k));
         view.setDisable(k.shown());
         view.setMinWidth(Region.USE_PREF_SIZE);
         Button delete = Ui.button("log-delete-" + k.id(), "Delete", Icons.FIX, () -> viewModel.askDelete(k));
         delete.setMinWidth(Region.USE_PREF_SIZE);
         FlowPane buttons = new FlowPane(8, 8, view, delete);
-        buttons.setAlignment(Pos.CENTER_RIGHT);
-        buttons.setMinWidth(Region.USE_PREF_SIZE);
-        buttons.setPrefWrapLength(0);
-        HBox row = new HBox(12, text, buttons);
-        row.setAlignment(Pos.CENTER_LEFT);
+        buttons.setAlignment(Pos.CENTER_LEFT);
+        VBox row = new VBox(6, new VBox(2, name, when), buttons);
+        row.setMinWidth(0);
         row.getStyleClass().add("kept-log");
         if (k.shown()) {
             row.getStyleClass().add("shown");

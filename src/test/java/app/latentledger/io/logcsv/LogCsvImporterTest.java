@@ -111,12 +111,12 @@ class LogCsvImporterTest {
         assertEquals(3, r.report().rowsKept());
         assertEquals(7, r.report().rejectedCount());
         assertEquals(java.util.List.of(
-                "3:3: return_rh 'abc' is not a number",
+                "3:3: return relative humidity 'abc' is not a number",
                 "4: 3 of 5 columns (line cut short?)",
                 "5: 6 columns, the header has 5",
                 "6:1: time '14/07/2026 13:00' is not a date and time this reader knows (e.g. 2026-07-14T13:05:00, 2026-07-14T13:05:00-04:00, 7/14/2026 1:05:00 PM or 14/07/2026 13:05)",
-                "7:2: return_db '400' °F outside -58 to 203 °F",
-                "8:5: supply_rh '150' % outside 0 to 100 %",
+                "7:2: return dry bulb '400' °F outside -58 to 203 °F",
+                "8:5: supply relative humidity '150' % outside 0 to 100 %",
                 "10:1: time '2026-07-14T13:01:20-04:00' has a UTC offset, earlier rows had none"), r.report().rejected());
         assertTrue(Double.isNaN(r.series().value(Channel.RETURN_RH, 1)));
         assertEquals(100.0, r.series().value(Channel.SUPPLY_RH, 1));

@@ -132,8 +132,13 @@ class LogImportViewModelTest {
             LogImportViewModel vm = direct(s);
             assertEquals("Airflow, L/s", vm.airflowCaptionProperty().get());
             vm.fileProperty().set(SAMPLES.resolve("other-logger-export.csv").toString());
-            vm.headerMapProperty().set("Date/Time=time; RA Temp [°C]=return_db; RA RH [%]=return_rh;"
-                    + " SA Temp [°C]=supply_db\nSA RH [%]=supply_rh");
+            assertEquals(List.of("Date/Time", "RA Temp [°C]", "RA RH [%]", "SA Temp [°C]", "SA RH [%]", "Battery [V]"),
+                    vm.columns().picks().stream().map(ColumnPicks.Pick::header).toList(), "every column needs a pick");
+            pick(vm, "Date/Time", "Date and time");
+            pick(vm, "RA Temp [°C]", "Return dry bulb");
+            pick(vm, "RA RH [%]", "Return relative humidity");
+            pick(vm, "SA Temp [°C]", "Supply dry bulb");
+            pick(vm, "SA RH [%]", "Supply relative humidity");
             vm.airflowProperty().set("470");
             vm.importFile();
             assertTrue(vm.statusProperty().get().startsWith("Imported other-logger-export.csv"),
@@ -149,13 +154,15 @@ class LogImportViewModelTest {
     }
 
     @Test
-    void withoutTheMapTheFileIsRefusedAndNothingIsKept() {
+    void withoutPicksTheFileIsRefusedInWordsAndNothingIsKept() {
         try (AppSession s = withNewVisit(dir)) {
             LogImportViewModel vm = direct(s);
             vm.fileProperty().set(SAMPLES.resolve("other-logger-export.csv").toString());
             vm.importFile();
-            assertTrue(vm.statusProperty().get().startsWith("Not imported: other-logger-export.csv refused: no time column"),
-                    vm.statusProperty().get());
+            // said in words beside the column picker, never as the command line's --map syntax
+            assertEquals("Not imported: no column holds the time: set the column with the date and time (or the"
+                    + " seconds from the start) to Date and time or Seconds from the start.", vm.statusProperty().get());
+            assertEquals(LogImportViewModel.About.COLUMNS, vm.aboutProperty().get());
             assertTrue(s.ledger().logs().idsForVisit(s.visit().id()).isEmpty());
         }
     }
@@ -325,8 +332,50 @@ class LogImportViewModelTest {
         }
     }
 
+    /** Picks what a column holds by the words the drop-down shows, as a tech does. */
+    private static void pick(LogImportViewModel vm, String header, String words) {
+        ColumnPicks.Pick p = vm.columns().picks().stream().filter(x -> x.header().equals(header)).findFirst()
+                .orElseThrow(() -> new AssertionError("no pick for " + header));
+        p.fieldProperty().set(LogField.choices().stream().filter(f -> f.words().equals(words)).findFirst()
+                .orElseThrow(() -> new AssertionError("no choice " + words)));
+    }
+
     @Test
-    void parsesAHeaderMapAtTheLastEqualsSign() {
-        assertEquals(java.util.Map.of("A=B", "time", "RA", "return_db"), LogImportViewModel.parseMap("A=B=time; RA=return_db"));
+    void refusalsOfThePicksNameTheColumnsAndFieldsInWordsAndKeepNothing() {
+        try (AppSession s = withNewVisit(dir)) {
+            LogImportViewModel vm = direct(s);
+            vm.fileProperty().set(SAMPLES.resolve("other-logger-export.csv").toString());
+            vm.airflowProperty().set("470");
+            pick(vm, "Date/Time", "Date and time");
+            vm.importFile();
+            assertEquals(LogImportViewModel.About.COLUMNS, vm.aboutProperty().get());
+            assertTrue(vm.statusProperty().get().startsWith("Not imported: no column holds a temperature"),
+                    vm.statusProperty().get());
+            pick(vm, "RA Temp [°C]", "Return dry bulb");
+            pick(vm, "SA Temp [°C]", "Return dry bulb");
+            vm.importFile();
+            assertEquals("Not imported: the columns 'RA Temp [°C]' and 'SA Temp [°C]' are both Return dry bulb: set"
+                    + " one of them to another field or to Not used.", vm.statusProperty().get());
+            pick(vm, "SA Temp [°C]", "Seconds from the start");
+            vm.importFile();
+            assertTrue(vm.statusProperty().get().contains("'Date/Time' and 'SA Temp [°C]' both hold the time"),
+                    vm.statusProperty().get());
+            assertTrue(s.ledger().logs().idsForVisit(s.visit().id()).isEmpty(), "nothing kept");
+            String shown = vm.statusProperty().get();
+            assertFalse(shown.contains("--map") || shown.contains("_db") || shown.contains("HEADER="), shown);
+        }
+    }
+
+    @Test
+    void aNewFileBringsItsOwnColumnsAndTheGenericLayoutNeedsNoPicks() {
+        try (AppSession s = withNewVisit(dir)) {
+            LogImportViewModel vm = direct(s);
+            vm.fileProperty().set(SAMPLES.resolve("other-logger-export.csv").toString());
+            pick(vm, "Date/Time", "Date and time");
+            vm.fileProperty().set(SAMPLES.resolve("celsius-plain.csv").toString());
+            assertTrue(vm.columns().picks().isEmpty(), "the sample's headers are the field names");
+            assertTrue(vm.columns().knownProperty().get().startsWith("Read by their names: "),
+                    vm.columns().knownProperty().get());
+        }
     }
 }
