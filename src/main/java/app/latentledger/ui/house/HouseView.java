@@ -134,7 +134,7 @@ public final class HouseView extends HBox implements Reflowing {
             return;
         }
         for (HouseViewModel.FixRow r : model.fixRows()) {
-            ToggleButton t = new ToggleButton(r.change() + "\nwater gained " + r.balance() + " · settles at " + r.dewPoint()
+            ToggleButton t = new ToggleButton(r.change() + "\n" + r.balance() + " · " + r.dewPoint()
                     + " · SHR " + r.shr());
             t.setId("fix-" + r.key());
             t.setToggleGroup(fixGroup);

@@ -6,6 +6,7 @@ import app.latentledger.core.house.HouseVisitReadings;
 import app.latentledger.core.house.MoistureBudget;
 import app.latentledger.core.house.ScenarioResult;
 import app.latentledger.core.house.WhatIfRequest;
+import app.latentledger.core.text.BalanceWords;
 import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.report.HouseEvidence;
@@ -26,7 +27,10 @@ import java.util.List;
  * toolkit: observable properties only.
  */
 public final class HouseViewModel {
-    /** One row of the fix planner table, shown as typed. */
+    /**
+     * One row of the fix planner table, shown as typed; {@code balance} is the water balance in words
+     * ({@link BalanceWords}), the same sentence as the report and the {@code house} command.
+     */
     public record FixRow(String key, String change, String balance, String dewPoint, String shr) {
     }
 
@@ -143,9 +147,10 @@ public final class HouseViewModel {
     private FixRow row(ScenarioResult s) {
         var u = session.units();
         return new FixRow(s.scenario().key(), s.scenario().change(),
-                DisplayNumber.withSpread(Quantity.WATER_RATE_DAILY, u, s.balance().valueSi(), s.balance().expandedSi()),
-                s.hasEquilibrium() ? DisplayNumber.withSpread(Quantity.TEMPERATURE, u, s.equilibriumDewPointC().valueSi(),
-                        s.equilibriumDewPointC().expandedSi()) : "none (keeps rising)",
+                BalanceWords.sentence(u, s.balance().valueSi(), s.balance().expandedSi()),
+                s.hasEquilibrium() ? "indoor dew point settles at " + DisplayNumber.withSpread(Quantity.TEMPERATURE, u,
+                        s.equilibriumDewPointC().valueSi(), s.equilibriumDewPointC().expandedSi())
+                        : "indoor humidity keeps rising (no level where it settles)",
                 DisplayNumber.number(s.shr().valueSi(), 3));
     }
 
