@@ -5,7 +5,9 @@ import app.latentledger.ui.TestSessions;
 import app.latentledger.ui.session.AppSession;
 import javafx.scene.Node;
 import javafx.scene.Scene;
+import javafx.scene.control.Label;
 import javafx.scene.control.ToggleButton;
+import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
@@ -61,6 +63,30 @@ class HouseViewTest {
         HouseViewModel again = new HouseViewModel(session);
         robot.interact(() -> robot.lookup("#house-screen").query().getScene().setRoot(new HouseView(again)));
         assertTrue(robot.lookup("#house-box-bedrooms").queryAs(ToggleButton.class).getText().endsWith("\n5"));
+    }
+
+    /**
+     * A USB or Bluetooth keyboard types on the House pad as on the Readings pad: digits, the point,
+     * minus for the sign, Backspace, Escape to clear and Enter to store (1 ft = 0.3048 m exactly,
+     * international foot).
+     */
+    @Test
+    void aHardwareKeyboardTypesOnThePad(FxRobot robot) {
+        tap(robot, "#house-box-ceiling-height");
+        Label display = robot.lookup("#house-pad-display").queryAs(Label.class);
+        robot.type(KeyCode.DIGIT7, KeyCode.PERIOD, KeyCode.DIGIT5);
+        assertEquals("7.5", display.getText());
+        robot.type(KeyCode.BACK_SPACE);
+        assertEquals("7.", display.getText());
+        robot.type(KeyCode.MINUS);
+        assertEquals("-7.", display.getText());
+        robot.type(KeyCode.ESCAPE);
+        assertEquals("", display.getText());
+        robot.type(KeyCode.DIGIT9, KeyCode.ENTER);
+        assertEquals(9 * 0.3048, session.ledger().houses().facts(DemoScenario.SITE_HERON).orElseThrow()
+                .ceilingHeightM(), 1e-12, robot.lookup("#house-pad-message").queryAs(Label.class).getText());
+        assertTrue(robot.lookup("#house-box-stories").queryAs(ToggleButton.class).isSelected(),
+                "Enter moves on to the next box, as the pad's own Enter key does");
     }
 
     private static void tap(FxRobot robot, String query) {
