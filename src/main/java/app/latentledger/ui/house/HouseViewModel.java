@@ -50,6 +50,11 @@ public final class HouseViewModel {
             }
 
             @Override
+            public String visitId() {
+                return session.visit() == null ? null : session.visit().id();
+            }
+
+            @Override
             public app.latentledger.core.records.Site site() {
                 return session.visit() == null ? null : session.site();
             }
@@ -69,7 +74,7 @@ public final class HouseViewModel {
             public HouseVisitReadings readings() {
                 return HouseViewModel.this.readings();
             }
-        }, this::keep, this::keep);
+        }, this::keep, this::keep, new FileHouseDraftStore(session.dataFolder()));
         session.visitProperty().addListener((o, a, b) -> {
             entry.reset();
             recompute();
