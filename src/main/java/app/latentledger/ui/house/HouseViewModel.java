@@ -1,5 +1,6 @@
 package app.latentledger.ui.house;
 
+import app.latentledger.chart.draw.Theme;
 import app.latentledger.core.house.HouseBudget;
 import app.latentledger.core.house.HouseFacts;
 import app.latentledger.core.house.HouseVisitReadings;
@@ -12,6 +13,8 @@ import app.latentledger.core.units.Quantity;
 import app.latentledger.report.HouseEvidence;
 import app.latentledger.report.VisitEvidence;
 import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.chart.CoilCharts;
+import javafx.beans.binding.Bindings;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
@@ -37,6 +40,8 @@ public final class HouseViewModel {
     private final AppSession session;
     private final ReadOnlyObjectWrapper<HouseBudget> budget = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyStringWrapper refusal = new ReadOnlyStringWrapper("");
+    /** The chart's palette, following the app's theme (outdoor and dark included) as the other charts do. */
+    private final ReadOnlyObjectWrapper<Theme> chartTheme = new ReadOnlyObjectWrapper<>();
     private final HouseEntryViewModel entry;
     /** The open visit's coil checks and analysed logs, read once per visit, units or screen showing. */
     private VisitEvidence evidence;
@@ -85,6 +90,8 @@ public final class HouseViewModel {
                 recompute();
             }
         });
+        chartTheme.bind(Bindings.createObjectBinding(() -> CoilCharts.theme(session.themeProperty().get()),
+                session.themeProperty()));
         session.unitsProperty().addListener((o, a, b) -> {
             recompute();
             entry.refresh();
@@ -99,6 +106,11 @@ public final class HouseViewModel {
 
     public ReadOnlyObjectProperty<HouseBudget> budgetProperty() {
         return budget.getReadOnlyProperty();
+    }
+
+    /** The palette the budget chart is painted in. */
+    public ReadOnlyObjectProperty<Theme> chartThemeProperty() {
+        return chartTheme.getReadOnlyProperty();
     }
 
     /** Why there is no budget yet ("" with one). */

@@ -3,6 +3,8 @@ package app.latentledger.ui.house;
 import app.latentledger.store.DemoScenario;
 import app.latentledger.ui.TestSessions;
 import app.latentledger.ui.session.AppSession;
+import app.latentledger.core.house.HouseFindings;
+import javafx.geometry.Bounds;
 import javafx.scene.Node;
 import javafx.scene.Scene;
 import javafx.scene.control.Label;
@@ -87,6 +89,52 @@ class HouseViewTest {
                 .ceilingHeightM(), 1e-12, robot.lookup("#house-pad-message").queryAs(Label.class).getText());
         assertTrue(robot.lookup("#house-box-stories").queryAs(ToggleButton.class).isSelected(),
                 "Enter moves on to the next box, as the pad's own Enter key does");
+    }
+
+    /**
+     * The cautions that go with the fixes (attic heat, mold, combustion appliances and house
+     * depressurisation, licensed practice) stay in sight beside the list of fixes, in the outdoor
+     * theme, landscape and upright, and at 150 % text; the chart follows the outdoor palette.
+     */
+    @Test
+    void theCautionsStayInSightBesideTheFixes(FxRobot robot) {
+        robot.interact(() -> session.saveSettings(session.settings().withChoice(
+                app.latentledger.core.settings.SettingsCatalogue.THEME, "outdoor")));
+        assertEquals(app.latentledger.chart.draw.Theme.OUTDOOR, model.chartThemeProperty().get());
+        String[][] looks = {{"1280", "800", "false", ""}, {"800", "1280", "true", ""},
+                {"1280", "800", "false", "-fx-font-size: 27px;"}, {"800", "1280", "true", "-fx-font-size: 27px;"}};
+        for (String[] look : looks) {
+            String where = String.join(" ", look);
+            robot.interact(() -> {
+                HouseView v = new HouseView(model);
+                v.setPortrait(Boolean.parseBoolean(look[2]));
+                Scene scene = new Scene(v, Double.parseDouble(look[0]), Double.parseDouble(look[1]));
+                app.latentledger.ui.look.Theme.install(scene);
+                app.latentledger.ui.look.Theme.apply(scene, session.themeProperty().get());
+                v.setStyle(look[3]);
+                ((Stage) robot.lookup("#house-screen").query().getScene().getWindow()).setScene(scene);
+                v.applyCss();
+                v.layout();
+            });
+            org.testfx.util.WaitForAsyncUtils.waitForFxEvents();
+            Label cautions = robot.lookup("#house-cautions").queryAs(Label.class);
+            for (String c : new String[] {HouseFindings.ATTIC_HEAT, HouseFindings.MOLD, HouseFindings.COMBUSTION,
+                    HouseFindings.LICENSED}) {
+                assertTrue(cautions.getText().contains(c), where + ": " + c);
+            }
+            Node box = robot.lookup("#house-cautions-box").query();
+            Node fixes = robot.lookup("#house-fixes").query();
+            Bounds b = box.localToScene(box.getBoundsInLocal());
+            Bounds f = fixes.localToScene(fixes.getBoundsInLocal());
+            Bounds scene = new javafx.geometry.BoundingBox(0, 0, box.getScene().getWidth(), box.getScene().getHeight());
+            assertTrue(scene.contains(b), where + ": the cautions are on screen " + b);
+            assertTrue(b.getMinX() >= f.getMaxX() && b.getMinY() < f.getMaxY() && f.getMinY() < b.getMaxY(),
+                    where + ": beside the fixes " + b + " " + f);
+            assertTrue(b.getHeight() >= 120 && b.getWidth() >= 200, where + ": room to read them " + b);
+            Bounds first = cautions.localToScene(cautions.getBoundsInLocal());
+            assertTrue(first.getMinY() >= b.getMinY() && first.getMinY() < b.getMaxY() - 60,
+                    where + ": the first caution starts in sight " + first + " in " + b);
+        }
     }
 
     private static void tap(FxRobot robot, String query) {
