@@ -21,6 +21,7 @@ import app.latentledger.core.house.WhatIfRequest;
 import app.latentledger.core.psychro.SitePressure;
 import app.latentledger.core.psychro.StandardAtmosphere;
 import app.latentledger.core.settings.Settings;
+import app.latentledger.core.text.BalanceWords;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.core.visit.LogConditions;
@@ -241,6 +242,7 @@ public final class HouseCommand implements Command {
         t.append(line("put back by the blower", s.reevaporated(), units));
         t.append(line("net removal", s.removal(), units));
         t.append(line("balance (gains − removal)", s.balance(), units));
+        t.append("  ").append(balanceWords(s, units)).append('\n');
         t.append(String.format(Locale.ROOT, "  runtime %s (%s), part-load latent fraction from %s%n",
                 pct(s.runtimeFraction()), b.inputs().system().runtimeSource(), b.inputs().system().latentSource()));
         if (s.leakFraction().exists()) {
@@ -263,6 +265,7 @@ public final class HouseCommand implements Command {
         t.append("Fixes compared                                     balance/day          eq. dew point     SHR\n");
         for (ScenarioResult w : b.whatIfs()) {
             t.append("  ").append(w.scenario().change()).append('\n');
+            t.append("    ").append(balanceWords(w, units)).append('\n');
             t.append(String.format(Locale.ROOT, "  %-40s %22s %20s %7s%n", "", est(w.balance(), day, units),
                     w.hasEquilibrium() ? temp(w.equilibriumDewPointC(), units) : "none",
                     Format.fixed(w.shr().valueSi(), 3)));
@@ -303,6 +306,11 @@ public final class HouseCommand implements Command {
         Estimate perHour = new Estimate(e.valueSi(), e.expandedSi());
         return String.format(Locale.ROOT, "  %-30s %22s %20s%n", label, est(e, day, units),
                 est(perHour, Quantity.WATER_RATE, units));
+    }
+
+    /** The balance in words, as the House screen and the report say it ({@link BalanceWords}). */
+    private static String balanceWords(ScenarioResult s, UnitSystem units) {
+        return BalanceWords.sentence(units, s.balance().valueSi(), s.balance().expandedSi());
     }
 
     private static String est(Estimate e, Quantity q, UnitSystem units) {

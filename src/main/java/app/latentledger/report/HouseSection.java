@@ -6,6 +6,7 @@ import app.latentledger.core.coil.Estimate;
 import app.latentledger.core.house.HouseBudget;
 import app.latentledger.core.house.InternalMoisture;
 import app.latentledger.core.house.ScenarioResult;
+import app.latentledger.core.text.BalanceWords;
 import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.core.units.UnitSystem;
@@ -47,15 +48,19 @@ final class HouseSection {
         t.paragraph(PlainHouseWords.leak(s), Ink.BODY, 0);
         if (!budget.whatIfs().isEmpty()) {
             t.subheading("Fixes compared (the same budget re-solved for each)", 60);
-            Table tb = new Table(new String[] {"Change", "Water gained per day (± U)", "Indoor dew point it settles at",
-                    "Coil SHR"}, new double[] {2.6, 1.5, 1.5, 0.6}, new boolean[] {false, true, true, true});
-            tb.row("As found", water(s.balance()), dewPoint(s), DisplayNumber.number(s.shr().valueSi(), 3));
+            // the balance in words (the screen's and the house command's sentence), wide enough for one line
+            Table tb = new Table(new String[] {"Change", "Water over a day like this one (± U)",
+                    "Indoor dew point it settles at", "Coil SHR"}, new double[] {1.8, 2.6, 1.1, 0.5},
+                    new boolean[] {false, false, true, true});
+            tb.row("As found", balance(s.balance()), dewPoint(s), DisplayNumber.number(s.shr().valueSi(), 3));
             for (ScenarioResult w : budget.whatIfs()) {
-                tb.row(w.scenario().change(), water(w.balance()), dewPoint(w), DisplayNumber.number(w.shr().valueSi(), 3));
+                tb.row(w.scenario().change(), balance(w.balance()), dewPoint(w), DisplayNumber.number(w.shr().valueSi(), 3));
             }
             tb.draw(t);
-            t.paragraph("Water gained per day is gains minus removal at the house's present humidity (negative: the"
-                    + " house dries). Uncertainties are expanded (k = 2, about 95 %).", Ink.SMALL, 0);
+            t.paragraph("The water over a day is gains minus removal at the house's present humidity, the system's"
+                    + " runtime counted. \"About in balance\" means the readings cannot tell whether the house gains"
+                    + " or dries: the range is what the uncertainty allows. Uncertainties are expanded (k = 2,"
+                    + " about 95 %).", Ink.SMALL, 0);
         }
         t.paragraph(PlainHouseWords.dehumidifier(budget, units), Ink.BODY, 0);
         t.paragraph("* People and activities: " + InternalMoisture.MEMORY_ONLY + "; the figure is the midpoint of the"
@@ -65,8 +70,8 @@ final class HouseSection {
         }
     }
 
-    private String water(Estimate e) {
-        return Numbers.estimate(Quantity.WATER_RATE_DAILY, units, e);
+    private String balance(Estimate e) {
+        return BalanceWords.sentence(units, e.valueSi(), e.expandedSi());
     }
 
     private String dewPoint(ScenarioResult s) {

@@ -10,17 +10,30 @@ import javafx.scene.input.KeyEvent;
  * Digits from a USB or Bluetooth keyboard (a 2-in-1 or a laptop) reach the pad as if tapped:
  * 0–9, the point, minus for the sign, Backspace, Delete or Escape to clear, Enter. Only while the
  * pad is on screen and no text field has the focus, so typing a site name elsewhere is untouched.
+ * The one keyboard mapping of every number pad (readings and house), as {@link KeyGrid} is the one
+ * key layout.
  */
-final class HardwareKeys {
+public final class HardwareKeys {
     private HardwareKeys() {
     }
 
     static void attach(Node pad, EntryViewModel vm) {
+        attach(pad, vm.pad(), vm::enterAndAdvance);
+    }
+
+    /**
+     * Sends the keyboard's keys to {@code keys} while {@code pad} is showing.
+     *
+     * @param pad   the pad on screen (its scene gets the key filter)
+     * @param keys  what the keys type into
+     * @param enter what Enter does (the pad's own Enter key)
+     */
+    public static void attach(Node pad, KeypadViewModel keys, Runnable enter) {
         EventHandler<KeyEvent> filter = e -> {
             if (!showing(pad) || pad.getScene().getFocusOwner() instanceof TextInputControl) {
                 return;
             }
-            if (handle(e, vm)) {
+            if (handle(e, keys, enter)) {
                 e.consume();
             }
         };
@@ -38,11 +51,10 @@ final class HardwareKeys {
         }
     }
 
-    private static boolean handle(KeyEvent e, EntryViewModel vm) {
+    private static boolean handle(KeyEvent e, KeypadViewModel pad, Runnable enter) {
         if (e.isControlDown() || e.isAltDown() || e.isMetaDown()) {
             return false;
         }
-        KeypadViewModel pad = vm.pad();
         switch (e.getCode()) {
             case DIGIT0, DIGIT1, DIGIT2, DIGIT3, DIGIT4, DIGIT5, DIGIT6, DIGIT7, DIGIT8, DIGIT9 -> {
                 if (e.isShiftDown()) {
@@ -56,7 +68,7 @@ final class HardwareKeys {
             case MINUS, SUBTRACT -> pad.sign();
             case BACK_SPACE -> pad.backspace();
             case DELETE, ESCAPE -> pad.clear();
-            case ENTER -> vm.enterAndAdvance();
+            case ENTER -> enter.run();
             default -> {
                 return false;
             }

@@ -26,7 +26,6 @@ import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.beans.property.SimpleObjectProperty;
 
 import java.util.EnumMap;
-import java.util.HashMap;
 import java.util.Map;
 import java.util.Optional;
 import java.util.function.Consumer;
@@ -37,8 +36,11 @@ import java.util.function.Consumer;
  * possible moist-air state at the site, {@link RecordRules#houseReadings}) and stores it at once;
  * a refusal names the field, the value and the accepted range in the tech's units and keeps what
  * was stored. Two records need two numbers before they can be stored: the house's facts (floor
- * area and bedrooms) and an air reading (dry bulb and humidity); the first of a pair waits on this
- * screen, marked "not saved yet", until the second is in. Needs no JavaFX toolkit.
+ * area and bedrooms) and an air reading (dry bulb and humidity); the first of a pair waits, marked
+ * "not saved yet", until the second is in. A waiting number lives in one place, the visit's
+ * {@link HouseDraft}, kept on the disk by a {@link HouseDraftStore} before the screen shows it, so it
+ * is still there, still "not saved yet", after the app is killed and started again. Needs no JavaFX
+ * toolkit.
  */
 public final class HouseEntryViewModel {
     /** The ceiling height a new house starts with, as the {@code house} command assumes (8 ft). */
@@ -47,6 +49,9 @@ public final class HouseEntryViewModel {
     /** What the screen needs from the open visit. */
     interface Source {
         UnitSystem units();
+
+        /** The open visit's id, or null without one. */
+        String visitId();
 
         Site site();
 
@@ -60,6 +65,7 @@ public final class HouseEntryViewModel {
     private final Source source;
     private final Consumer<HouseFacts> saveFacts;
     private final Consumer<HouseVisitReadings> saveReadings;
+    private final HouseDraftStore drafts;
     private final KeypadViewModel pad = new KeypadViewModel();
     private final ObjectProperty<HouseField> selected = new SimpleObjectProperty<>(HouseField.FLOOR_AREA);
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper("");
@@ -68,15 +74,16 @@ public final class HouseEntryViewModel {
     private final ReadOnlyIntegerWrapper revision = new ReadOnlyIntegerWrapper(0);
     /** A choice tapped for a box, used with its next number. */
     private final Map<HouseField, String> chosen = new EnumMap<>(HouseField.class);
-    /** The first number of a pair, SI, waiting for the second. */
-    private final Map<HouseField, Double> waiting = new EnumMap<>(HouseField.class);
-    /** The humidity kind of a waiting humidity number. */
-    private final Map<HouseField, HumidityKind> waitingKind = new HashMap<>();
+    /** The first numbers of pairs, waiting for the second: as kept by {@link #drafts}, never apart from it. */
+    private HouseDraft draft;
 
-    HouseEntryViewModel(Source source, Consumer<HouseFacts> saveFacts, Consumer<HouseVisitReadings> saveReadings) {
+    HouseEntryViewModel(Source source, Consumer<HouseFacts> saveFacts, Consumer<HouseVisitReadings> saveReadings,
+                        HouseDraftStore drafts) {
         this.source = source;
         this.saveFacts = saveFacts;
         this.saveReadings = saveReadings;
+        this.drafts = drafts;
+        this.draft = load();
         selected.addListener((o, a, b) -> {
             pad.clear();
             message.set("");
@@ -109,10 +116,9 @@ public final class HouseEntryViewModel {
         revision.set(revision.get() + 1);
     }
 
-    /** Forgets numbers waiting for their pair (another visit was opened). */
+    /** Another visit was opened: its own waiting numbers, as kept. */
     void reset() {
-        waiting.clear();
-        waitingKind.clear();
+        draft = load();
         chosen.clear();
         pad.clear();
         message.set("");
@@ -128,6 +134,9 @@ public final class HouseEntryViewModel {
         String c = chosen.get(f);
         if (c != null) {
             return c;
+        }
+        if (draft.has(f) && !draft.half(f).choice().isEmpty()) {
+            return draft.half(f).choice();
         }
         Optional<HouseFacts> facts = source.facts();
         if (f == HouseField.BLOWER_DOOR) {
@@ -242,30 +251,31 @@ public final class HouseEntryViewModel {
     private void fact(HouseField f, double si) {
         Optional<HouseFacts> now = source.facts();
         if (now.isPresent()) {
-            store(with(now.get(), f, si), saved(f, si) + " saved with the house");
+            store(with(now.get(), f, si, choice(f)), saved(f, si) + " saved with the house");
             return;
         }
         // no facts yet: check the number on a stand-in house, then wait for floor area and bedrooms
         HouseFacts standIn = new HouseFacts(HouseFacts.MIN_AREA_M2, DEFAULT_CEILING_M, 1, 0, 0, Double.NaN, Double.NaN, 0,
                 Double.NaN, VentilationType.NONE, 0.0, Double.NaN);
-        for (Map.Entry<HouseField, Double> w : waiting.entrySet()) {
+        for (Map.Entry<HouseField, HouseDraft.Half> w : draft.halves().entrySet()) {
             if (w.getKey().group() == HouseField.Group.HOUSE) {
-                standIn = with(standIn, w.getKey(), w.getValue());
+                standIn = with(standIn, w.getKey(), w.getValue().valueSi(), w.getValue().choice());
             }
         }
-        HouseFacts next = with(standIn, f, si);
-        waiting.put(f, si);
-        if (waiting.containsKey(HouseField.FLOOR_AREA) && waiting.containsKey(HouseField.BEDROOMS)) {
-            HouseField.Group g = HouseField.Group.HOUSE;
-            waiting.keySet().removeIf(k -> k.group() == g);
+        HouseFacts next = with(standIn, f, si, choice(f));
+        HouseDraft waiting = draft.with(f, new HouseDraft.Half(si, f.choices().isEmpty() ? "" : choice(f)));
+        if (waiting.has(HouseField.FLOOR_AREA) && waiting.has(HouseField.BEDROOMS)) {
             store(next, saved(f, si) + " saved; the house's facts are kept with the site");
+            keep(waiting.without(k -> k.group() == HouseField.Group.HOUSE));
         } else {
-            String missing = waiting.containsKey(HouseField.FLOOR_AREA) ? "bedrooms" : "floor area";
+            keep(waiting);
+            String missing = waiting.has(HouseField.FLOOR_AREA) ? "bedrooms" : "floor area";
             say(saved(f, si) + " not saved yet: the house's facts are saved once " + missing + " is in too");
         }
     }
 
-    private HouseFacts with(HouseFacts h, HouseField f, double si) {
+    /** @param choice the box's choice the number was typed under (CFM50 or ACH50, the ventilation type) */
+    private HouseFacts with(HouseFacts h, HouseField f, double si, String choice) {
         int n = (int) Math.rint(si);
         return switch (f) {
             case FLOOR_AREA -> new HouseFacts(si, h.ceilingHeightM(), h.stories(), h.bedrooms(), h.occupants(),
@@ -283,7 +293,7 @@ public final class HouseEntryViewModel {
             case OCCUPANTS -> new HouseFacts(h.floorAreaM2(), h.ceilingHeightM(), h.stories(), h.bedrooms(), n,
                     h.cfm50M3PerS(), h.ach50(), h.shelterClass(), h.windMPerS(), h.ventilationType(),
                     h.ventilationM3PerS(), h.ervLatentEffectiveness());
-            case BLOWER_DOOR -> choice(f).equals("ach50")
+            case BLOWER_DOOR -> choice.equals("ach50")
                     ? new HouseFacts(h.floorAreaM2(), h.ceilingHeightM(), h.stories(), h.bedrooms(), h.occupants(),
                     Double.NaN, si, h.shelterClass(), h.windMPerS(), h.ventilationType(), h.ventilationM3PerS(),
                     h.ervLatentEffectiveness())
@@ -298,7 +308,7 @@ public final class HouseEntryViewModel {
                     h.ervLatentEffectiveness());
             case VENTILATION -> new HouseFacts(h.floorAreaM2(), h.ceilingHeightM(), h.stories(), h.bedrooms(),
                     h.occupants(), h.cfm50M3PerS(), h.ach50(), h.shelterClass(), h.windMPerS(),
-                    VentilationType.parse(choice(f)), si, h.ervLatentEffectiveness());
+                    VentilationType.parse(choice), si, h.ervLatentEffectiveness());
             case ERV_EFFECTIVENESS -> new HouseFacts(h.floorAreaM2(), h.ceilingHeightM(), h.stories(), h.bedrooms(),
                     h.occupants(), h.cfm50M3PerS(), h.ach50(), h.shelterClass(), h.windMPerS(), h.ventilationType(),
                     h.ventilationM3PerS(), si);
@@ -330,17 +340,14 @@ public final class HouseEntryViewModel {
                     ? new AirReading(where, current.dryBulbC(), current.dryBulbTolK(), kind, si, tolerance(kind, tol))
                     : new AirReading(where, si, tol.dryBulbK(), current.humidityKind(), current.humiditySi(),
                     current.humidityTolSi());
-        } else if (waiting.containsKey(pairOf)) {
-            double other = waiting.get(pairOf);
+        } else if (draft.has(pairOf)) {
+            double other = draft.half(pairOf).valueSi();
+            HumidityKind otherKind = kind != null ? null : kind(draft.half(pairOf).choice());
             next = kind != null
                     ? new AirReading(where, other, tol.dryBulbK(), kind, si, tolerance(kind, tol))
-                    : new AirReading(where, si, tol.dryBulbK(), waitingKind.get(pairOf), other,
-                    tolerance(waitingKind.get(pairOf), tol));
+                    : new AirReading(where, si, tol.dryBulbK(), otherKind, other, tolerance(otherKind, tol));
         } else {
-            waiting.put(f, si);
-            if (kind != null) {
-                waitingKind.put(f, kind);
-            }
+            keep(draft.with(f, new HouseDraft.Half(si, kind != null ? kind.key() : "")));
             say(saved(f, si) + " not saved yet: the " + where + " reading is saved once its "
                     + (kind != null ? "dry bulb" : "humidity") + " is in too");
             return;
@@ -352,11 +359,8 @@ public final class HouseEntryViewModel {
             default -> now.withSpace(next);
         };
         RecordRules.houseReadings(changed, source.site());
-        waiting.remove(f);
-        waiting.remove(pairOf);
-        waitingKind.remove(f);
-        waitingKind.remove(pairOf);
         storeReadings(changed, saved(f, si) + " saved with the visit");
+        keep(draft.without(k -> k == f || k == pairOf));
     }
 
     private static HouseField pair(HouseField f) {
@@ -370,6 +374,33 @@ public final class HouseEntryViewModel {
             case DEW_POINT -> t.dewPointK();
             case WET_BULB -> t.wetBulbK();
         };
+    }
+
+    /** Keeps the waiting numbers on the disk first, then here: the file is the one place of truth. */
+    private void keep(HouseDraft next) {
+        if (next.equals(draft)) {
+            return;
+        }
+        drafts.save(next);
+        draft = next;
+    }
+
+    /**
+     * The open visit's kept draft, less any half whose record has since been stored (a kill between
+     * storing a pair and clearing its halves).
+     */
+    private HouseDraft load() {
+        String visit = source.visitId();
+        if (visit == null) {
+            return HouseDraft.empty(null);
+        }
+        HouseDraft kept = drafts.find(visit);
+        if (kept.isEmpty()) {
+            return kept;
+        }
+        boolean hasFacts = source.facts().isPresent();
+        HouseVisitReadings stored = source.readings();
+        return kept.without(k -> k.group() == HouseField.Group.HOUSE ? hasFacts : air(stored, k.air()) != null);
     }
 
     private void store(HouseFacts facts, String said) {
@@ -395,35 +426,35 @@ public final class HouseEntryViewModel {
 
     /** "Floor area 2,200 ft²" for the message after a store. */
     private String saved(HouseField f, double si) {
-        return f.title() + " " + shown(f, si);
+        return f.title() + " " + shown(f, si, choice(f));
     }
 
-    private String shown(HouseField f, double si) {
+    /** @param choice the box's choice the number is in (its humidity kind, CFM50 or ACH50) */
+    private String shown(HouseField f, double si, String choice) {
         UnitSystem u = source.units();
         Quantity q = quantity(f);
         if (f.whole()) {
             return String.valueOf((int) Math.rint(si));
         }
+        if (f.humidity()) {
+            HumidityKind k = kind(choice);
+            return DisplayNumber.withUnit(k.quantity(), u, si) + " " + k.label();
+        }
+        if (f == HouseField.BLOWER_DOOR) {
+            return choice.equals("ach50") ? DisplayNumber.number(si, 1) + " ACH50"
+                    : DisplayNumber.withUnit(Quantity.AIRFLOW, u, si) + " at 50 Pa";
+        }
         if (q == Quantity.DIMENSIONLESS) {
             return DisplayNumber.number(si, 1) + " " + unit(f);
         }
-        String v = DisplayNumber.withUnit(q, u, si);
-        if (f == HouseField.BLOWER_DOOR) {
-            return v + " at 50 Pa";
-        }
-        if (f.humidity()) {
-            return v + " " + kind(choice(f)).label();
-        }
-        return v;
+        return DisplayNumber.withUnit(q, u, si);
     }
 
     /** What a box shows: the stored value, a number waiting for its pair, or "—". */
     public String valueText(HouseField f) {
-        if (waiting.containsKey(f)) {
-            HumidityKind k = waitingKind.get(f);
-            String v = k == null ? shown(f, waiting.get(f))
-                    : DisplayNumber.withUnit(k.quantity(), source.units(), waiting.get(f)) + " " + k.label();
-            return v + " (not saved yet)";
+        if (draft.has(f)) {
+            HouseDraft.Half h = draft.half(f);
+            return shown(f, h.valueSi(), h.choice()) + " (not saved yet)";
         }
         UnitSystem u = source.units();
         if (f.group() == HouseField.Group.READINGS) {

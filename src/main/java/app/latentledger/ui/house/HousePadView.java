@@ -1,5 +1,6 @@
 package app.latentledger.ui.house;
 
+import app.latentledger.ui.entry.HardwareKeys;
 import app.latentledger.ui.entry.KeyGrid;
 import app.latentledger.ui.entry.KeypadViewModel;
 import app.latentledger.ui.look.Ui;
@@ -65,6 +66,8 @@ final class HousePadView extends VBox {
         vm.revisionProperty().addListener((o, a, b) -> fill());
         fill();
         getChildren().addAll(title, shown, choices, keys(pad), message);
+        // a USB or Bluetooth keyboard types here as on the Readings pad: one mapping for both
+        HardwareKeys.attach(this, pad, vm::enterAndAdvance);
     }
 
     /** The box's name, unit and choices, as the view model has them now. */

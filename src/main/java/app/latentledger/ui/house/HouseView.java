@@ -1,6 +1,5 @@
 package app.latentledger.ui.house;
 
-import app.latentledger.chart.draw.Theme;
 import app.latentledger.chart.house.MoistureBudgetChart;
 import app.latentledger.core.house.HouseBudget;
 import app.latentledger.core.house.ScenarioResult;
@@ -18,6 +17,7 @@ import javafx.scene.layout.ColumnConstraints;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import javafx.scene.text.TextAlignment;
 
@@ -34,15 +34,15 @@ import java.util.Map;
  */
 public final class HouseView extends HBox implements Reflowing {
     private static final double CHART_W_WIDE = 620;
-    private static final double CHART_H_WIDE = 340;
+    private static final double CHART_H_WIDE = 300;
     private static final double CHART_W_UPRIGHT = 740;
-    private static final double CHART_H_UPRIGHT = 300;
+    private static final double CHART_H_UPRIGHT = 280;
 
     private final HouseViewModel model; // strong reference: bindings hold their partner weakly
     private final Canvas canvas = new Canvas(CHART_W_WIDE, CHART_H_WIDE);
     private final Label refusal = Ui.wrapped("", "muted");
     private final VBox rows = new VBox(8);
-    private final Label cautions = Ui.wrapped("", "safety");
+    private final Label cautions = Ui.wrapped("", "house-cautions");
     private final ToggleGroup fixGroup = new ToggleGroup();
     private final Map<HouseField, ToggleButton> boxes = new EnumMap<>(HouseField.class);
     private final VBox answer;
@@ -59,10 +59,23 @@ public final class HouseView extends HBox implements Reflowing {
         title.setWrapText(true);
         refusal.setId("house-refusal");
         cautions.setId("house-cautions");
-        // the fixes suggest attic, duct and ventilation work: their cautions sit right under them
-        ScrollPane fixes = Ui.scroll(new VBox(12, rows, cautions));
+        // the fixes suggest attic, duct and ventilation work: their cautions stay in sight beside them,
+        // in a column of their own, however far the list of fixes is scrolled
+        ScrollPane fixes = Ui.scroll(rows);
+        fixes.setId("house-fixes");
         fixes.setMinHeight(120);
-        answer = new VBox(12, title, refusal, canvas, Ui.label("Fixes compared — tap one", "subheading"), fixes);
+        Label before = Ui.wrapped("Before any fix", "house-cautions-title");
+        ScrollPane safety = Ui.scroll(new VBox(6, before, cautions));
+        safety.setId("house-cautions-box");
+        safety.getStyleClass().add("house-cautions-box");
+        safety.setMinWidth(200);
+        HBox.setHgrow(fixes, Priority.ALWAYS);
+        HBox fixesAndCautions = new HBox(12, fixes, safety);
+        VBox.setVgrow(fixesAndCautions, Priority.ALWAYS);
+        answer = new VBox(12, title, refusal, canvas, Ui.label("Fixes compared — tap one", "subheading"),
+                fixesAndCautions);
+        safety.prefWidthProperty().bind(answer.widthProperty().multiply(0.38));
+        safety.maxWidthProperty().bind(answer.widthProperty().multiply(0.38));
         HBox.setHgrow(answer, Priority.ALWAYS);
 
         HouseEntryViewModel e = model.entry();
@@ -111,6 +124,7 @@ public final class HouseView extends HBox implements Reflowing {
         label();
 
         model.budgetProperty().addListener((o, a, b) -> show());
+        model.chartThemeProperty().addListener((o, a, b) -> paint(painted));
         show();
         setPortrait(false);
     }
@@ -128,13 +142,13 @@ public final class HouseView extends HBox implements Reflowing {
         refusal.setVisible(!refusal.getText().isEmpty());
         label();
         rows.getChildren().clear();
-        cautions.setText(String.join("\n", model.cautions()));
+        cautions.setText(String.join("\n\n", model.cautions()));
         if (b == null) {
             paint(null);
             return;
         }
         for (HouseViewModel.FixRow r : model.fixRows()) {
-            ToggleButton t = new ToggleButton(r.change() + "\nwater gained " + r.balance() + " · settles at " + r.dewPoint()
+            ToggleButton t = new ToggleButton(r.change() + "\n" + r.balance() + " · " + r.dewPoint()
                     + " · SHR " + r.shr());
             t.setId("fix-" + r.key());
             t.setToggleGroup(fixGroup);
@@ -166,7 +180,7 @@ public final class HouseView extends HBox implements Reflowing {
         g.clearRect(0, 0, canvas.getWidth(), canvas.getHeight());
         if (s != null) {
             MoistureBudgetChart.of(s, model.units()).paint(new CanvasPainter(g, FxTextMeasurer.system()),
-                    Theme.LIGHT, canvas.getWidth(), canvas.getHeight());
+                    model.chartThemeProperty().get(), canvas.getWidth(), canvas.getHeight());
         }
     }
 
@@ -179,6 +193,9 @@ public final class HouseView extends HBox implements Reflowing {
             // the answer above; the boxes beside the pad below it
             HBox below = new HBox(12, boxScroll, pad);
             HBox.setHgrow(boxScroll, Priority.ALWAYS);
+            // the pad sets the height below; the boxes scroll in it, leaving the fixes and cautions room
+            boxScroll.setPrefViewportHeight(200);
+            below.setMaxHeight(Region.USE_PREF_SIZE);
             pad.setMinWidth(410);
             pad.setMaxWidth(410);
             VBox.setVgrow(answer, Priority.ALWAYS);
@@ -189,6 +206,7 @@ public final class HouseView extends HBox implements Reflowing {
             // the boxes above the pad on the left; the answer takes the rest of the width
             pad.setMinWidth(Double.NEGATIVE_INFINITY);
             pad.setMaxWidth(Double.MAX_VALUE);
+            boxScroll.setPrefViewportHeight(0); // the default: as tall as the boxes want
             VBox left = new VBox(12, boxScroll, pad);
             left.setMinWidth(440);
             left.setPrefWidth(460);

@@ -1,16 +1,20 @@
 package app.latentledger.ui.house;
 
+import app.latentledger.chart.draw.Theme;
 import app.latentledger.core.house.HouseBudget;
 import app.latentledger.core.house.HouseFacts;
 import app.latentledger.core.house.HouseVisitReadings;
 import app.latentledger.core.house.MoistureBudget;
 import app.latentledger.core.house.ScenarioResult;
 import app.latentledger.core.house.WhatIfRequest;
+import app.latentledger.core.text.BalanceWords;
 import app.latentledger.core.units.DisplayNumber;
 import app.latentledger.core.units.Quantity;
 import app.latentledger.report.HouseEvidence;
 import app.latentledger.report.VisitEvidence;
 import app.latentledger.ui.session.AppSession;
+import app.latentledger.ui.chart.CoilCharts;
+import javafx.beans.binding.Bindings;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
@@ -26,13 +30,18 @@ import java.util.List;
  * toolkit: observable properties only.
  */
 public final class HouseViewModel {
-    /** One row of the fix planner table, shown as typed. */
+    /**
+     * One row of the fix planner table, shown as typed; {@code balance} is the water balance in words
+     * ({@link BalanceWords}), the same sentence as the report and the {@code house} command.
+     */
     public record FixRow(String key, String change, String balance, String dewPoint, String shr) {
     }
 
     private final AppSession session;
     private final ReadOnlyObjectWrapper<HouseBudget> budget = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyStringWrapper refusal = new ReadOnlyStringWrapper("");
+    /** The chart's palette, following the app's theme (outdoor and dark included) as the other charts do. */
+    private final ReadOnlyObjectWrapper<Theme> chartTheme = new ReadOnlyObjectWrapper<>();
     private final HouseEntryViewModel entry;
     /** The open visit's coil checks and analysed logs, read once per visit, units or screen showing. */
     private VisitEvidence evidence;
@@ -43,6 +52,11 @@ public final class HouseViewModel {
             @Override
             public app.latentledger.core.units.UnitSystem units() {
                 return session.units();
+            }
+
+            @Override
+            public String visitId() {
+                return session.visit() == null ? null : session.visit().id();
             }
 
             @Override
@@ -65,7 +79,7 @@ public final class HouseViewModel {
             public HouseVisitReadings readings() {
                 return HouseViewModel.this.readings();
             }
-        }, this::keep, this::keep);
+        }, this::keep, this::keep, new FileHouseDraftStore(session.dataFolder()));
         session.visitProperty().addListener((o, a, b) -> {
             entry.reset();
             recompute();
@@ -76,6 +90,8 @@ public final class HouseViewModel {
                 recompute();
             }
         });
+        chartTheme.bind(Bindings.createObjectBinding(() -> CoilCharts.theme(session.themeProperty().get()),
+                session.themeProperty()));
         session.unitsProperty().addListener((o, a, b) -> {
             recompute();
             entry.refresh();
@@ -90,6 +106,11 @@ public final class HouseViewModel {
 
     public ReadOnlyObjectProperty<HouseBudget> budgetProperty() {
         return budget.getReadOnlyProperty();
+    }
+
+    /** The palette the budget chart is painted in. */
+    public ReadOnlyObjectProperty<Theme> chartThemeProperty() {
+        return chartTheme.getReadOnlyProperty();
     }
 
     /** Why there is no budget yet ("" with one). */
@@ -143,9 +164,10 @@ public final class HouseViewModel {
     private FixRow row(ScenarioResult s) {
         var u = session.units();
         return new FixRow(s.scenario().key(), s.scenario().change(),
-                DisplayNumber.withSpread(Quantity.WATER_RATE_DAILY, u, s.balance().valueSi(), s.balance().expandedSi()),
-                s.hasEquilibrium() ? DisplayNumber.withSpread(Quantity.TEMPERATURE, u, s.equilibriumDewPointC().valueSi(),
-                        s.equilibriumDewPointC().expandedSi()) : "none (keeps rising)",
+                BalanceWords.sentence(u, s.balance().valueSi(), s.balance().expandedSi()),
+                s.hasEquilibrium() ? "indoor dew point settles at " + DisplayNumber.withSpread(Quantity.TEMPERATURE, u,
+                        s.equilibriumDewPointC().valueSi(), s.equilibriumDewPointC().expandedSi())
+                        : "indoor humidity keeps rising (no level where it settles)",
                 DisplayNumber.number(s.shr().valueSi(), 3));
     }
 

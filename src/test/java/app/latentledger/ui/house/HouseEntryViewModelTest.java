@@ -125,6 +125,56 @@ class HouseEntryViewModelTest {
         }
     }
 
+    /**
+     * Half a pair typed, the app killed (the session closed without a word to the pad) and started
+     * again: the half is back in its box, still "not saved yet", with the choice it was typed under;
+     * typing the other half stores the pair through the house repository and the half is gone.
+     * 91 °F = 32.777… °C and 1.5 ACH50 are the typed numbers (°C = (°F − 32)/1.8, definition).
+     */
+    @Test
+    void halfAPairSurvivesARestartAndFinishingItSavesThePair() {
+        try (AppSession s = open(DemoScenario.VISIT_COMMISSIONING, UnitSystem.IP)) {
+            HouseEntryViewModel e = new HouseViewModel(s).entry();
+            type(e, HouseField.OUTDOOR_DB, "91");
+            e.selectedProperty().set(HouseField.BLOWER_DOOR);
+            e.choose("ach50");
+            type(e, HouseField.BLOWER_DOOR, "1.5");
+            assertTrue(e.valueText(HouseField.OUTDOOR_DB).endsWith("(not saved yet)"));
+            assertNull(s.ledger().houses().readings(DemoScenario.VISIT_COMMISSIONING).outdoor());
+            assertTrue(s.ledger().houses().facts(DemoScenario.SITE_QUAY).isEmpty());
+        }
+        try (AppSession s = open(DemoScenario.VISIT_COMMISSIONING, UnitSystem.IP)) {
+            HouseEntryViewModel e = new HouseViewModel(s).entry();
+            assertEquals("91.0 °F (not saved yet)", e.valueText(HouseField.OUTDOOR_DB), "back after the restart");
+            assertEquals("1.5 ACH50 (not saved yet)", e.valueText(HouseField.BLOWER_DOOR),
+                    "with the choice it was typed under, not the box's default CFM50");
+            assertEquals("—", e.valueText(HouseField.OUTDOOR_HUMIDITY));
+            assertNull(s.ledger().houses().readings(DemoScenario.VISIT_COMMISSIONING).outdoor(), "still not saved");
+            e.selectedProperty().set(HouseField.OUTDOOR_HUMIDITY);
+            e.choose("rh");
+            type(e, HouseField.OUTDOOR_HUMIDITY, "62");
+            assertFalse(e.refusedProperty().get(), e.messageProperty().get());
+            var o = s.ledger().houses().readings(DemoScenario.VISIT_COMMISSIONING).outdoor();
+            assertNotNull(o, "the pair is stored through the house repository");
+            assertEquals((91 - 32) / 1.8, o.dryBulbC(), 1e-12);
+            assertEquals(HumidityKind.RELATIVE_HUMIDITY, o.humidityKind());
+            assertEquals(62, o.humiditySi(), 1e-12);
+            assertFalse(e.valueText(HouseField.OUTDOOR_DB).contains("not saved"), e.valueText(HouseField.OUTDOOR_DB));
+            // the house's facts: bedrooms finish the pair the blower door was waiting in, kept as ACH50
+            type(e, HouseField.FLOOR_AREA, "1850");
+            type(e, HouseField.BEDROOMS, "3");
+            HouseFacts f = s.ledger().houses().facts(DemoScenario.SITE_QUAY).orElseThrow();
+            assertEquals(1.5, f.ach50(), 1e-12);
+            assertTrue(Double.isNaN(f.cfm50M3PerS()));
+        }
+        try (AppSession s = open(DemoScenario.VISIT_COMMISSIONING, UnitSystem.IP)) {
+            HouseEntryViewModel e = new HouseViewModel(s).entry();
+            for (HouseField f : HouseField.values()) {
+                assertFalse(e.valueText(f).contains("not saved"), f + ": nothing waits once the pairs are stored");
+            }
+        }
+    }
+
     private AppSession open(String visit, UnitSystem units) {
         AppSession s = TestSessions.open(dir);
         s.saveSettings(s.settings().withChoice(app.latentledger.core.settings.SettingsCatalogue.UNITS, units.key()));
