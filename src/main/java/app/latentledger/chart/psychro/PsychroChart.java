@@ -189,8 +189,8 @@ public final class PsychroChart {
 
     private void reserveMarkers(LabelPlacer placer, ChartViewport vp) {
         double r = MARKER_PX * 0.75;
-        // every mark, the saturation-curve ones too: a state's label must not hide the coil triangle
-        for (ChartPoint pt : tappableMarks()) {
+        List<ChartPoint> states = data.allPoints();
+        for (ChartPoint pt : states) {
             placer.reserve(vp.x(pt.dryBulbC()) - r, vp.y(pt.humidityRatio()) - r, 2 * r, 2 * r);
         }
     }
