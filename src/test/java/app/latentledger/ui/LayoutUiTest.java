@@ -117,9 +117,13 @@ class LayoutUiTest {
         var verdict = scene(robot, "#verdict");
         var chart = scene(robot, "#" + app.latentledger.ui.results.ResultsView.CHART_SLOT_ID);
         var screen = scene(robot, "#screen-results");
-        assertTrue(margin.getMinY() >= verdict.getMaxY() && margin.getMaxY() <= chart.getMinY() + 1,
-                "margin right under the verdict, above the chart: " + margin + " " + chart);
-        assertTrue(water.getMaxY() <= chart.getMinY() + 1, "water removed above the chart");
+        // lying down the two figures lead the left column, under the verdict; the chart stands beside them
+        assertTrue(margin.getMinY() >= verdict.getMaxY() && margin.getMinY() <= verdict.getMaxY() + 80,
+                "margin right under the verdict: " + margin + " " + verdict);
+        assertTrue(water.getMinY() >= margin.getMaxY() && water.getMaxY() <= screen.getMaxY(),
+                "water removed next, on screen: " + water);
+        assertTrue(chart.getMinY() >= verdict.getMaxY() && chart.getMinX() >= margin.getMaxX(),
+                "chart under the verdict, beside the figures: " + chart);
         assertTrue(chart.getWidth() >= screen.getWidth() / 2, "chart " + chart.getWidth() + " of " + screen.getWidth());
     }
 

@@ -122,8 +122,11 @@ final class OverlayPainter {
                 : prefix + pt.label().toLowerCase(java.util.Locale.ROOT);
         double half = labels.boxWidth(text, ts) / 2;
         double off = PsychroChart.MARKER_PX / 2 + 6;
+        // the last places are a line further out: two states and the marks on the saturation curve
+        // can crowd a small plot, and a state without its name is worse than a name a little away
         labels.firstFree(text, ts, x + off + half, y - 2, x + off + half, y - 20, x - off - half, y - 2,
-                x, y - off - 10, x, y + off + 10, x - off - half, y + 20);
+                x, y - off - 10, x, y + off + 10, x - off - half, y + 20, x + off + half, y + 20,
+                x, y + off + 30, x, y - off - 30, x - off - half, y - 20);
         p.endGroup();
     }
 }

@@ -65,13 +65,44 @@ public final class PsychroChart {
         return layout.viewport(limits, limits);
     }
 
-    /** The plotted state nearest to (x, y) within {@link #TAP_RADIUS_PX}, if any. */
+    /**
+     * Every mark a tap can pick: the plotted states, then each process's entering dew point
+     * (diamond), apparatus dew point (ring) and coil temperature (triangle). The last three sit on
+     * the saturation curve, so each is the saturated state at that temperature.
+     */
+    public List<ChartPoint> tappableMarks() {
+        List<ChartPoint> all = new java.util.ArrayList<>(data.allPoints());
+        int n = data.overlays().size();
+        for (int i = 0; i < n; i++) {
+            CoilProcessOverlay o = data.overlays().get(i);
+            String prefix = n == 2 ? OverlayStyle.of(Theme.LIGHT, o, i, n).legendName() + " " : "";
+            saturated(all, prefix, "entering dew point", o.enteringDewPointC());
+            saturated(all, prefix, "apparatus dew point", o.adpC());
+            saturated(all, prefix, "coil temperature", o.coilTempC());
+        }
+        return all;
+    }
+
+    private void saturated(List<ChartPoint> into, String prefix, String what, double tC) {
+        if (!Double.isNaN(tC)) {
+            String label = prefix.isEmpty() ? Character.toUpperCase(what.charAt(0)) + what.substring(1) : prefix + what;
+            into.add(new ChartPoint(label, tC, lines.saturationHumidityRatio(tC)));
+        }
+    }
+
+    /** The chart's key (what {@link #paint} draws below the plot), for a screen that shows it beside the canvas. */
+    public app.latentledger.chart.draw.LegendFlow key(Theme theme) {
+        return Legend.of(theme, data);
+    }
+
+    /** The mark nearest to (x, y) within {@link #TAP_RADIUS_PX}, if any (see {@link #tappableMarks}). */
     public Optional<ChartPoint> pointNear(ChartViewport vp, double x, double y) {
         ChartPoint best = null;
         double bestD = TAP_RADIUS_PX;
-        for (ChartPoint p : data.allPoints()) {
+        for (ChartPoint p : tappableMarks()) {
             double d = Math.hypot(vp.x(p.dryBulbC()) - x, vp.y(p.humidityRatio()) - y);
-            if (d <= bestD) {
+            // on a tie the earlier mark wins: a measured state over a mark drawn on top of it
+            if (d < bestD || best == null && d <= bestD) {
                 bestD = d;
                 best = p;
             }
@@ -91,6 +122,17 @@ public final class PsychroChart {
 
     /** The layout of this chart in a {@code width} × {@code height} area, with room for its key below the plot. */
     public PsychroChartLayout layout(double width, double height, Theme theme) {
+        return layout(width, height, theme, true);
+    }
+
+    /**
+     * The layout in a {@code width} × {@code height} area; {@code withKey} false leaves the key out
+     * (a screen that shows it outside the canvas gives the plot that height).
+     */
+    public PsychroChartLayout layout(double width, double height, Theme theme, boolean withKey) {
+        if (!withKey) {
+            return PsychroChartLayout.forSize(width, height, theme, 0);
+        }
         double keyHeight = Legend.of(theme, data).height(PsychroChartLayout.legendWidth(width, theme));
         // the key never takes more than 40 % of the chart's height; a tiny chart keeps its plot instead
         return PsychroChartLayout.forSize(width, height, theme, keyHeight <= height * 0.4 ? keyHeight : 0);
@@ -147,7 +189,8 @@ public final class PsychroChart {
 
     private void reserveMarkers(LabelPlacer placer, ChartViewport vp) {
         double r = MARKER_PX * 0.75;
-        for (ChartPoint pt : data.allPoints()) {
+        List<ChartPoint> states = data.allPoints();
+        for (ChartPoint pt : states) {
             placer.reserve(vp.x(pt.dryBulbC()) - r, vp.y(pt.humidityRatio()) - r, 2 * r, 2 * r);
         }
     }

@@ -99,8 +99,19 @@ public final class TimelineChart {
         double top = layout.temperature().top();
         p.text(vp.left(), top - theme.baseText() * 1.75, data.title(),
                 TextStyle.of(theme.baseText() + 4, theme.text()).emphasised());
-        p.text(vp.left(), top - theme.baseText() * 0.5, windowText(vp), TextStyle.of(theme.smallText(),
-                theme.mutedText()));
+        TextStyle sub = TextStyle.of(theme.smallText(), theme.mutedText());
+        // the longest form that fits the canvas: a narrow (upright) chart drops the note on bands first
+        String full = windowText(vp);
+        String shown = full;
+        double room = layout.width() - vp.left() - 4;
+        for (String candidate : List.of(full, full.replace(" · shaded bands: low to high readings", ""),
+                full.replace(" · shaded bands: low to high readings", "").replaceFirst("^.* · ", ""))) {
+            shown = candidate;
+            if (p.measurer().width(candidate, sub.size(), false) <= room) {
+                break;
+            }
+        }
+        p.text(vp.left(), top - theme.baseText() * 0.5, shown, sub);
         p.endGroup();
     }
 
@@ -356,7 +367,36 @@ public final class TimelineChart {
             }
         }
         double maxShown = maxKg > 0 ? q.toDisplay(u, maxKg) * 1.1 : 1;
-        double header = theme.baseText() * 1.8;
+        TextStyle h = TextStyle.of(theme.smallText() + 1, theme.text()).emphasised().align(TextStyle.HAlign.LEFT,
+                TextStyle.VAlign.MIDDLE);
+        TextStyle lt = TextStyle.of(theme.smallText(), theme.text()).align(TextStyle.HAlign.LEFT, TextStyle.VAlign.MIDDLE);
+        // the longest wording whose title and key fit one line over the plot; the swatches (filled,
+        // hollow) and the bars' side of the zero line still tell removed from returned when it is short
+        String sym = q.symbol(u);
+        String[][] wordings = {
+            {"Moisture per cycle, " + sym, "removed (up, filled)", "returned (down, hollow)"},
+            {"Moisture per cycle, " + sym, "removed (up)", "returned (down)"},
+            {"Moisture, " + sym, "removed (up)", "returned (down)"},
+            {"Moisture, " + sym, "removed", "returned"}};
+        double right = vp.left() + vp.width() - 4;
+        String[] chosen = wordings[wordings.length - 1];
+        for (String[] w : wordings) {
+            if (keyFlow(p, h, lt, w, vp.left() + 10, right, false)[0] == 0) {
+                chosen = w;
+                break;
+            }
+        }
+        String title = chosen[0];
+        String[] keys = {chosen[1], chosen[2]};
+        double lineH = theme.baseText() * 1.4;
+        // still too wide (a very narrow chart): the key wraps below the title if the band has room for it
+        boolean wrap = band.height() - theme.baseText() * 1.8 - lineH >= band.height() * 0.6;
+        double[] flow = keyFlow(p, h, lt, chosen, vp.left() + 10, wrap ? right : Double.MAX_VALUE, true);
+        int line = (int) flow[0];
+        double widest = flow[1];
+        double[] keyX = {flow[2], flow[4]};
+        int[] keyLine = {(int) flow[3], (int) flow[5]};
+        double header = theme.baseText() * 1.8 + line * lineH;
         double zeroY = band.top() + header + (band.height() - header) * 0.62;
         double upPx = zeroY - band.top() - header;
         double downPx = band.bottom() - zeroY;
@@ -394,22 +434,53 @@ public final class TimelineChart {
         }
         p.restore();
         p.line(vp.left(), zeroY, vp.left() + vp.width(), zeroY, Stroke.solid(theme.frame(), 1.2));
-        TextStyle h = TextStyle.of(theme.smallText() + 1, theme.text()).emphasised().align(TextStyle.HAlign.LEFT,
-                TextStyle.VAlign.MIDDLE);
         double y = band.top() + theme.baseText() * 0.9;
-        String title = "Moisture per cycle, " + q.symbol(u);
-        double w = p.measurer().width(title, h.size(), true);
-        TextStyle lt = TextStyle.of(theme.smallText(), theme.text()).align(TextStyle.HAlign.LEFT, TextStyle.VAlign.MIDDLE);
-        double x = vp.left() + 10;
-        p.rect(x - 6, y - theme.baseText() * 0.7, w + 420, theme.baseText() * 1.4, theme.legendBackground(), null);
-        p.text(x, y, title, h);
-        x += w + 18;
-        p.rect(x, y - 7, 14, 14, theme.removed(), null);
-        p.text(x + 20, y, "removed (up, filled)", lt);
-        x += 20 + p.measurer().width("removed (up, filled)", lt.size(), false) + 18;
-        p.rect(x, y - 7, 14, 14, theme.returned().withAlpha(0.35), Stroke.solid(theme.returned(), 1.4));
-        p.text(x + 20, y, "returned (down, hollow)", lt);
+        double x0 = vp.left() + 10;
+        p.rect(x0 - 6, y - theme.baseText() * 0.7, widest - x0 + 12, theme.baseText() * 1.4 + line * lineH,
+                theme.legendBackground(), null);
+        p.text(x0, y, title, h);
+        for (int k = 0; k < keys.length; k++) {
+            double ky = y + keyLine[k] * lineH;
+            if (k == 0) {
+                p.rect(keyX[k], ky - 7, 14, 14, theme.removed(), null);
+            } else {
+                p.rect(keyX[k], ky - 7, 14, 14, theme.returned().withAlpha(0.35), Stroke.solid(theme.returned(), 1.4));
+            }
+            p.text(keyX[k] + 20, ky, keys[k], lt);
+        }
         p.endGroup();
+    }
+
+    /**
+     * Lays out a panel header: the title, then two key entries (a 14 px swatch, 6 px, the words),
+     * wrapping to a new line at {@code right}. Returns {lines − 1, right end of the widest line,
+     * x and line of entry 1, x and line of entry 2}; with {@code wrap} false only the first value
+     * is meaningful (0 when everything fits one line).
+     */
+    private static double[] keyFlow(Painter p, TextStyle title, TextStyle key, String[] words, double left,
+                                    double right, boolean wrap) {
+        double x = left + p.measurer().width(words[0], title.size(), true) + 18;
+        int line = 0;
+        double widest = x;
+        double[] out = new double[6];
+        for (int k = 1; k < 3; k++) {
+            double w = 20 + p.measurer().width(words[k], key.size(), false);
+            if (x + w > right) {
+                if (!wrap) {
+                    out[0] = 1;
+                    return out;
+                }
+                line++;
+                x = left;
+            }
+            out[2 * k] = x;
+            out[2 * k + 1] = line;
+            x += w + 18;
+            widest = Math.max(widest, x - 18);
+        }
+        out[0] = line;
+        out[1] = widest;
+        return out;
     }
 
     private void paintTimeAxis(Painter p, Theme theme, TimelineLayout layout, TimeViewport vp,
@@ -421,7 +492,13 @@ public final class TimelineChart {
         for (TimeTicks.Tick t : ticks) {
             double x = vp.x(t.timeS());
             p.line(x, y, x, y + 6, Stroke.solid(theme.frame(), 1.2));
-            p.text(x, y + 9, t.label(), t.major() ? ts.emphasised() : ts);
+            TextStyle style = t.major() ? ts.emphasised() : ts;
+            // a label at the right end is drawn flush with the canvas edge rather than cut by it
+            if (x + p.measurer().width(t.label(), style.size(), style.bold()) / 2 > layout.width() - 2) {
+                p.text(layout.width() - 2, y + 9, t.label(), style.align(TextStyle.HAlign.RIGHT, TextStyle.VAlign.TOP));
+            } else {
+                p.text(x, y + 9, t.label(), style);
+            }
         }
         p.endGroup();
     }

@@ -12,6 +12,11 @@ import javafx.scene.layout.StackPane;
 public final class ChartSlots {
     /** Tall enough for the chart's axes and the readout beside it at 18 px text. */
     static final double PSYCHRO_HEIGHT_PX = 470;
+    /**
+     * Asked-for height where the screen scrolls (upright, Compare): a plot at least 360 px tall
+     * above the key band at full width; lying down the Results screen gives it what is left.
+     */
+    static final double PSYCHRO_PREF_HEIGHT_PX = 640;
     static final double TIMELINE_HEIGHT_PX = 430;
 
     private ChartSlots() {
@@ -23,7 +28,7 @@ public final class ChartSlots {
         view.setId("psychro-chart");
         slot.getStyleClass().remove("slot-placeholder");
         slot.setMinHeight(PSYCHRO_HEIGHT_PX);
-        slot.setPrefHeight(PSYCHRO_HEIGHT_PX);
+        slot.setPrefHeight(PSYCHRO_PREF_HEIGHT_PX);
         slot.getChildren().setAll(view);
         return view;
     }

@@ -14,6 +14,7 @@ abstract class ChartView extends BorderPane {
     private final ChartCanvas surface;
     private final ChartSidePanel side;
     private final ObjectProperty<Theme> theme;
+    private ChartKey key;
 
     ChartView(ChartCanvas surface, String readoutHeading, ReadOnlyStringProperty readout, ObjectProperty<Theme> theme) {
         this.surface = surface;
@@ -29,6 +30,13 @@ abstract class ChartView extends BorderPane {
         side.addButton(id, text, action);
     }
 
+    /** Shows the chart's key in a band under the canvas and the strip, outside the plot. */
+    final void showKey(ChartKey key) {
+        this.key = key;
+        setBottom(key);
+        applyTheme();
+    }
+
     /** Call once the subclass is wired: paints in the current theme. */
     final void applyTheme() {
         side.applyTheme(theme.get());
@@ -37,6 +45,10 @@ abstract class ChartView extends BorderPane {
             surface.resized(surface.canvas().getWidth(), surface.canvas().getHeight());
         }
         surface.repaint();
+        if (key != null) {
+            key.requestLayout();
+            key.repaint();
+        }
     }
 
     final ChartCanvas surface() {
@@ -46,5 +58,13 @@ abstract class ChartView extends BorderPane {
     /** Repaints the canvas (a new window, selection or chart). */
     final void repaint() {
         surface.repaint();
+    }
+
+    /** The key changed (a new chart): new rows, so perhaps a new height. */
+    final void keyChanged() {
+        if (key != null) {
+            key.requestLayout();
+            key.repaint();
+        }
     }
 }

@@ -5,7 +5,8 @@ import app.latentledger.chart.psychro.ChartPoint;
 import app.latentledger.chart.psychro.ChartViewport;
 
 /**
- * The psychrometric chart on screen: the canvas, zoom buttons and the tapped state's readout.
+ * The psychrometric chart on screen: the canvas, zoom buttons, the tapped state's readout and,
+ * under them, the chart's key.
  * Binds and forwards gestures only; the view model holds the state. The view keeps a strong
  * reference to its view model because bindings alone would let it be collected.
  */
@@ -25,8 +26,14 @@ public final class PsychroChartView extends ChartView {
         addButton("whole-chart", "Whole chart", viewModel::reset);
         viewModel.viewportProperty().addListener((o, a, b) -> repaint());
         viewModel.selectedProperty().addListener((o, a, b) -> repaint());
-        viewModel.chartProperty().addListener((o, a, b) -> repaint());
-        applyTheme();
+        viewModel.chartProperty().addListener((o, a, b) -> {
+            repaint();
+            keyChanged();
+        });
+        // the key goes under the chart, across its strip: the plot keeps the whole canvas height
+        viewModel.keyOutsideCanvas();
+        showKey(new ChartKey(() -> viewModel.chart().key(viewModel.themeProperty().get()),
+                () -> viewModel.themeProperty().get()));
     }
 
     public PsychroChartViewModel viewModel() {

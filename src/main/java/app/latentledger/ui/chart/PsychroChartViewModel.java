@@ -33,6 +33,8 @@ public final class PsychroChartViewModel {
 
     private final ReadOnlyStringWrapper readout = new ReadOnlyStringWrapper(HINT);
     private PsychroChartLayout layout;
+    /** False when the screen shows the key beside the canvas: the plot then takes the key's band. */
+    private boolean keyInCanvas = true;
 
     public PsychroChartViewModel(PsychroChartData data) {
         this.chart = new ReadOnlyObjectWrapper<>(new PsychroChart(data));
@@ -57,7 +59,7 @@ public final class PsychroChartViewModel {
         chart.set(next);
         if (layout != null) {
             // the key may have more or fewer rows: the plot area follows it
-            layout = next.layout(layout.width(), layout.height(), theme.get());
+            layout = next.layout(layout.width(), layout.height(), theme.get(), keyInCanvas);
             ChartViewport vp = viewport.get();
             viewport.set(moved && sameAxes && vp != null
                     ? vp.withPlot(layout.plotLeft(), layout.plotTop(), layout.plotWidth(), layout.plotHeight())
@@ -97,10 +99,24 @@ public final class PsychroChartViewModel {
 
     /** A new size: keep the window, move it into the new plot area. */
     public void resize(double width, double height) {
-        layout = chart.get().layout(width, height, theme.get());
+        layout = chart.get().layout(width, height, theme.get(), keyInCanvas);
         ChartViewport vp = viewport.get();
         viewport.set(vp == null ? chart.get().initialViewport(layout)
                 : vp.withPlot(layout.plotLeft(), layout.plotTop(), layout.plotWidth(), layout.plotHeight()));
+    }
+
+    /** Leaves the key out of the canvas (the view shows it outside); the plot grows into its band. */
+    public void keyOutsideCanvas() {
+        if (keyInCanvas) {
+            keyInCanvas = false;
+            if (layout != null) {
+                resize(layout.width(), layout.height());
+            }
+        }
+    }
+
+    public boolean keyInCanvas() {
+        return keyInCanvas;
     }
 
     public void zoom(double factor, double x, double y) {
@@ -124,7 +140,10 @@ public final class PsychroChartViewModel {
         }
     }
 
-    /** Selects the state under a tap, or clears the selection if there is none. */
+    /**
+     * Selects the mark under a tap (a state, a dew point, the ADP or the coil temperature), or clears
+     * the selection if there is none.
+     */
     public void tap(double x, double y) {
         if (viewport.get() == null) {
             return;

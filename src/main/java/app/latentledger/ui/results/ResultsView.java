@@ -6,6 +6,7 @@ import app.latentledger.ui.present.ResultSheet;
 import javafx.scene.control.Label;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 
@@ -23,11 +24,15 @@ public final class ResultsView extends VBox implements Reflowing {
     private final FigureTable performance = new FigureTable();
     private final StackPane chartSlot = new StackPane();
     private final VBox figures;
+    private final VBox performancePanel;
     private final VBox enteringPanel;
     private final VBox leavingPanel;
     private final FindingsList findings;
-    /** The two numbers that answer a humidity call, read at a glance right under the verdict. */
-    private final HBox keyFigures = new HBox(24);
+    /**
+     * The two numbers that answer a humidity call, read at a glance right under the verdict: side by
+     * side across the screen upright, one above the other at the top of the left column lying down.
+     */
+    private javafx.scene.layout.Pane keyFigures = new HBox(24);
 
     public ResultsView(ResultsViewModel viewModel) {
         super(12);
@@ -43,10 +48,10 @@ public final class ResultsView extends VBox implements Reflowing {
         chartSlot.setId(CHART_SLOT_ID);
         chartSlot.getStyleClass().add("slot-placeholder");
         chartSlot.getChildren().add(Ui.wrapped("Drawing the psychrometric chart…", "muted"));
-        figures = new VBox(12, new HBox(16, enteringPanel, leavingPanel), Ui.panel(6, performance));
+        performancePanel = Ui.panel(6, performance);
+        figures = new VBox(12, new HBox(16, enteringPanel, leavingPanel), performancePanel);
         findings = new FindingsList(viewModel.sheetProperty());
-        getChildren().addAll(banner, keyFigures, new VBox());
-        keyFigures.setId("key-figures");
+        getChildren().addAll(banner, new VBox());
         viewModel.sheetProperty().addListener((o, a, b) -> show(b));
         show(viewModel.sheet());
         setPortrait(false);
@@ -64,22 +69,34 @@ public final class ResultsView extends VBox implements Reflowing {
     @Override
     public void setPortrait(boolean upright) {
         javafx.scene.Node body;
-        // upright the two states sit side by side; on its side the chart takes the width, so they stack
-        figures.getChildren().set(0, upright ? new HBox(16, enteringPanel, leavingPanel)
-                : new VBox(12, enteringPanel, leavingPanel));
+        javafx.scene.layout.Pane figuresNow = upright ? new HBox(24) : new VBox(12);
+        figuresNow.getChildren().setAll(keyFigures.getChildren());
+        keyFigures = figuresNow;
+        keyFigures.setId("key-figures");
         if (upright) {
-            body = Ui.scroll(new VBox(12, figures, chartSlot, Ui.panel(8, findings)));
+            // the two states side by side, their chart across the width right under them, then the rest
+            figures.getChildren().clear();
+            chartSlot.setMaxHeight(Region.USE_PREF_SIZE);
+            body = new VBox(12, keyFigures, Ui.scroll(new VBox(12, new HBox(16, enteringPanel, leavingPanel),
+                    chartSlot, performancePanel, Ui.panel(8, findings))));
+            VBox.setVgrow(((VBox) body).getChildren().get(1), Priority.ALWAYS);
         } else {
-            // the figures and findings scroll on the left; the chart stands on the right, read at a glance
-            javafx.scene.control.ScrollPane left = Ui.scroll(new VBox(12, figures, Ui.panel(8, findings)));
-            left.setPrefWidth(420);
+            // left: the two key figures, fixed at the top, then the figures and findings scrolling;
+            // right: the chart from under the verdict to the bottom, over half the width
+            // on its side the chart takes the width, so the two states stack
+            figures.getChildren().setAll(new VBox(12, enteringPanel, leavingPanel), performancePanel);
+            javafx.scene.control.ScrollPane scroll = Ui.scroll(new VBox(12, figures, Ui.panel(8, findings)));
+            VBox.setVgrow(scroll, Priority.ALWAYS);
+            VBox left = new VBox(12, keyFigures, scroll);
+            left.setPrefWidth(460);
             left.setMinWidth(400);
+            left.setMaxWidth(520);
             HBox.setHgrow(chartSlot, Priority.ALWAYS);
             chartSlot.setMaxHeight(Double.MAX_VALUE);
             body = new HBox(16, left, chartSlot);
         }
         VBox.setVgrow(body, Priority.ALWAYS);
-        getChildren().set(2, body);
+        getChildren().set(1, body);
     }
 
     private void show(ResultSheet s) {
@@ -103,9 +120,8 @@ public final class ResultsView extends VBox implements Reflowing {
         if (r == null) {
             return;
         }
-        Label value = Ui.label(r.value() + " " + r.unit(), "key-figure-value");
+        Label value = Ui.wrapped(r.value() + " " + r.unit(), "key-figure-value");
         value.setId("key-" + key);
-        value.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         Label words = Ui.wrapped(meaning, "muted");
         words.setId("key-" + key + "-meaning");
         VBox panel = Ui.panel(2, Ui.wrapped(r.label(), "muted"), value, words);

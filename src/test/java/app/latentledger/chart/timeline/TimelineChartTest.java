@@ -87,4 +87,46 @@ class TimelineChartTest {
                         new boolean[3], List.of()));
         assertEquals("supply dry bulb has 2 samples, time has 3", e.getMessage());
     }
+
+    @Test
+    @DisplayName("outdoors every timeline line is at least 2 px wide and the grid is drawn in its dark grey")
+    void outdoorTimelineHasThickLinesAndAVisibleGrid() {
+        TimelineData day = SaltreedDemo.week(UnitSystem.IP, 1);
+        RecordingPainter outdoor = new RecordingPainter();
+        new TimelineChart(day).paintWhole(outdoor, Theme.OUTDOOR, 1000, 620);
+        RecordingPainter light = new RecordingPainter();
+        new TimelineChart(day).paintWhole(light, Theme.LIGHT, 1000, 620);
+        assertTrue(thinnest(outdoor) >= 2.0, "thinnest outdoor line " + thinnest(outdoor));
+        // the check can fail: the light theme draws 1 px grid lines
+        assertTrue(thinnest(light) < 2.0);
+        List<RecordingPainter.Line> grid = outdoor.ops(RecordingPainter.Line.class, "time-grid");
+        assertFalse(grid.isEmpty(), "no time grid");
+        for (RecordingPainter.Line l : grid) {
+            // the outdoor grid greys (contrast checked against white in OutdoorThemeContrastTest)
+            assertTrue(l.stroke().colour().equals(Theme.OUTDOOR.gridMajor())
+                    || l.stroke().colour().equals(Theme.OUTDOOR.gridMinor()), l.toString());
+        }
+    }
+
+    private static double thinnest(RecordingPainter p) {
+        double min = Double.MAX_VALUE;
+        for (RecordingPainter.Op op : p.ops()) {
+            app.latentledger.chart.draw.Stroke s = null;
+            if (op instanceof RecordingPainter.Line l) {
+                s = l.stroke();
+            } else if (op instanceof RecordingPainter.Polyline l) {
+                s = l.stroke();
+            } else if (op instanceof RecordingPainter.Polygon l) {
+                s = l.stroke();
+            } else if (op instanceof RecordingPainter.Rect l) {
+                s = l.stroke();
+            } else if (op instanceof RecordingPainter.Circle l) {
+                s = l.stroke();
+            }
+            if (s != null) {
+                min = Math.min(min, s.width());
+            }
+        }
+        return min;
+    }
 }
