@@ -63,12 +63,13 @@ public final class HouseView extends HBox implements Reflowing {
         // in a column of their own, however far the list of fixes is scrolled
         ScrollPane fixes = Ui.scroll(rows);
         fixes.setId("house-fixes");
-        fixes.setMinHeight(120);
+        fixes.setMinHeight(180); // room for a caution under its heading at 150 % text
         Label before = Ui.wrapped("Before any fix", "house-cautions-title");
         ScrollPane safety = Ui.scroll(new VBox(6, before, cautions));
         safety.setId("house-cautions-box");
         safety.getStyleClass().add("house-cautions-box");
         safety.setMinWidth(200);
+        safety.setMinHeight(180);
         HBox.setHgrow(fixes, Priority.ALWAYS);
         HBox fixesAndCautions = new HBox(12, fixes, safety);
         VBox.setVgrow(fixesAndCautions, Priority.ALWAYS);
