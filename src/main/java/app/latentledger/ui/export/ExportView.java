@@ -32,9 +32,8 @@ public final class ExportView extends VBox implements Reflowing {
                 reports::csvData);
         Button json = Ui.button("data-json", "Data (JSON)", Icons.EXPORT,
                 reports::jsonData);
-        for (Button b : new Button[] {pdf, csv, json}) {
-            b.disableProperty().bind(reports.busyProperty());
-        }
+        // not disabled while writing (the view model ignores a second tap while busy): a disabled
+        // button drops its focus, which jumps to another button and can scroll the page away
         Label reportStatus = Ui.wrapped("", "message");
         reportStatus.setId("report-status");
         // takes room only when it has something to say
@@ -50,7 +49,8 @@ public final class ExportView extends VBox implements Reflowing {
                 Ui.wrapped("A bundle is one file with the visit's site, system, readings, logs and results as"
                         + " shown, checked by its own manifest. Another tablet imports it on its Record screen"
                         + " (Import a bundle); the office can import it there too.", "muted"),
-                bundleButtons, status, Ui.wrapped("Bundles are written to " + viewModel.folder(), "muted"));
+                bundleButtons, status, bundleShareBar(viewModel),
+                Ui.wrapped("Bundles are written to " + viewModel.folder(), "muted"));
         VBox report = Ui.panel(12, Ui.label("Report and data", "heading"),
                 Ui.wrapped("The report is a PDF for the customer and the file: readings, results with their"
                         + " uncertainty, the chart, the findings in plain words and, when the visit has them,"
@@ -71,6 +71,14 @@ public final class ExportView extends VBox implements Reflowing {
     @Override
     public void setPortrait(boolean portrait) {
         // a single column already
+    }
+
+    /** Open or share the bundle just written, as far as this device offers; shown once there is one. */
+    private static app.latentledger.ui.share.ShareBar bundleShareBar(ExportViewModel viewModel) {
+        var bar = app.latentledger.ui.share.ShareBar.forBundle(viewModel.lastBundleProperty());
+        bar.visibleProperty().bind(viewModel.lastBundleProperty().isNotNull());
+        bar.managedProperty().bind(bar.visibleProperty());
+        return bar;
     }
 
     /** Open, print or share the file just written, as far as this device offers. */

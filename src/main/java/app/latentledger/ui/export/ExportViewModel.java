@@ -18,6 +18,9 @@ import java.time.LocalDate;
 public final class ExportViewModel {
     private final AppSession session;
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
+    /** The bundle last written from this screen, for its Open/Share bar; null until one is. */
+    private final javafx.beans.property.ReadOnlyObjectWrapper<Path> lastBundle =
+            new javafx.beans.property.ReadOnlyObjectWrapper<>();
     private final ReportViewModel reports;
 
     public ExportViewModel(AppSession session) {
@@ -41,6 +44,10 @@ public final class ExportViewModel {
 
     public ReadOnlyStringProperty statusProperty() {
         return status.getReadOnlyProperty();
+    }
+
+    public javafx.beans.property.ReadOnlyObjectProperty<Path> lastBundleProperty() {
+        return lastBundle.getReadOnlyProperty();
     }
 
     /** The folder bundles are written to. */
@@ -69,6 +76,7 @@ public final class ExportViewModel {
                 Bundles.exportSite(session.ledger(), id, file);
             }
             status.set("Saved " + file.getFileName() + " in " + folder());
+            lastBundle.set(file);
             return file;
         } catch (IOException | RuntimeException e) {
             status.set("Not exported: " + e.getMessage());

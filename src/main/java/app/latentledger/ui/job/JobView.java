@@ -60,6 +60,7 @@ public final class JobView extends VBox implements Reflowing {
         Label siteStatus = Ui.wrapped("", "message");
         siteStatus.setId("site-status");
         siteStatus.textProperty().bind(viewModel.siteStatusProperty());
+        Ui.refusedWhen(siteStatus, viewModel.siteRefusedProperty());
         VBox siteCol = Ui.panel(8, Ui.wrapped("1  Site", "heading"), sites,
                 new FlowPane(8, 8, Ui.button("edit-site", "Correct site", null, viewModel::editSite),
                         Ui.button("delete-site", "Delete site", Icons.FIX, viewModel::askDeleteSite)),
@@ -74,10 +75,15 @@ public final class JobView extends VBox implements Reflowing {
         Label systemStatus = Ui.wrapped("", "message");
         systemStatus.setId("system-status");
         systemStatus.textProperty().bind(viewModel.systemStatusProperty());
+        Ui.refusedWhen(systemStatus, viewModel.systemRefusedProperty());
+        Label more = Ui.wrapped("Refrigerant, metering device, blower and filter go on the Record screen"
+                + " (Export → Notes, instruments, sign-off).", "muted");
+        more.setId("new-system-more");
         VBox systemCol = Ui.panel(8, Ui.wrapped("2  System", "heading"), systems,
                 Ui.button("delete-system", "Delete system", Icons.FIX, viewModel::askDeleteSystem), sysLabel,
-                Ui.wrapped("Nominal size, tons", "figure-label"), sysTons,
-                Ui.button("add-system", "Add system", Icons.NEW, viewModel::addSystem), systemStatus);
+                Ui.wrapped("Nominal size, tons", "figure-label"), sysTons, Ui.wrapped("Staging", "figure-label"),
+                app.latentledger.ui.look.StageChoice.toggles("new-system-stages-", viewModel.newSystemStagesProperty()),
+                more, Ui.button("add-system", "Add system", Icons.NEW, viewModel::addSystem), systemStatus);
 
         FlowPane purposes = new FlowPane(8, 8);
         ToggleGroup group = new ToggleGroup();

@@ -47,16 +47,24 @@ public final class JobViewModel {
     private final ObservableList<SiteZones.Choice> zoneChoices = FXCollections.observableArrayList(SiteZones.common());
     private final StringProperty newSystemLabel = new SimpleStringProperty("");
     private final StringProperty newSystemTons = new SimpleStringProperty("3");
+    /** How the new system's capacity steps; the rest of its details go on the Record screen. */
+    private final ObjectProperty<SystemType> newSystemStages = new SimpleObjectProperty<>(SystemType.SINGLE_STAGE);
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
     /** Messages shown next to the column they are about: site and system each have their own. */
     private final ReadOnlyStringWrapper siteStatus = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper systemStatus = new ReadOnlyStringWrapper("");
+    /** True while the site (system) message says the last add or save was refused. */
+    private final javafx.beans.property.ReadOnlyBooleanWrapper siteRefused = new javafx.beans.property.ReadOnlyBooleanWrapper();
+    private final javafx.beans.property.ReadOnlyBooleanWrapper systemRefused = new javafx.beans.property.ReadOnlyBooleanWrapper();
     /** The site whose name, address and elevation the site fields hold for a correction; null: a new site. */
     private final ReadOnlyObjectWrapper<Site> editingSite = new ReadOnlyObjectWrapper<>();
     private final app.latentledger.ui.bin.RecycleBinViewModel bin;
 
     public JobViewModel(AppSession session) {
         this.session = session;
+        // any new message clears the refusal; the refusing paths set it again after their message
+        siteStatus.addListener((o, a, b) -> siteRefused.set(false));
+        systemStatus.addListener((o, a, b) -> systemRefused.set(false));
         // a new site starts at the tech's default elevation, shown in the units of the moment
         session.settingsProperty().addListener((o, a, b) -> showDefaultElevation());
         showDefaultElevation();
@@ -97,6 +105,21 @@ public final class JobViewModel {
 
     public ReadOnlyStringProperty systemStatusProperty() {
         return systemStatus.getReadOnlyProperty();
+    }
+
+    /** The site message is a refusal (shown as one), not a saved site or a hint. */
+    public javafx.beans.property.ReadOnlyBooleanProperty siteRefusedProperty() {
+        return siteRefused.getReadOnlyProperty();
+    }
+
+    /** The system message is a refusal (shown as one), not a saved system or a hint. */
+    public javafx.beans.property.ReadOnlyBooleanProperty systemRefusedProperty() {
+        return systemRefused.getReadOnlyProperty();
+    }
+
+    /** Single-stage, two-stage or variable-capacity, for the system about to be added. */
+    public ObjectProperty<SystemType> newSystemStagesProperty() {
+        return newSystemStages;
     }
 
     /** The site being corrected in the site fields, or null while they describe a new site. */
@@ -328,8 +351,10 @@ public final class JobViewModel {
             return true;
         } catch (InvalidInputException e) {
             siteStatus.set("Site not " + verb + ": " + e.message(session.units()));
+            siteRefused.set(true);
         } catch (IllegalArgumentException e) {
             siteStatus.set("Site not " + verb + ": " + e.getMessage());
+            siteRefused.set(true);
         }
         return false;
     }
@@ -341,7 +366,7 @@ public final class JobViewModel {
         }
         try {
             double w = Quantity.POWER_LARGE.fromDisplay(session.units(), number("nominal size", newSystemTons.get()));
-            HvacSystem s = new HvacSystem(Ids.newId(), site.get().id(), newSystemLabel.get(), SystemType.SINGLE_STAGE,
+            HvacSystem s = new HvacSystem(Ids.newId(), site.get().id(), newSystemLabel.get(), newSystemStages.get(),
                     w, "", "", "", "");
             session.addSystem(s);
             loadSystems();
@@ -351,8 +376,10 @@ public final class JobViewModel {
             return true;
         } catch (InvalidInputException e) {
             systemStatus.set("System not added: " + e.message(session.units()));
+            systemRefused.set(true);
         } catch (IllegalArgumentException e) {
             systemStatus.set("System not added: " + e.getMessage());
+            systemRefused.set(true);
         }
         return false;
     }

@@ -65,4 +65,16 @@ public final class Ui {
         VBox.setVgrow(r, Priority.ALWAYS);
         return r;
     }
+
+    /** The app's refused look ({@code .message.refused} in app.css) on {@code message} while {@code refused} holds. */
+    public static void refusedWhen(Label message, javafx.beans.value.ObservableBooleanValue refused) {
+        Runnable show = () -> {
+            message.getStyleClass().remove("refused");
+            if (refused.get()) {
+                message.getStyleClass().add("refused");
+            }
+        };
+        refused.addListener((o, was, now) -> show.run());
+        show.run();
+    }
 }

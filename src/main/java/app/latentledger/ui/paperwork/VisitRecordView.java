@@ -60,21 +60,7 @@ public final class VisitRecordView extends VBox implements Reflowing {
     }
 
     private static VBox systemPanel(SystemDetailsViewModel vm) {
-        ToggleGroup group = new ToggleGroup();
-        FlowPane stages = new FlowPane(8, 8);
-        for (app.latentledger.core.records.SystemType t : app.latentledger.core.records.SystemType.values()) {
-            ToggleButton b = new ToggleButton(t.key().replace('-', ' '));
-            b.setId("stages-" + t.key());
-            b.setMinHeight(Ui.MIN_TARGET_PX);
-            b.setToggleGroup(group);
-            b.setSelected(vm.stagesProperty().get() == t);
-            b.setOnAction(e -> {
-                b.setSelected(true);
-                vm.stagesProperty().set(t);
-            });
-            vm.stagesProperty().addListener((o, was, now) -> b.setSelected(now == t));
-            stages.getChildren().add(b);
-        }
+        FlowPane stages = app.latentledger.ui.look.StageChoice.toggles("stages-", vm.stagesProperty());
         Label message = Ui.wrapped("", "message");
         message.textProperty().bind(vm.messageProperty());
         return Ui.panel(8, Ui.label("The system as found", "heading"), stages,
