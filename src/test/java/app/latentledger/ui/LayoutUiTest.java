@@ -32,8 +32,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /**
  * Every screen at 1280 × 800 and upright at 800 × 1280, on the demo visit: each button, toggle,
  * key, drop-down and list row is at least 48 px both ways (a gloved fingertip, about 8 mm at
- * 150 px/in; common practice, no source), each scroll bar at least 16 px thick, and no label cuts
- * its text to an ellipsis.
+ * 150 px/in; common practice, no source), each scroll bar at least 16 px thick, no label cuts
+ * its text to an ellipsis, no wrapped text breaks inside a word ("To/tal/ca/pa/cit/y": a word wider
+ * than the width it wraps at), and every input box lies wholly inside the scroll pane showing it.
  */
 @ExtendWith(ApplicationExtension.class)
 class LayoutUiTest {
@@ -127,6 +128,27 @@ class LayoutUiTest {
         assertTrue(chart.getWidth() >= screen.getWidth() / 2, "chart " + chart.getWidth() + " of " + screen.getWidth());
     }
 
+    @Test
+    void everyBoxOnTheRecordScreenHasItsNameAboveIt(FxRobot robot) {
+        // a placeholder alone is gone once the box is filled: then nobody can tell which box is which
+        robot.interact(() -> session.screenProperty().set(Screen.RECORD));
+        List<String> problems = new ArrayList<>();
+        robot.interact(() -> {
+            var inputs = robot.lookup("#screen-record .text-input").queryAll();
+            var labels = robot.lookup("#screen-record .label").queryAllAs(javafx.scene.control.Label.class);
+            assertTrue(inputs.size() >= 19, "boxes found: " + inputs.size());
+            for (Node in : inputs) {
+                boolean named = labels.stream().anyMatch(l -> l.getLabelFor() == in && l.isVisible()
+                        && l.getText() != null && !l.getText().isBlank()
+                        && l.localToScene(l.getLayoutBounds()).getMaxY() <= in.localToScene(in.getLayoutBounds()).getMinY());
+                if (!named) {
+                    problems.add("#" + in.getId() + " has no name above it");
+                }
+            }
+        });
+        assertTrue(problems.isEmpty(), String.join("\n", problems));
+    }
+
     private static javafx.geometry.Bounds scene(FxRobot robot, String id) {
         Node n = robot.lookup(id).query();
         return n.localToScene(n.getLayoutBounds());
@@ -149,6 +171,46 @@ class LayoutUiTest {
             }
         }
         return false;
+    }
+
+    /** A word wider than the text's wrapping width is broken between letters. */
+    static void brokenWord(String name, String text, javafx.scene.text.Font font, double wrap, List<String> problems) {
+        if (text == null || wrap <= 0) {
+            return;
+        }
+        // the pieces JavaFX will not break inside (it breaks between words and after hyphens)
+        for (String word : app.latentledger.ui.look.NamedRows.words(text)) {
+            Text probe = new Text(word);
+            probe.setFont(font);
+            double w = probe.getLayoutBounds().getWidth();
+            if (w > wrap + 0.5) {
+                problems.add(name + " breaks '" + word + "' (" + Math.round(w) + " px) at a wrap of "
+                        + Math.round(wrap) + " px in '" + text + "'");
+            }
+        }
+    }
+
+    /** An input box must lie inside the nearest scroll pane's viewport width (no sideways scroll on a tablet). */
+    static void outsideViewport(String name, Node n, List<String> problems) {
+        if (n.getScene() == null || n.getLayoutBounds().getWidth() <= 0) {
+            return;
+        }
+        javafx.geometry.Bounds box = n.localToScene(n.getLayoutBounds());
+        javafx.geometry.Bounds view = n.getScene().getRoot().localToScene(n.getScene().getRoot().getLayoutBounds());
+        for (Node p = n.getParent(); p != null; p = p.getParent()) {
+            if (p instanceof javafx.scene.control.ScrollPane sp) {
+                javafx.geometry.Bounds vp = sp.getViewportBounds();
+                // the viewport in scene coordinates: the pane's own box less its insets and bars
+                javafx.geometry.Bounds paneBox = sp.localToScene(sp.getLayoutBounds());
+                double left = paneBox.getMinX() + sp.snappedLeftInset();
+                view = new javafx.geometry.BoundingBox(left, paneBox.getMinY(), vp.getWidth(), paneBox.getHeight());
+                break;
+            }
+        }
+        if (box.getMinX() < view.getMinX() - 0.5 || box.getMaxX() > view.getMaxX() + 0.5) {
+            problems.add(name + " input spans x " + Math.round(box.getMinX()) + "–" + Math.round(box.getMaxX())
+                    + " outside its view x " + Math.round(view.getMinX()) + "–" + Math.round(view.getMaxX()));
+        }
     }
 
     static void check(Screen s, Node n, List<String> problems) {
@@ -176,6 +238,18 @@ class LayoutUiTest {
                     problems.add(name + " shows '" + t.getText() + "' for '" + l.getText() + "'");
                 }
             }
+        }
+        if (n instanceof Labeled l && l.isWrapText() && l.getText() != null) {
+            for (Node child : l.getChildrenUnmodifiable()) {
+                if (child instanceof Text t) {
+                    brokenWord(name, l.getText(), l.getFont(), t.getWrappingWidth(), problems);
+                }
+            }
+        } else if (n instanceof Text t && !(n.getParent() instanceof Labeled) && t.getWrappingWidth() > 0) {
+            brokenWord(name, t.getText(), t.getFont(), t.getWrappingWidth(), problems);
+        }
+        if (n instanceof javafx.scene.control.TextInputControl || n instanceof ComboBoxBase) {
+            outsideViewport(name, n, problems);
         }
         if (n instanceof Parent p) {
             for (Node c : p.getChildrenUnmodifiable()) {

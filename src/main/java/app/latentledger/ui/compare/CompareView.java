@@ -1,15 +1,13 @@
 package app.latentledger.ui.compare;
 
 import app.latentledger.core.records.ReadingSet;
+import app.latentledger.ui.look.NamedRows;
 import app.latentledger.ui.look.Reflowing;
 import app.latentledger.ui.look.Ui;
 import javafx.collections.ListChangeListener;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
-import javafx.scene.layout.ColumnConstraints;
-import javafx.scene.layout.GridPane;
-import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 
 /** The compare screen: pick an earlier reading set, see before, after and the change. Binds only. */
@@ -43,22 +41,17 @@ public final class CompareView extends VBox implements Reflowing {
         Label status = Ui.wrapped("", "muted");
         status.setId("compare-status");
         status.textProperty().bind(viewModel.statusProperty());
-        GridPane table = new GridPane();
+        // a figure's name stands over its numbers where the five columns do not fit (upright, large text)
+        NamedRows table = new NamedRows(4, 24, 6);
         table.setId("compare-table");
-        table.setHgap(24);
-        table.setVgap(6);
-        ColumnConstraints first = new ColumnConstraints();
-        first.setHgrow(Priority.ALWAYS);
-        table.getColumnConstraints().add(first);
         Runnable fill = () -> {
-            table.getChildren().clear();
+            table.clearRows();
             Label[] heads = {Ui.label("Figure", "table-head"), Ui.label("Before", "table-head"),
                     Ui.label("After", "table-head"), Ui.label("Change", "table-head"), Ui.label("", "table-head")};
             for (Label h : heads) {
                 h.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
             }
-            table.addRow(0, heads);
-            int r = 1;
+            table.addHeader(heads[0], heads[1], heads[2], heads[3], heads[4]);
             for (CompareRow row : viewModel.rows()) {
                 Label after = Ui.label(row.after(), "figure-value");
                 after.setId("after-" + row.key());
@@ -77,7 +70,7 @@ public final class CompareView extends VBox implements Reflowing {
                 for (Label l : words ? new Label[] {before, after, unit} : new Label[] {before, after, change, unit}) {
                     l.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
                 }
-                table.addRow(r++, Ui.wrapped(row.label(), "figure-label"), before, after, change, unit);
+                table.addRow(NamedRows.name(row.label(), "figure-label"), before, after, change, unit);
             }
         };
         viewModel.rows().addListener((ListChangeListener<CompareRow>) c -> fill.run());
@@ -104,7 +97,7 @@ public final class CompareView extends VBox implements Reflowing {
         chartSlot.setId(CHART_SLOT_ID);
         chartSlot.getStyleClass().add("slot-placeholder");
         chartSlot.getChildren().add(Ui.wrapped("Drawing the before/after chart…", "muted"));
-        VBox panel = Ui.panel(10, Ui.label("Compare with an earlier reading set", "heading"),
+        VBox panel = Ui.panel(10, Ui.wrapped("Compare with an earlier reading set", "heading"),
                 Ui.label("Earlier reading set of this system", "figure-label"), pick, verdicts, status, margins,
                 report, reportStatus, share, table, chartSlot);
         getChildren().add(Ui.scroll(panel));

@@ -68,7 +68,9 @@ public final class HouseView extends HBox implements Reflowing {
         ScrollPane safety = Ui.scroll(new VBox(6, before, cautions));
         safety.setId("house-cautions-box");
         safety.getStyleClass().add("house-cautions-box");
-        safety.setMinWidth(200);
+        // wide enough for the longest word of the cautions (plus padding and scroll bar), at least 200 px
+        app.latentledger.ui.look.NamedRows.keepWords(cautions);
+        safety.minWidthProperty().bind(javafx.beans.binding.Bindings.max(200, cautions.minWidthProperty().add(48)));
         safety.setMinHeight(180);
         HBox.setHgrow(fixes, Priority.ALWAYS);
         HBox fixesAndCautions = new HBox(12, fixes, safety);
@@ -99,7 +101,8 @@ public final class HouseView extends HBox implements Reflowing {
             b.setAlignment(Pos.CENTER_LEFT);
             b.setTextAlignment(TextAlignment.LEFT);
             b.setMinHeight(Ui.MIN_TARGET_PX);
-            b.setMinWidth(Ui.MIN_TARGET_PX);
+            // a box's name wraps between words, never inside one ("Occu/pants" at large text)
+            app.latentledger.ui.look.NamedRows.keepWords(b);
             b.setMaxWidth(Double.MAX_VALUE);
             b.setMaxHeight(Double.MAX_VALUE);
             b.setOnAction(x -> {

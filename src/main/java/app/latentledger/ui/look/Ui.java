@@ -59,6 +59,17 @@ public final class Ui {
         return s;
     }
 
+    /**
+     * An input with its name above it (a placeholder alone is gone once the box is filled), the
+     * name tied to the box for screen readers; the box takes the width it is given.
+     */
+    public static VBox labelled(String name, javafx.scene.control.Control input) {
+        Label l = wrapped(name, "figure-label");
+        l.setLabelFor(input);
+        input.setMaxWidth(Double.MAX_VALUE);
+        return new VBox(4, l, input);
+    }
+
     public static Region grow() {
         Region r = new Region();
         javafx.scene.layout.HBox.setHgrow(r, Priority.ALWAYS);

@@ -1,6 +1,5 @@
 package app.latentledger.ui.paperwork;
 
-import app.latentledger.ui.look.Columns;
 import app.latentledger.ui.look.Icons;
 import app.latentledger.ui.look.Reflowing;
 import app.latentledger.ui.look.Ui;
@@ -9,9 +8,9 @@ import javafx.scene.control.CheckBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
+import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextArea;
 import javafx.scene.control.TextField;
-import javafx.scene.layout.GridPane;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
@@ -24,7 +23,6 @@ import javafx.scene.layout.VBox;
 public final class PaperworkView extends VBox implements Reflowing {
     private final PaperworkViewModel paperwork;
     private final InstrumentsViewModel instruments;
-    private final Columns columns;
 
     public PaperworkView(PaperworkViewModel paperwork, InstrumentsViewModel instruments) {
         super(12);
@@ -35,8 +33,8 @@ public final class PaperworkView extends VBox implements Reflowing {
 
         TextArea words = area("customer-words", "What the customer said", paperwork.customerWordsProperty());
         TextArea done = area("work-done", "What was done", paperwork.workDoneProperty());
-        VBox notes = Ui.panel(8, Ui.label("Notes", "heading"), Ui.wrapped("Customer's words", "figure-label"), words,
-                Ui.wrapped("Work done", "figure-label"), done,
+        VBox notes = Ui.panel(8, Ui.wrapped("Notes", "heading"), Ui.labelled("Customer's words", words),
+                Ui.labelled("Work done", done),
                 Ui.button("save-notes", "Save notes", Icons.NEW, paperwork::saveNotes), message(paperwork.notesMessageProperty()));
 
         ListView<InstrumentsViewModel.Row> list = new ListView<>(instruments.rows());
@@ -60,59 +58,53 @@ public final class PaperworkView extends VBox implements Reflowing {
                 setText(null);
             }
         });
-        GridPane form = new GridPane();
-        form.setHgap(8);
-        form.setVgap(8);
-        int r = 0;
-        form.addRow(r++, formLabel("Name"), field("instrument-name", instruments.nameProperty()));
-        form.addRow(r++, formLabel("Serial"), field("instrument-serial", instruments.serialProperty()));
-        form.addRow(r++, formLabel("Calibrated (YYYY-MM-DD)"),
-                field("instrument-calibrated", instruments.calibratedProperty()));
-        form.addRow(r++, formLabel("Stated ± dry bulb"), field("instrument-acc-db", instruments.dryBulbProperty()));
-        form.addRow(r++, formLabel("Stated ± RH, %"), field("instrument-acc-rh", instruments.relativeHumidityProperty()));
-        form.addRow(r++, formLabel("Stated ± wet bulb"), field("instrument-acc-wb", instruments.wetBulbProperty()));
-        form.addRow(r++, formLabel("Stated ± dew point"), field("instrument-acc-dp", instruments.dewPointProperty()));
-        form.addRow(r++, formLabel("Stated ± coil probe"), field("instrument-acc-coil", instruments.coilProperty()));
-        form.addRow(r, formLabel("Stated ± airflow, %"), field("instrument-acc-airflow", instruments.airflowPctProperty()));
-        VBox instrumentsPanel = Ui.panel(8, Ui.label("Instruments", "heading"),
+        // one column of name-over-box pairs: it fits the narrow side-by-side column lying down
+        VBox form = new VBox(8,
+                Ui.labelled("Name", field("instrument-name", instruments.nameProperty())),
+                Ui.labelled("Serial", field("instrument-serial", instruments.serialProperty())),
+                Ui.labelled("Calibrated (YYYY-MM-DD)", field("instrument-calibrated", instruments.calibratedProperty())),
+                Ui.labelled("Stated ± dry bulb", field("instrument-acc-db", instruments.dryBulbProperty())),
+                Ui.labelled("Stated ± RH, %", field("instrument-acc-rh", instruments.relativeHumidityProperty())),
+                Ui.labelled("Stated ± wet bulb", field("instrument-acc-wb", instruments.wetBulbProperty())),
+                Ui.labelled("Stated ± dew point", field("instrument-acc-dp", instruments.dewPointProperty())),
+                Ui.labelled("Stated ± coil probe", field("instrument-acc-coil", instruments.coilProperty())),
+                Ui.labelled("Stated ± airflow, %", field("instrument-acc-airflow", instruments.airflowPctProperty())));
+        VBox instrumentsPanel = Ui.panel(8, Ui.wrapped("Instruments", "heading"),
                 Ui.wrapped("Tick the instruments that took the readings on the pad; the report lists them with"
                         + " the set.", "figure-label"),
-                list, form, Ui.button("add-instrument", "Add instrument", Icons.NEW, instruments::add),
+                list, form, whole(Ui.button("add-instrument", "Add instrument", Icons.NEW, instruments::add)),
                 message(instruments.messageProperty()));
 
-        VBox signOffs = Ui.panel(8, Ui.label("Sign-off", "heading"),
-                Ui.label("Technician", "figure-label"), field("tech-sign-name", paperwork.technicianNameProperty()),
-                field("tech-sign-remark", paperwork.technicianRemarkProperty(), "Licence or certification (optional)"),
+        VBox signOffs = Ui.panel(8, Ui.wrapped("Sign-off", "heading"),
+                Ui.labelled("Technician", field("tech-sign-name", paperwork.technicianNameProperty())),
+                Ui.labelled("Licence or certification (optional)",
+                        field("tech-sign-remark", paperwork.technicianRemarkProperty())),
                 bound(paperwork.technicianSignedProperty()),
                 whole(Ui.button("sign-technician", "Sign as technician", Icons.CHECK, paperwork::signAsTechnician)),
-                Ui.label("Customer", "figure-label"), field("customer-sign-name", paperwork.customerNameProperty()),
-                field("customer-sign-remark", paperwork.customerRemarkProperty(), "Remark (optional)"),
+                Ui.labelled("Customer", field("customer-sign-name", paperwork.customerNameProperty())),
+                Ui.labelled("Remark (optional)", field("customer-sign-remark", paperwork.customerRemarkProperty())),
                 bound(paperwork.customerSignedProperty()),
                 whole(Ui.button("sign-customer", "Sign as customer", Icons.CHECK, paperwork::signAsCustomer)),
                 message(paperwork.signMessageProperty()));
 
-        columns = new Columns(12, Ui.scroll(new VBox(12, notes, signOffs)), Ui.scroll(instrumentsPanel));
-        VBox.setVgrow(columns, Priority.ALWAYS);
-        getChildren().add(columns);
+        // one column both ways: beside the Record screen's own column, two more were too narrow
+        // lying down for the instrument boxes and the headings at large text
+        ScrollPane all = Ui.scroll(new VBox(12, notes, instrumentsPanel, signOffs));
+        VBox.setVgrow(all, Priority.ALWAYS);
+        getChildren().add(all);
     }
 
-    /** A form label never shortened to an ellipsis: the field beside it gives way instead. */
-    private static javafx.scene.control.Label formLabel(String text) {
-        javafx.scene.control.Label l = Ui.label(text, "figure-label");
-        l.setMinWidth(Region.USE_PREF_SIZE);
-        return l;
-    }
-
-    /** A button that keeps its whole label. */
+    /** A button as wide as its column, its words wrapping (never its letters) where the column is narrow. */
     private static javafx.scene.control.Button whole(javafx.scene.control.Button b) {
         b.setWrapText(true);
+        b.setMinWidth(Region.USE_COMPUTED_SIZE);
         b.setMaxWidth(Double.MAX_VALUE);
         return b;
     }
 
     @Override
     public void setPortrait(boolean portrait) {
-        columns.setPortrait(portrait);
+        // one column either way; the Record screen places it
     }
 
     private static TextArea area(String id, String prompt, StringProperty p) {
@@ -126,15 +118,10 @@ public final class PaperworkView extends VBox implements Reflowing {
     }
 
     private static TextField field(String id, StringProperty p) {
-        return field(id, p, "");
-    }
-
-    private static TextField field(String id, StringProperty p, String prompt) {
         TextField f = new TextField();
         f.setId(id);
-        f.setPromptText(prompt);
         f.setMinHeight(Ui.MIN_TARGET_PX);
-        f.setMinWidth(140);
+        f.setMinWidth(120);
         f.textProperty().bindBidirectional(p);
         return f;
     }

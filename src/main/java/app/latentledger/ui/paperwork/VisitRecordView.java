@@ -46,7 +46,7 @@ public final class VisitRecordView extends VBox implements Reflowing {
         Label setMessage = Ui.wrapped("", "message");
         setMessage.textProperty().bind(model.setMessageProperty());
         VBox thisSet = Ui.panel(8, Ui.label("This reading set", "heading"),
-                Ui.wrapped("Label the set on the pad so the report pairs before with after.", "figure-label"),
+                Ui.wrapped("Label this set here so the report pairs before with after.", "figure-label"),
                 labels, setMessage,
                 new FlowPane(8, 8, Ui.button("delete-set", "Delete this set", Icons.FIX, model::askDeleteSet),
                         Ui.button("delete-visit", "Delete this visit", Icons.FIX, model::askDeleteVisit)));
@@ -64,22 +64,23 @@ public final class VisitRecordView extends VBox implements Reflowing {
         Label message = Ui.wrapped("", "message");
         message.textProperty().bind(vm.messageProperty());
         return Ui.panel(8, Ui.label("The system as found", "heading"), stages,
-                detail("system-refrigerant", "Refrigerant, e.g. R-410A", vm.refrigerantProperty()),
-                detail("system-metering", "Metering device, e.g. TXV", vm.meteringDeviceProperty()),
-                detail("system-blower-type", "Blower type, e.g. PSC", vm.blowerTypeProperty()),
-                detail("system-blower-setting", "Blower setting as found", vm.blowerSettingProperty()),
-                detail("system-filter", "Filter: size, type, condition", vm.filterProperty()),
-                detail("system-thermostat", "Thermostat as found", vm.thermostatProperty()),
+                detail("system-refrigerant", "Refrigerant", "e.g. R-410A", vm.refrigerantProperty()),
+                detail("system-metering", "Metering device", "e.g. TXV", vm.meteringDeviceProperty()),
+                detail("system-blower-type", "Blower type", "e.g. PSC", vm.blowerTypeProperty()),
+                detail("system-blower-setting", "Blower setting as found", "", vm.blowerSettingProperty()),
+                detail("system-filter", "Filter", "size, type, condition", vm.filterProperty()),
+                detail("system-thermostat", "Thermostat as found", "", vm.thermostatProperty()),
                 Ui.button("save-system", "Save system details", Icons.NEW, vm::save), message);
     }
 
-    private static javafx.scene.control.TextField detail(String id, String prompt, javafx.beans.property.StringProperty p) {
+    /** A detail box with its name above it: a placeholder alone vanishes once the box is filled. */
+    private static VBox detail(String id, String name, String example, javafx.beans.property.StringProperty p) {
         javafx.scene.control.TextField f = new javafx.scene.control.TextField();
         f.setId(id);
-        f.setPromptText(prompt);
+        f.setPromptText(example);
         f.setMinHeight(Ui.MIN_TARGET_PX);
         f.textProperty().bindBidirectional(p);
-        return f;
+        return Ui.labelled(name, f);
     }
 
     private static void select(ToggleGroup group, String key) {

@@ -110,7 +110,7 @@ public final class ResultsView extends VBox implements Reflowing {
         keyFigure(s, "dew-point-margin", s.marginWords().replaceFirst("^.* — ", ""));
         keyFigure(s, "moisture-removal", "while running");
         if (s.performance().isEmpty()) {
-            performance.add(new Label(s.explanation()), 0, 1, 3, 1);
+            performance.note(s.explanation());
         }
     }
 
