@@ -222,7 +222,9 @@ final class BatchCheck {
                 message);
     }
 
-    private static BatchRefusal refusal(BatchCsv.Row row, String column, InvalidInputException e, UnitSystem units) {
+    private static BatchRefusal refusal(BatchCsv.Row row, String column, InvalidInputException e, UnitSystem rowUnits) {
+        // said in the unit the cell was typed in (a condensate catch is mL or fl oz whatever the row's units)
+        UnitSystem units = BatchColumns.unitsOf(column, rowUnits);
         return new BatchRefusal(row.line(), column, e.field(), row.cell(column), BatchColumns.rangeOf(e, units),
                 (column.isEmpty() ? "" : column + ": ") + e.message(units));
     }

@@ -145,9 +145,21 @@ final class BatchColumns {
         FieldLimits.Limit limit = LIMITS.get(column);
         if (limit != null) {
             return rangeOf(new InvalidInputException(limit.field(), limit.quantity(), Double.NaN, limit.minSi(),
-                    limit.maxSi(), null), units);
+                    limit.maxSi(), null), unitsOf(column, units));
         }
         return CHOICES.getOrDefault(column, "");
+    }
+
+    /**
+     * The unit system a column's value is typed in: the row's, except the condensate catch, which
+     * is mL in "condensate" and US fl oz in "condensate-floz" whatever the row's units.
+     */
+    static UnitSystem unitsOf(String column, UnitSystem units) {
+        return switch (column) {
+            case "condensate" -> UnitSystem.SI;
+            case "condensate-floz" -> UnitSystem.IP;
+            default -> units;
+        };
     }
 
     /** The "accepted range …" part of the core's refusal, in the tech's units. */

@@ -250,7 +250,10 @@ final class CoilOptions {
             return new Condensate(m3, tolPct / 100.0, minutes * 60.0,
                     Math.min(Tolerances.CONDENSATE_TIMING_S, minutes * 30.0));
         } catch (InvalidInputException e) {
-            throw UnitOptions.refused(e, units, e.field().contains("minutes") ? "--condensate-minutes"
+            // a refused volume is said in the unit it was typed in: mL for --condensate in either unit system
+            UnitSystem said = e.quantity() == Quantity.WATER_VOLUME ? (ml != null ? UnitSystem.SI : UnitSystem.IP)
+                    : units;
+            throw UnitOptions.refused(e, said, e.field().contains("minutes") ? "--condensate-minutes"
                     : e.field().contains("tolerance") ? "--tol-condensate-pct" : volumeOption);
         }
     }

@@ -87,7 +87,7 @@ public final class SettingsCommand implements Command {
             } else {
                 Map<String, Object> r = row(next, key);
                 context.out().print(key + " = " + text(r.get("value")) + unitSuffix(r) + "  (default "
-                        + text(r.get("default")) + unitSuffix(r) + ")\n");
+                        + defaultText(key, r, next.units()) + unitSuffix(r) + ")\n");
             }
         }
         return Cli.OK;
@@ -184,16 +184,24 @@ public final class SettingsCommand implements Command {
                 if (!g.title().equals(r.get("group"))) {
                     continue;
                 }
-                String value = text(r.get("value")) + unitSuffix(r);
+                // the table is read by a person: an untouched default at the shown decimals, as the app shows it
+                String value = (Boolean.TRUE.equals(r.get("isDefault")) ? defaultText(key, r, s.units())
+                        : text(r.get("value"))) + unitSuffix(r);
                 // the range as the app's hint and a refusal print it, rounded inward to the shown precision
                 String range = r.containsKey("choices") ? String.join(" | ", castList(r.get("choices")))
                         : numberRange(key, s.units()) + unitSuffix(r);
                 b.append(String.format("  %s %-28s %14s   default %s; range %s%n", Boolean.TRUE.equals(r.get("isDefault"))
-                        ? " " : "*", key, value, text(r.get("default")) + unitSuffix(r), range));
+                        ? " " : "*", key, value, defaultText(key, r, s.units()) + unitSuffix(r), range));
                 b.append("      ").append(r.get("label")).append(" — ").append(r.get("source")).append('\n');
             }
         }
         return b.append(Cautions.SAFETY_LINE).append('\n').toString();
+    }
+
+    /** A default as a person reads it: a number at its quantity's shown decimals (0.9, not 0.8598 Btu/lb). */
+    private static String defaultText(String key, Map<String, Object> r, UnitSystem u) {
+        return SettingsCatalogue.number(key).map(n -> ShownNumber.rounded(n.quantity(), u, n.defaultSi()))
+                .orElseGet(() -> text(r.get("default")));
     }
 
     private static String numberRange(String key, UnitSystem u) {

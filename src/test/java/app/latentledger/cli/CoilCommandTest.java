@@ -40,6 +40,20 @@ class CoilCommandTest {
     }
 
     @Test
+    @DisplayName("a refused --condensate says mL, the unit it is typed in, even in IP units; --condensate-floz says fl oz")
+    void condensateRefusalInTheTypedUnit() {
+        // the catch limit is 0.05 m³ = 50000 mL = 1690.7 fl oz (1 US fl oz = 29.5735295625 mL, NIST SP 811)
+        Run ml = run(CASE_A + " --condensate 60000 --condensate-minutes 15");
+        assertEquals(2, ml.code(), ml.err());
+        assertTrue(ml.err().contains("--condensate: condensate volume 60000 mL refused: accepted range 0 to 50000 mL"),
+                ml.err());
+        Run floz = run(CASE_A + " --condensate-floz 2000 --condensate-minutes 15");
+        assertEquals(2, floz.code(), floz.err());
+        assertTrue(floz.err().contains("--condensate-floz: condensate volume 2000 fl oz refused: accepted range 0 to"
+                + " 1690.7 fl oz"), floz.err());
+    }
+
+    @Test
     @DisplayName("--json carries the issue's keys; case A answers as computed by hand from HoF ch. 1 (see CoilProcessTest)")
     void jsonKeysAndCaseA() {
         JsonObject j = json(CASE_A);

@@ -97,6 +97,12 @@ class SettingsCommandTest {
         assertTrue(table.out().contains("range -1476 to 14763 ft"), table.out());
         assertTrue(table.out().contains("range 0.3 to 0.8 °F"), table.out());
         assertFalse(table.out().contains("14763.7795"), table.out());
+        // values and defaults at the shown decimals too: 2000 J/kg is 0.8598 Btu/lb (1 Btu/lb = 2326 J/kg
+        // exactly, ASHRAE Handbook—Fundamentals ch. 39), shown to 0.1 Btu/lb like every enthalpy
+        assertTrue(table.out().contains("0.9 Btu/lb   default 0.9 Btu/lb; range 0.5 to 1.2 Btu/lb"), table.out());
+        assertFalse(table.out().contains("0.8598"), table.out());
+        assertEquals(2000.0 / 2326, setting("blowerEnthalpyBand").get("value").getAsDouble(), 1e-4,
+                "the JSON, for programs, keeps the exact value");
     }
 
     @Test

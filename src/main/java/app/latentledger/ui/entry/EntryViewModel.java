@@ -171,7 +171,7 @@ public final class EntryViewModel {
             refused.set(false);
             message.set(said);
         } catch (InvalidInputException e) {
-            refuse(e.message(units()));
+            refuse(said(e));
         } catch (InvalidRecordException e) {
             refuse(e.getMessage());
         }
@@ -487,7 +487,7 @@ public final class EntryViewModel {
         try {
             EntryRules.checkRange(candidate, s);
         } catch (InvalidInputException e) {
-            refuse(e.message(units()));
+            refuse(said(e));
             return false;
         }
         Draft before = session.draft();
@@ -586,11 +586,19 @@ public final class EntryViewModel {
                 refused.set(false);
                 message.set("Undone: " + title(s) + " is " + shownValue(s) + " again.");
             } catch (InvalidInputException e) {
-                refuse(e.message(units()));
+                refuse(said(e));
             } catch (InvalidRecordException e) {
                 refuse(e.getMessage());
             }
         };
+    }
+
+    /**
+     * A refusal in the units of the box it came from: the condensate catch is typed in mL whatever
+     * the other units are, so its refusal says mL too, not fl oz.
+     */
+    private String said(InvalidInputException e) {
+        return e.message(Slot.unitsFor(e.quantity(), units()));
     }
 
     private void clearUndo() {
@@ -608,7 +616,7 @@ public final class EntryViewModel {
             refused.set(false);
             return true;
         } catch (InvalidInputException e) {
-            refuse(e.message(units()));
+            refuse(said(e));
         } catch (InvalidRecordException e) {
             refuse(e.getMessage());
         }
@@ -624,7 +632,7 @@ public final class EntryViewModel {
             refused.set(false);
             return true;
         } catch (InvalidInputException e) {
-            refuse(e.message(units()));
+            refuse(said(e));
         } catch (InvalidRecordException e) {
             refuse(e.getMessage());
         }

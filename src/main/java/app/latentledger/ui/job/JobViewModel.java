@@ -9,6 +9,7 @@ import app.latentledger.core.records.SystemType;
 import app.latentledger.core.records.Visit;
 import app.latentledger.core.records.VisitPurpose;
 import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.TypedNumber;
 import app.latentledger.ui.session.AppSession;
 import app.latentledger.ui.session.Screen;
 import javafx.beans.property.ObjectProperty;
@@ -399,11 +400,8 @@ public final class JobViewModel {
                 .filter(v -> v.systemId().equals(s.id())).toList());
     }
 
+    /** The app's one number rule: a comma is refused, never read as a decimal point ("5,000" is not 5 ft). */
     private static double number(String field, String text) {
-        try {
-            return Double.parseDouble(text == null ? "" : text.strip().replace(',', '.'));
-        } catch (NumberFormatException e) {
-            throw new IllegalArgumentException(field + " '" + text + "' is not a number");
-        }
+        return TypedNumber.parse(field, text);
     }
 }

@@ -12,6 +12,7 @@ import app.latentledger.core.records.ImportedLog;
 import app.latentledger.core.records.ReadingSet;
 import app.latentledger.visit.VisitLogs;
 import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.TypedNumber;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.ui.chart.CoilCharts;
 import app.latentledger.ui.chart.TimelineViewModel;
@@ -503,9 +504,9 @@ public final class LogImportViewModel {
         UnitSystem u = session.units();
         double shown;
         try {
-            shown = Double.parseDouble(t.replace(',', '.'));
+            shown = TypedNumber.parse(field, t);
         } catch (NumberFormatException e) {
-            throw new FieldException(where, field + " '" + t + "' is not a number");
+            throw new FieldException(where, e.getMessage());
         }
         double si = Quantity.AIRFLOW.fromDisplay(u, shown);
         try {

@@ -7,6 +7,7 @@ import app.latentledger.core.records.InvalidRecordException;
 import app.latentledger.core.records.StatedAccuracy;
 import app.latentledger.core.settings.InstrumentTolerances;
 import app.latentledger.core.units.Quantity;
+import app.latentledger.core.units.TypedNumber;
 import app.latentledger.core.units.UnitSystem;
 import app.latentledger.store.Ledger;
 import javafx.beans.property.ReadOnlyStringProperty;
@@ -140,15 +141,7 @@ public final class InstrumentsViewModel {
     }
 
     private static Double number(StringProperty p, String what) {
-        String t = p.get() == null ? "" : p.get().strip().replace(',', '.');
-        if (t.isEmpty()) {
-            return null;
-        }
-        try {
-            return Double.parseDouble(t);
-        } catch (NumberFormatException e) {
-            throw new NumberFormatException("stated " + what + " accuracy '" + p.get() + "' is not a number");
-        }
+        return TypedNumber.parseOrNull("stated " + what + " accuracy", p.get());
     }
 
     private String accuracy(StatedAccuracy a) {

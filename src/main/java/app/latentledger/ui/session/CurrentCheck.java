@@ -83,7 +83,7 @@ public record CurrentCheck(Draft draft, UnitSystem units, ReadingSet readings, C
     /** Why the readings were refused, in {@link #units}: field, value and accepted range; "" when not. */
     public String refusal() {
         if (refusedBy instanceof InvalidInputException e) {
-            return e.message(units);
+            return e.message(Slot.unitsFor(e.quantity(), units)); // the catch is typed in mL
         }
         return refusedBy == null ? "" : refusedBy.getMessage();
     }

@@ -219,6 +219,11 @@ public enum Slot {
         return this == CONDENSATE_VOLUME ? UnitSystem.SI : units;
     }
 
+    /** The unit system a value of {@code q} is typed in: mL for a condensate volume, else the tech's. */
+    public static UnitSystem unitsFor(Quantity q, UnitSystem units) {
+        return q == CONDENSATE_VOLUME.quantity(null) ? CONDENSATE_VOLUME.unitsFor(units) : units;
+    }
+
     /** The unit shown beside the pad, e.g. "°F". */
     public String symbol(UnitSystem units, String choice) {
         return quantity(choice).symbol(unitsFor(units));

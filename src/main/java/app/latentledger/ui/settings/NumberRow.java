@@ -34,17 +34,24 @@ public final class NumberRow {
     /** Shows the saved value in {@code s}'s units and forgets any typing not committed. */
     void show(Settings s) {
         UnitSystem u = s.units();
-        text.set(shown(s.numberSi(setting.key()), u));
+        text.set(shown(s));
         unit.set(setting.quantity().symbol(u));
         String symbol = unit.get().isEmpty() ? "" : " " + unit.get();
         // the range as the refusal and the settings command print it: rounded inward to the shown precision
-        hint.set("default " + shown(setting.defaultSi(), u) + symbol + " · accepts "
+        hint.set("default " + ShownNumber.rounded(setting.quantity(), u, setting.defaultSi()) + symbol + " · accepts "
                 + InvalidInputException.range(setting.quantity(), u, setting.minSi(), setting.maxSi()) + symbol);
         changed.set(!s.isDefault(setting.key()));
     }
 
-    String shown(double si, UnitSystem u) {
-        return ShownNumber.text(setting.quantity().toDisplay(u, si));
+    /**
+     * The box's text for the saved value: an untouched default at the quantity's shown decimals
+     * (2000 J/kg reads "0.9" Btu/lb), a value the tech typed exactly as it is stored, so it reads
+     * back as typed.
+     */
+    String shown(Settings s) {
+        UnitSystem u = s.units();
+        return s.isDefault(setting.key()) ? ShownNumber.rounded(setting.quantity(), u, setting.defaultSi())
+                : ShownNumber.text(setting.quantity().toDisplay(u, s.numberSi(setting.key())));
     }
 
     void refuse(String why) {

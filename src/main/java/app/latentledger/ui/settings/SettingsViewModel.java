@@ -7,6 +7,7 @@ import app.latentledger.core.settings.SettingGroup;
 import app.latentledger.core.settings.Settings;
 import app.latentledger.core.settings.SettingsCatalogue;
 import app.latentledger.core.settings.ShownNumber;
+import app.latentledger.core.units.TypedNumber;
 import app.latentledger.store.StoreException;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
@@ -103,14 +104,13 @@ public final class SettingsViewModel {
     void commit(NumberRow row) {
         Settings s = saved.get();
         String typed = row.textProperty().get();
-        if (typed != null && typed.trim().equals(row.shown(s.numberSi(row.key()), s.units()))) {
+        if (typed != null && typed.trim().equals(row.shown(s))) {
             row.clearMessage();
             return; // nothing changed: no save, no message
         }
         Double shown = ShownNumber.parse(typed);
         if (shown == null) {
-            refuse(row, row.label() + " '" + (typed == null ? "" : typed.trim()) + "' is not a number; "
-                    + row.hintProperty().get());
+            refuse(row, TypedNumber.refusal(row.label(), typed) + "; " + row.hintProperty().get());
             return;
         }
         apply(row, x -> x.withTyped(row.key(), shown, x.units()));

@@ -52,6 +52,18 @@ class EntryViewModelTest {
     }
 
     @Test
+    void theCondensateRefusalStaysInTheMillilitresTheTechTyped() {
+        try (AppSession s = TestSessions.withNewVisit(dir)) {
+            EntryViewModel vm = new EntryViewModel(s);
+            // the box is in mL whatever the units (IP here); the catch limit is 0.05 m³ = 50000 mL (FieldLimits)
+            type(vm, Slot.CONDENSATE_VOLUME, "60000");
+            assertTrue(vm.refusedProperty().get());
+            assertEquals("Not saved: water caught 60000 mL refused: accepted range 0 to 50000 mL",
+                    vm.messageProperty().get());
+        }
+    }
+
+    @Test
     void anOutOfRangeValueIsRefusedWithItsRangeAndNothingKeptChanges() {
         try (AppSession s = TestSessions.withNewVisit(dir)) {
             EntryViewModel vm = new EntryViewModel(s);

@@ -53,6 +53,25 @@ class JobViewModelTest {
     }
 
     @Test
+    void aCommaInTheElevationIsRefusedNotReadAsADecimalPoint() {
+        try (AppSession s = TestSessions.open(dir)) {
+            JobViewModel vm = new JobViewModel(s);
+            int before = vm.sites().size();
+            vm.newSiteNameProperty().set("Comma test house");
+            vm.newSiteElevationFtProperty().set("5,000");
+            assertFalse(vm.addSite(), "5,000 must not be stored as 5 ft");
+            assertEquals(before, vm.sites().size());
+            assertTrue(vm.siteStatusProperty().get().contains("elevation '5,000' refused: type digits with a point"
+                    + " for decimals, no thousands separator, e.g. 5000"), vm.siteStatusProperty().get());
+            vm.newSystemLabelProperty().set("Attic unit");
+            vm.newSystemTonsProperty().set("2,5");
+            assertFalse(vm.addSystem());
+            assertTrue(vm.systemStatusProperty().get().contains("nominal size '2,5' refused"),
+                    vm.systemStatusProperty().get());
+        }
+    }
+
+    @Test
     void aSiteAboveTheElevationRangeIsRefusedWithTheRange() {
         try (AppSession s = TestSessions.open(dir)) {
             JobViewModel vm = new JobViewModel(s);

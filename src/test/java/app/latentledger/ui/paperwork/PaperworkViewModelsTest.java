@@ -63,8 +63,13 @@ class PaperworkViewModelsTest {
         vm.nameProperty().set("Probe kit A");
         vm.serialProperty().set("SR-1001");
         vm.calibratedProperty().set("2024-03-02");
-        vm.dryBulbProperty().set("0,36"); // decimal comma accepted; °F
+        vm.dryBulbProperty().set("0,36"); // a comma is refused, not guessed (the one number rule)
         vm.relativeHumidityProperty().set("1.5");
+        assertFalse(vm.add());
+        assertEquals("Not added: stated dry bulb accuracy '0,36' refused: type digits with a point for decimals,"
+                + " no thousands separator, e.g. 0.36", vm.messageProperty().get());
+        assertEquals(0, vm.rows().size());
+        vm.dryBulbProperty().set("0.36"); // °F
         assertTrue(vm.add(), vm.messageProperty().get());
         assertEquals("", vm.nameProperty().get(), "the form clears for the next one");
         assertEquals(1, vm.rows().size());

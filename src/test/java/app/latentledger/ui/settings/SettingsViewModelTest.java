@@ -51,6 +51,30 @@ class SettingsViewModelTest {
     }
 
     @Test
+    void aThousandsCommaInTheDefaultElevationIsRefused() {
+        SettingsViewModel vm = new SettingsViewModel(new MemoryStore());
+        NumberRow row = vm.number(SettingsCatalogue.DEFAULT_ELEVATION);
+        row.textProperty().set("5,000");
+        row.commit();
+        assertTrue(row.messageProperty().get().startsWith("default site elevation '5,000' refused: type digits with a"
+                + " point for decimals, no thousands separator, e.g. 5000"), row.messageProperty().get());
+        assertEquals("0", row.textProperty().get(), "nothing saved: not 5 ft");
+    }
+
+    @Test
+    void theDefaultReadsAtTheQuantitysDecimalsAndStaysExactWhenStored() {
+        SettingsViewModel vm = new SettingsViewModel(new MemoryStore());
+        NumberRow row = vm.number(Thresholds.BLOWER_ENTHALPY_BAND.key());
+        // 2000 J/kg = 0.8598 Btu/lb (1 Btu/lb = 2326 J/kg exactly, ASHRAE Handbook—Fundamentals ch. 39);
+        // enthalpy reads to 0.1 Btu/lb; the range 1000 to 3000 J/kg rounds inward to 0.5 to 1.2
+        assertEquals("default 0.9 Btu/lb · accepts 0.5 to 1.2 Btu/lb", row.hintProperty().get());
+        assertEquals("0.9", row.textProperty().get(), "an untouched default reads at the shown precision");
+        row.commit();
+        assertEquals("", vm.statusProperty().get(), "committing the shown default changes nothing");
+        assertEquals(2000.0, vm.savedProperty().get().thresholds().valueSi(Thresholds.BLOWER_ENTHALPY_BAND), 1e-9);
+    }
+
+    @Test
     void aRefusedValueKeepsTheSavedOneAndSaysWhy() {
         try (Ledger ledger = Ledger.open(dir)) {
             SettingsViewModel vm = new SettingsViewModel(SettingsStore.of(ledger.settings()));
@@ -64,9 +88,17 @@ class SettingsViewModelTest {
             row.textProperty().set("four hundred");
             row.commit();
             assertTrue(row.messageProperty().get().startsWith("airflow per ton above which latent removal suffers"
-                    + " 'four hundred' is not a number; default 450 cfm/ton · accepts 225 to 675 cfm/ton"),
+                    + " 'four hundred' refused: type digits with a point for decimals"), row.messageProperty().get());
+            assertTrue(row.messageProperty().get().endsWith("; default 450 cfm/ton · accepts 225 to 675 cfm/ton"),
                     row.messageProperty().get());
-            row.textProperty().set("412,5"); // decimal comma, as some tablets' keypads give it
+            // a comma is refused, not guessed: "412,5" could be 412.5 or 4125 (the command line's rule)
+            row.textProperty().set("412,5");
+            row.commit();
+            assertTrue(row.messageProperty().get().startsWith("airflow per ton above which latent removal suffers"
+                    + " '412,5' refused: type digits with a point for decimals, no thousands separator, e.g. 412.5"),
+                    row.messageProperty().get());
+            assertEquals(Settings.DEFAULTS, ledger.settings().load());
+            row.textProperty().set("412.5");
             row.commit();
             assertEquals("", row.messageProperty().get());
             assertEquals(412.5, highCfmPerTon(ledger.settings().load()), 1e-9);
