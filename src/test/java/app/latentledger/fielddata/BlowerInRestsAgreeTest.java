@@ -172,11 +172,23 @@ class BlowerInRestsAgreeTest {
             int n = r.cycles().size();
             int leftOn = 0;
             int ranOn = 0;
-            for (CycleResult x : r.cycles()) {
+            // the app's per-cycle readout (a tap on a cycle of the timeline) says the same of each rest
+            var marks = app.latentledger.chart.source.LogTimelineSource.timeline(a.series(), r,
+                    a.conditions().pressurePa(), o.units, s.file()).cycles();
+            assertEquals(n, marks.size(), s.file());
+            for (int k = 0; k < n; k++) {
+                CycleResult x = r.cycles().get(k);
+                String readout = String.join("\n", app.latentledger.chart.timeline.CycleReadout.lines(k, marks.get(k),
+                        o.units));
                 if (x.cycle().offBlower() == BlowerState.ON) {
                     leftOn++;
+                    assertTrue(readout.contains("left on through the rest"), s.file() + ": " + readout);
                 } else if (x.cycle().offBlower() == BlowerState.OFF && x.cycle().blowerOnSeconds() > 0) {
                     ranOn++;
+                    assertTrue(readout.contains(String.format(Locale.ROOT, "ran on %.0f s after the compressor",
+                            x.cycle().blowerOnSeconds())), s.file() + ": " + readout);
+                } else if (x.cycle().offBlower() == BlowerState.OFF) {
+                    assertTrue(readout.contains("stopped with the compressor"), s.file() + ": " + readout);
                 }
             }
             Map<String, Row> rows = new LinkedHashMap<>();

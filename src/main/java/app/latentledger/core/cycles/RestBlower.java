@@ -64,6 +64,17 @@ public enum RestBlower {
         };
     }
 
+    /** The same at length, for a readout of one cycle: "Blower left on through the rest" and so on. */
+    public static String sentence(Cycle c) {
+        return switch (of(c)) {
+            case LEFT_ON -> "Blower left on through the rest";
+            case RAN_ON -> String.format(Locale.ROOT, "Blower ran on %.0f s after the compressor, then stopped",
+                    c.blowerOnSeconds());
+            case STOPPED -> "Blower stopped with the compressor";
+            case UNKNOWN -> "Blower in the rest not known";
+        };
+    }
+
     /** "31 of 31 rests" style count for the summary. */
     public static String ofRests(int n, int rests) {
         return (n == 0 ? "none" : String.valueOf(n)) + " of " + rests + (rests == 1 ? " rest" : " rests");

@@ -97,7 +97,7 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
 
     /**
      * The fan-off delay in words for a summary line: "180 s median in 92 of 93 rests", or why there is
-     * none ("none: blower left on through 31 of 31 rests" says the blower never stopped by itself).
+     * none ("none (the blower was left on through the rests)" when it never stopped by itself).
      */
     public String fanOffDelayWords() {
         if (fanOffDelayRests > 0) {
@@ -105,7 +105,7 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
                     RestBlower.ofRests(fanOffDelayRests, cycles.size()));
         }
         int leftOn = blowerLeftOnRests();
-        return leftOn > 0 ? "none: the blower was left on through the rests" : "none found";
+        return leftOn > 0 ? "none (the blower was left on through the rests)" : "none found";
     }
 
     /** Returned ÷ removed, or not measurable with the reason. */
