@@ -97,7 +97,7 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
 
     /**
      * The fan-off delay in words for a summary line: "180 s median in 92 of 93 rests", or why there is
-     * none ("none (the blower was left on through the rests)" when it never stopped by itself).
+     * none ("none (blower left on instead)" when it never stopped by itself).
      */
     public String fanOffDelayWords() {
         if (fanOffDelayRests > 0) {
@@ -105,7 +105,7 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
                     RestBlower.ofRests(fanOffDelayRests, cycles.size()));
         }
         int leftOn = blowerLeftOnRests();
-        return leftOn > 0 ? "none (the blower was left on through the rests)" : "none found";
+        return leftOn > 0 ? "none (blower left on instead)" : "none found";
     }
 
     /** Returned ÷ removed, or not measurable with the reason. */
