@@ -46,6 +46,8 @@ final class LogJson {
             x.put("offComplete", c.cycle().offComplete());
             x.put("offBlower", c.cycle().offBlower().key());
             x.put("blowerOnSeconds", finite(c.cycle().blowerOnSeconds()));
+            // left-on (continuous fan), ran-on (fan-off delay), off or unknown: the table's words as a key
+            x.put("blowerInRest", app.latentledger.core.cycles.RestBlower.of(c.cycle()).key());
             x.put("moistureRemoved", mass(c.removedKg(), units));
             x.put("moistureReturned", mass(c.returnedKg(), units));
             x.put("moistureNet", mass(c.netKg(), units));
@@ -111,6 +113,7 @@ final class LogJson {
         m.put("blowerFrom", r.blowerInferred() ? "inferred from the air" : "status column");
         m.put("fanOffDelaySeconds", finite(r.fanOffDelayMedianS()));
         m.put("fanOffDelayRests", r.fanOffDelayRests());
+        m.put("blowerLeftOnRests", r.blowerLeftOnRests());
         m.put("reevaporationShareText", r.reevaporation().percent(RunCycleReport.NONE_RETURNED));
         m.put("latentFractionMeasuredText", r.latentMeasured().number(2, "more put back than removed"));
         m.put("sensorOffsetDewPoint", finite(Quantity.TEMPERATURE_DIFFERENCE.toDisplay(units, r.sensorOffsetDewPointK())));

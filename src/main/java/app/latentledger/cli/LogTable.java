@@ -1,6 +1,7 @@
 package app.latentledger.cli;
 
 import app.latentledger.core.cycles.CycleResult;
+import app.latentledger.core.cycles.RestBlower;
 import app.latentledger.core.cycles.RunCycleReport;
 import app.latentledger.core.cycles.TimeOrigin;
 import app.latentledger.core.findings.Cautions;
@@ -56,10 +57,10 @@ final class LogTable {
                     rep.duplicates(), rep.gaps(), rep.longestGapS(), rep.irregularIntervals()));
         }
         b.append("\nCycles\n");
-        b.append(String.format(Locale.ROOT, "  %4s  %-25s %7s %7s %-8s %9s %9s %7s%n", "#", "start", "on min",
+        b.append(String.format(Locale.ROOT, "  %4s  %-25s %7s %7s %-14s %9s %9s %7s%n", "#", "start", "on min",
                 "off min", "blower", "removed", "returned", "onset"));
-        b.append(String.format(Locale.ROOT, "  %4s  %-25s %7s %7s %-8s %9s %9s %7s%n", "", "", "", "", "",
-                mass, mass, "s"));
+        b.append(String.format(Locale.ROOT, "  %4s  %-25s %7s %7s %-14s %9s %9s %7s%n", "", "", "", "",
+                "in the rest", mass, mass, "s"));
         int k = 0;
         for (CycleResult c : r.cycles()) {
             if (++k > MAX_ROWS) {
@@ -67,10 +68,10 @@ final class LogTable {
                 break;
             }
             String start = origin == null ? Format.fixed(c.cycle().startS(), 0) + " s" : origin.label(c.cycle().startS());
-            b.append(String.format(Locale.ROOT, "  %4d  %-25s %7s %7s %-8s %9s %9s %7s%n", k, start,
+            b.append(String.format(Locale.ROOT, "  %4d  %-25s %7s %7s %-14s %9s %9s %7s%n", k, start,
                     Format.fixed(c.cycle().onSeconds() / 60, 1),
                     Format.fixed(c.cycle().offSeconds() / 60, 1) + (c.cycle().offComplete() ? "" : "+"),
-                    c.cycle().offBlower().key(), Format.fixed(Quantity.WATER_MASS.toDisplay(units, c.removedKg()), 3),
+                    RestBlower.cell(c.cycle()), Format.fixed(Quantity.WATER_MASS.toDisplay(units, c.removedKg()), 3),
                     Format.fixed(Quantity.WATER_MASS.toDisplay(units, c.returnedKg()), 3),
                     Format.fixed(c.moisture().onsetS(), 0)));
         }
@@ -88,8 +89,9 @@ final class LogTable {
                 : "  (at the fan-only airflow " + Format.fixed(Quantity.AIRFLOW.toDisplay(units, r.fanAirflowM3PerS()), 0)
                 + " " + Quantity.AIRFLOW.symbol(units) + ")")));
         b.append(Format.row("returned share", r.reevaporation().percent(RunCycleReport.NONE_RETURNED), ""));
-        b.append(Format.row("fan-off delay", Double.isNaN(r.fanOffDelayMedianS()) ? "none found"
-                : Format.fixed(r.fanOffDelayMedianS(), 0) + " s median in " + r.fanOffDelayRests() + " rests", ""));
+        b.append(Format.row("blower left on", RestBlower.ofRests(r.blowerLeftOnRests(), r.cycles().size()),
+                "(through the rest: continuous fan)"));
+        b.append(Format.row("fan-off delay", r.fanOffDelayWords(), ""));
         b.append(Format.row("net removed per hour", Format.fixed(Quantity.WATER_RATE.toDisplay(units, r.netRemovalKgPerS()), 3),
                 Quantity.WATER_RATE.symbol(units)));
         b.append(Format.row("steady latent rate", Double.isNaN(r.steadyDryingW()) ? "unknown"

@@ -115,8 +115,9 @@ final class TechnicalSection {
             tb.row("Note", l.note());
         }
         tb.row("Blower state in rests", r.blowerInferred() ? "inferred from the air" : "from the blower column");
-        tb.row("Fan-off delay", Double.isNaN(r.fanOffDelayMedianS()) ? "none found"
-                : DisplayNumber.withUnit(Quantity.DURATION_MINUTES, units, r.fanOffDelayMedianS()) + " median");
+        tb.row("Blower left on through the rest", app.latentledger.core.cycles.RestBlower.ofRests(
+                r.blowerLeftOnRests(), r.cycles().size()));
+        tb.row("Fan-off delay (blower ran on, then stopped)", r.fanOffDelayWords());
         tb.row("Water removed during runs", DisplayNumber.withUnit(Quantity.WATER_MASS, units, r.removedKg()));
         tb.row("Water returned in blower-on rests", DisplayNumber.withUnit(Quantity.WATER_MASS, units, r.returnedKg()));
         tb.row("Net removal rate over the log", DisplayNumber.withUnit(Quantity.WATER_RATE, units, r.netRemovalKgPerS()));

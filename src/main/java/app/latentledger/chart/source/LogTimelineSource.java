@@ -57,7 +57,8 @@ public final class LogTimelineSource {
             double end = Math.max(onEnd, cy.startS() + cy.onSeconds() + cy.offSeconds());
             double onset = c.moisture().wet() && Double.isFinite(c.moisture().onsetS())
                     ? cy.startS() + c.moisture().onsetS() : Double.NaN;
-            marks.add(new CycleMark(cy.startS(), onEnd, end, c.removedKg(), c.returnedKg(), onset));
+            marks.add(new CycleMark(cy.startS(), onEnd, end, c.removedKg(), c.returnedKg(), onset,
+                    app.latentledger.core.cycles.RestBlower.sentence(cy)));
         }
         LocalDateTime start = log.origin() == null ? null : LocalDateTime.ofInstant(
                 Instant.ofEpochSecond((long) Math.floor(log.origin().firstEpochSecond())),

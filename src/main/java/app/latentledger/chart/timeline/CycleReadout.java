@@ -19,6 +19,7 @@ public final class CycleReadout {
                 (c.endS() - c.onEndS()) / 60));
         out.add(mass("Removed", c.removedKg(), units));
         out.add(mass("Returned", c.returnedKg(), units));
+        out.add(c.blowerInRest());
         out.add(Double.isNaN(c.onsetS()) ? "No moisture removal"
                 : String.format(Locale.ROOT, "Removal began at %.1f min", (c.onsetS() - c.startS()) / 60));
         return out;

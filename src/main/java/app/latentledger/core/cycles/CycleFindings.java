@@ -113,49 +113,57 @@ final class CycleFindings {
         if (r.blowerOnRests() == 0 && !(r.returnedKg() > 0) || !(share >= min)) {
             return;
         }
-        long through = r.cycles().stream().filter(c -> c.cycle().offBlower() == BlowerState.ON).count();
-        boolean delay = r.fanOffDelayRests() > through;
+        // one count of each kind of rest, the cycle table's (RestBlower): left on through the rest
+        // (continuous fan) or ran on after the compressor and stopped by itself (fan-off delay)
+        int through = r.blowerLeftOnRests();
+        int ranOn = r.fanOffDelayRests();
+        int rests = r.cycles().size();
+        boolean delay = ranOn > through;
         List<Evidence> evidence = List.of(Evidence.of("reevaporationShare", "share of removed moisture put back",
                         Quantity.FRACTION_PERCENT, share),
                 Evidence.of("moistureReturned", "water put back while the blower ran in rests", Quantity.WATER_MASS,
                         r.returnedKg()),
-                Evidence.of("moistureRemoved", "water removed during runs", Quantity.WATER_MASS, r.removedKg()),
-                Evidence.of("fanOffDelay", "median blower run-on after the compressor stops",
-                        Quantity.DURATION_MINUTES, r.fanOffDelayMedianS()));
+                Evidence.of("moistureRemoved", "water removed during runs", Quantity.WATER_MASS, r.removedKg()));
         String source = r.blowerInferred() ? "blower stop found from the air (end of the constant-enthalpy"
                 + " signature)" : "blower from its status column";
         if (delay) {
+            List<Evidence> withDelay = new ArrayList<>(evidence);
+            withDelay.add(Evidence.of("fanOffDelay", "median blower run-on after the compressor stops",
+                    Quantity.DURATION_MINUTES, r.fanOffDelayMedianS()));
             out.add(new Finding(FindingCode.FAN_OFF_DELAY_REEVAPORATION, Severity.FIX,
                     String.format(Locale.ROOT, "After the compressor stops, the blower runs on for about %.1f minutes"
                             + " and blows water from the wet coil back into the house: about %.0f %% of what it"
                             + " removed.", r.fanOffDelayMedianS() / 60.0, 100 * share),
-                    String.format(Locale.ROOT, "fan-off delay median %.0f s in %d of %d rests (%s); rests returned"
-                                    + " %.0f %% of the moisture removed; limit %.0f %% (common practice, no source)",
-                            r.fanOffDelayMedianS(), r.fanOffDelayRests(), r.cycles().size(), source, 100 * share,
-                            100 * min),
-                    evidence,
+                    String.format(Locale.ROOT, "blower ran on after the compressor stopped in %d of %d rests"
+                                    + " (fan-off delay median %.0f s%s; %s); rests returned %.0f %% of the moisture"
+                                    + " removed; limit %.0f %% (common practice, no source)",
+                            ranOn, rests, r.fanOffDelayMedianS(), through == 0 ? ""
+                                    : String.format(Locale.ROOT, "; left on through %d more", through),
+                            source, 100 * share, 100 * min),
+                    List.copyOf(withDelay),
                     List.of("Shorten the air handler's or thermostat's fan-off delay (the fan is already on AUTO"
                                     + " if the blower stops by itself)",
                             "Where the equipment allows, choose a dehumidifying or no-delay blower profile",
                             "Check that the condensate pan drains freely (standing water re-evaporates too)")));
             return;
         }
-        double[] blower = r.cycles().stream().mapToDouble(c -> c.cycle().blowerOnSeconds())
-                .filter(v -> v > 0).sorted().toArray();
-        double medianBlower = blower.length == 0 ? Double.NaN : blower[blower.length / 2];
-        // the blower ran through the rests, so there is no fan-off delay to give (it would read "—"):
-        // the evidence gives how long it ran in a rest instead, the figure the technical line names
-        List<Evidence> throughRests = new ArrayList<>(evidence.subList(0, evidence.size() - 1));
-        throughRests.add(Evidence.of("blowerOnInRests", "median blower time in a rest", Quantity.DURATION_MINUTES,
-                medianBlower));
+        double medianLeftOn = r.blowerLeftOnMedianS();
+        // the blower ran through the rests, so the figure to give is how long it ran in such a rest;
+        // a fan-off delay (the blower stopping by itself) is a different thing and is named apart
+        List<Evidence> throughRests = new ArrayList<>(evidence);
+        throughRests.add(Evidence.of("blowerOnInRests", "median blower time in a rest it was left on through",
+                Quantity.DURATION_MINUTES, medianLeftOn));
         out.add(new Finding(FindingCode.OFF_CYCLE_REEVAPORATION, Severity.FIX,
-                String.format(Locale.ROOT, "After the compressor stops, the blower keeps running and blows water"
+                String.format(Locale.ROOT, "After the compressor stops, the blower is left running and blows water"
                         + " from the wet coil back into the house: about %.0f %% of what it removed.", 100 * share),
                 // the masses themselves go in the evidence, which every display shows in the tech's units
                 String.format(Locale.ROOT, "blower-on rests returned %.0f %% of the moisture removed;"
-                                + " blower ran on after the compressor in %d of %d rests (median %.1f min, %s);"
-                                + " limit %.0f %% (common practice, no source)",
-                        100 * share, r.blowerOnRests(), r.cycles().size(), medianBlower / 60.0, source, 100 * min),
+                                + " blower left on through %d of %d rests (median %.1f min of blower in such a rest%s;"
+                                + " %s); limit %.0f %% (common practice, no source)",
+                        100 * share, through, rests, medianLeftOn / 60.0, ranOn == 0 ? ""
+                                : String.format(Locale.ROOT, "; ran on after the compressor stopped in %d more,"
+                                        + " fan-off delay median %.0f s", ranOn, r.fanOffDelayMedianS()),
+                        source, 100 * min),
                 List.copyOf(throughRests),
                 List.of("Set the thermostat fan to AUTO rather than ON",
                         "Check the air handler's fan-off delay and shorten it if the complaint persists",

@@ -85,6 +85,29 @@ public record RunCycleReport(int samples, double durationS, boolean compressorFr
                 sensorCheckSeconds, house, loadLine, series, supplyHumidityLagS);
     }
 
+    /** Rests the blower was left on through (continuous fan), as the cycle table marks them. */
+    public int blowerLeftOnRests() {
+        return RestBlower.count(cycles, RestBlower.LEFT_ON);
+    }
+
+    /** Median blower time in a rest it was left on through, s (NaN when none). */
+    public double blowerLeftOnMedianS() {
+        return RestBlower.medianBlowerS(cycles, RestBlower.LEFT_ON);
+    }
+
+    /**
+     * The fan-off delay in words for a summary line: "180 s median in 92 of 93 rests", or why there is
+     * none ("none (blower left on instead)" when it never stopped by itself).
+     */
+    public String fanOffDelayWords() {
+        if (fanOffDelayRests > 0) {
+            return String.format(java.util.Locale.ROOT, "%.0f s median in %s", fanOffDelayMedianS,
+                    RestBlower.ofRests(fanOffDelayRests, cycles.size()));
+        }
+        int leftOn = blowerLeftOnRests();
+        return leftOn > 0 ? "none (blower left on instead)" : "none found";
+    }
+
     /** Returned ÷ removed, or not measurable with the reason. */
     public Ratio reevaporation() {
         return Ratio.known(reevaporationShare, NOTHING_REMOVED);

@@ -3,6 +3,7 @@ package app.latentledger.ui.log;
 import app.latentledger.chart.source.LogTimelineSource;
 import app.latentledger.core.cycles.HouseHumidity;
 import app.latentledger.core.cycles.LoadLine;
+import app.latentledger.core.cycles.RestBlower;
 import app.latentledger.core.cycles.RunCycleReport;
 import app.latentledger.core.units.Ratio;
 import app.latentledger.core.records.ImportedLog;
@@ -81,10 +82,10 @@ public final class CycleLogAnalysis implements LogAnalysisService {
                 a.logId());
     }
 
-    /** The cycle summary, in the order the {@code log} command prints it. */
     private static final String MORE_RETURNED = "more put back than removed";
 
-    static List<Row> summary(RunCycleReport r, UnitSystem u) {
+    /** The cycle summary, in the order the {@code log} command prints it. */
+    public static List<Row> summary(RunCycleReport r, UnitSystem u) {
         List<Row> rows = new ArrayList<>();
         rows.add(new Row("samples", "Samples", Shown.number(r.samples(), 0), ""));
         rows.add(new Row("duration", "Log length", Shown.number(r.durationS() / 3600.0, 1), "h"));
@@ -103,8 +104,11 @@ public final class CycleLogAnalysis implements LogAnalysisService {
         rows.add(new Row("returned-share", "Share returned", r.reevaporation().percent(RunCycleReport.NONE_RETURNED), ""));
         rows.add(new Row("blower-from", "Blower state from", r.blowerInferred() ? "the air (inferred)"
                 : "blower column", ""));
-        rows.add(new Row("fan-off-delay", "Fan-off delay", Double.isNaN(r.fanOffDelayMedianS()) ? "none found"
-                : Shown.number(r.fanOffDelayMedianS() / 60, 1), Double.isNaN(r.fanOffDelayMedianS()) ? "" : "min"));
+        // the same counts as the findings and the log command's cycle table (RestBlower): the blower left
+        // on through a rest (continuous fan) is not a fan-off delay (it ran on and stopped by itself)
+        rows.add(new Row("blower-left-on", "Blower left on in rests",
+                RestBlower.ofRests(r.blowerLeftOnRests(), r.cycles().size()), ""));
+        rows.add(new Row("fan-off-delay", "Fan-off delay", r.fanOffDelayWords(), ""));
         rows.add(new Row("latent-measured", "Latent fraction, measured", r.latentMeasured().number(2, MORE_RETURNED),
                 ""));
         rows.add(new Row("latent-predicted", "Latent fraction, expected for these runs", r.latentPredicted().number(2, MORE_RETURNED),
