@@ -143,6 +143,12 @@ class ChartTextInsideUiTest {
                     problems.add(String.format("%s: '%s' spans x %.0f–%.0f, plot %.0f–%.0f", at, text.text(), x0,
                             x0 + w, vp.left(), vp.left() + vp.width()));
                 }
+                // drawn from its top; a font's ascent plus descent is about 1.05 of its size (from memory)
+                var hum = t.layout().humidity();
+                if (text.y() < hum.top() - 1 || text.y() + text.style().size() * 1.05 > hum.bottom() + 1) {
+                    problems.add(String.format("%s: '%s' spans y %.0f–%.0f, panel %.0f–%.0f", at, text.text(),
+                            text.y(), text.y() + text.style().size() * 1.05, hum.top(), hum.bottom()));
+                }
             }
         }
         return problems;

@@ -307,7 +307,9 @@ public final class TimelineChart {
             if (cycleWidth >= 8) {
                 Marker.TRIANGLE_DOWN.paint(p, x, band.bottom() - 8, 11, theme.coil(), null);
             }
-            if (cycleWidth >= 220) {
+            // only where the panel holds the words between its key and the marker; cut words help no one
+            boolean labelFits = band.height() >= theme.baseText() * 1.8 + theme.smallText() * 1.05 + 16;
+            if (cycleWidth >= 220 && labelFits) {
                 // the label reads right of its line, or left of it where it would cross the plot's edge
                 TextStyle label = TextStyle.of(theme.smallText(), theme.coil());
                 String words = "removal begins";
