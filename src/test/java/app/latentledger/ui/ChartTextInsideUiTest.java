@@ -89,6 +89,74 @@ class ChartTextInsideUiTest {
         assertTrue(problems.isEmpty(), String.join("\n", problems));
     }
 
+    @Test
+    void lyingDownOneCycleKeepsMoistureReadableAndMarkersInsideThePlot(FxRobot robot) {
+        List<String> problems = oneCycle(robot);
+        assertTrue(problems.isEmpty(), String.join("\n", problems));
+    }
+
+    @Test
+    void uprightOneCycleKeepsMoistureReadableAndMarkersInsideThePlot(FxRobot robot) {
+        robot.interact(() -> show(800, 1280));
+        List<String> problems = oneCycle(robot);
+        assertTrue(problems.isEmpty(), String.join("\n", problems));
+    }
+
+    /**
+     * Zoomed to one cycle (as "Next cycle" does): the moisture panel keeps at least {@link #MIN_BARS_PX}
+     * of plot below its title and key, and each marker label ("removal begins") stays between the
+     * plot's left and right edges instead of being cut by the right one.
+     */
+    private List<String> oneCycle(FxRobot robot) {
+        List<String> problems = new ArrayList<>();
+        robot.interact(() -> session.screenProperty().set(Screen.LOGS));
+        TimelineView timeline = robot.lookup("#timeline").queryAs(TimelineView.class);
+        TimelineViewModel t = timeline.viewModel();
+        int cycles = t.chart().data().cycles().size();
+        assertTrue(cycles >= 2, "the sample log has cycles");
+        FxTextMeasurer m = FxTextMeasurer.system();
+        for (int i = 0; i < cycles; i++) {
+            int index = i;
+            robot.interact(() -> t.zoomToCycle(index));
+            RecordingPainter rec = new RecordingPainter(m);
+            robot.interact(() -> t.chart().paint(rec, t.themeProperty().get(), t.layout(), t.viewportProperty().get(),
+                    index));
+            String at = String.format("cycle %d at %.0f×%.0f", index, t.layout().width(), t.layout().height());
+            var band = t.layout().moisture();
+            double keyBottom = rec.ops(RecordingPainter.Rect.class, "moisture").stream()
+                    .filter(r -> t.themeProperty().get().legendBackground().equals(r.fill()))
+                    .mapToDouble(r -> r.y() + r.height()).max().orElseThrow();
+            double plot = band.bottom() - keyBottom;
+            if (plot < MIN_BARS_PX) {
+                problems.add(String.format("%s: moisture plot %.0f px below its key (band %.0f px)", at, plot,
+                        band.height()));
+            }
+            var vp = t.viewportProperty().get();
+            for (RecordingPainter.Text text : rec.ops(RecordingPainter.Text.class, "onsets")) {
+                double w = m.width(text.text(), text.style().size(), text.style().bold());
+                double x0 = switch (text.style().hAlign()) {
+                    case LEFT -> text.x();
+                    case CENTER -> text.x() - w / 2;
+                    case RIGHT -> text.x() - w;
+                };
+                if (x0 < vp.left() - 1 || x0 + w > vp.left() + vp.width() + 1) {
+                    problems.add(String.format("%s: '%s' spans x %.0f–%.0f, plot %.0f–%.0f", at, text.text(), x0,
+                            x0 + w, vp.left(), vp.left() + vp.width()));
+                }
+                // drawn from its top; a font's ascent plus descent is about 1.05 of its size (from memory)
+                var hum = t.layout().humidity();
+                if (text.y() < hum.top() - 1 || text.y() + text.style().size() * 1.05 > hum.bottom() + 1) {
+                    problems.add(String.format("%s: '%s' spans y %.0f–%.0f, panel %.0f–%.0f", at, text.text(),
+                            text.y(), text.y() + text.style().size() * 1.05, hum.top(), hum.bottom()));
+                }
+            }
+        }
+        return problems;
+    }
+
+    /** Room for the bars to read as sizes, not ticks (common practice, no source). */
+    private static final double MIN_BARS_PX = 120;
+
     private List<String> walk(FxRobot robot) {
         List<String> problems = new ArrayList<>();
         robot.interact(() -> session.screenProperty().set(Screen.LOGS));

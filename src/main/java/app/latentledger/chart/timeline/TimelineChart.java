@@ -307,10 +307,15 @@ public final class TimelineChart {
             if (cycleWidth >= 8) {
                 Marker.TRIANGLE_DOWN.paint(p, x, band.bottom() - 8, 11, theme.coil(), null);
             }
-            if (cycleWidth >= 220) {
-                p.text(x + 6, band.top() + theme.baseText() * 1.8, "removal begins",
-                        TextStyle.of(theme.smallText(), theme.coil()).align(TextStyle.HAlign.LEFT,
-                                TextStyle.VAlign.TOP));
+            // only where the panel holds the words between its key and the marker; cut words help no one
+            boolean labelFits = band.height() >= theme.baseText() * 1.8 + theme.smallText() * 1.05 + 16;
+            if (cycleWidth >= 220 && labelFits) {
+                // the label reads right of its line, or left of it where it would cross the plot's edge
+                TextStyle label = TextStyle.of(theme.smallText(), theme.coil());
+                String words = "removal begins";
+                boolean flip = x + 6 + p.measurer().width(words, label.size(), false) > vp.left() + vp.width() - 2;
+                p.text(flip ? x - 6 : x + 6, band.top() + theme.baseText() * 1.8, words,
+                        label.align(flip ? TextStyle.HAlign.RIGHT : TextStyle.HAlign.LEFT, TextStyle.VAlign.TOP));
             }
         }
         p.restore();
@@ -390,13 +395,15 @@ public final class TimelineChart {
         String[] keys = {chosen[1], chosen[2]};
         double lineH = theme.baseText() * 1.4;
         // still too wide (a very narrow chart): the key wraps below the title if the band has room for it
-        boolean wrap = band.height() - theme.baseText() * 1.8 - lineH >= band.height() * 0.6;
+        // and the bars keep their least plot height under it
+        boolean wrap = band.height() - TimelineLayout.moistureHeader(theme) - lineH
+                >= Math.max(band.height() * 0.6, TimelineLayout.MIN_MOISTURE_PLOT_PX);
         double[] flow = keyFlow(p, h, lt, chosen, vp.left() + 10, wrap ? right : Double.MAX_VALUE, true);
         int line = (int) flow[0];
         double widest = flow[1];
         double[] keyX = {flow[2], flow[4]};
         int[] keyLine = {(int) flow[3], (int) flow[5]};
-        double header = theme.baseText() * 1.8 + line * lineH;
+        double header = TimelineLayout.moistureHeader(theme) + line * lineH;
         double zeroY = band.top() + header + (band.height() - header) * 0.62;
         double upPx = zeroY - band.top() - header;
         double downPx = band.bottom() - zeroY;

@@ -20,6 +20,14 @@ public record TimelineLayout(double width, double height, double left, double pl
         }
     }
 
+    /** The least height of the moisture bars' plot, under their title and key, device units. */
+    public static final double MIN_MOISTURE_PLOT_PX = 120;
+
+    /** Height of the moisture panel's title and key line, above its plot. */
+    static double moistureHeader(Theme theme) {
+        return theme.baseText() * 1.8;
+    }
+
     public static TimelineLayout forSize(double width, double height, Theme theme) {
         double text = theme.baseText();
         double left = Math.round(text * 6.2);
@@ -28,10 +36,13 @@ public record TimelineLayout(double width, double height, double left, double pl
         double bottom = Math.round(text * 2.6);
         double gap = Math.round(text * 0.8);
         double lane = Math.round(text * 1.5);
-        double rest = Math.max(120, height - top - bottom - 2 * lane - 5 * gap);
-        double temp = Math.round(rest * 0.40);
-        double hum = Math.round(rest * 0.32);
-        double bars = rest - temp - hum;
+        // the moisture bars keep MIN_MOISTURE_PLOT_PX below their title and key in every zoom, even
+        // when that squeezes the two line panels on a short canvas: a sliver of bars reads as nothing
+        double bars0 = moistureHeader(theme) + MIN_MOISTURE_PLOT_PX;
+        double rest = Math.max(bars0 + Math.round(text * 5), height - top - bottom - 2 * lane - 5 * gap);
+        double bars = Math.max(rest - Math.round(rest * 0.40) - Math.round(rest * 0.32), bars0);
+        double temp = Math.round((rest - bars) * 0.40 / 0.72);
+        double hum = rest - bars - temp;
         double y = top;
         Band t = new Band(y, temp);
         y += temp + gap;
