@@ -17,7 +17,8 @@ public final class ChartSlots {
      * above the key band at full width; lying down the Results screen gives it what is left.
      */
     static final double PSYCHRO_PREF_HEIGHT_PX = 640;
-    static final double TIMELINE_HEIGHT_PX = 430;
+    /** Room for the two line panels and the moisture bars (at least 120 px under their key) in any zoom. */
+    static final double TIMELINE_HEIGHT_PX = 620;
 
     private ChartSlots() {
     }
