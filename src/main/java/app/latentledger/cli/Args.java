@@ -147,9 +147,6 @@ public final class Args {
         return parseNumber("--" + name, v, decimalComma);
     }
 
-    private static final java.util.regex.Pattern DECIMAL =
-            java.util.regex.Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
-
     /** Parses a plain decimal number with a decimal point (no comma, hex, NaN or Infinity). */
     static double parseNumber(String field, String text) {
         return parseNumber(field, text, false);
@@ -168,7 +165,7 @@ public final class Args {
                     + t.replace(',', '.') + ") and no thousands separators (" + t.replace(",", "")
                     + "), or add --decimal-comma to type decimals with a comma");
         }
-        if (!DECIMAL.matcher(t).matches()) {
+        if (!app.latentledger.core.units.TypedNumber.isPlainDecimal(t)) {
             throw new UsageException(field + " value '" + text + "' is not a number");
         }
         return Double.parseDouble(t);

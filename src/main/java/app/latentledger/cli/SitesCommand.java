@@ -47,19 +47,14 @@ public final class SitesCommand implements Command {
             UnitSystem units = UnitOptions.units(args, settings.units());
             switch (sub) {
                 case "add": {
-                    String name = args.value("name");
-                    String address = args.value("address");
-                    Double elevation = UnitOptions.si(args, "elevation", Quantity.ELEVATION, units);
-                    String notes = args.value("notes");
-                    String zone = args.value("time-zone");
-                    args.rejectUnknown();
+                    SiteOptions o = SiteOptions.read(args, units);
                     expect(words, 1);
-                    if (name == null) {
+                    if (o.name() == null) {
                         throw new UsageException("sites add needs --name NAME");
                     }
                     Site site = LedgerRecords.refusing(units, "--elevation", () -> {
-                        Site s = new Site(Ids.newId(), name, address, elevation == null
-                                ? settings.defaultElevationM() : elevation, notes, zone);
+                        Site s = new Site(Ids.newId(), o.name(), o.address(), o.elevation() == null
+                                ? settings.defaultElevationM() : o.elevation(), o.notes(), o.zone());
                         ledger.sites().save(s);
                         return s;
                     });
@@ -75,17 +70,14 @@ public final class SitesCommand implements Command {
                         throw new UsageException("sites edit needs the SITE to correct (see: sites list)");
                     }
                     Site was = LedgerRecords.site(ledger, words.get(1));
-                    String name = args.value("name");
-                    String address = args.value("address");
-                    Double elevation = UnitOptions.si(args, "elevation", Quantity.ELEVATION, units);
-                    String notes = args.value("notes");
-                    String zone = args.value("time-zone");
-                    args.rejectUnknown();
+                    SiteOptions o = SiteOptions.read(args, units);
                     Site site = LedgerRecords.refusing(units, "--elevation", () -> {
-                        Site s = new Site(was.id(), name == null ? was.name() : name,
-                                address == null ? was.address() : address,
-                                elevation == null ? was.elevationM() : elevation, notes == null ? was.notes() : notes,
-                                zone == null ? was.timeZone() : zone.strip().equalsIgnoreCase("none") ? "" : zone);
+                        Site s = new Site(was.id(), o.name() == null ? was.name() : o.name(),
+                                o.address() == null ? was.address() : o.address(),
+                                o.elevation() == null ? was.elevationM() : o.elevation(),
+                                o.notes() == null ? was.notes() : o.notes(),
+                                o.zone() == null ? was.timeZone()
+                                        : o.zone().strip().equalsIgnoreCase("none") ? "" : o.zone());
                         ledger.sites().save(s);
                         return s;
                     });
@@ -121,6 +113,17 @@ public final class SitesCommand implements Command {
     private static void expect(List<String> words, int count) {
         if (words.size() != count) {
             throw new UsageException("unexpected words after the subcommand: " + words.subList(1, words.size()));
+        }
+    }
+
+    /** The options {@code sites add} and {@code sites edit} both take; null where not given. */
+    private record SiteOptions(String name, String address, Double elevation, String notes, String zone) {
+        static SiteOptions read(Args args, UnitSystem units) {
+            SiteOptions o = new SiteOptions(args.value("name"), args.value("address"),
+                    UnitOptions.si(args, "elevation", Quantity.ELEVATION, units), args.value("notes"),
+                    args.value("time-zone"));
+            args.rejectUnknown();
+            return o;
         }
     }
 }

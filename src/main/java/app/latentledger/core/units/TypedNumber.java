@@ -18,7 +18,12 @@ public final class TypedNumber {
 
     /** True when {@code typed} (trimmed) is a number by this rule. */
     public static boolean isNumber(String typed) {
-        return typed != null && DECIMAL.matcher(typed.strip()).matches();
+        return typed != null && isPlainDecimal(typed.strip());
+    }
+
+    /** True when {@code text}, exactly as given (no trimming), is a number by this rule. */
+    public static boolean isPlainDecimal(String text) {
+        return DECIMAL.matcher(text).matches();
     }
 
     /**

@@ -1,7 +1,5 @@
 package app.latentledger.io.logcsv;
 
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 
 import java.io.IOException;
 import java.io.InputStreamReader;
@@ -12,7 +10,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
 
 /**
@@ -63,15 +60,11 @@ public record LogColumns(List<Column> columns) {
             throw new LogRefusedException("the file is empty: a log needs a header row and sample rows");
         }
         List<Column> out = new ArrayList<>();
-        try (CSVParser p = CSVParser.builder().setReader(new StringReader(headerLine))
-                .setFormat(LogCsvImporter.format(LogCsvImporter.sniffDelimiter(headerLine))).get()) {
-            Iterator<CSVRecord> it = p.iterator();
-            if (it.hasNext()) {
-                for (String cell : it.next()) {
-                    String name = LogCsvImporter.clean(cell);
-                    if (!name.isEmpty()) {
-                        out.add(new Column(name, HeaderLayout.fieldByName(name)));
-                    }
+        RowSplitter row = new RowSplitter(new StringReader(headerLine), LogCsvImporter.sniffDelimiter(headerLine));
+        if (row.next()) {
+            for (String name : LogCsvImporter.names(row)) {
+                if (!name.isEmpty()) {
+                    out.add(new Column(name, HeaderLayout.fieldByName(name)));
                 }
             }
         }

@@ -182,7 +182,8 @@ public final class LogCsvImporter {
         return semi > comma ? ';' : ',';
     }
 
-    private static String[] names(RowSplitter row) {
+    /** The header row's names, cleaned: the one rule for the importer and {@link LogColumns}. */
+    static String[] names(RowSplitter row) {
         String[] names = new String[row.size()];
         for (int c = 0; c < names.length; c++) {
             names[c] = clean(row.text(c));
